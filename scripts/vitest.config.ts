@@ -1,0 +1,24 @@
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
+
+export default defineConfig({
+  root,
+  resolve: { alias: { "@": path.join(root, "src") } },
+  test: {
+    include: ["src/**/*.test.ts", "scripts/**/*.test.ts"],
+    environment: "node",
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+    fileParallelism: false,
+    coverage: {
+      provider: "v8",
+      include: ["src/lib/soa/**/*.ts"],
+      exclude: ["src/lib/soa/**/*.test.ts"],
+      reporter: ["text-summary", "text"],
+      reportsDirectory: ".data/coverage",
+    },
+  },
+});
