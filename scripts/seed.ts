@@ -1,23 +1,94 @@
 // Seeds the demo workspace of PRODUCT.md's scenario, idempotently: running it again changes nothing.
+// Demo parts go through the same path as an engineer's upload (CSV → object storage → parse → rows).
 // `--print-sign-in` prints the demo sign-in lines for the start command instead.
-import { createDb } from "../src/db/client";
-import { workspaces } from "../src/db/schema";
-
-export const demoWorkspace = { name: "Tidewater Power Lab", slug: "tidewater-power-lab" };
+import { and, eq } from "drizzle-orm";
+import { db } from "../src/db";
+import { memberships, parts, pendingUploads, users, workspaces } from "../src/db/schema";
+import { hashPassword } from "../src/lib/auth/password";
+import { DEMO_PARTS, demoCurveSetCsv, demoCurveSetFileName } from "../src/lib/demo/parts";
+import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
+import { registerCurveSet } from "../src/lib/library/curve-upload";
+import { storage } from "../src/lib/storage";
 
 if (process.argv.includes("--print-sign-in")) {
-  console.log(`    demo      workspace "${demoWorkspace.name}"`);
+  console.log(`    demo      workspace "${demoWorkspace.name}", sign in with any of:`);
+  for (const u of demoUsers)
+    console.log(`              ${u.role.padEnd(10)} ${u.email.padEnd(28)} ${u.password}`);
   process.exit(0);
 }
 
-const url = process.env.DATABASE_URL;
-if (!url) {
-  console.error("DATABASE_URL is missing");
-  process.exit(1);
-}
-const { db, sql } = createDb(url, { max: 1 });
-try {
+async function seedWorkspace(): Promise<string> {
   await db.insert(workspaces).values(demoWorkspace).onConflictDoNothing({ target: workspaces.slug });
-} finally {
-  await sql.end();
+  const [ws] = await db.select().from(workspaces).where(eq(workspaces.slug, demoWorkspace.slug));
+  return ws.id;
 }
+
+async function seedUsers(workspaceId: string): Promise<Record<string, string>> {
+  const ids: Record<string, string> = {};
+  for (const u of demoUsers) {
+    let user = await db.query.users.findFirst({ where: eq(users.email, u.email), columns: { id: true } });
+    if (!user) {
+      [user] = await db
+        .insert(users)
+        .values({ email: u.email, name: u.name, passwordHash: await hashPassword(u.password) })
+        .returning({ id: users.id });
+    }
+    await db.insert(memberships).values({ workspaceId, userId: user.id, role: u.role }).onConflictDoNothing();
+    ids[u.role] = user.id;
+  }
+  return ids;
+}
+
+async function seedParts(workspaceId: string, engineerId: string): Promise<void> {
+  const store = storage();
+  for (const demo of DEMO_PARTS) {
+    const existing = await db
+      .select({ id: parts.id })
+      .from(parts)
+      .where(
+        and(
+          eq(parts.workspaceId, workspaceId),
+          eq(parts.maker, demo.maker),
+          eq(parts.partNumber, demo.partNumber),
+        ),
+      );
+    if (existing.length) continue;
+    const [part] = await db
+      .insert(parts)
+      .values({
+        workspaceId,
+        partNumber: demo.partNumber,
+        maker: demo.maker,
+        technology: "si-mosfet",
+        package: demo.package,
+        vdsMax: demo.vdsMax,
+        idMax: demo.idContinuous,
+        idPulseMax: demo.idPulseMax,
+        rdsOn: demo.rdsOn,
+        tjMax: demo.tjMax,
+        rthJc: demo.rthJc,
+        foster: demo.foster,
+        thermalSource: { kind: "typed" },
+        unitCost: demo.unitCost,
+        currency: demo.currency,
+        datasheetRevision: demo.datasheetRevision,
+        notes: demo.notes,
+        createdBy: engineerId,
+      })
+      .returning();
+    const csv = demoCurveSetCsv(demo);
+    const fileName = demoCurveSetFileName(demo);
+    const objectKey = `${workspaceId}/parts/${part.id}/curve-set/${crypto.randomUUID()}.csv`;
+    const [upload] = await db
+      .insert(pendingUploads)
+      .values({ workspaceId, userId: engineerId, objectKey, fileName, purpose: "curve-set" })
+      .returning();
+    await store.put(objectKey, csv, { contentType: "text/csv" });
+    await registerCurveSet(store, { part, userId: engineerId, upload });
+  }
+}
+
+const workspaceId = await seedWorkspace();
+const ids = await seedUsers(workspaceId);
+await seedParts(workspaceId, ids.engineer);
+process.exit(0);

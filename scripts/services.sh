@@ -12,8 +12,12 @@ case "${PROFILE:?PROFILE must be dev or test}" in
   test) PG_PORT=54339 S3_PORT=9579 SMTP_PORT=1035 MAIL_WEB_PORT=1090 APP_PORT=3100 ;;
   *) echo "unknown PROFILE $PROFILE" >&2; exit 2 ;;
 esac
+# PF_PORT_OFFSET shifts every port, so two checkouts can run their services side by side.
+off=${PF_PORT_OFFSET:-0}
+PG_PORT=$((PG_PORT + off)) S3_PORT=$((S3_PORT + off)) SMTP_PORT=$((SMTP_PORT + off))
+MAIL_WEB_PORT=$((MAIL_WEB_PORT + off)) APP_PORT=$((APP_PORT + off))
 
-DATA_DIR="$ROOT/.data/$PROFILE"
+DATA_DIR="${PF_DATA_DIR:-$ROOT/.data/$PROFILE}"
 PIDS=()
 
 log() { printf '\033[2m[%s]\033[0m %s\n' "$(date +%H:%M:%S)" "$*"; }
@@ -57,7 +61,7 @@ wait_for() { # wait_for NAME SECONDS COMMAND...
 start_postgres() {
   local pgdata="$DATA_DIR/pg"
   mkdir -p "$DATA_DIR"
-  chmod 755 "$ROOT/.data" "$DATA_DIR"
+  chmod 755 "$DATA_DIR" "$(dirname "$DATA_DIR")"
   runuser -u postgres -- test -x "$DATA_DIR" ||
     die "the postgres user cannot reach $DATA_DIR; make every parent folder traversable (chmod o+x)"
   if [ ! -f "$DATA_DIR/pg-password" ]; then

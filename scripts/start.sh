@@ -16,7 +16,7 @@ cd "$ROOT"
 log "migrating"
 node_modules/.bin/tsx scripts/migrate.ts || die "migration failed"
 log "seeding the demo workspace"
-node_modules/.bin/tsx scripts/seed.ts || die "seed failed"
+node_modules/.bin/tsx --conditions=react-server scripts/seed.ts || die "seed failed"
 log "building"
 node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; die "build failed"; }
 
@@ -34,7 +34,7 @@ cat <<MSG
     health    $APP_URL/api/health
     inbox     $MAIL_INBOX_URL   (every e-mail the app sends lands here)
     storage   $S3_ENDPOINT/$BUCKET
-$(node_modules/.bin/tsx scripts/seed.ts --print-sign-in 2>/dev/null)
+$(node_modules/.bin/tsx --conditions=react-server scripts/seed.ts --print-sign-in 2>/dev/null)
 
   Ctrl-C stops everything. Data is kept in .data/dev.
 

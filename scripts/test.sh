@@ -32,7 +32,7 @@ step() { # step NAME COMMAND...: runs a step, records its failure, goes on
 }
 
 step migrate node_modules/.bin/tsx scripts/migrate.ts
-step seed node_modules/.bin/tsx scripts/seed.ts
+step seed node_modules/.bin/tsx --conditions=react-server scripts/seed.ts
 step lint node_modules/.bin/biome check .
 step typecheck node_modules/.bin/tsc --noEmit
 step vitest node_modules/.bin/vitest run --config scripts/vitest.config.ts --coverage \

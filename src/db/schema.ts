@@ -1,6 +1,22 @@
-import { pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { relations } from "drizzle-orm";
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 
 // Tables ----------------------------------------------------------------------------------------------------
+
+export const roleEnum = pgEnum("member_role", ["admin", "lead", "engineer", "technician"]);
 
 /** A team. Every row of every later table hangs off a workspace. */
 export const workspaces = pgTable("workspaces", {
@@ -10,7 +26,254 @@ export const workspaces = pgTable("workspaces", {
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 
+/** A person. E-mail addresses are stored lower-cased. */
+export const users = pgTable("users", {
+  id: uuid().primaryKey().defaultRandom(),
+  email: text().notNull().unique(),
+  name: text().notNull(),
+  passwordHash: text().notNull(),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+/** A signed-in browser. The id is the hash of the cookie's token; the active workspace travels with it. */
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: text().primaryKey(),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    workspaceId: uuid().references(() => workspaces.id, { onDelete: "set null" }),
+    expiresAt: timestamp({ withTimezone: true, mode: "date" }).notNull(),
+  },
+  (t) => [index().on(t.userId)],
+);
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: roleEnum().notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.workspaceId, t.userId] }), index().on(t.userId)],
+);
+
+/** An invitation by e-mail; the token is random and stored only as its SHA-256. */
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    email: text().notNull(),
+    role: roleEnum().notNull(),
+    tokenHash: text().notNull().unique(),
+    invitedBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    acceptedAt: timestamp({ withTimezone: true }),
+    revokedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.workspaceId)],
+);
+
+/** A password-reset request; same token rules as invitations. */
+export const passwordResets = pgTable("password_resets", {
+  id: uuid().primaryKey().defaultRandom(),
+  userId: uuid()
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  tokenHash: text().notNull().unique(),
+  expiresAt: timestamp({ withTimezone: true }).notNull(),
+  usedAt: timestamp({ withTimezone: true }),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+/** A bearer token for bench scripts, acting as its user in one workspace. Stored hashed; shown once. */
+export const apiTokens = pgTable(
+  "api_tokens",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    tokenHash: text().notNull().unique(),
+    prefix: text().notNull(),
+    lastUsedAt: timestamp({ withTimezone: true }),
+    revokedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.userId)],
+);
+
+/** Failed sign-ins and reset requests, counted per e-mail and per IP to throttle guessing. */
+export const authAttempts = pgTable(
+  "auth_attempts",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    kind: text({ enum: ["sign-in", "reset"] }).notNull(),
+    key: text().notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.kind, t.key, t.createdAt)],
+);
+
+/** Who did what, when: membership, role, token changes and, later, project history. */
+export const auditEvents = pgTable(
+  "audit_events",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    actorId: uuid().references(() => users.id, { onDelete: "set null" }),
+    action: text().notNull(),
+    subjectType: text().notNull(),
+    subjectId: text(),
+    details: jsonb().$type<Record<string, unknown>>().notNull().default({}),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.workspaceId, t.createdAt)],
+);
+
+// Library -----------------------------------------------------------------------------------------------------
+
+export const technologyEnum = pgEnum("part_technology", ["si-mosfet", "sic-mosfet", "gan-hemt", "igbt"]);
+export const partStatusEnum = pgEnum("part_status", ["draft", "verified"]);
+
+export interface FosterTermRow {
+  r: number;
+  tau: number;
+}
+
+/** How a part's Foster network was obtained: typed or pasted, or fitted to an uploaded Z_th(t) curve. */
+export interface ThermalSource {
+  kind: "typed" | "fitted";
+  fileName?: string;
+  objectKey?: string;
+  points?: [number, number][];
+  rmsRelativeError?: number;
+  maxRelativeError?: number;
+}
+
+/** A transistor of the workspace's library. Ratings in SI units (V, A, Ω, °C, K/W). */
+export const parts = pgTable(
+  "parts",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    partNumber: text().notNull(),
+    maker: text().notNull(),
+    technology: technologyEnum().notNull(),
+    package: text().notNull(),
+    vdsMax: doublePrecision().notNull(),
+    idMax: doublePrecision(),
+    idPulseMax: doublePrecision(),
+    rdsOn: doublePrecision(),
+    tjMax: doublePrecision().notNull(),
+    rthJc: doublePrecision(),
+    foster: jsonb().$type<FosterTermRow[]>(),
+    thermalSource: jsonb().$type<ThermalSource>(),
+    unitCost: doublePrecision(),
+    currency: text(),
+    datasheetRevision: text(),
+    notes: text(),
+    status: partStatusEnum().notNull().default("draft"),
+    verifiedBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    verifiedAt: timestamp({ withTimezone: true }),
+    archivedAt: timestamp({ withTimezone: true }),
+    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex().on(t.workspaceId, t.maker, t.partNumber), index().on(t.workspaceId, t.partNumber)],
+);
+
+/** One uploaded SOA figure of a part (a datasheet revision). The raw file stays in object storage. */
+export const curveSets = pgTable(
+  "curve_sets",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    partId: uuid()
+      .notNull()
+      .references(() => parts.id, { onDelete: "cascade" }),
+    objectKey: text().notNull().unique(),
+    fileName: text().notNull(),
+    size: integer().notNull(),
+    sha256: text().notNull(),
+    shape: text({ enum: ["long", "paired"] }).notNull(),
+    refCaseTemp: doublePrecision().notNull().default(25),
+    active: boolean().notNull().default(false),
+    findings: jsonb().$type<unknown[]>().notNull().default([]),
+    uploadedBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.partId)],
+);
+
+/** One SOA curve of a curve set: duration in seconds, null for DC; points [V, I] sorted by V. */
+export const curves = pgTable(
+  "curves",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    curveSetId: uuid()
+      .notNull()
+      .references(() => curveSets.id, { onDelete: "cascade" }),
+    position: integer().notNull(),
+    duration: doublePrecision(),
+    points: jsonb().$type<[number, number][]>().notNull(),
+  },
+  (t) => [index().on(t.curveSetId)],
+);
+
+/** A presigned upload not yet registered; a cleanup step removes the objects of stale ones. */
+export const pendingUploads = pgTable("pending_uploads", {
+  id: uuid().primaryKey().defaultRandom(),
+  workspaceId: uuid()
+    .notNull()
+    .references(() => workspaces.id, { onDelete: "cascade" }),
+  userId: uuid().references(() => users.id, { onDelete: "set null" }),
+  objectKey: text().notNull().unique(),
+  fileName: text().notNull(),
+  purpose: text().notNull(),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+// Relations -------------------------------------------------------------------------------------------------
+
+export const membershipsRelations = relations(memberships, ({ one }) => ({
+  user: one(users, { fields: [memberships.userId], references: [users.id] }),
+  workspace: one(workspaces, { fields: [memberships.workspaceId], references: [workspaces.id] }),
+}));
+
 // Types -----------------------------------------------------------------------------------------------------
 
 export type Workspace = typeof workspaces.$inferSelect;
 export type NewWorkspace = typeof workspaces.$inferInsert;
+export type User = typeof users.$inferSelect;
+export type Membership = typeof memberships.$inferSelect;
+export type Role = (typeof roleEnum.enumValues)[number];
+export type Invitation = typeof invitations.$inferSelect;
+export type ApiToken = typeof apiTokens.$inferSelect;
+export type AuditEvent = typeof auditEvents.$inferSelect;
+export type Part = typeof parts.$inferSelect;
+export type NewPart = typeof parts.$inferInsert;
+export type Technology = (typeof technologyEnum.enumValues)[number];
+export type CurveSetRow = typeof curveSets.$inferSelect;
+export type CurveRow = typeof curves.$inferSelect;

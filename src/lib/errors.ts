@@ -56,7 +56,10 @@ export function toAppError(error: unknown): AppError {
 }
 
 /** A JSON response for an error; never carries a stack trace. */
-export function errorResponse(error: unknown, headers?: HeadersInit): Response {
+export function errorResponse(error: unknown): Response {
   const appError = toAppError(error);
+  const headers = new Headers({ "cache-control": "no-store" });
+  const retryAfter = (appError.details as { retryAfter?: number } | undefined)?.retryAfter;
+  if (appError.kind === "rate_limited" && retryAfter) headers.set("retry-after", String(retryAfter));
   return Response.json(appError.toJSON(), { status: appError.status, headers });
 }

@@ -1,5 +1,6 @@
 import { sql } from "drizzle-orm";
 import { db } from "@/db";
+import { publicRoute } from "@/lib/auth/guard";
 import { mailer } from "@/lib/mail";
 import { storage } from "@/lib/storage";
 
@@ -17,7 +18,7 @@ async function probe(run: () => Promise<unknown>): Promise<Status> {
 }
 
 /** GET /api/health: each service "ok" or what is wrong; 200 only when all are ok. Public, reveals no data. */
-export async function GET(): Promise<Response> {
+export const GET = publicRoute(async () => {
   const [dbStatus, storageStatus, mailStatus] = await Promise.all([
     probe(() => db.execute(sql`select 1`)),
     probe(() => storage().ping()),
@@ -26,4 +27,4 @@ export async function GET(): Promise<Response> {
   const body = { db: dbStatus, storage: storageStatus, mail: mailStatus };
   const healthy = Object.values(body).every((s) => s === "ok");
   return Response.json(body, { status: healthy ? 200 : 503, headers: { "cache-control": "no-store" } });
-}
+});

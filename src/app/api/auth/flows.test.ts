@@ -1,0 +1,298 @@
+// The account flows end to end through the real route handlers, PostgreSQL and the mail fake.
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { apiTokens, invitations, sessions, users } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import {
+  call,
+  cookiePair,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+  testPassword,
+} from "@/test/fixtures";
+import { waitForMail } from "@/test/services";
+import { POST as changePassword } from "../account/password/route";
+import { DELETE as revokeToken } from "../account/tokens/[id]/route";
+import { POST as createToken, GET as listTokens } from "../account/tokens/route";
+import { GET as health } from "../health/route";
+import { POST as acceptInvitation } from "../invitations/accept/route";
+import { POST as invite, GET as listInvitations } from "../team/invitations/route";
+import { POST as checkPost } from "../v1/check/route";
+import { POST as forgotPassword } from "./forgot-password/route";
+import { POST as resetPassword } from "./reset-password/route";
+import { POST as signIn } from "./sign-in/route";
+import { POST as signOutEverywhere } from "./sign-out-everywhere/route";
+import { POST as signUp } from "./sign-up/route";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+const unique = () => crypto.randomUUID().slice(0, 8);
+const linkToken = (text: string, path: string) =>
+  new RegExp(`${path}/([A-Za-z0-9_-]+)`).exec(text)?.[1] ?? "";
+
+// Every response body the flows see, to search for secrets at the end.
+const seen: string[] = [];
+async function record(res: Response): Promise<Response> {
+  seen.push(
+    `${[...res.headers.entries()].filter(([k]) => k !== "set-cookie").join("\n")}\n${await res.clone().text()}`,
+  );
+  return res;
+}
+
+let ws: TestWorkspace;
+beforeAll(async () => {
+  ws = await createTestWorkspace("Flows");
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+describe("sign-up and sign-in", () => {
+  it("creates an account with its own workspace, the new user as admin, and signs in", async () => {
+    const email = `founder-${unique()}@example.test`;
+    const res = await record(
+      await call(h(signUp), "POST", {
+        body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" },
+      }),
+    );
+    expect(res.status).toBe(201);
+    const cookie = cookiePair(res.headers.get("set-cookie")!);
+    expect(res.headers.get("set-cookie")).toMatch(/HttpOnly/i);
+    expect(res.headers.get("set-cookie")).toMatch(/SameSite=Lax/i);
+    const tokens = await record(await call(h(listTokens), "GET", { cookie }));
+    expect(tokens.status).toBe(200);
+    const again = await call(h(signUp), "POST", {
+      body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Other" },
+    });
+    expect(again.status).toBe(409);
+  });
+
+  it("names the invalid fields of a sign-up", async () => {
+    const res = await call(h(signUp), "POST", {
+      body: { name: "", email: "not-an-address", password: "short" },
+    });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    expect(Object.keys(body.error.details.fieldErrors).sort()).toEqual([
+      "email",
+      "name",
+      "password",
+      "workspaceName",
+    ]);
+  });
+
+  it("answers the 6th failed sign-in within 15 minutes with 429 and Retry-After", async () => {
+    const ip = `10.${unique().length}.0.${Math.floor(Math.random() * 250)}-${unique()}`;
+    const headers = { "x-forwarded-for": ip };
+    for (let k = 0; k < 5; k++) {
+      const res = await call(h(signIn), "POST", {
+        body: { email: ws.members.engineer.email, password: "wrong" },
+        headers,
+      });
+      expect(res.status).toBe(401);
+    }
+    const sixth = await call(h(signIn), "POST", {
+      body: { email: ws.members.engineer.email, password: testPassword },
+      headers,
+    });
+    expect(sixth.status).toBe(429);
+    const retryAfter = Number(sixth.headers.get("retry-after"));
+    expect(retryAfter).toBeGreaterThan(800);
+    expect(retryAfter).toBeLessThanOrEqual(900);
+  });
+
+  it("signs in with the right password", async () => {
+    const res = await record(
+      await call(h(signIn), "POST", {
+        body: { email: ws.members.technician.email, password: testPassword },
+        headers: { "x-forwarded-for": `ip-${unique()}` },
+      }),
+    );
+    expect(res.status).toBe(200);
+    expect(res.headers.get("set-cookie")).toMatch(/^pulsefence_session=/);
+  });
+});
+
+describe("invitations", () => {
+  it("e-mails a link that works once, and never after expiry", async () => {
+    const admin = await sessionCookie(ws.members.admin.id, ws.id);
+    const email = `new-tech-${unique()}@example.test`;
+    const res = await record(
+      await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } }),
+    );
+    expect(res.status).toBe(201);
+    const mail = await waitForMail(email);
+    expect(mail.subject).toContain(ws.name);
+    const token = linkToken(mail.text, "/invite");
+    expect(token.length).toBeGreaterThan(20);
+    const listed = await record(await call(h(listInvitations), "GET", { cookie: admin }));
+    expect((await listed.json()).invitations.map((i: { email: string }) => i.email)).toContain(email);
+
+    const accepted = await record(
+      await call(h(acceptInvitation), "POST", {
+        body: { token, name: "Ivo Brandt", password: testPassword },
+      }),
+    );
+    expect(accepted.status).toBe(200);
+    const second = await call(h(acceptInvitation), "POST", {
+      body: { token, name: "Ivo Brandt", password: testPassword },
+    });
+    expect(second.status).toBe(404);
+
+    const late = `late-${unique()}@example.test`;
+    await call(h(invite), "POST", { cookie: admin, body: { email: late, role: "engineer" } });
+    const lateToken = linkToken((await waitForMail(late)).text, "/invite");
+    await testDb.db
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.email, late));
+    const expired = await call(h(acceptInvitation), "POST", {
+      body: { token: lateToken, name: "Late", password: testPassword },
+    });
+    expect(expired.status).toBe(404);
+  });
+
+  it("refuses a lead handing out the admin role, and a technician inviting at all", async () => {
+    const lead = await sessionCookie(ws.members.lead.id, ws.id);
+    const res = await call(h(invite), "POST", {
+      cookie: lead,
+      body: { email: `x-${unique()}@example.test`, role: "admin" },
+    });
+    expect(res.status).toBe(403);
+    const tech = await sessionCookie(ws.members.technician.id, ws.id);
+    const denied = await call(h(invite), "POST", {
+      cookie: tech,
+      body: { email: `y-${unique()}@example.test`, role: "technician" },
+    });
+    expect(denied.status).toBe(403);
+  });
+});
+
+describe("password reset", () => {
+  it("resets once by e-mailed link and signs out every session", async () => {
+    const user = ws.members.lead;
+    const before = await sessionCookie(user.id, ws.id);
+    const res = await call(h(forgotPassword), "POST", {
+      body: { email: user.email },
+      headers: { "x-forwarded-for": `ip-${unique()}` },
+    });
+    expect(res.status).toBe(200);
+    const token = linkToken((await waitForMail(user.email)).text, "/reset-password");
+    const newPassword = "a brand new passphrase";
+    expect((await call(h(resetPassword), "POST", { body: { token, password: newPassword } })).status).toBe(
+      200,
+    );
+    expect((await call(h(resetPassword), "POST", { body: { token, password: newPassword } })).status).toBe(
+      404,
+    );
+    expect((await call(h(listTokens), "GET", { cookie: before })).status).toBe(401);
+    const signedIn = await call(h(signIn), "POST", {
+      body: { email: user.email, password: newPassword },
+      headers: { "x-forwarded-for": `ip-${unique()}` },
+    });
+    expect(signedIn.status).toBe(200);
+  });
+
+  it("answers an unknown e-mail the same way, sending nothing", async () => {
+    const res = await call(h(forgotPassword), "POST", {
+      body: { email: `nobody-${unique()}@example.test` },
+      headers: { "x-forwarded-for": `ip-${unique()}` },
+    });
+    expect(res.status).toBe(200);
+  });
+
+  it("a password change ends the user's other sessions but keeps this one", async () => {
+    const user = ws.members.engineer;
+    const other = await sessionCookie(user.id, ws.id);
+    const mine = await sessionCookie(user.id, ws.id);
+    const res = await call(h(changePassword), "POST", {
+      cookie: mine,
+      body: { currentPassword: testPassword, newPassword: "another long passphrase" },
+    });
+    expect(res.status).toBe(200);
+    expect((await call(h(listTokens), "GET", { cookie: other })).status).toBe(401);
+    expect((await call(h(listTokens), "GET", { cookie: mine })).status).toBe(200);
+  });
+});
+
+describe("API tokens", () => {
+  const request = {
+    part: {
+      vdsMax: 80,
+      tjMax: 175,
+      soa: {
+        curves: [
+          {
+            duration: 1e-3,
+            points: [
+              [10, 40],
+              [40, 10],
+            ],
+          },
+        ],
+      },
+    },
+    caseTemp: 25,
+    pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
+  };
+
+  it("authenticates POST /api/v1/check with a bearer token until it is revoked", async () => {
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const created = await record(await call(h(createToken), "POST", { cookie, body: { name: "bench 3" } }));
+    expect(created.status).toBe(201);
+    const { token } = await created.json();
+    expect(token.secret).toMatch(/^pf_/);
+
+    const ok = await record(await call(h(checkPost), "POST", { bearer: token.secret, body: request }));
+    expect(ok.status).toBe(200);
+    const body = await ok.json();
+    expect(body.results).toHaveLength(1);
+    expect(body.results[0]).toMatchObject({ id: "p1", verdict: expect.any(String), derating: 1 });
+
+    const listed = await record(await call(h(listTokens), "GET", { cookie }));
+    expect(JSON.stringify(await listed.json())).not.toContain(token.secret);
+
+    expect((await call(h(revokeToken), "DELETE", { cookie, params: { id: token.id } })).status).toBe(200);
+    expect((await call(h(checkPost), "POST", { bearer: token.secret, body: request })).status).toBe(401);
+  });
+
+  it("answers an invalid check request 400 with the field path", async () => {
+    const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
+    const res = await call(h(checkPost), "POST", { cookie, body: { ...request, caseTemp: "hot" } });
+    expect(res.status).toBe(400);
+    expect((await res.json()).error.path).toBe("caseTemp");
+  });
+
+  it("refuses a bearer token outside /api/v1", async () => {
+    const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
+    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "misuse" } })).json();
+    expect((await call(h(listInvitations), "GET", { bearer: token.secret })).status).toBe(401);
+  });
+});
+
+describe("secrets", () => {
+  it("sign-out everywhere ends every session of the user", async () => {
+    const user = ws.members.admin;
+    const one = await sessionCookie(user.id, ws.id);
+    const two = await sessionCookie(user.id, ws.id);
+    expect((await call(h(signOutEverywhere), "POST", { cookie: one })).status).toBe(200);
+    expect((await call(h(listTokens), "GET", { cookie: two })).status).toBe(401);
+  });
+
+  it("no response of these flows contains a password hash, a token hash or another user's session id", async () => {
+    seen.push(await (await call(h(health), "GET")).text());
+    const hashes = (await testDb.db.select({ h: users.passwordHash }).from(users)).map((r) => r.h);
+    const tokenHashes = [
+      ...(await testDb.db.select({ h: apiTokens.tokenHash }).from(apiTokens)).map((r) => r.h),
+      ...(await testDb.db.select({ h: invitations.tokenHash }).from(invitations)).map((r) => r.h),
+    ];
+    const sessionIds = (await testDb.db.select({ id: sessions.id }).from(sessions)).map((r) => r.id);
+    expect(seen.length).toBeGreaterThan(8);
+    const all = seen.join("\n");
+    for (const secret of [...hashes, ...tokenHashes, ...sessionIds]) expect(all.includes(secret)).toBe(false);
+    expect(all).not.toMatch(/\$argon2id\$/);
+  });
+});

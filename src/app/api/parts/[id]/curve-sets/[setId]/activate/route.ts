@@ -1,0 +1,44 @@
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { isUuid } from "@/db/queries/parts";
+import { curveSets, parts } from "@/db/schema";
+import { route } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import { json } from "@/lib/http";
+import { loadPart } from "@/lib/library/parts";
+
+/** POST /api/parts/:id/curve-sets/:setId/activate: makes an earlier revision the active one; back to draft. */
+export const POST = route<{ id: string; setId: string }>(
+  { action: "part.write" },
+  async (_req, caller, { id, setId }) => {
+    const part = await loadPart(caller, id);
+    await db.transaction(async (tx) => {
+      const [set] = isUuid(setId)
+        ? await tx
+            .select({ id: curveSets.id })
+            .from(curveSets)
+            .where(and(eq(curveSets.id, setId), eq(curveSets.partId, part.id)))
+        : [];
+      if (!set) throw new AppError("not_found:curve-set", "No such curve set.");
+      await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, part.id));
+      await tx.update(curveSets).set({ active: true }).where(eq(curveSets.id, set.id));
+      await tx
+        .update(parts)
+        .set({ status: "draft", verifiedBy: null, verifiedAt: null, updatedAt: new Date() })
+        .where(eq(parts.id, part.id));
+      await recordAudit(
+        {
+          workspaceId: caller.workspaceId,
+          actorId: caller.user.id,
+          action: "curve-set.activated",
+          subjectType: "part",
+          subjectId: part.id,
+          details: { curveSetId: set.id },
+        },
+        tx,
+      );
+    });
+    return json({ status: "ok" });
+  },
+);

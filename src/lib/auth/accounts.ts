@@ -1,0 +1,211 @@
+import "server-only";
+import { and, eq, gt, isNull } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { invitations, memberships, passwordResets, users, workspaces } from "@/db/schema";
+import { env } from "@/lib/env";
+import { AppError } from "@/lib/errors";
+import { mailer } from "@/lib/mail";
+import { passwordResetMail } from "@/lib/mail/templates";
+import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
+import { endOtherSessions } from "./session";
+import { hashToken, randomToken } from "./tokens";
+
+export const linkLifetimeMs = 7 * 24 * 60 * 60 * 1000;
+
+export function slugify(name: string): string {
+  const base = name
+    .toLowerCase()
+    .normalize("NFKD")
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .slice(0, 40);
+  return `${base || "workspace"}-${randomToken()
+    .slice(0, 6)
+    .toLowerCase()
+    .replace(/[^a-z0-9]/g, "x")}`;
+}
+
+/** Creates the user and their workspace, with the user as admin, in one transaction. */
+export async function createAccount(input: {
+  name: string;
+  email: string;
+  password: string;
+  workspaceName: string;
+}) {
+  const passwordHash = await hashPassword(input.password);
+  return db.transaction(async (tx) => {
+    const existing = await tx.query.users.findFirst({
+      where: eq(users.email, input.email),
+      columns: { id: true },
+    });
+    if (existing)
+      throw new AppError("conflict:email", "An account with this e-mail already exists. Sign in instead.");
+    const [user] = await tx
+      .insert(users)
+      .values({ email: input.email, name: input.name, passwordHash })
+      .returning({ id: users.id });
+    const [workspace] = await tx
+      .insert(workspaces)
+      .values({ name: input.workspaceName, slug: slugify(input.workspaceName) })
+      .returning({ id: workspaces.id });
+    await tx.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: "admin" });
+    await recordAudit(
+      {
+        workspaceId: workspace.id,
+        actorId: user.id,
+        action: "membership.created",
+        subjectType: "user",
+        subjectId: user.id,
+        details: { role: "admin", via: "sign-up" },
+      },
+      tx,
+    );
+    return { userId: user.id, workspaceId: workspace.id };
+  });
+}
+
+/** Checks e-mail and password; the same work is done for unknown e-mails so timing reveals nothing. */
+export async function checkCredentials(email: string, password: string) {
+  const user = await db.query.users.findFirst({ where: eq(users.email, email) });
+  const ok = await verifyPassword(user?.passwordHash ?? (await dummyPasswordHash()), password);
+  return ok && user ? { id: user.id } : null;
+}
+
+/** The workspace a fresh session starts in: the one asked for if a member, else the first by name. */
+export async function defaultWorkspace(userId: string): Promise<string | null> {
+  const rows = await db
+    .select({ id: memberships.workspaceId, name: workspaces.name })
+    .from(memberships)
+    .innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(workspaces.name)
+    .limit(1);
+  return rows[0]?.id ?? null;
+}
+
+/** Sends a reset link when the account exists; says nothing either way. */
+export async function requestPasswordReset(email: string): Promise<void> {
+  const user = await db.query.users.findFirst({ where: eq(users.email, email), columns: { id: true } });
+  if (!user) return;
+  const token = randomToken();
+  await db.insert(passwordResets).values({
+    userId: user.id,
+    tokenHash: hashToken(token),
+    expiresAt: new Date(Date.now() + linkLifetimeMs),
+  });
+  await mailer().send(passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` }));
+}
+
+/** Uses a reset link once: sets the password and ends every session of the user. */
+export async function resetPassword(token: string, password: string): Promise<{ userId: string }> {
+  const passwordHash = await hashPassword(password);
+  const userId = await db.transaction(async (tx) => {
+    const [reset] = await tx
+      .update(passwordResets)
+      .set({ usedAt: new Date() })
+      .where(
+        and(
+          eq(passwordResets.tokenHash, hashToken(token)),
+          isNull(passwordResets.usedAt),
+          gt(passwordResets.expiresAt, new Date()),
+        ),
+      )
+      .returning({ userId: passwordResets.userId });
+    if (!reset)
+      throw new AppError("not_found:reset-link", "This reset link is not valid any more. Ask for a new one.");
+    await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
+    return reset.userId;
+  });
+  await endOtherSessions(userId, null);
+  return { userId };
+}
+
+/** The invitation behind a link, if it can still be used. */
+export async function findOpenInvitation(token: string) {
+  const [row] = await db
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      workspaceId: invitations.workspaceId,
+      workspaceName: workspaces.name,
+      expiresAt: invitations.expiresAt,
+    })
+    .from(invitations)
+    .innerJoin(workspaces, eq(workspaces.id, invitations.workspaceId))
+    .where(
+      and(
+        eq(invitations.tokenHash, hashToken(token)),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+        gt(invitations.expiresAt, new Date()),
+      ),
+    );
+  return row ?? null;
+}
+
+/**
+ * Accepts an invitation once. A new e-mail gets an account (name and password required); an existing account
+ * proves itself with its password. Either way the membership is added in the same transaction that uses the link.
+ */
+export async function acceptInvitation(input: { token: string; name?: string; password: string }) {
+  const invitation = await findOpenInvitation(input.token);
+  if (!invitation) {
+    throw new AppError(
+      "not_found:invitation",
+      "This invitation link is not valid any more: used, revoked or expired.",
+    );
+  }
+  const existing = await db.query.users.findFirst({ where: eq(users.email, invitation.email) });
+  if (existing && !(await verifyPassword(existing.passwordHash, input.password))) {
+    throw new AppError("invalid:password", "Wrong password for the existing account with this e-mail.", {
+      details: { fieldErrors: { password: ["Wrong password for the existing account with this e-mail"] } },
+    });
+  }
+  if (!existing && (!input.name || input.password.length < 10)) {
+    throw new AppError("invalid", "Enter your name and a password of at least 10 characters.", {
+      details: {
+        fieldErrors: {
+          ...(input.name ? {} : { name: ["Enter your name"] }),
+          ...(input.password.length < 10 ? { password: ["Use at least 10 characters"] } : {}),
+        },
+      },
+    });
+  }
+  const passwordHash = existing ? null : await hashPassword(input.password);
+  return db.transaction(async (tx) => {
+    const [used] = await tx
+      .update(invitations)
+      .set({ acceptedAt: new Date() })
+      .where(
+        and(eq(invitations.id, invitation.id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)),
+      )
+      .returning({ id: invitations.id });
+    if (!used) throw new AppError("not_found:invitation", "This invitation link has just been used.");
+    let userId = existing?.id;
+    if (!userId) {
+      const [created] = await tx
+        .insert(users)
+        .values({ email: invitation.email, name: input.name!, passwordHash: passwordHash! })
+        .returning({ id: users.id });
+      userId = created.id;
+    }
+    await tx
+      .insert(memberships)
+      .values({ workspaceId: invitation.workspaceId, userId, role: invitation.role })
+      .onConflictDoNothing();
+    await recordAudit(
+      {
+        workspaceId: invitation.workspaceId,
+        actorId: userId,
+        action: "membership.created",
+        subjectType: "user",
+        subjectId: userId,
+        details: { role: invitation.role, via: "invitation", invitationId: invitation.id },
+      },
+      tx,
+    );
+    return { userId, workspaceId: invitation.workspaceId };
+  });
+}

@@ -1,0 +1,92 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { invitations, memberships, type Role, users, workspaces } from "@/db/schema";
+import { env } from "@/lib/env";
+import { AppError } from "@/lib/errors";
+import { mailer } from "@/lib/mail";
+import { invitationMail } from "@/lib/mail/templates";
+import { linkLifetimeMs } from "./accounts";
+import type { MemberCaller } from "./guard";
+import { assignableRoles, roleLabels } from "./permissions";
+import { hashToken, randomToken } from "./tokens";
+
+export function assertMayAssign(caller: MemberCaller, role: Role): void {
+  if (!assignableRoles(caller.role).includes(role)) {
+    throw new AppError(
+      "forbidden:role",
+      `A ${roleLabels[caller.role].toLowerCase()} cannot hand out the ${role} role.`,
+    );
+  }
+}
+
+/**
+ * Creates (or renews) an invitation with a fresh single-use token and e-mails its link. The row is written
+ * first; if the e-mail cannot be sent, the invitation is removed again so nothing half-done remains.
+ */
+export async function sendInvitation(
+  caller: MemberCaller,
+  input: { email: string; role: Role; replaceId?: string },
+) {
+  assertMayAssign(caller, input.role);
+  const alreadyMember = await db
+    .select({ userId: memberships.userId })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.workspaceId, caller.workspaceId), eq(users.email, input.email)));
+  if (alreadyMember.length) throw new AppError("conflict:member", `${input.email} is already a member.`);
+
+  const token = randomToken();
+  const invitation = await db.transaction(async (tx) => {
+    if (input.replaceId) {
+      await tx
+        .update(invitations)
+        .set({ revokedAt: new Date() })
+        .where(and(eq(invitations.id, input.replaceId), eq(invitations.workspaceId, caller.workspaceId)));
+    }
+    const [row] = await tx
+      .insert(invitations)
+      .values({
+        workspaceId: caller.workspaceId,
+        email: input.email,
+        role: input.role,
+        tokenHash: hashToken(token),
+        invitedBy: caller.user.id,
+        expiresAt: new Date(Date.now() + linkLifetimeMs),
+      })
+      .returning({ id: invitations.id, email: invitations.email, role: invitations.role });
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: input.replaceId ? "invitation.resent" : "invitation.created",
+        subjectType: "invitation",
+        subjectId: row.id,
+        details: { email: input.email, role: input.role },
+      },
+      tx,
+    );
+    return row;
+  });
+
+  const [workspace] = await db
+    .select({ name: workspaces.name })
+    .from(workspaces)
+    .where(eq(workspaces.id, caller.workspaceId));
+  try {
+    await mailer().send(
+      invitationMail({
+        to: input.email,
+        workspaceName: workspace.name,
+        inviterName: caller.user.name,
+        role: roleLabels[input.role].toLowerCase(),
+        link: `${env().APP_URL}/invite/${token}`,
+      }),
+    );
+  } catch (error) {
+    await db.delete(invitations).where(eq(invitations.id, invitation.id));
+    throw error;
+  }
+  return invitation;
+}

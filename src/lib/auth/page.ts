@@ -1,0 +1,56 @@
+import "server-only";
+import { cookies, headers } from "next/headers";
+import { notFound, redirect } from "next/navigation";
+import { cache } from "react";
+import { getMembership, listUserWorkspaces } from "@/db/queries/members";
+import type { Role } from "@/db/schema";
+import { type Action, can } from "./permissions";
+import { sessionCookieName, validateSessionCookie } from "./session";
+
+/**
+ * Session look-ups for server components (pages and layouts). Route handlers use the guard instead.
+ * Pages cannot set cookies, so a session renewed here is renewed by the next API call.
+ */
+export const getPageSession = cache(async () => {
+  const jar = await cookies();
+  const value = jar.get(sessionCookieName)?.value;
+  if (!value) return null;
+  return validateSessionCookie(`${sessionCookieName}=${value}`);
+});
+
+export interface PageMember {
+  user: { id: string; email: string; name: string };
+  workspace: { id: string; name: string };
+  role: Role;
+  workspaces: { id: string; name: string; role: Role }[];
+  can: (action: Action) => boolean;
+}
+
+/** The signed-in member of the active workspace, or a redirect to sign-in. */
+export const requireMember = cache(async (): Promise<PageMember> => {
+  const session = await getPageSession();
+  if (!session) redirect(`/sign-in?next=${encodeURIComponent(await currentPath())}`);
+  const workspaces = await listUserWorkspaces({ userId: session.user.id });
+  const workspaceId = session.workspaceId ?? workspaces[0]?.id;
+  const membership = workspaceId ? await getMembership({ workspaceId, userId: session.user.id }) : null;
+  if (!membership) redirect("/no-workspace");
+  return {
+    user: session.user,
+    workspace: { id: membership.workspaceId, name: membership.workspaceName },
+    role: membership.role,
+    workspaces,
+    can: (action) => can(membership.role, action),
+  };
+});
+
+/** A page for a role's action: others get the not-found page (nothing is revealed). */
+export async function requireAction(action: Action): Promise<PageMember> {
+  const member = await requireMember();
+  if (!member.can(action)) notFound();
+  return member;
+}
+
+async function currentPath(): Promise<string> {
+  const h = await headers();
+  return h.get("x-pathname") ?? "/app";
+}

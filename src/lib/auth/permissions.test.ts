@@ -1,0 +1,55 @@
+import { describe, expect, it } from "vitest";
+import { actions, assignableRoles, can, roles } from "./permissions";
+
+// The product's division of work (PRODUCT.md, roles table), pinned so that a change to the table is deliberate.
+describe("permission table", () => {
+  it("lets a technician log bench evidence and nothing of an engineer's or lead's work", () => {
+    expect(can("technician", "measurement.write")).toBe(true);
+    expect(can("technician", "check.run")).toBe(true);
+    for (const action of [
+      "part.write",
+      "part.verify",
+      "project.write",
+      "decision.sign",
+      "member.invite",
+    ] as const) {
+      expect(can("technician", action), action).toBe(false);
+    }
+  });
+
+  it("keeps signing decisions and verifying parts with leads only", () => {
+    expect(roles.filter((r) => can(r, "decision.sign"))).toEqual(["lead"]);
+    expect(roles.filter((r) => can(r, "part.verify"))).toEqual(["lead"]);
+  });
+
+  it("lets only admins manage members; admins and leads invite", () => {
+    expect(roles.filter((r) => can(r, "member.manage"))).toEqual(["admin"]);
+    expect(roles.filter((r) => can(r, "member.invite"))).toEqual(["admin", "lead"]);
+  });
+
+  it("lets engineers build the library and projects", () => {
+    expect(can("engineer", "part.write")).toBe(true);
+    expect(can("engineer", "project.write")).toBe(true);
+    expect(can("engineer", "decision.sign")).toBe(false);
+  });
+
+  it("denies by default: every role lacks at least one action, every action has a role", () => {
+    for (const role of roles)
+      expect(
+        actions.some((a) => !can(role, a)),
+        role,
+      ).toBe(true);
+    for (const action of actions)
+      expect(
+        roles.some((r) => can(r, action)),
+        action,
+      ).toBe(true);
+  });
+
+  it("lets a lead hand out roles up to lead, an admin any role, others none", () => {
+    expect(assignableRoles("admin")).toEqual(["admin", "lead", "engineer", "technician"]);
+    expect(assignableRoles("lead")).toEqual(["lead", "engineer", "technician"]);
+    expect(assignableRoles("engineer")).toEqual([]);
+    expect(assignableRoles("technician")).toEqual([]);
+  });
+});

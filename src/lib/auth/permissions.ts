@@ -1,0 +1,70 @@
+import type { Role } from "@/db/schema";
+
+/**
+ * The one permission table: what each member role may do in its workspace. Deny by default: an action not
+ * listed for a role is refused. Every route handler names its action through the guard (src/lib/auth/guard.ts).
+ */
+export const actions = [
+  "workspace.read",
+  "part.write",
+  "part.verify",
+  "project.write",
+  "measurement.write",
+  "check.run",
+  "decision.sign",
+  "member.invite",
+  "member.manage",
+  "audit.read",
+] as const;
+
+export type Action = (typeof actions)[number];
+
+export const roles = ["admin", "lead", "engineer", "technician"] as const satisfies readonly Role[];
+
+const table: Record<Role, readonly Action[]> = {
+  // Owns the workspace: members and roles, and everything an engineer does. Signing and verifying stay with leads.
+  admin: [
+    "workspace.read",
+    "part.write",
+    "project.write",
+    "measurement.write",
+    "check.run",
+    "member.invite",
+    "member.manage",
+    "audit.read",
+  ],
+  // Compares, decides, verifies library parts, invites people.
+  lead: [
+    "workspace.read",
+    "part.write",
+    "part.verify",
+    "project.write",
+    "measurement.write",
+    "check.run",
+    "decision.sign",
+    "member.invite",
+    "audit.read",
+  ],
+  // Builds the library and the projects.
+  engineer: ["workspace.read", "part.write", "project.write", "measurement.write", "check.run"],
+  // Logs what the bench measured.
+  technician: ["workspace.read", "measurement.write", "check.run"],
+};
+
+export function can(role: Role, action: Action): boolean {
+  return table[role].includes(action);
+}
+
+/** Roles a member of `role` may hand out in an invitation or a role change. */
+export function assignableRoles(role: Role): Role[] {
+  if (role === "admin") return ["admin", "lead", "engineer", "technician"];
+  if (role === "lead") return ["lead", "engineer", "technician"];
+  return [];
+}
+
+export const roleLabels: Record<Role, string> = {
+  admin: "Admin",
+  lead: "Lead",
+  engineer: "Engineer",
+  technician: "Technician",
+};

@@ -1,0 +1,199 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { and, eq, lt } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
+import { type CsvIssue, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } from "@/lib/csv/curve-set";
+import { AppError } from "@/lib/errors";
+import { findCurveSetIssues } from "@/lib/soa/findings";
+import type { Storage } from "@/lib/storage";
+
+/** An upload not registered within this time is removed by the cleanup step. */
+export const staleUploadMs = 60 * 60 * 1000;
+
+export interface UploadTicket {
+  uploadId: string;
+  objectKey: string;
+  url: string;
+}
+
+/** Reserves an object key for a browser upload and returns a presigned PUT URL for it. */
+export async function presignUpload(
+  storage: Storage,
+  input: {
+    workspaceId: string;
+    userId: string;
+    partId: string;
+    fileName: string;
+    size: number;
+    purpose: string;
+  },
+): Promise<UploadTicket> {
+  if (input.size > MAX_CSV_BYTES) {
+    throw new AppError(
+      "too_large:file",
+      `The file is ${(input.size / 1e6).toFixed(1)} MB; the limit is 5 MB.`,
+    );
+  }
+  if (!/\.(csv|txt|tsv)$/i.test(input.fileName)) {
+    throw new AppError("invalid:file-type", "Upload a CSV text file (.csv, .tsv or .txt).");
+  }
+  await cleanupStaleUploads(storage).catch((error) => console.error("upload cleanup failed", error));
+  const objectKey = `${input.workspaceId}/parts/${input.partId}/${input.purpose}/${crypto.randomUUID()}.csv`;
+  const url = await storage.presignPut(objectKey, { contentType: "text/csv" });
+  const [row] = await db
+    .insert(pendingUploads)
+    .values({
+      workspaceId: input.workspaceId,
+      userId: input.userId,
+      objectKey,
+      fileName: input.fileName.slice(0, 200),
+      purpose: input.purpose,
+    })
+    .returning({ id: pendingUploads.id });
+  return { uploadId: row.id, objectKey, url };
+}
+
+/** A pending upload of the workspace for this purpose, or a 404. */
+export async function getPendingUpload(input: { workspaceId: string; uploadId: string; purpose: string }) {
+  const [row] = /^[0-9a-f-]{36}$/i.test(input.uploadId)
+    ? await db
+        .select()
+        .from(pendingUploads)
+        .where(
+          and(
+            eq(pendingUploads.id, input.uploadId),
+            eq(pendingUploads.workspaceId, input.workspaceId),
+            eq(pendingUploads.purpose, input.purpose),
+          ),
+        )
+    : [];
+  if (!row) throw new AppError("not_found:upload", "No such upload. Upload the file again.");
+  return row;
+}
+
+/**
+ * After a failed registration: deletes the object, then its pending row. If storage cannot be reached, the row
+ * stays, so the cleanup step removes the object later: nothing is left behind for good.
+ */
+export async function discardUpload(
+  storage: Storage,
+  upload: { id: string; objectKey: string },
+): Promise<void> {
+  try {
+    await storage.remove(upload.objectKey);
+  } catch {
+    return;
+  }
+  await db.delete(pendingUploads).where(eq(pendingUploads.id, upload.id));
+}
+
+/** Reads an uploaded text file back from storage, within the size limit. */
+export async function readUploadedText(
+  storage: Storage,
+  objectKey: string,
+): Promise<{ text: string; bytes: Buffer }> {
+  const head = await storage.head(objectKey);
+  if (!head) throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
+  if (head.size > MAX_CSV_BYTES) {
+    await storage.remove(objectKey);
+    throw new AppError("too_large:file", "The file is larger than 5 MB.");
+  }
+  const bytes = await storage.get(objectKey);
+  if (!bytes)
+    throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
+  return { text: new TextDecoder("utf-8").decode(bytes), bytes };
+}
+
+export class CsvRejected extends AppError {
+  constructor(readonly issues: CsvIssue[]) {
+    super("invalid:csv", `The file was not accepted: ${issues[0]?.message ?? "unreadable"}`, {
+      details: { issues },
+    });
+  }
+}
+
+/**
+ * Parses, checks and stores a curve set from an object already in storage: curves, findings, object key, name,
+ * size and SHA-256 in one transaction, the new set active and the part back to draft. A rejected file or a failed
+ * transaction deletes the object, so a file in storage and its row are always both there or both gone.
+ */
+export async function registerCurveSet(
+  storage: Storage,
+  input: {
+    part: Part;
+    userId: string;
+    upload: { id: string; objectKey: string; fileName: string };
+    refCaseTemp?: number;
+  },
+) {
+  const { upload } = input;
+  try {
+    const { text, bytes } = await readUploadedText(storage, upload.objectKey);
+    const parsed = parseCurveSetCsv(text);
+    if (!parsed.ok) throw new CsvRejected(parsed.errors);
+    const findings = findCurveSetIssues(digitisedCurveSet(parsed.curves), {
+      tjMax: input.part.tjMax,
+      foster: input.part.foster ?? undefined,
+    });
+    const set = await db.transaction(async (tx) => {
+      await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, input.part.id));
+      const [row] = await tx
+        .insert(curveSets)
+        .values({
+          workspaceId: input.part.workspaceId,
+          partId: input.part.id,
+          objectKey: upload.objectKey,
+          fileName: upload.fileName,
+          size: bytes.length,
+          sha256: createHash("sha256").update(bytes).digest("hex"),
+          shape: parsed.shape,
+          refCaseTemp: input.refCaseTemp ?? 25,
+          active: true,
+          findings,
+          uploadedBy: input.userId,
+        })
+        .returning();
+      await tx.insert(curves).values(
+        parsed.curves.map((c, position) => ({
+          curveSetId: row.id,
+          position,
+          duration: c.duration === "DC" ? null : c.duration,
+          points: c.points,
+        })),
+      );
+      await tx
+        .update(parts)
+        .set({ status: "draft", verifiedBy: null, verifiedAt: null, updatedAt: new Date() })
+        .where(eq(parts.id, input.part.id));
+      await recordAudit(
+        {
+          workspaceId: input.part.workspaceId,
+          actorId: input.userId,
+          action: "curve-set.uploaded",
+          subjectType: "part",
+          subjectId: input.part.id,
+          details: { curveSetId: row.id, fileName: upload.fileName, curves: parsed.curves.length },
+        },
+        tx,
+      );
+      await tx.delete(pendingUploads).where(eq(pendingUploads.id, upload.id));
+      return row;
+    });
+    return { curveSet: set, curves: parsed.curves.length, findings, warnings: parsed.warnings };
+  } catch (error) {
+    await discardUpload(storage, upload);
+    throw error;
+  }
+}
+
+/** Removes objects whose upload was presigned but never registered (the browser left, or the parse failed). */
+export async function cleanupStaleUploads(storage: Storage, olderThanMs = staleUploadMs): Promise<number> {
+  const stale = await db
+    .select()
+    .from(pendingUploads)
+    .where(lt(pendingUploads.createdAt, new Date(Date.now() - olderThanMs)));
+  for (const upload of stale) await discardUpload(storage, upload);
+  return stale.length;
+}

@@ -1,0 +1,132 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { getPart } from "@/db/queries/parts";
+import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
+import type { MemberCaller } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import type { PartValues } from "./part-schema";
+
+/** The caller's workspace's part, or 404 (a part of another workspace does not exist for the caller). */
+export async function loadPart(caller: MemberCaller, partId: string) {
+  const part = await getPart({ workspaceId: caller.workspaceId, partId });
+  if (!part) throw new AppError("not_found:part", "No such part in this workspace.");
+  return part;
+}
+
+// Ratings a check depends on: changing one returns a verified part to draft, like new curves or a new model.
+const limitFields = ["vdsMax", "idPulseMax", "rdsOn", "tjMax", "rthJc"] as const;
+
+function normalised(values: PartValues) {
+  return {
+    ...values,
+    idMax: values.idMax ?? null,
+    idPulseMax: values.idPulseMax ?? null,
+    rdsOn: values.rdsOn ?? null,
+    rthJc: values.rthJc ?? null,
+    unitCost: values.unitCost ?? null,
+    currency: values.currency?.toUpperCase() ?? null,
+    datasheetRevision: values.datasheetRevision ?? null,
+    notes: values.notes ?? null,
+  };
+}
+
+export async function createPart(caller: MemberCaller, values: PartValues): Promise<Part> {
+  return db.transaction(async (tx) => {
+    const existing = await tx
+      .select({ id: parts.id })
+      .from(parts)
+      .where(
+        and(
+          eq(parts.workspaceId, caller.workspaceId),
+          eq(parts.maker, values.maker),
+          eq(parts.partNumber, values.partNumber),
+        ),
+      );
+    if (existing.length) {
+      throw new AppError("conflict:part", `${values.maker} ${values.partNumber} is already in the library.`, {
+        details: { fieldErrors: { partNumber: ["Already in the library for this maker"] } },
+      });
+    }
+    const [part] = await tx
+      .insert(parts)
+      .values({ ...normalised(values), workspaceId: caller.workspaceId, createdBy: caller.user.id })
+      .returning();
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "part.created",
+        subjectType: "part",
+        subjectId: part.id,
+        details: { partNumber: part.partNumber, maker: part.maker },
+      },
+      tx,
+    );
+    return part;
+  });
+}
+
+export async function updatePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
+  const next = normalised(values);
+  const limitsChanged = limitFields.some((f) => (next[f] ?? null) !== (part[f] ?? null));
+  return db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(parts)
+      .set({
+        ...next,
+        updatedAt: new Date(),
+        ...(limitsChanged ? { status: "draft" as const, verifiedBy: null, verifiedAt: null } : {}),
+      })
+      .where(eq(parts.id, part.id))
+      .returning();
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "part.updated",
+        subjectType: "part",
+        subjectId: part.id,
+        details: { limitsChanged },
+      },
+      tx,
+    );
+    return updated;
+  });
+}
+
+/** Replaces the Foster network; the part returns to draft. An empty list removes the thermal model. */
+export async function setThermalModel(
+  caller: MemberCaller,
+  part: Part,
+  terms: FosterTermRow[],
+  source: ThermalSource,
+): Promise<Part> {
+  return db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(parts)
+      .set({
+        foster: terms.length ? terms : null,
+        thermalSource: terms.length ? source : null,
+        status: "draft",
+        verifiedBy: null,
+        verifiedAt: null,
+        updatedAt: new Date(),
+      })
+      .where(eq(parts.id, part.id))
+      .returning();
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "part.thermal-model-changed",
+        subjectType: "part",
+        subjectId: part.id,
+        details: { terms: terms.length, source: source.kind },
+      },
+      tx,
+    );
+    return updated;
+  });
+}

@@ -1,0 +1,258 @@
+// Request schema of the check contract (METHODS.md §9), shared by the route handler, the command line and
+// client forms. Shape and ranges are checked field by field; the rules that relate fields (sorted points,
+// unique widths and ids, a period longer than its pulse, a time axis that only moves forward) run once the
+// shape is right, so every error names the one field at fault. Decisions beyond METHODS.md:
+// - unknown keys are ignored; a capture with `repeat` is an error (repetition is for rect and triangle);
+// - every curve holds at least one point, a Foster array at least one term; a request may hold no pulses;
+// - the reference case temperature must lie below Tj,max (else no derating factor exists);
+// - two curve widths within 1e-9 relative are the same width (the tolerance of METHODS.md §3).
+import { z } from "zod";
+import type { CheckRequest } from "./types";
+
+function show(input: unknown): string {
+  if (input === null) return "null";
+  if (Array.isArray(input)) return "an array";
+  if (typeof input === "string") {
+    return `the string ${JSON.stringify(input.length > 24 ? `${input.slice(0, 24)}…` : input)}`;
+  }
+  if (typeof input === "object") return "an object";
+  return String(input);
+}
+
+/** Message for a missing value or one of the wrong type. */
+const expected =
+  (what: string) =>
+  (issue: { input?: unknown }): string =>
+    issue.input === undefined ? "is required" : `expected ${what}, got ${show(issue.input)}`;
+
+const finite = () => z.number({ error: expected("a finite number") });
+const positive = () => finite().gt(0, { error: (issue) => `must be greater than 0, got ${issue.input}` });
+const object = <T extends z.core.$ZodLooseShape>(shape: T) =>
+  z.object(shape, { error: expected("an object") });
+const array = <T extends z.core.SomeType>(item: T) => z.array(item, { error: expected("an array") });
+
+const fosterTerm = object({ r: positive(), tau: positive() });
+
+const point = z.tuple([positive(), positive()], {
+  error: (issue) =>
+    issue.code === "invalid_type"
+      ? expected("a point [v, i]")(issue)
+      : "a point is exactly two numbers [v, i]",
+});
+
+const curve = object({
+  duration: z.union([positive(), z.literal("DC")], {
+    error: (issue) =>
+      issue.input === undefined
+        ? "is required"
+        : `expected a pulse width in seconds (> 0) or "DC", got ${show(issue.input)}`,
+  }),
+  points: array(point).min(1, { error: "a curve needs at least one point" }),
+});
+
+const curveSet = object({
+  refCaseTemp: finite().optional(),
+  curves: array(curve).min(1, { error: "at least one curve is required" }),
+});
+
+const part = object({
+  vdsMax: positive(),
+  tjMax: finite(),
+  rdsOn: positive().optional(),
+  idPulseMax: positive().optional(),
+  rthJc: positive().optional(),
+  foster: array(fosterTerm).min(1, { error: "a Foster network needs at least one term" }).optional(),
+  soa: curveSet,
+});
+
+const policy = object({
+  utilisationLimit: finite()
+    .gt(0, { error: "must lie in (0, 1]" })
+    .lte(1, { error: "must lie in (0, 1]" })
+    .optional(),
+  tjGuard: finite().gte(0, { error: "must be 0 K or more" }).optional(),
+  betweenCurves: z
+    .enum(["loglog", "next-longer"], {
+      error: (issue) => `expected "loglog" or "next-longer", got ${show(issue.input)}`,
+    })
+    .optional(),
+});
+
+const id = z
+  .string({ error: expected("a string") })
+  .refine((s) => s.trim().length > 0, { error: "must not be empty" });
+
+const repeat = object({
+  period: positive(),
+  count: finite()
+    .int({ error: (issue) => `expected a whole number of pulses, got ${show(issue.input)}` })
+    .gte(1, { error: "must be 1 or more" })
+    .optional(),
+});
+
+const rect = object({
+  id,
+  kind: z.literal("rect"),
+  v: positive(),
+  i: positive(),
+  duration: positive(),
+  repeat: repeat.optional(),
+});
+
+const triangle = object({
+  id,
+  kind: z.literal("triangle"),
+  v: positive(),
+  i: positive(),
+  duration: positive(),
+  repeat: repeat.optional(),
+});
+
+const waveform = object({
+  id,
+  kind: z.literal("waveform"),
+  t: array(finite()).min(2, { error: "a capture needs at least two samples" }),
+  v: array(finite()),
+  i: array(finite()),
+  repeat: z
+    .never({ error: "a capture cannot be repeated; repetition applies to rect and triangle pulses" })
+    .optional(),
+});
+
+const pulse = z.discriminatedUnion("kind", [rect, triangle, waveform], {
+  error: (issue) => {
+    if (issue.code !== "invalid_union") return expected("an object")(issue);
+    const kind = (issue.input as { kind?: unknown } | undefined)?.kind;
+    const known = `expected "rect", "triangle" or "waveform"`;
+    return kind === undefined ? `is required: ${known}` : `unknown pulse kind ${show(kind)}: ${known}`;
+  },
+});
+
+type Issue = z.core.$ZodRawIssue;
+
+/** Relative tolerance within which two curve widths are the same (METHODS.md §3). */
+const SAME_WIDTH = 1e-9;
+
+/** Rules that relate fields to each other; the request's shape is already known to be right. */
+function relations(request: CheckRequest): Issue | null {
+  const issue = (path: PropertyKey[], message: string): Issue => ({
+    code: "custom",
+    message,
+    path,
+    input: request,
+  });
+  const { part, pulses } = request;
+  const refCaseTemp = part.soa.refCaseTemp ?? 25;
+  if (!(refCaseTemp < part.tjMax)) {
+    return part.soa.refCaseTemp === undefined
+      ? issue(["part", "tjMax"], `must be above the curves' reference case temperature (25 °C by default)`)
+      : issue(["part", "soa", "refCaseTemp"], `must be below tjMax (${part.tjMax} °C)`);
+  }
+  const curves = part.soa.curves;
+  for (let c = 0; c < curves.length; c++) {
+    const here = ["part", "soa", "curves", c];
+    const duration = curves[c].duration;
+    for (let other = 0; other < c; other++) {
+      const d = curves[other].duration;
+      const same =
+        duration === "DC" || d === "DC"
+          ? duration === d
+          : Math.abs(duration - d) <= SAME_WIDTH * Math.max(duration, d);
+      if (same) {
+        const message =
+          duration === "DC"
+            ? `a second DC curve (see curves[${other}]); a curve set holds at most one`
+            : `same pulse width as curves[${other}]`;
+        return issue([...here, "duration"], message);
+      }
+    }
+    const seen = new Map<number, number>();
+    const points = curves[c].points;
+    for (let p = 0; p < points.length; p++) {
+      const earlier = seen.get(points[p][0]);
+      if (earlier !== undefined) {
+        return issue(
+          [...here, "points", p],
+          `two points at the same voltage ${points[p][0]} V (points[${earlier}] and points[${p}])`,
+        );
+      }
+      seen.set(points[p][0], p);
+    }
+  }
+  const ids = new Map<string, number>();
+  for (let k = 0; k < pulses.length; k++) {
+    const pulse = pulses[k];
+    const earlier = ids.get(pulse.id);
+    if (earlier !== undefined) {
+      return issue(
+        ["pulses", k, "id"],
+        `duplicate pulse id ${JSON.stringify(pulse.id)} (see pulses[${earlier}])`,
+      );
+    }
+    ids.set(pulse.id, k);
+    if (pulse.kind === "waveform") {
+      const n = pulse.t.length;
+      for (const key of ["v", "i"] as const) {
+        if (pulse[key].length !== n) {
+          return issue(
+            ["pulses", k, key],
+            `has ${pulse[key].length} samples but t has ${n}; the arrays must be equally long`,
+          );
+        }
+      }
+      for (let s = 1; s < n; s++) {
+        if (!(pulse.t[s] > pulse.t[s - 1])) {
+          return issue(
+            ["pulses", k, "t", s],
+            `time must increase strictly: t[${s}] = ${pulse.t[s]} s ` +
+              `does not follow t[${s - 1}] = ${pulse.t[s - 1]} s`,
+          );
+        }
+      }
+    } else if (pulse.repeat !== undefined && !(pulse.repeat.period > pulse.duration)) {
+      return issue(
+        ["pulses", k, "repeat", "period"],
+        `must be longer than the pulse's duration (${pulse.duration} s), got ${pulse.repeat.period} s`,
+      );
+    }
+  }
+  return null;
+}
+
+/** The check request: shape, ranges, then the rules relating fields (only once the shape is right). */
+export const checkRequestSchema: z.ZodType<CheckRequest> = object({
+  part,
+  caseTemp: finite(),
+  policy: policy.optional(),
+  pulses: array(pulse),
+}).check((payload) => {
+  if (payload.issues.length > 0) return;
+  const issue = relations(payload.value as CheckRequest);
+  if (issue !== null) payload.issues.push(issue);
+});
+
+export interface ContractError {
+  /** Field path such as `part.soa.curves[1].points[3]`; "" for the request as a whole. */
+  path: string;
+  message: string;
+}
+
+/** `["a", "b", 2, "c"]` → `a.b[2].c`. */
+export function formatPath(path: readonly PropertyKey[]): string {
+  let out = "";
+  for (const key of path) {
+    if (typeof key === "number") out += `[${key}]`;
+    else out += out === "" ? String(key) : `.${String(key)}`;
+  }
+  return out;
+}
+
+export type Validation = { ok: true; request: CheckRequest } | { ok: false; error: ContractError };
+
+/** Validates an already parsed JSON body; the first problem found is reported with its field path. */
+export function validateCheckRequest(body: unknown): Validation {
+  const parsed = checkRequestSchema.safeParse(body);
+  if (parsed.success) return { ok: true, request: parsed.data };
+  const first = parsed.error.issues[0];
+  return { ok: false, error: { path: formatPath(first.path), message: first.message } };
+}

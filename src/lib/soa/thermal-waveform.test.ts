@@ -1,0 +1,220 @@
+import { createRequire } from "node:module";
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import type { FosterTerm } from "./foster";
+import { rectRise } from "./thermal-rect";
+import { powerFromVI, rampFactor, waveformRise } from "./thermal-waveform";
+
+// odex ships its TypeScript source rather than declarations, and that source fails this project's strict type
+// check; it is loaded untyped and the part used here is described.
+interface OdexSolver {
+  relativeTolerance: number;
+  absoluteTolerance: number;
+  maxSteps: number;
+  solve(f: (x: number, y: number[]) => number[], x: number, y: number[], xEnd: number): { y: number[] };
+}
+const { Solver } = createRequire(import.meta.url)("odex") as { Solver: new (n: number) => OdexSolver };
+
+const ONE_TERM: FosterTerm[] = [{ r: 1, tau: 1 }];
+const THREE_TERMS: FosterTerm[] = [
+  { r: 0.02, tau: 5e-5 },
+  { r: 0.1, tau: 1e-3 },
+  { r: 0.4, tau: 0.1 },
+];
+
+function expectRelative(actual: number, expected: number, tolerance: number): void {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.abs(expected));
+}
+
+/** Largest |a − b| over two traces, relative to the largest |b| (0 for two all-zero traces). */
+function traceDifference(a: ArrayLike<number>, b: ArrayLike<number>): number {
+  let difference = 0;
+  let scale = 0;
+  for (let j = 0; j < b.length; j++) {
+    difference = Math.max(difference, Math.abs(a[j] - b[j]));
+    scale = Math.max(scale, Math.abs(b[j]));
+  }
+  return difference / Math.max(scale, Number.MIN_VALUE);
+}
+
+const network = fc.array(
+  fc.record({
+    r: fc.double({ min: 1e-3, max: 2, noNaN: true }),
+    tau: fc.double({ min: -6, max: 0, noNaN: true }).map((e) => 10 ** e),
+  }),
+  { minLength: 1, maxLength: 9 },
+);
+
+describe("waveformRise", () => {
+  // Worked values, METHODS.md §10, derived from the Foster formula. A power step is a zero-length step.
+  it("R = 1 K/W, h = τ, from rest: 10 W → 6.321206 K, then 0 W for τ → 2.325442 K; a 0 → 10 W ramp → 3.678794 K", () => {
+    expectRelative(waveformRise([0, 1], [10, 10], ONE_TERM).peak, 6.321206, 1e-6);
+    const stepDown = waveformRise([0, 1, 1, 2], [10, 10, 0, 0], ONE_TERM, { trace: true });
+    expectRelative(stepDown.trace![3], 2.325442, 1e-6);
+    expect(stepDown.trace![2]).toBe(stepDown.trace![1]);
+    expectRelative(waveformRise([0, 1], [0, 10], ONE_TERM).peak, 3.678794, 1e-6);
+  });
+
+  // Derived: for x → 0, 1 − e^(−x) = x − x²/2 + x³/6 and φ(x) = x/2 − x²/6 + x³/24, to O(x⁴).
+  it("keeps full precision for a step of 1e-12 τ", () => {
+    const x = 1e-12;
+    const { peak } = waveformRise([0, x], [3, 7], ONE_TERM);
+    const expected = 3 * (x - x ** 2 / 2 + x ** 3 / 6) + 4 * (x / 2 - x ** 2 / 6 + x ** 3 / 24);
+    expectRelative(peak, expected, 1e-15);
+  });
+
+  // Derived: constant power P from rest gives R·P·(1 − e^(−t/τ)); a million steps of 1e-6 τ must not drift.
+  it("does not drift over a million steps far shorter than τ", () => {
+    const n = 1_000_000;
+    const t = Float64Array.from({ length: n + 1 }, (_, j) => j * 1e-6);
+    const p = new Float64Array(n + 1).fill(2);
+    expectRelative(waveformRise(t, p, ONE_TERM).peak, -2 * Math.expm1(-1), 1e-13);
+  });
+
+  // Reference: general-purpose ODE integrator from npm (odex: Hairer and Wanner's ODEX extrapolation method)
+  // integrating dθ_i/dt = (R_i·p(t) − θ_i)/τ_i with p linear between samples, restarted at every sample; it agrees
+  // to about 2e-14 of the largest rise, asserted to 1e-11.
+  it("matches an ODE integration on a non-uniform time axis", () => {
+    const t = Array.from({ length: 41 }, (_, j) => 5e-3 * (j / 40) ** 2 + (j % 3) * 1e-6 * Math.sign(j));
+    const p = t.map((time) => 300 * Math.exp(-time / 2e-3) * -Math.expm1(-time / 1e-4) + 20);
+    const { trace } = waveformRise(t, p, THREE_TERMS, { trace: true });
+    const reference = [0];
+    let state = THREE_TERMS.map(() => 0);
+    for (let j = 0; j + 1 < t.length; j++) {
+      const [t0, t1, p0, p1] = [t[j], t[j + 1], p[j], p[j + 1]];
+      const power = (time: number) => p0 + ((p1 - p0) * (time - t0)) / (t1 - t0);
+      const derivative = (time: number, y: number[]) =>
+        THREE_TERMS.map(({ r, tau }, i) => (r * power(time) - y[i]) / tau);
+      const solver = new Solver(THREE_TERMS.length);
+      solver.relativeTolerance = 1e-13;
+      solver.absoluteTolerance = 1e-15;
+      solver.maxSteps = 100_000;
+      state = solver.solve(derivative, t0, state, t1).y;
+      reference.push(state.reduce((a, b) => a + b, 0));
+    }
+    expect(traceDifference(trace!, reference)).toBeLessThan(1e-11);
+  });
+
+  // Derived: a constant power sampled at any points is piecewise-linear, so the update is exact: P·Z_th(t_p).
+  it("a sampled rectangle ends at rectRise, on uniform and non-uniform axes", () => {
+    fc.assert(
+      fc.property(
+        network,
+        fc.double({ min: 1e-6, max: 1, noNaN: true }),
+        fc.integer({ min: 2, max: 300 }),
+        fc.boolean(),
+        (net, width, samples, uniform) => {
+          const t = Array.from(
+            { length: samples },
+            (_, j) => width * (uniform ? j / (samples - 1) : (j / (samples - 1)) ** 2),
+          );
+          const p = t.map(() => 250);
+          const { trace } = waveformRise(t, p, net, { trace: true });
+          expectRelative(trace![samples - 1], rectRise(net, 250, width), 1e-12);
+        },
+      ),
+    );
+  });
+
+  // Derived: a zero step changes nothing, so appending one moves a uniform axis onto the per-step path without
+  // changing the answer; both paths are exact and must agree to rounding.
+  it("the uniform fast path and the per-step path agree", () => {
+    fc.assert(
+      fc.property(
+        network,
+        fc.double({ min: -8, max: -2, noNaN: true }).map((e) => 10 ** e),
+        fc.array(fc.double({ min: 0, max: 1000, noNaN: true }), { minLength: 2, maxLength: 400 }),
+        (net, h, p) => {
+          const t = p.map((_, j) => j * h);
+          const fast = waveformRise(t, p, net, { trace: true });
+          const general = waveformRise([...t, t[t.length - 1]], [...p, p[p.length - 1]], net, {
+            trace: true,
+          });
+          expect(traceDifference(general.trace!.subarray(0, p.length), fast.trace!)).toBeLessThan(1e-12);
+          expect(general.trace![p.length]).toBe(general.trace![p.length - 1]);
+          expectRelative(general.peak, fast.peak, 1e-12);
+        },
+      ),
+    );
+  });
+
+  // Derived: the rise is linear in the network, so nine terms are the sum of three three-term networks.
+  it("more than four terms give the sum of their parts, with or without a trace", () => {
+    const net = Array.from({ length: 9 }, (_, i) => ({ r: 0.01 * (i + 1), tau: 10 ** (-6 + i / 2) }));
+    const t = Array.from({ length: 5000 }, (_, j) => j * 2e-6);
+    const p = t.map((time) => 400 * Math.exp(-time / 3e-3) * (1 + Math.sin(time * 4e3)));
+    const parts = [0, 3, 6].map((i) => waveformRise(t, p, net.slice(i, i + 3), { trace: true }).trace!);
+    const sum = parts[0].map((value, j) => value + parts[1][j] + parts[2][j]);
+    const whole = waveformRise(t, p, net, { trace: true });
+    expect(traceDifference(whole.trace!, sum)).toBeLessThan(1e-14);
+    const withoutTrace = waveformRise(t, p, net);
+    expect(withoutTrace).toEqual({ peak: whole.peak, peakIndex: whole.peakIndex });
+    expect(whole.peak).toBe(Math.max(...whole.trace!));
+  });
+
+  it("reports the first sample of the peak, t_0 included: a waveform that only cools peaks at 0 at index 0", () => {
+    expect(waveformRise([0, 1, 2], [5, 5, 5], [{ r: 1, tau: 0.1 }]).peakIndex).toBe(2);
+    expect(waveformRise([0, 1, 2, 3], [-5, -5, -5, -5], ONE_TERM)).toEqual({ peak: 0, peakIndex: 0 });
+  });
+
+  it("handles a 2-sample waveform, a single sample and an empty one", () => {
+    expect(waveformRise([0, 2], [10, 10], ONE_TERM, { trace: true }).trace).toEqual(
+      Float64Array.from([0, -10 * Math.expm1(-2)]),
+    );
+    expect(waveformRise([5], [10], ONE_TERM, { trace: true })).toEqual({
+      peak: 0,
+      peakIndex: 0,
+      trace: Float64Array.from([0]),
+    });
+    expect(waveformRise([], [], ONE_TERM)).toEqual({ peak: 0, peakIndex: -1 });
+    expect(waveformRise([], [], ONE_TERM, { trace: true }).trace).toHaveLength(0);
+  });
+
+  it("gives 0 everywhere for an empty network, on both paths", () => {
+    expect(waveformRise([0, 1, 2], [1, 2, 3], [], { trace: true }).trace).toEqual(new Float64Array(3));
+    expect(waveformRise([0, 1, 3], [1, 2, 3], [])).toEqual({ peak: 0, peakIndex: 0 });
+  });
+
+  it("treats a time axis with all samples at one instant as holding the rest state", () => {
+    expect(waveformRise([1, 1, 1], [1, 2, 3], ONE_TERM)).toEqual({ peak: 0, peakIndex: 0 });
+  });
+
+  it("rejects differing lengths and a decreasing or NaN time axis with a RangeError", () => {
+    expect(() => waveformRise([0, 1], [1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRise([0, 2, 1], [1, 1, 1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRise([1, 0], [1, 1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRise([0, Number.NaN, 2], [1, 1, 1], ONE_TERM)).toThrow(RangeError);
+  });
+
+  it("gives a NaN peak at index −1 for NaN or infinite power", () => {
+    expect(waveformRise([0, 1, 2], [1, Number.NaN, 1], ONE_TERM)).toEqual({
+      peak: Number.NaN,
+      peakIndex: -1,
+    });
+    expect(waveformRise([0, 1, 3], [1, 1, Number.POSITIVE_INFINITY], ONE_TERM)).toEqual({
+      peak: Number.NaN,
+      peakIndex: -1,
+    });
+  });
+});
+
+describe("rampFactor", () => {
+  // Derived: φ(x) = 1 − (1 − e^(−x))/x; its closed form is accurate to a few 1e-15 above x = 0.05.
+  it("matches the closed form on both sides of the switch to the series at x = 1/4", () => {
+    for (const x of [0.05, 0.1, 0.2, 0.25 - 1e-12, 0.25, 0.3, 1, 30]) {
+      expectRelative(rampFactor(x), 1 + Math.expm1(-x) / x, 1e-13);
+    }
+  });
+
+  it("is 0 at x = 0 and tends to 1 as x grows", () => {
+    expect(rampFactor(0)).toBe(0);
+    expect(rampFactor(Number.POSITIVE_INFINITY)).toBe(1);
+  });
+});
+
+describe("powerFromVI", () => {
+  it("multiplies sample by sample and rejects differing lengths", () => {
+    expect(powerFromVI([48, 24, 0], [2, 0.5, 7])).toEqual(Float64Array.from([96, 12, 0]));
+    expect(() => powerFromVI([1, 2], [1])).toThrow(RangeError);
+  });
+});

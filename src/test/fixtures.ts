@@ -1,0 +1,109 @@
+// Fixtures for integration tests of route handlers: real database rows, real sessions, direct handler calls.
+import { eq } from "drizzle-orm";
+import { createDb } from "@/db/client";
+import { memberships, type Role, users, workspaces } from "@/db/schema";
+import { hashPassword } from "@/lib/auth/password";
+import { startSession } from "@/lib/auth/session";
+import { requireEnv } from "./services";
+
+export const testDb = createDb(requireEnv("DATABASE_URL"), { max: 3 });
+export const appUrl = process.env.APP_URL ?? "http://127.0.0.1:3100";
+export const testPassword = "correct horse battery";
+
+let passwordHash: Promise<string> | undefined;
+
+export interface TestUser {
+  id: string;
+  email: string;
+  role: Role;
+}
+
+export interface TestWorkspace {
+  id: string;
+  name: string;
+  members: Record<Role, TestUser>;
+}
+
+const uid = () => crypto.randomUUID().slice(0, 8);
+
+/** A workspace with one member of each role, all with the password `testPassword`. */
+export async function createTestWorkspace(label = "Bench"): Promise<TestWorkspace> {
+  const { db } = testDb;
+  passwordHash ??= hashPassword(testPassword);
+  const hash = await passwordHash;
+  const [workspace] = await db
+    .insert(workspaces)
+    .values({ name: `${label} ${uid()}`, slug: `test-${uid()}-${uid()}` })
+    .returning();
+  const members = {} as Record<Role, TestUser>;
+  for (const role of ["admin", "lead", "engineer", "technician"] as const) {
+    const email = `${role}-${uid()}@example.test`;
+    const [user] = await db
+      .insert(users)
+      .values({ email, name: `${role} ${label}`, passwordHash: hash })
+      .returning({ id: users.id });
+    await db.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role });
+    members[role] = { id: user.id, email, role };
+  }
+  return { id: workspace.id, name: workspace.name, members };
+}
+
+export async function addMember(workspaceId: string, role: Role): Promise<TestUser> {
+  const { db } = testDb;
+  passwordHash ??= hashPassword(testPassword);
+  const email = `${role}-${uid()}@example.test`;
+  const [user] = await db
+    .insert(users)
+    .values({ email, name: `extra ${role}`, passwordHash: await passwordHash })
+    .returning({ id: users.id });
+  await db.insert(memberships).values({ workspaceId, userId: user.id, role });
+  return { id: user.id, email, role };
+}
+
+/** A fresh session cookie ("name=value") for a user in a workspace. */
+export async function sessionCookie(userId: string, workspaceId: string | null): Promise<string> {
+  return cookiePair(await startSession(userId, workspaceId));
+}
+
+export function cookiePair(setCookie: string): string {
+  return setCookie.split(";")[0];
+}
+
+type Handler = (req: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+
+export interface CallOptions {
+  cookie?: string;
+  bearer?: string;
+  body?: unknown;
+  params?: Record<string, string>;
+  headers?: Record<string, string>;
+  path?: string;
+}
+
+/** Calls a route handler the way Next.js does, with a same-origin browser's headers. */
+export async function call(handler: Handler, method: string, options: CallOptions = {}): Promise<Response> {
+  const headers = new Headers({
+    origin: new URL(appUrl).origin,
+    host: new URL(appUrl).host,
+    ...options.headers,
+  });
+  if (options.cookie) headers.set("cookie", options.cookie);
+  if (options.bearer) headers.set("authorization", `Bearer ${options.bearer}`);
+  let body: string | undefined;
+  if (options.body !== undefined && method !== "GET") {
+    headers.set("content-type", "application/json");
+    body = typeof options.body === "string" ? options.body : JSON.stringify(options.body);
+  }
+  const req = new Request(new URL(options.path ?? "/api/test", appUrl), { method, headers, body });
+  return handler(req, { params: Promise.resolve(options.params ?? {}) });
+}
+
+export async function deleteWorkspace(id: string): Promise<void> {
+  const { db } = testDb;
+  const rows = await db
+    .select({ userId: memberships.userId })
+    .from(memberships)
+    .where(eq(memberships.workspaceId, id));
+  await db.delete(workspaces).where(eq(workspaces.id, id));
+  for (const r of rows) await db.delete(users).where(eq(users.id, r.userId));
+}
