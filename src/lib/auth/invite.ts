@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { invitations, memberships, type Role, users, workspaces } from "@/db/schema";
@@ -39,12 +39,18 @@ export async function sendInvitation(
 
   const token = randomToken();
   const invitation = await db.transaction(async (tx) => {
-    if (input.replaceId) {
-      await tx
-        .update(invitations)
-        .set({ revokedAt: new Date() })
-        .where(and(eq(invitations.id, input.replaceId), eq(invitations.workspaceId, caller.workspaceId)));
-    }
+    // One open invitation per address: a new one (or a resend) replaces any still pending.
+    await tx
+      .update(invitations)
+      .set({ revokedAt: new Date() })
+      .where(
+        and(
+          eq(invitations.workspaceId, caller.workspaceId),
+          eq(invitations.email, input.email),
+          isNull(invitations.acceptedAt),
+          isNull(invitations.revokedAt),
+        ),
+      );
     const [row] = await tx
       .insert(invitations)
       .values({

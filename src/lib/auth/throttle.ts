@@ -9,14 +9,18 @@ export const throttleLimit = 5;
 
 type Kind = "sign-in" | "reset";
 
-/** The keys an attempt counts against: the e-mail address and the client's IP. */
+/**
+ * The keys an attempt counts against: the e-mail address, and the client's IP when a proxy in front of the app
+ * tells it. Without one, every client would share one "unknown" IP and five failures would lock everyone out.
+ */
 export function attemptKeys(req: Request, email: string): string[] {
-  return [`email:${email.trim().toLowerCase()}`, `ip:${clientIp(req)}`];
+  const ip = clientIp(req);
+  return [`email:${email.trim().toLowerCase()}`, ...(ip ? [`ip:${ip}`] : [])];
 }
 
-export function clientIp(req: Request): string {
+export function clientIp(req: Request): string | null {
   const forwarded = req.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || req.headers.get("x-real-ip") || "unknown";
+  return forwarded || req.headers.get("x-real-ip") || null;
 }
 
 /**

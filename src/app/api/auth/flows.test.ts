@@ -104,6 +104,23 @@ describe("sign-up and sign-in", () => {
     expect(retryAfter).toBeLessThanOrEqual(900);
   });
 
+  it("without a proxy's client address, one person's failures do not lock out another", async () => {
+    for (let k = 0; k < 6; k++) {
+      await call(h(signIn), "POST", {
+        body: { email: `victim-${unique()}@example.test`, password: "wrong" },
+      });
+      await call(h(signIn), "POST", { body: { email: ws.members.admin.email, password: "wrong guess" } });
+    }
+    const other = await call(h(signIn), "POST", {
+      body: { email: ws.members.lead.email, password: testPassword },
+    });
+    expect([200, 401]).toContain(other.status);
+    const locked = await call(h(signIn), "POST", {
+      body: { email: ws.members.admin.email, password: testPassword },
+    });
+    expect(locked.status).toBe(429);
+  });
+
   it("signs in with the right password", async () => {
     const res = await record(
       await call(h(signIn), "POST", {
@@ -153,6 +170,17 @@ describe("invitations", () => {
       body: { token: lateToken, name: "Late", password: testPassword },
     });
     expect(expired.status).toBe(404);
+  });
+
+  it("keeps one open invitation per address: a second invitation replaces the first", async () => {
+    const admin = await sessionCookie(ws.members.admin.id, ws.id);
+    const email = `twice-${unique()}@example.test`;
+    await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } });
+    await call(h(invite), "POST", { cookie: admin, body: { email, role: "engineer" } });
+    const listed = await (await call(h(listInvitations), "GET", { cookie: admin })).json();
+    const mine = listed.invitations.filter((i: { email: string }) => i.email === email);
+    expect(mine).toHaveLength(1);
+    expect(mine[0].role).toBe("engineer");
   });
 
   it("refuses a lead handing out the admin role, and a technician inviting at all", async () => {

@@ -1,0 +1,79 @@
+import { expect, test } from "@playwright/test";
+import { AccountPage } from "./pages/account-page";
+import { AppShell } from "./pages/app-shell";
+import { acceptInvitation, signIn, signUp } from "./pages/auth-pages";
+import { linkIn, waitForMail } from "./pages/mail-inbox";
+import { TeamPage } from "./pages/team-page";
+import { saveScreenshot } from "./screenshots";
+
+const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const admin = {
+  name: "Ines Varga",
+  email: `ines.${stamp}@pulsefence.test`,
+  password: "long-enough-admin-pass",
+  workspaceName: `Harbour Drive Lab ${stamp}`,
+};
+const technician = {
+  name: "Kofi Lindqvist",
+  email: `kofi.${stamp}@pulsefence.test`,
+  password: "long-enough-bench-pass",
+};
+
+test("an admin invites a technician by e-mail, who joins with the technician's reduced menu", async ({
+  page,
+}) => {
+  const shell = new AppShell(page);
+
+  await test.step("the admin signs up and lands on the overview", async () => {
+    await signUp(page, admin);
+    await expect(page.getByRole("heading", { level: 1, name: "Overview" })).toBeVisible();
+    await expect(page.getByText(admin.workspaceName).first()).toBeVisible();
+    expect(await shell.itemNames()).toEqual(["Overview", "Team", "Account"]);
+  });
+
+  await test.step("the admin invites a technician from the Team page", async () => {
+    await shell.open("Team");
+    const team = new TeamPage(page);
+    await expect(team.members.getByRole("row").filter({ hasText: admin.email })).toContainText("Ines Varga");
+    await team.invite(technician.email, "Technician");
+    await expect(team.invitationRow(technician.email)).toContainText("Technician");
+    await saveScreenshot(page, "team");
+  });
+
+  await test.step("the admin creates an API token on the Account page", async () => {
+    await shell.open("Account");
+    const secret = await new AccountPage(page).createToken("Bench 2 pulse rig");
+    expect(secret.length).toBeGreaterThan(40);
+    await saveScreenshot(page, "account");
+    await shell.signOut();
+  });
+
+  const link = await test.step("the invitation e-mail arrives with its link", async () => {
+    const mail = await waitForMail(technician.email, /invited you to/);
+    expect(mail.text).toContain(admin.workspaceName);
+    return linkIn(mail, "/invite/");
+  });
+
+  await test.step("the technician accepts and sees the reduced menu", async () => {
+    await page.goto(link);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText(`Join ${admin.workspaceName}`);
+    await expect(page.getByText("Technician", { exact: true })).toBeVisible();
+    await acceptInvitation(page, link, technician);
+    await expect(page.getByRole("heading", { level: 1, name: "Overview" })).toBeVisible();
+    expect(await shell.itemNames()).toEqual(["Overview", "Account"]);
+    await expect(shell.item("Team")).toHaveCount(0);
+  });
+
+  await test.step("the technician signs out and in again, still without Team", async () => {
+    await shell.signOut();
+    await signIn(page, technician);
+    expect(await shell.itemNames()).toEqual(["Overview", "Account"]);
+    await page.goto("/team");
+    await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
+  });
+
+  await test.step("the used link does not work a second time", async () => {
+    await page.goto(link);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("This invitation link cannot be used");
+  });
+});

@@ -1,0 +1,92 @@
+import type { Metadata } from "next";
+import { PageHeader, Section } from "@/components/page-header";
+import { EmptyRow, Table, Th } from "@/components/table";
+import { listApiTokens } from "@/db/queries/api-tokens";
+import { requireMember } from "@/lib/auth/page";
+import { CreateTokenForm } from "./create-token-form";
+import { PasswordForm } from "./password-form";
+import { ProfileForm } from "./profile-form";
+import { SignOutEverywhere } from "./sign-out-everywhere";
+import { TokenRow } from "./token-row";
+
+export const metadata: Metadata = { title: "Account" };
+
+export default async function AccountPage() {
+  const member = await requireMember();
+  const tokens = await listApiTokens({ userId: member.user.id });
+  const workspaceNames = new Map(member.workspaces.map((w) => [w.id, w.name]));
+  const active = tokens.filter((t) => !t.revokedAt).length;
+
+  return (
+    <div className="space-y-8">
+      <PageHeader title="Account" context={member.user.email} />
+
+      <div className="grid items-start gap-6 lg:grid-cols-2">
+        <Section
+          id="profile"
+          title="Profile"
+          description="How the team sees you in members lists and audit records."
+        >
+          <ProfileForm name={member.user.name} email={member.user.email} />
+        </Section>
+        <Section id="password" title="Password" description="Changing it signs out your other sessions.">
+          <PasswordForm email={member.user.email} />
+        </Section>
+      </div>
+
+      <Section
+        id="tokens"
+        title="API tokens"
+        description={
+          <>
+            A token lets a bench script post measurements and get verdicts back through{" "}
+            <code className="font-mono text-xs">/api/v1</code>, acting as you with your role in the workspace
+            it was made in. {active} active.
+          </>
+        }
+      >
+        <CreateTokenForm workspaceName={member.workspace.name} />
+        <div className="mt-4">
+          <Table label="API tokens">
+            <thead>
+              <tr>
+                <Th>Name</Th>
+                <Th className="w-28">Token</Th>
+                <Th>Workspace</Th>
+                <Th numeric className="w-28">
+                  Created (UTC)
+                </Th>
+                <Th numeric className="w-36">
+                  Last used (UTC)
+                </Th>
+                <Th className="w-28">Status</Th>
+                <Th className="w-24">
+                  <span className="sr-only">Actions</span>
+                </Th>
+              </tr>
+            </thead>
+            <tbody>
+              {tokens.length === 0 ? (
+                <EmptyRow colSpan={7}>
+                  No tokens yet. Name one above for each bench script that posts to Pulsefence.
+                </EmptyRow>
+              ) : (
+                tokens.map((token) => (
+                  <TokenRow
+                    key={token.id}
+                    token={token}
+                    workspaceName={workspaceNames.get(token.workspaceId) ?? null}
+                  />
+                ))
+              )}
+            </tbody>
+          </Table>
+        </div>
+      </Section>
+
+      <Section id="sessions" title="Sessions">
+        <SignOutEverywhere />
+      </Section>
+    </div>
+  );
+}

@@ -1,0 +1,170 @@
+import type { ButtonHTMLAttributes, InputHTMLAttributes, ReactNode, Ref, SelectHTMLAttributes } from "react";
+
+// Form pieces shared by every form: label above the field, hint and error under it, tied with aria-describedby.
+
+interface FieldFrame {
+  id: string;
+  label: string;
+  /** Shown at the right of the label, e.g. a "Forgot password?" link. */
+  labelAside?: ReactNode;
+  hint?: ReactNode;
+  error?: string;
+  className?: string;
+}
+
+function describedBy(id: string, hint: unknown, error: unknown): string | undefined {
+  return [hint ? `${id}-hint` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
+}
+
+const control =
+  "mt-1 block h-9 w-full rounded-md border border-line-strong bg-panel px-2.5 text-sm text-ink " +
+  "placeholder:text-ink-faint focus-visible:border-accent focus-visible:outline-1 focus-visible:outline-offset-0 " +
+  "aria-invalid:border-fail disabled:cursor-not-allowed disabled:bg-sunken disabled:text-ink-muted";
+
+function Frame({
+  id,
+  label,
+  labelAside,
+  hint,
+  error,
+  className = "",
+  children,
+}: FieldFrame & { children: ReactNode }) {
+  return (
+    <div className={className}>
+      <div className="flex items-baseline justify-between gap-3">
+        <label htmlFor={id} className="text-sm font-medium text-ink">
+          {label}
+        </label>
+        {labelAside}
+      </div>
+      {children}
+      {hint && !error ? (
+        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-muted">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="mt-1 text-xs text-fail">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+export function TextField({
+  id,
+  label,
+  labelAside,
+  hint,
+  error,
+  className,
+  ref,
+  ...input
+}: FieldFrame &
+  Omit<InputHTMLAttributes<HTMLInputElement>, "id" | "className"> & { ref?: Ref<HTMLInputElement> }) {
+  return (
+    <Frame id={id} label={label} labelAside={labelAside} hint={hint} error={error} className={className}>
+      <input
+        id={id}
+        ref={ref}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, hint && !error, error)}
+        className={control}
+        {...input}
+      />
+    </Frame>
+  );
+}
+
+export function SelectField({
+  id,
+  label,
+  labelAside,
+  hint,
+  error,
+  className,
+  ref,
+  children,
+  ...select
+}: FieldFrame &
+  Omit<SelectHTMLAttributes<HTMLSelectElement>, "id" | "className"> & { ref?: Ref<HTMLSelectElement> }) {
+  return (
+    <Frame id={id} label={label} labelAside={labelAside} hint={hint} error={error} className={className}>
+      <select
+        id={id}
+        ref={ref}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, hint && !error, error)}
+        className={`${control} pr-8`}
+        {...select}
+      >
+        {children}
+      </select>
+    </Frame>
+  );
+}
+
+type Variant = "primary" | "secondary" | "quiet" | "danger";
+
+const variants: Record<Variant, string> = {
+  primary: "bg-accent text-white hover:bg-accent-strong border border-transparent",
+  secondary: "border border-line-strong bg-panel text-ink hover:bg-sunken",
+  quiet: "border border-transparent text-ink-muted hover:bg-sunken hover:text-ink",
+  danger: "border border-line-strong bg-panel text-fail hover:border-fail",
+};
+
+export function Button({
+  variant = "secondary",
+  size = "md",
+  pending = false,
+  className = "",
+  children,
+  type = "button",
+  disabled,
+  ...rest
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; size?: "sm" | "md"; pending?: boolean }) {
+  const sizing = size === "sm" ? "h-7 px-2.5 text-xs" : "h-9 px-4 text-sm";
+  return (
+    <button
+      type={type}
+      disabled={disabled || pending}
+      aria-busy={pending || undefined}
+      className={`inline-flex shrink-0 items-center justify-center gap-1.5 whitespace-nowrap rounded-md font-medium disabled:cursor-not-allowed disabled:opacity-60 ${sizing} ${variants[variant]} ${className}`}
+      {...rest}
+    >
+      {children}
+    </button>
+  );
+}
+
+/** The row that closes a form: secondary things at the left, the primary action at the bottom right. */
+export function FormActions({ children, aside }: { children: ReactNode; aside?: ReactNode }) {
+  return (
+    <div className="mt-5 flex items-center justify-between gap-3">
+      <div className="text-sm text-ink-muted">{aside}</div>
+      <div className="flex items-center gap-2">{children}</div>
+    </div>
+  );
+}
+
+/** A form-level message: a problem the server reported (role alert) or a done thing (role status). */
+export function FormMessage({ tone, children }: { tone: "error" | "done"; children: ReactNode }) {
+  if (!children) return null;
+  return tone === "error" ? (
+    <p
+      role="alert"
+      className="mt-4 rounded-md border border-line border-l-2 border-l-fail bg-sunken px-3 py-2 text-sm"
+    >
+      {children}
+    </p>
+  ) : (
+    <p
+      role="status"
+      className="mt-4 rounded-md border border-line border-l-2 border-l-pass bg-sunken px-3 py-2 text-sm"
+    >
+      {children}
+    </p>
+  );
+}
