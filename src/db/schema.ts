@@ -255,6 +255,171 @@ export const pendingUploads = pgTable("pending_uploads", {
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 
+// Projects ----------------------------------------------------------------------------------------------------
+
+export const pulseKindEnum = pgEnum("pulse_kind", ["rect", "triangle"]);
+export const betweenCurvesEnum = pgEnum("between_curves", ["loglog", "next-longer"]);
+
+/** One design under review: the case temperature to assume, the margin policy, its candidates and pulses. */
+export const projects = pgTable(
+  "projects",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    description: text(),
+    caseTemp: doublePrecision().notNull().default(25),
+    utilisationLimit: doublePrecision().notNull().default(0.8),
+    tjGuard: doublePrecision().notNull().default(25),
+    betweenCurves: betweenCurvesEnum().notNull().default("loglog"),
+    ownerId: uuid().references(() => users.id, { onDelete: "set null" }),
+    archivedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.workspaceId)],
+);
+
+export const projectCandidates = pgTable(
+  "project_candidates",
+  {
+    projectId: uuid()
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    partId: uuid()
+      .notNull()
+      .references(() => parts.id, { onDelete: "cascade" }),
+    addedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.partId] })],
+);
+
+/** How a pulse was obtained when a pulse builder made it: the builder, its inputs and intermediate figures. */
+export interface PulseOrigin {
+  builder: string;
+  input: Record<string, unknown>;
+  figures: Record<string, unknown>;
+}
+
+/**
+ * A pulse the design must survive, from a calculation. Rectangle or triangle (falling), SI units; optional
+ * repetition (period, count; no count = continuous) and case-temperature override.
+ */
+export const faultCases = pgTable(
+  "fault_cases",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    projectId: uuid()
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    kind: pulseKindEnum().notNull(),
+    v: doublePrecision().notNull(),
+    i: doublePrecision().notNull(),
+    duration: doublePrecision().notNull(),
+    repeatPeriod: doublePrecision(),
+    repeatCount: integer(),
+    caseTemp: doublePrecision(),
+    origin: jsonb().$type<PulseOrigin>(),
+    notes: text(),
+    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.projectId)],
+);
+
+/** A pulse the bench measured, logged by a technician (or anyone allowed to), with its bench setup. */
+export const measuredPulses = pgTable(
+  "measured_pulses",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    projectId: uuid()
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    label: text().notNull(),
+    kind: pulseKindEnum().notNull(),
+    v: doublePrecision().notNull(),
+    i: doublePrecision().notNull(),
+    duration: doublePrecision().notNull(),
+    repeatPeriod: doublePrecision(),
+    repeatCount: integer(),
+    note: text(),
+    boardSerial: text(),
+    probe: text(),
+    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.projectId)],
+);
+
+/** What the server computed from a capture, kept for display; the samples stay in object storage. */
+export interface CaptureSummary {
+  samples: number;
+  uniform: boolean;
+  tStart: number;
+  tEnd: number;
+  vMax: number;
+  iMaxAbs: number;
+  pPeak: number;
+  tPeak: number;
+  energy: number;
+  /** The equal-energy rectangle at peak power (METHODS.md §6), or why there is none. */
+  equivalent: { ok: true; v: number; i: number; duration: number } | { ok: false; flag: string };
+}
+
+/** A min/max-decimated trace for drawing: for each bucket its time and the min and max of each series. */
+export interface CaptureTrace {
+  t: number[];
+  v: [number, number][];
+  i: [number, number][];
+  p: [number, number][];
+}
+
+/** A scope capture: the uploaded CSV and the parsed samples (binary) in storage, the summary here. */
+export const captures = pgTable(
+  "captures",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    projectId: uuid()
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    objectKey: text().notNull().unique(),
+    samplesKey: text().notNull().unique(),
+    fileName: text().notNull(),
+    size: integer().notNull(),
+    sha256: text().notNull(),
+    mapping: jsonb().$type<Record<string, unknown>>().notNull(),
+    summary: jsonb().$type<CaptureSummary>().notNull(),
+    trace: jsonb().$type<CaptureTrace>().notNull(),
+    note: text(),
+    boardSerial: text(),
+    probe: text(),
+    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.projectId)],
+);
+
+/** One e-mail per failing measured pulse or capture: a row here means the owner was told. */
+export const notices = pgTable(
+  "notices",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    subjectType: text().notNull(),
+    subjectId: uuid().notNull(),
+    recipientId: uuid().references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex().on(t.subjectType, t.subjectId)],
+);
+
 // Relations -------------------------------------------------------------------------------------------------
 
 export const membershipsRelations = relations(memberships, ({ one }) => ({
@@ -277,3 +442,7 @@ export type NewPart = typeof parts.$inferInsert;
 export type Technology = (typeof technologyEnum.enumValues)[number];
 export type CurveSetRow = typeof curveSets.$inferSelect;
 export type CurveRow = typeof curves.$inferSelect;
+export type Project = typeof projects.$inferSelect;
+export type FaultCase = typeof faultCases.$inferSelect;
+export type MeasuredPulse = typeof measuredPulses.$inferSelect;
+export type Capture = typeof captures.$inferSelect;

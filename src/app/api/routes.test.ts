@@ -4,7 +4,17 @@ import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, curveSets, curves, invitations, parts } from "@/db/schema";
+import {
+  apiTokens,
+  curveSets,
+  curves,
+  faultCases,
+  invitations,
+  measuredPulses,
+  parts,
+  projectCandidates,
+  projects,
+} from "@/db/schema";
 import type { Access, GuardedHandler } from "@/lib/auth/guard";
 import { can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
@@ -62,6 +72,45 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/parts/[id]/curve-sets": async () => ({ id: await part() }),
   "/api/parts/[id]/limits": async () => ({ id: await part() }),
   "/api/parts/[id]/curve-sets/[setId]/file": async () => partWithCurveSet(),
+  "/api/projects/[id]": async () => ({ id: await project() }),
+  "/api/projects/[id]/archive": async () => ({ id: await project() }),
+  "/api/projects/[id]/check": async () => ({ id: await project() }),
+  "/api/projects/[id]/candidates": async () => ({ id: await project() }),
+  "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
+  "/api/projects/[id]/measurements": async () => ({ id: await project() }),
+  "/api/projects/[id]/measurements/preview": async () => ({ id: await project() }),
+  "/api/projects/[id]/uploads": async () => ({ id: await project() }),
+  "/api/projects/[id]/captures": async () => ({ id: await project() }),
+  "/api/projects/[id]/candidates/[partId]": async () => {
+    const id = await project();
+    const partId = await part();
+    await testDb.db.insert(projectCandidates).values({ projectId: id, partId });
+    return { id, partId };
+  },
+  "/api/projects/[id]/fault-cases/[caseId]": async () => {
+    const id = await project();
+    const [row] = await testDb.db
+      .insert(faultCases)
+      .values({ projectId: id, name: "short", kind: "rect", v: 48, i: 30, duration: 1e-3 })
+      .returning({ id: faultCases.id });
+    return { id, caseId: row.id };
+  },
+  "/api/projects/[id]/measurements/[measurementId]": async () => {
+    const id = await project();
+    const [row] = await testDb.db
+      .insert(measuredPulses)
+      .values({
+        projectId: id,
+        label: "P1",
+        kind: "rect",
+        v: 48,
+        i: 3,
+        duration: 1e-3,
+        createdBy: tokenOwner || null,
+      })
+      .returning({ id: measuredPulses.id });
+    return { id, measurementId: row.id };
+  },
   "/api/parts/[id]/curve-sets/[setId]/activate": async () => partWithCurveSet(),
 };
 
@@ -78,6 +127,14 @@ async function part(): Promise<string> {
       tjMax: 175,
     })
     .returning({ id: parts.id });
+  return row.id;
+}
+
+async function project(): Promise<string> {
+  const [row] = await testDb.db
+    .insert(projects)
+    .values({ workspaceId: a.id, name: `Route test ${crypto.randomUUID().slice(0, 6)}`, caseTemp: 60 })
+    .returning({ id: projects.id });
   return row.id;
 }
 

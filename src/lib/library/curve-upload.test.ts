@@ -140,7 +140,7 @@ describe("curve-set upload", () => {
     const ticket = await presignUpload(storage, {
       workspaceId: ws.id,
       userId: ws.members.engineer.id,
-      partId: part.id,
+      owner: `parts/${part.id}`,
       fileName: "x.csv",
       size: 10,
       purpose: "curve-set",

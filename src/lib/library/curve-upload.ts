@@ -24,23 +24,24 @@ export async function presignUpload(
   input: {
     workspaceId: string;
     userId: string;
-    partId: string;
+    /** Where the object lives under the workspace, e.g. `parts/<id>` or `projects/<id>`. */
+    owner: string;
     fileName: string;
     size: number;
     purpose: string;
+    maxBytes?: number;
   },
 ): Promise<UploadTicket> {
-  if (input.size > MAX_CSV_BYTES) {
-    throw new AppError(
-      "too_large:file",
-      `The file is ${(input.size / 1e6).toFixed(1)} MB; the limit is 5 MB.`,
-    );
+  const maxBytes = input.maxBytes ?? MAX_CSV_BYTES;
+  if (input.size > maxBytes) {
+    const mb = (n: number) => `${(n / 1e6).toFixed(n < 1e7 ? 1 : 0)} MB`;
+    throw new AppError("too_large:file", `The file is ${mb(input.size)}; the limit is ${mb(maxBytes)}.`);
   }
   if (!/\.(csv|txt|tsv)$/i.test(input.fileName)) {
     throw new AppError("invalid:file-type", "Upload a CSV text file (.csv, .tsv or .txt).");
   }
   await cleanupStaleUploads(storage).catch((error) => console.error("upload cleanup failed", error));
-  const objectKey = `${input.workspaceId}/parts/${input.partId}/${input.purpose}/${crypto.randomUUID()}.csv`;
+  const objectKey = `${input.workspaceId}/${input.owner}/${input.purpose}/${crypto.randomUUID()}.csv`;
   const url = await storage.presignPut(objectKey, { contentType: "text/csv" });
   const [row] = await db
     .insert(pendingUploads)

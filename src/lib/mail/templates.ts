@@ -36,3 +36,30 @@ export function passwordResetMail(input: { to: string; link: string }): Mail {
     ].join("\n"),
   };
 }
+
+export function failingPulseMail(input: {
+  to: string;
+  projectName: string;
+  pulseName: string;
+  source: string;
+  pulseFigures: string;
+  verdicts: { candidate: string; verdict: string; detail: string }[];
+  link: string;
+}): Mail {
+  const worst = input.verdicts.some((v) => v.verdict === "fail") ? "fails" : "has no data";
+  return {
+    to: input.to,
+    subject: `${input.projectName}: ${input.source} "${input.pulseName}" ${worst}`,
+    text: [
+      `A ${input.source} logged in "${input.projectName}" ${worst} on at least one candidate.`,
+      "",
+      `Pulse: ${input.pulseName} (${input.pulseFigures})`,
+      ...input.verdicts.map((v) => `  ${v.candidate}: ${v.verdict}${v.detail ? ` (${v.detail})` : ""}`),
+      "",
+      `See it in the project: ${input.link}`,
+      "",
+      "A Pulsefence check is an aid to engineering judgement; validate on hardware and follow the manufacturer's",
+      "guidance, the applicable safety standards, local codes and licensed practice.",
+    ].join("\n"),
+  };
+}

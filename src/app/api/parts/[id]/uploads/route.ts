@@ -19,7 +19,7 @@ export const POST = route<{ id: string }>({ action: "part.write" }, async (req, 
     ...input,
     workspaceId: caller.workspaceId,
     userId: caller.user.id,
-    partId: part.id,
+    owner: `parts/${part.id}`,
   });
   return json(ticket, { status: 201 });
 });

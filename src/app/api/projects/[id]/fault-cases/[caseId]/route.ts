@@ -1,0 +1,76 @@
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { isUuid } from "@/db/queries/parts";
+import { faultCases } from "@/db/schema";
+import { route } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import { json, parseBody } from "@/lib/http";
+import { loadProject } from "@/lib/projects/projects";
+import { faultCaseSchema } from "@/lib/projects/schema";
+import { faultCaseColumns } from "@/lib/projects/write";
+
+async function loadCase(projectId: string, caseId: string) {
+  const [row] = isUuid(caseId)
+    ? await db
+        .select()
+        .from(faultCases)
+        .where(and(eq(faultCases.projectId, projectId), eq(faultCases.id, caseId)))
+    : [];
+  if (!row) throw new AppError("not_found:fault-case", "No such fault case in this project.");
+  return row;
+}
+
+/** PATCH /api/projects/:id/fault-cases/:caseId: edits a fault case. */
+export const PATCH = route<{ id: string; caseId: string }>(
+  { action: "project.write" },
+  async (req, caller, { id, caseId }) => {
+    const project = await loadProject(caller, id);
+    const existing = await loadCase(project.id, caseId);
+    const values = await parseBody(req, faultCaseSchema);
+    const faultCase = await db.transaction(async (tx) => {
+      const [row] = await tx
+        .update(faultCases)
+        .set({ ...faultCaseColumns(values), updatedAt: new Date() })
+        .where(eq(faultCases.id, existing.id))
+        .returning();
+      await recordAudit(
+        {
+          workspaceId: caller.workspaceId,
+          actorId: caller.user.id,
+          action: "fault-case.updated",
+          subjectType: "project",
+          subjectId: project.id,
+          details: { faultCaseId: row.id, name: row.name },
+        },
+        tx,
+      );
+      return row;
+    });
+    return json({ faultCase });
+  },
+);
+
+/** DELETE /api/projects/:id/fault-cases/:caseId. */
+export const DELETE = route<{ id: string; caseId: string }>(
+  { action: "project.write" },
+  async (_req, caller, { id, caseId }) => {
+    const project = await loadProject(caller, id);
+    const existing = await loadCase(project.id, caseId);
+    await db.transaction(async (tx) => {
+      await tx.delete(faultCases).where(eq(faultCases.id, existing.id));
+      await recordAudit(
+        {
+          workspaceId: caller.workspaceId,
+          actorId: caller.user.id,
+          action: "fault-case.deleted",
+          subjectType: "project",
+          subjectId: project.id,
+          details: { faultCaseId: existing.id, name: existing.name },
+        },
+        tx,
+      );
+    });
+    return json({ status: "ok" });
+  },
+);

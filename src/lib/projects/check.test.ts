@@ -1,0 +1,177 @@
+// The project check route against the engine's contract on the same inputs, on the real database.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
+import {
+  curveSets,
+  curves,
+  faultCases,
+  measuredPulses,
+  parts,
+  projectCandidates,
+  projects,
+} from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { DEMO_PARTS, demoCurves } from "@/lib/demo/parts";
+import { runCheck } from "@/lib/soa/check";
+import type { PartLimits, Pulse } from "@/lib/soa/types";
+import {
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+
+let ws: TestWorkspace;
+let projectId: string;
+const limitsByPart = new Map<string, PartLimits>();
+
+beforeAll(async () => {
+  ws = await createTestWorkspace("Check");
+  const { db } = testDb;
+  const [project] = await db
+    .insert(projects)
+    .values({
+      workspaceId: ws.id,
+      name: "Disconnect board",
+      caseTemp: 85,
+      utilisationLimit: 0.7,
+      tjGuard: 20,
+    })
+    .returning();
+  projectId = project.id;
+  for (const demo of DEMO_PARTS) {
+    const [part] = await db
+      .insert(parts)
+      .values({
+        workspaceId: ws.id,
+        partNumber: demo.partNumber,
+        maker: demo.maker,
+        technology: "si-mosfet",
+        package: demo.package,
+        vdsMax: demo.vdsMax,
+        idPulseMax: demo.idPulseMax,
+        rdsOn: demo.rdsOn,
+        tjMax: demo.tjMax,
+        rthJc: demo.rthJc,
+        // The second part without a thermal model: its repetitions read Z_th from the curves.
+        foster: demo.partNumber === "QM-100G28" ? null : demo.foster,
+      })
+      .returning();
+    const [set] = await db
+      .insert(curveSets)
+      .values({
+        workspaceId: ws.id,
+        partId: part.id,
+        objectKey: `test/${crypto.randomUUID()}`,
+        fileName: "soa.csv",
+        size: 1,
+        sha256: "0".repeat(64),
+        shape: "long",
+        active: true,
+      })
+      .returning();
+    const setCurves = demoCurves(demo);
+    await db.insert(curves).values(
+      setCurves.map((c, position) => ({
+        curveSetId: set.id,
+        position,
+        duration: c.duration === "DC" ? null : c.duration,
+        points: c.points,
+      })),
+    );
+    await db.insert(projectCandidates).values({ projectId, partId: part.id });
+    limitsByPart.set(part.id, {
+      vdsMax: demo.vdsMax,
+      tjMax: demo.tjMax,
+      rdsOn: demo.rdsOn,
+      idPulseMax: demo.idPulseMax,
+      rthJc: demo.rthJc,
+      ...(demo.partNumber === "QM-100G28" ? {} : { foster: demo.foster }),
+      soa: { refCaseTemp: 25, curves: setCurves },
+    });
+  }
+  await db.insert(faultCases).values([
+    { projectId, name: "Pre-charge inrush", kind: "triangle", v: 48, i: 1.5, duration: 0.048 },
+    { projectId, name: "Output short", kind: "rect", v: 52, i: 60, duration: 150e-6 },
+    {
+      projectId,
+      name: "Overload train",
+      kind: "rect",
+      v: 30,
+      i: 20,
+      duration: 2e-3,
+      repeatPeriod: 0.02,
+      repeatCount: 10,
+    },
+    { projectId, name: "Retry forever", kind: "triangle", v: 40, i: 30, duration: 1e-3, repeatPeriod: 0.1 },
+    { projectId, name: "Cold start", kind: "rect", v: 48, i: 5, duration: 5e-3, caseTemp: -20 },
+  ]);
+  await db.insert(measuredPulses).values([
+    { projectId, label: "M1", kind: "rect", v: 47.5, i: 2.2, duration: 3e-3 },
+    { projectId, label: "M2", kind: "rect", v: 120, i: 1, duration: 1e-3 },
+  ]);
+});
+
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+describe("GET /api/projects/:id/check", () => {
+  it("gives every candidate × pulse the engine's own result for the same inputs", async () => {
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const res = await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.candidates).toHaveLength(3);
+    expect(body.pulses).toHaveLength(7);
+    const policy = { utilisationLimit: 0.7, tjGuard: 20, betweenCurves: "loglog" as const };
+    let compared = 0;
+    for (const candidate of body.candidates) {
+      const part = limitsByPart.get(candidate.partId)!;
+      for (const p of body.pulses) {
+        const pulse = {
+          id: p.id,
+          kind: p.kind,
+          v: p.v,
+          i: p.i,
+          duration: p.duration,
+          ...(p.repeat ? { repeat: p.repeat } : {}),
+        } as Pulse;
+        const expected = runCheck({ part, caseTemp: p.caseTemp, policy, pulses: [pulse] }).results[0];
+        expect(body.results[candidate.partId][p.id]).toEqual(expected);
+        compared++;
+      }
+    }
+    expect(compared).toBe(21);
+  });
+
+  it("checks a fault case at its own case temperature and an over-voltage pulse as a fail", async () => {
+    const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
+    const body = await (
+      await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } })
+    ).json();
+    const cold = body.pulses.find((p: { name: string }) => p.name === "Cold start");
+    expect(cold.caseTemp).toBe(-20);
+    const m2 = body.pulses.find((p: { name: string }) => p.name === "M2");
+    for (const c of body.candidates) {
+      expect(body.results[c.partId][m2.id].verdict).toBe("fail");
+      expect(body.results[c.partId][m2.id].flags).toContain("over-voltage");
+    }
+    expect(body.worstByPulse[m2.id]).toBe("fail");
+  });
+
+  it("tells the demo story: the lowest-R_DS(on) part fails the inrush, the linear-mode part passes", async () => {
+    const cookie = await sessionCookie(ws.members.lead.id, ws.id);
+    const body = await (
+      await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } })
+    ).json();
+    const inrush = body.pulses.find((p: { name: string }) => p.name === "Pre-charge inrush");
+    const byNumber = (n: string) =>
+      body.candidates.find((c: { partNumber: string }) => c.partNumber === n).partId;
+    expect(body.results[byNumber("QM-80T16")][inrush.id].verdict).toBe("fail");
+    expect(body.results[byNumber("BFL-100L55")][inrush.id].verdict).toBe("pass");
+  });
+});

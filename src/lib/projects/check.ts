@@ -1,0 +1,67 @@
+import "server-only";
+import type { Project } from "@/db/schema";
+import { evaluate, type ProjectPulse } from "./evaluate";
+import { loadCandidates } from "./projects";
+import { faultCasePulse, listFaultCases, listMeasuredPulses, measuredPulse } from "./pulses";
+
+/** The project's margin policy in the engine's terms. */
+export function projectPolicy(project: Project) {
+  return {
+    utilisationLimit: project.utilisationLimit,
+    tjGuard: project.tjGuard,
+    betweenCurves: project.betweenCurves,
+  } as const;
+}
+
+/** Every pulse of the project: fault cases first, then measured pulses, then captures. */
+export async function loadProjectPulses(
+  project: Project,
+  extra: { captures?: () => Promise<ProjectPulse[]> } = {},
+): Promise<ProjectPulse[]> {
+  const [cases, measured, captured] = await Promise.all([
+    listFaultCases(project.id),
+    listMeasuredPulses(project.id),
+    extra.captures?.() ?? Promise.resolve([]),
+  ]);
+  return [
+    ...cases.map((c) => faultCasePulse(project, c)),
+    ...measured.map((m) => measuredPulse(project, m)),
+    ...captured,
+  ];
+}
+
+/**
+ * Checks every pulse of a project against every candidate on the server, through the engine, at the project's
+ * temperature (or a fault case's override) and margin policy. The answer carries what the results table, the
+ * charts and the comparison need, and nothing of the pulses' raw samples.
+ */
+export async function checkProject(
+  project: Project,
+  extra: { captures?: () => Promise<ProjectPulse[]> } = {},
+) {
+  const [candidates, pulses] = await Promise.all([
+    loadCandidates(project.id),
+    loadProjectPulses(project, extra),
+  ]);
+  const evaluation = await evaluate(
+    candidates.map((c) => ({ partId: c.part.id, limits: c.limits })),
+    pulses,
+    projectPolicy(project),
+  );
+  return {
+    policy: { caseTemp: project.caseTemp, ...projectPolicy(project) },
+    candidates: candidates.map((c) => ({
+      partId: c.part.id,
+      partNumber: c.part.partNumber,
+      maker: c.part.maker,
+      status: c.part.status,
+      unitCost: c.part.unitCost,
+      currency: c.part.currency,
+      hasCurves: c.limits !== null,
+      hasThermalModel: Boolean(c.part.foster?.length),
+      curveSetId: c.curveSetId,
+    })),
+    pulses: pulses.map(({ pulse: _pulse, ...rest }) => rest),
+    ...evaluation,
+  };
+}

@@ -1,0 +1,84 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db } from "@/db";
+import { notices, type Project, users } from "@/db/schema";
+import { env } from "@/lib/env";
+import { mailer } from "@/lib/mail";
+import { failingPulseMail } from "@/lib/mail/templates";
+import { formatQuantity } from "@/lib/soa/units";
+import type { checkProject } from "./check";
+
+type Checked = Awaited<ReturnType<typeof checkProject>>;
+
+const sourceWords = { measured: "measured pulse", capture: "capture", "fault-case": "fault case" } as const;
+
+/**
+ * E-mails the project's owner engineer about each new measured pulse or capture that fails, or has no data, on
+ * any candidate: exactly one e-mail per pulse (a row in `notices` records it, so a re-check never sends again).
+ * Mail failures are logged, never undo the measurement.
+ */
+export async function notifyFailingEvidence(
+  project: Project,
+  checked: Checked,
+  pulseIds: string[],
+): Promise<number> {
+  if (!project.ownerId) return 0;
+  const owner = await db.query.users.findFirst({
+    where: eq(users.id, project.ownerId),
+    columns: { email: true },
+  });
+  if (!owner) return 0;
+  let sent = 0;
+  for (const pulse of checked.pulses.filter((p) => pulseIds.includes(p.id))) {
+    const worst = checked.worstByPulse[pulse.id];
+    if (worst !== "fail" && worst !== "no-data") continue;
+    if (pulse.source === "fault-case") continue;
+    const [claimed] = await db
+      .insert(notices)
+      .values({
+        workspaceId: project.workspaceId,
+        subjectType: pulse.source,
+        subjectId: pulse.id,
+        recipientId: project.ownerId,
+      })
+      .onConflictDoNothing()
+      .returning({ id: notices.id });
+    if (!claimed) continue;
+    const verdicts = checked.candidates.map((c) => {
+      const r = checked.results[c.partId]?.[pulse.id];
+      const detail = r
+        ? [
+            r.utilisation !== null ? `utilisation ${(r.utilisation * 100).toFixed(0)} %` : null,
+            r.tjPeak !== null ? `Tj peak ${formatQuantity(r.tjPeak, "°C")}` : null,
+          ]
+            .filter(Boolean)
+            .join(", ")
+        : "no SOA curves";
+      return { candidate: `${c.maker} ${c.partNumber}`, verdict: r?.verdict ?? "no-data", detail };
+    });
+    const figures = [
+      pulse.v !== null ? formatQuantity(pulse.v, "V") : null,
+      pulse.i !== null ? formatQuantity(pulse.i, "A") : null,
+      pulse.duration !== null ? formatQuantity(pulse.duration, "s") : null,
+    ]
+      .filter(Boolean)
+      .join(", ");
+    try {
+      await mailer().send(
+        failingPulseMail({
+          to: owner.email,
+          projectName: project.name,
+          pulseName: pulse.name,
+          source: sourceWords[pulse.source],
+          pulseFigures: figures,
+          verdicts,
+          link: `${env().APP_URL}/projects/${project.id}?pulse=${pulse.id}`,
+        }),
+      );
+      sent++;
+    } catch (error) {
+      console.error("failing-pulse notice not sent", error);
+    }
+  }
+  return sent;
+}

@@ -1,0 +1,90 @@
+import "server-only";
+import { and, eq, inArray } from "drizzle-orm";
+import { db } from "@/db";
+import { isUuid } from "@/db/queries/parts";
+import { curveSets, curves, type Part, parts, projectCandidates, projects } from "@/db/schema";
+import type { MemberCaller } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import type { PartLimits } from "@/lib/soa/types";
+
+/** The caller's workspace's project, or 404 (a project of another workspace does not exist for the caller). */
+export async function loadProject(caller: Pick<MemberCaller, "workspaceId">, projectId: string) {
+  const [project] = isUuid(projectId)
+    ? await db
+        .select()
+        .from(projects)
+        .where(and(eq(projects.workspaceId, caller.workspaceId), eq(projects.id, projectId)))
+    : [];
+  if (!project) throw new AppError("not_found:project", "No such project in this workspace.");
+  return project;
+}
+
+export interface Candidate {
+  part: Part;
+  /** The part as the engine takes it, with its active curve set; null when it has no curves yet. */
+  limits: PartLimits | null;
+  curveSetId: string | null;
+}
+
+/** The engine's view of a part and its active curve set. */
+export function partLimits(
+  part: Part,
+  set: { refCaseTemp: number; curves: PartLimits["soa"]["curves"] },
+): PartLimits {
+  return {
+    vdsMax: part.vdsMax,
+    tjMax: part.tjMax,
+    ...(part.rdsOn !== null ? { rdsOn: part.rdsOn } : {}),
+    ...(part.idPulseMax !== null ? { idPulseMax: part.idPulseMax } : {}),
+    ...(part.rthJc !== null ? { rthJc: part.rthJc } : {}),
+    ...(part.foster?.length ? { foster: part.foster } : {}),
+    soa: { refCaseTemp: set.refCaseTemp, curves: set.curves },
+  };
+}
+
+/** The project's candidate parts with their active curves, in the order they were added. */
+export async function loadCandidates(projectId: string): Promise<Candidate[]> {
+  const rows = await db
+    .select({ part: parts })
+    .from(projectCandidates)
+    .innerJoin(parts, eq(parts.id, projectCandidates.partId))
+    .where(eq(projectCandidates.projectId, projectId))
+    .orderBy(projectCandidates.addedAt);
+  if (rows.length === 0) return [];
+  const sets = await db
+    .select()
+    .from(curveSets)
+    .where(
+      and(
+        inArray(
+          curveSets.partId,
+          rows.map((r) => r.part.id),
+        ),
+        eq(curveSets.active, true),
+      ),
+    );
+  const curveRows = sets.length
+    ? await db
+        .select()
+        .from(curves)
+        .where(
+          inArray(
+            curves.curveSetId,
+            sets.map((s) => s.id),
+          ),
+        )
+        .orderBy(curves.position)
+    : [];
+  return rows.map(({ part }) => {
+    const set = sets.find((s) => s.partId === part.id);
+    if (!set) return { part, limits: null, curveSetId: null };
+    const setCurves = curveRows
+      .filter((c) => c.curveSetId === set.id)
+      .map((c) => ({ duration: c.duration ?? ("DC" as const), points: c.points }));
+    return {
+      part,
+      limits: partLimits(part, { refCaseTemp: set.refCaseTemp, curves: setCurves }),
+      curveSetId: set.id,
+    };
+  });
+}

@@ -1,0 +1,75 @@
+import { z } from "zod";
+import { optionalQuantity, quantity } from "@/lib/library/part-schema";
+
+// Shared by the project forms and the route handlers. Quantities accept engineering notation ("48 V", "2 ms").
+
+export const projectSchema = z.object({
+  name: z.string().trim().min(1, { message: "Name the project" }).max(120),
+  description: z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(4000).optional()),
+  caseTemp: quantity("°C", { positive: false }).refine((t) => t >= -55 && t <= 200, {
+    message: "Case temperature between −55 °C and 200 °C",
+  }),
+  utilisationLimit: z.coerce
+    .number()
+    .gt(0, { message: "Above 0" })
+    .max(1, { message: "At most 1 (100 %)" })
+    .default(0.8),
+  tjGuard: z.coerce.number().min(0, { message: "0 K or more" }).max(200).default(25),
+  betweenCurves: z.enum(["loglog", "next-longer"]).default("loglog"),
+  ownerId: z.uuid().nullable().optional(),
+});
+
+export type ProjectInput = z.input<typeof projectSchema>;
+
+/** Repetition: a period or a frequency, a count or continuous. */
+const repeatSchema = z
+  .object({
+    period: optionalQuantity("s"),
+    frequency: optionalQuantity("Hz"),
+    count: z.preprocess(
+      (v) => (v === "" || v === null ? undefined : v),
+      z.coerce.number().int({ message: "A whole number" }).min(1).optional(),
+    ),
+  })
+  .transform((r, ctx) => {
+    const period = r.period ?? (r.frequency ? 1 / r.frequency : undefined);
+    if (period === undefined) {
+      ctx.addIssue({ code: "custom", path: ["period"], message: "Give the period or the frequency" });
+      return z.NEVER;
+    }
+    return { period, ...(r.count !== undefined ? { count: r.count } : {}) };
+  });
+
+export const faultCaseSchema = z
+  .object({
+    name: z.string().trim().min(1, { message: "Name the fault case" }).max(120),
+    kind: z.enum(["rect", "triangle"]),
+    v: quantity("V"),
+    i: quantity("A"),
+    duration: quantity("s"),
+    repeat: repeatSchema.nullable().optional(),
+    caseTemp: z.preprocess(
+      (v) => (v === "" ? null : v),
+      quantity("°C", { positive: false }).nullable().optional(),
+    ),
+    notes: z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(2000).optional()),
+    origin: z
+      .object({
+        builder: z.string().max(40),
+        input: z.record(z.string(), z.unknown()),
+        figures: z.record(z.string(), z.unknown()),
+      })
+      .nullable()
+      .optional(),
+  })
+  .superRefine((c, ctx) => {
+    if (c.repeat && !(c.repeat.period > c.duration)) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["repeat", "period"],
+        message: "The period must be longer than the pulse",
+      });
+    }
+  });
+
+export type FaultCaseInput = z.input<typeof faultCaseSchema>;
