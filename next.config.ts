@@ -7,7 +7,7 @@ const nextConfig: NextConfig = {
   // The test command type-checks the whole tree with tsc once; the build need not do it again.
   typescript: { ignoreBuildErrors: true },
   reactStrictMode: true,
-  serverExternalPackages: ["@node-rs/argon2", "s3rver", "maildev"],
+  serverExternalPackages: ["@node-rs/argon2", "s3rver", "maildev", "pdfkit"],
 };
 
 export default nextConfig;

@@ -38,6 +38,8 @@ ensure_system_packages() {
   [ -x "$PG_BIN/initdb" ] || apt_install postgresql-15
   command -v curl >/dev/null || apt_install curl
   if [ "${NEED_CHROMIUM:-0}" = 1 ] && [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
+  # The report tests read PDFs back with poppler's pdftotext and render pages with pdftoppm.
+  if [ "${NEED_CHROMIUM:-0}" = 1 ] && ! command -v pdftotext >/dev/null; then apt_install poppler-utils; fi
 }
 
 ensure_node_modules() {

@@ -420,6 +420,36 @@ export const notices = pgTable(
   (t) => [uniqueIndex().on(t.subjectType, t.subjectId)],
 );
 
+// Decisions ---------------------------------------------------------------------------------------------------
+
+/**
+ * A lead's signed choice of a candidate for a project, with a frozen snapshot of everything the choice rested on
+ * (parts and curve-set versions, policy and temperature, every pulse and result). Never edited: a new decision
+ * supersedes the previous one.
+ */
+export const decisions = pgTable(
+  "decisions",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid()
+      .notNull()
+      .references(() => workspaces.id, { onDelete: "cascade" }),
+    projectId: uuid()
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    chosenPartId: uuid().references(() => parts.id, { onDelete: "set null" }),
+    chosenLabel: text().notNull(),
+    rationale: text().notNull(),
+    snapshot: jsonb().$type<Record<string, unknown>>().notNull(),
+    signedBy: uuid().references(() => users.id, { onDelete: "set null" }),
+    signedByName: text().notNull(),
+    signedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    supersededBy: uuid(),
+    supersededAt: timestamp({ withTimezone: true }),
+  },
+  (t) => [index().on(t.projectId, t.signedAt)],
+);
+
 // Relations -------------------------------------------------------------------------------------------------
 
 export const membershipsRelations = relations(memberships, ({ one }) => ({
@@ -446,3 +476,4 @@ export type Project = typeof projects.$inferSelect;
 export type FaultCase = typeof faultCases.$inferSelect;
 export type MeasuredPulse = typeof measuredPulses.$inferSelect;
 export type Capture = typeof captures.$inferSelect;
+export type Decision = typeof decisions.$inferSelect;

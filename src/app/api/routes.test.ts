@@ -8,6 +8,7 @@ import {
   apiTokens,
   curveSets,
   curves,
+  decisions,
   faultCases,
   invitations,
   measuredPulses,
@@ -75,6 +76,11 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/projects/[id]": async () => ({ id: await project() }),
   "/api/projects/[id]/archive": async () => ({ id: await project() }),
   "/api/projects/[id]/check": async () => ({ id: await project() }),
+  "/api/projects/[id]/decisions": async () => ({ id: await project() }),
+  "/api/projects/[id]/matrix": async () => ({ id: await project() }),
+  "/api/projects/[id]/audit": async () => ({ id: await project() }),
+  "/api/projects/[id]/decisions/[decisionId]": async () => projectWithDecision(),
+  "/api/projects/[id]/decisions/[decisionId]/report": async () => projectWithDecision(),
   "/api/projects/[id]/candidates": async () => ({ id: await project() }),
   "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements": async () => ({ id: await project() }),
@@ -136,6 +142,32 @@ async function project(): Promise<string> {
     .values({ workspaceId: a.id, name: `Route test ${crypto.randomUUID().slice(0, 6)}`, caseTemp: 60 })
     .returning({ id: projects.id });
   return row.id;
+}
+
+async function projectWithDecision(): Promise<{ id: string; decisionId: string }> {
+  const id = await project();
+  const snapshot = {
+    takenAt: new Date().toISOString(),
+    project: { id, name: "Route test", description: null, caseTemp: 60 },
+    policy: { caseTemp: 60, utilisationLimit: 0.8, tjGuard: 25, betweenCurves: "loglog" },
+    candidates: [],
+    pulses: [],
+    results: {},
+    worstByPulse: {},
+    ranking: [],
+  };
+  const [row] = await testDb.db
+    .insert(decisions)
+    .values({
+      workspaceId: a.id,
+      projectId: id,
+      chosenLabel: "none",
+      rationale: "route test",
+      snapshot,
+      signedByName: "lead",
+    })
+    .returning({ id: decisions.id });
+  return { id, decisionId: row.id };
 }
 
 async function partWithCurveSet(): Promise<{ id: string; setId: string }> {

@@ -1,7 +1,7 @@
 import "server-only";
 import type { Project } from "@/db/schema";
 import { evaluate, type ProjectPulse } from "./evaluate";
-import { loadCandidates } from "./projects";
+import { type Candidate, loadCandidates } from "./projects";
 import { faultCasePulse, listFaultCases, listMeasuredPulses, measuredPulse } from "./pulses";
 
 /** The project's margin policy in the engine's terms. */

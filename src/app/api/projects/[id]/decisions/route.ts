@@ -1,0 +1,27 @@
+import { z } from "zod";
+import { route } from "@/lib/auth/guard";
+import { json, parseBody } from "@/lib/http";
+import { listDecisions, signDecision } from "@/lib/projects/decisions";
+import { loadProject } from "@/lib/projects/projects";
+
+const signSchema = z.object({
+  partId: z.string().min(1, { message: "Choose a candidate" }),
+  rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
+});
+
+/** GET /api/projects/:id/decisions: the project's decision history, newest first. */
+export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_req, caller, { id }) => {
+  const project = await loadProject(caller, id);
+  return json({ decisions: await listDecisions(project.id) });
+});
+
+/** POST /api/projects/:id/decisions { partId, rationale }: a lead signs the choice; the evaluation is frozen with it. */
+export const POST = route<{ id: string }>({ action: "decision.sign" }, async (req, caller, { id }) => {
+  const project = await loadProject(caller, id);
+  const input = await parseBody(req, signSchema);
+  const decision = await signDecision(caller, project, input);
+  return json(
+    { decision: { id: decision.id, chosenLabel: decision.chosenLabel, signedAt: decision.signedAt } },
+    { status: 201 },
+  );
+});

@@ -1,0 +1,82 @@
+import { and, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { isUuid } from "@/db/queries/parts";
+import { measuredPulses } from "@/db/schema";
+import { type MemberCaller, route } from "@/lib/auth/guard";
+import { measurementRowSchema } from "@/lib/csv/measurements";
+import { AppError } from "@/lib/errors";
+import { json, parseBody } from "@/lib/http";
+import { loadProject } from "@/lib/projects/projects";
+
+/** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
+async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measurementId: string) {
+  const [row] = isUuid(measurementId)
+    ? await db
+        .select()
+        .from(measuredPulses)
+        .where(and(eq(measuredPulses.projectId, projectId), eq(measuredPulses.id, measurementId)))
+    : [];
+  if (!row) throw new AppError("not_found:measurement", "No such measured pulse in this project.");
+  const mayChangeAny = caller.role === "lead" || caller.role === "admin";
+  if (row.createdBy !== caller.user.id && !mayChangeAny) {
+    throw new AppError("forbidden:not-yours", "Only its author or a lead can change a measured pulse.");
+  }
+  return row;
+}
+
+/** PATCH /api/projects/:id/measurements/:measurementId: corrects a measured pulse (own, or any for leads). */
+export const PATCH = route<{ id: string; measurementId: string }>(
+  { action: "measurement.write" },
+  async (req, caller, { id, measurementId }) => {
+    const project = await loadProject(caller, id);
+    const existing = await loadOwnMeasurement(caller, project.id, measurementId);
+    const values = await parseBody(req, measurementRowSchema);
+    const [row] = await db
+      .update(measuredPulses)
+      .set({
+        label: values.label,
+        kind: values.kind,
+        v: values.v,
+        i: values.i,
+        duration: values.duration,
+        repeatPeriod: values.repeat?.period ?? null,
+        repeatCount: values.repeat?.count ?? null,
+      })
+      .where(eq(measuredPulses.id, existing.id))
+      .returning();
+    await recordAudit({
+      workspaceId: caller.workspaceId,
+      actorId: caller.user.id,
+      action: "measurement.updated",
+      subjectType: "project",
+      subjectId: project.id,
+      details: { measurementId: row.id },
+    });
+    return json({ measurement: row });
+  },
+);
+
+/** DELETE /api/projects/:id/measurements/:measurementId: own rows, or any for leads and admins. */
+export const DELETE = route<{ id: string; measurementId: string }>(
+  { action: "measurement.write" },
+  async (_req, caller, { id, measurementId }) => {
+    const project = await loadProject(caller, id);
+    const existing = await loadOwnMeasurement(caller, project.id, measurementId);
+    await db.transaction(async (tx) => {
+      await tx.delete(measuredPulses).where(eq(measuredPulses.id, existing.id));
+      await recordAudit(
+        {
+          workspaceId: caller.workspaceId,
+          actorId: caller.user.id,
+          action: "measurement.deleted",
+          subjectType: "project",
+          subjectId: project.id,
+          details: { measurementId: existing.id, label: existing.label },
+        },
+        tx,
+      );
+    });
+    return json({ status: "ok" });
+  },
+);

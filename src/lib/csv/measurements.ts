@@ -1,0 +1,513 @@
+// Measured pulses pasted by a technician from a spreadsheet or a scope's measurement table: one pulse per row,
+// read into a preview where every row is shown, valid or not, with the problems of its own cells. Decisions:
+// - separators, quotes, CRLF, blank rows and decimal commas are read as for uploads (text.ts, cell.ts); blank rows
+//   are skipped, and a row keeps its source number (row 1 is the first pasted line);
+// - the first non-blank row is a header unless its first non-empty cell starts with a number; without a header
+//   the columns are V, I, width, shape, period, count in that order and further columns are ignored;
+// - header names are compared in lower case without spaces or punctuation ("Pulse width" = "pulse_width"); a
+//   voltage or current name may carry "max", "peak" or "pk" ("Vds max", "I_peak", "Ipk");
+// - "T" is the repetition period, never the pulse width; "Id"/"ID" is the drain current unless another column
+//   already is a current, then it is the label ("I_D" with a separator is always the current); "Pulse" is the
+//   label, "Pulse [us]" (with a unit) the width;
+// - columns whose name is not known are ignored, even with a unit ("Mean [A]", "Std dev"), and listed in
+//   `columns.ignored`; two columns for the same quantity are an error (reading the wrong one would pass a pulse);
+// - a unit in the header scales bare numbers of its column, with one exponent ("80" in "[us]" is exactly 8e-5); a
+//   value with its own unit ("48 V", "150 µs", "2 kHz") is read as written; bare times without a header unit are
+//   seconds, bare frequencies hertz;
+// - repetition: a period, or a frequency turned into period = 1/f (both given: they must agree within 1 %, and the
+//   period is used); the count is a whole number ≥ 1, empty, "cont", "continuous", "inf" or "∞" meaning a
+//   continuous train; without period or frequency a row is a single pulse (a count above 1 is then an error);
+// - values that cannot be read are NaN in the row, which carries the reason in `errors`;
+// - at most MAX_MEASUREMENT_ROWS pulse rows are read; beyond, a file-level error says which rows were left out.
+import { z } from "zod";
+import type { Repeat } from "@/lib/soa/types";
+import { formatQuantity, parseQuantity } from "@/lib/soa/units";
+import { type CellValue, decimalPoint, readNumber, readWidth } from "./cell";
+import { splitHeader, unitScale } from "./header";
+import { type CsvIssue, columnLetter, createIssueList, csvIssue, type IssueList } from "./issues";
+import { type Delimiter, readTable } from "./text";
+
+/** Most pulse rows read from one paste. */
+export const MAX_MEASUREMENT_ROWS = 1000;
+
+const MAX_LABEL_LENGTH = 80;
+/** Largest count a database integer holds; longer trains are continuous in all but name. */
+const MAX_PULSE_COUNT = 2_147_483_647;
+/** Relative disagreement allowed between a period and 1/frequency given on the same row (display rounding). */
+const PERIOD_AGREEMENT = 0.01;
+
+export type MeasurementField =
+  | "label"
+  | "voltage"
+  | "current"
+  | "width"
+  | "shape"
+  | "period"
+  | "frequency"
+  | "count";
+
+/** A column that was not read, and why. `header` is the header cell, or the column letter where none. */
+export interface IgnoredColumn {
+  index: number;
+  header: string;
+  note: string;
+}
+
+/** 0-based column index of each field found, and the columns left aside. */
+export interface MeasurementColumns extends Partial<Record<MeasurementField, number>> {
+  ignored: IgnoredColumn[];
+}
+
+/** One pasted pulse in SI units. Unreadable numbers are NaN; `errors` then says why. */
+export interface MeasurementRow {
+  /** 1-based row of the pasted text. */
+  row: number;
+  label: string;
+  kind: "rect" | "triangle";
+  v: number;
+  i: number;
+  duration: number;
+  repeat?: Repeat;
+  errors: CsvIssue[];
+}
+
+export interface MeasurementPaste {
+  rows: MeasurementRow[];
+  /** Problems of the paste as a whole: unreadable text, a header without the needed columns, no rows, too many. */
+  errors: CsvIssue[];
+  hasHeader: boolean;
+  columns: MeasurementColumns;
+}
+
+const NAMES: Readonly<Record<MeasurementField, readonly string[]>> = {
+  label: ["label", "name", "tag", "pulsename", "pulseid", "acq", "acquisition"],
+  voltage: ["v", "u", "vds", "uds", "vce", "voltage", "drainsourcevoltage", "collectoremittervoltage"],
+  current: ["i", "current", "draincurrent", "ic", "collectorcurrent"],
+  width: ["width", "pulsewidth", "duration", "pulseduration", "pulselength", "tp", "tpulse", "time", "pw"],
+  shape: ["shape", "pulseshape", "kind", "type", "form"],
+  period: ["period", "t", "repperiod", "repetitionperiod", "trep", "tperiod"],
+  frequency: ["f", "freq", "frequency", "reprate", "repetitionrate", "repfreq", "repetitionfrequency", "prf"],
+  count: ["count", "n", "pulses", "npulses", "pulsecount", "numberofpulses", "repetitions"],
+};
+
+const HEADERLESS: readonly MeasurementField[] = ["voltage", "current", "width", "shape", "period", "count"];
+const HEADERLESS_NAME: Readonly<Partial<Record<MeasurementField, string>>> = {
+  voltage: "V",
+  current: "I",
+  width: "width",
+  shape: "shape",
+  period: "period",
+  count: "count",
+};
+const REQUIRED = ["voltage", "current", "width"] as const;
+const EXAMPLES: Readonly<Record<(typeof REQUIRED)[number], string>> = {
+  voltage: "V, V_DS, Vds, U or voltage",
+  current: "I, I_D, Id, I_peak or current",
+  width: "width, duration, t_p or pulse width",
+};
+
+const SHAPES: Readonly<Record<string, "rect" | "triangle">> = {
+  rect: "rect",
+  rectangle: "rect",
+  rectangular: "rect",
+  square: "rect",
+  tri: "triangle",
+  triangle: "triangle",
+  triangular: "triangle",
+  ramp: "triangle",
+};
+const CONTINUOUS = new Set(["cont", "continuous", "inf", "∞"]);
+const BARE = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+const NUMERIC_START = /^[+-]?(?:\d|[.,]\d)/;
+
+interface Column {
+  index: number;
+  /** How messages name the column: the header cell, or the field's name without a header. */
+  name: string;
+  scale: number;
+}
+
+type Layout = Partial<Record<MeasurementField, Column>>;
+
+function key(name: string): string {
+  return name.toLowerCase().replace(/[^a-z0-9]/g, "");
+}
+
+/** The field a header name stands for, "id" where it may be the label or the drain current, or null. */
+function fieldOfName(name: string, unit: string | null): MeasurementField | "id" | null {
+  if (/^i[\s_.-]+d\b/i.test(name)) return "current";
+  const plain = key(name);
+  if (plain === "id") return unit === null ? "id" : "current";
+  if (plain === "pulse") return unit === null ? "label" : "width";
+  for (const field of Object.keys(NAMES) as MeasurementField[])
+    if (NAMES[field].includes(plain)) return field;
+  const bare = plain.replace(/^(?:max|peak|pk)(?=.)/, "").replace(/(?<=.)(?:max|peak|pk)$/, "");
+  if (bare === "id" || NAMES.current.includes(bare)) return "current";
+  if (NAMES.voltage.includes(bare)) return "voltage";
+  return null;
+}
+
+/** "khz" → "kHz", "HZ" → "Hz": people write hertz in any case; the prefix m stays milli. */
+function normaliseHertz(text: string): string {
+  return text.replace(/([kK]?)hz$/i, (_, prefix: string) => `${prefix.toLowerCase()}Hz`);
+}
+
+function columnScale(field: MeasurementField, unit: string | null): CellValue<number> {
+  if (unit === null) return { ok: true, value: 1 };
+  if (field === "voltage" || field === "current") {
+    const scaled = unitScale(unit, field);
+    return scaled.ok ? { ok: true, value: scaled.scale } : scaled;
+  }
+  if (field === "width" || field === "period") {
+    const scaled = unitScale(unit, "width");
+    return scaled.ok ? { ok: true, value: scaled.scale } : scaled;
+  }
+  if (field === "frequency") {
+    const parsed = parseQuantity(`1 ${normaliseHertz(unit.trim())}`, "Hz");
+    if (parsed.ok && typeof parsed.value === "number") return { ok: true, value: parsed.value };
+    return { ok: false, reason: `unit '${unit}' is not understood (expected Hz, with a prefix if needed)` };
+  }
+  return { ok: true, value: 1 };
+}
+
+function readHeader(cells: readonly string[], row: number, errors: IssueList) {
+  const layout: Layout = {};
+  const ignored: IgnoredColumn[] = [];
+  const unnamed: number[] = [];
+  const units = new Map<number, string | null>();
+  let undecided: number | null = null;
+  const take = (field: MeasurementField, index: number) => {
+    const earlier = layout[field];
+    if (earlier !== undefined) {
+      errors.add(
+        row,
+        cells[index],
+        `a second ${field} column besides '${earlier.name}'; remove or rename one of them`,
+      );
+    } else layout[field] = { index, name: cells[index], scale: 1 };
+  };
+  cells.forEach((cell, index) => {
+    if (cell === "") {
+      unnamed.push(index);
+      return;
+    }
+    const { name, unit } = splitHeader(cell);
+    units.set(index, unit);
+    const field = fieldOfName(name, unit);
+    if (field === null) ignored.push({ index, header: cell, note: "not a column Pulsefence reads" });
+    else if (field === "id" && undecided === null) undecided = index;
+    else take(field === "id" ? "current" : field, index);
+  });
+  if (undecided !== null) {
+    if (layout.current === undefined) take("current", undecided);
+    else if (layout.label === undefined) take("label", undecided);
+    else ignored.push({ index: undecided, header: cells[undecided], note: "label and current are taken" });
+  }
+  for (const [field, column] of Object.entries(layout) as [MeasurementField, Column][]) {
+    const scale = columnScale(field, units.get(column.index) ?? null);
+    if (scale.ok) column.scale = scale.value;
+    else errors.add(row, column.name, scale.reason);
+  }
+  for (const field of REQUIRED) {
+    if (layout[field] !== undefined) continue;
+    const period =
+      field === "width" && layout.period !== undefined
+        ? `; '${layout.period.name}' is read as the repetition period`
+        : "";
+    errors.add(row, null, `no ${field} column: name one ${EXAMPLES[field]}${period}`);
+  }
+  return { layout, ignored, unnamed };
+}
+
+/**
+ * A bare number times a power-of-ten header scale, with one exponent as the engine's parser does, so that "80" in
+ * a "[us]" column is the double nearest 8e-5 rather than 80 × 1e-6; other readings are returned as they are.
+ */
+function exactly(
+  read: CellValue<number>,
+  cell: string,
+  scale: number,
+  delimiter: Delimiter,
+): CellValue<number> {
+  const text = decimalPoint(cell, delimiter);
+  if (!read.ok || scale === 1 || text === null || !BARE.test(text)) return read;
+  const exponent = Math.round(Math.log10(scale));
+  if (Number(`1e${exponent}`) !== scale) return read;
+  const [mantissa, own = "0"] = text.split(/[eE]/);
+  return { ok: true, value: Number(`${mantissa}e${Number(own) + exponent}`) };
+}
+
+function readTime(cell: string, scale: number, delimiter: Delimiter): CellValue<number> {
+  const read = readWidth(cell, scale, delimiter);
+  if (read.ok) {
+    return read.value === "DC"
+      ? { ok: false, reason: `'${cell}': a measured pulse needs a time, not DC` }
+      : exactly({ ok: true, value: read.value }, cell, scale, delimiter);
+  }
+  if (!read.reason.startsWith(`'${cell}' is not a pulse width`)) return read;
+  return { ok: false, reason: `'${cell}' is not a time (write for example 150 µs, 2.5 ms or 1e-3)` };
+}
+
+function positive(cell: string, value: number): CellValue<number> {
+  if (!Number.isFinite(value)) return { ok: false, reason: `'${cell}' is not a finite number` };
+  if (!(value > 0)) return { ok: false, reason: `'${cell}' must be greater than 0` };
+  return { ok: true, value };
+}
+
+function readFrequency(cell: string, scale: number, delimiter: Delimiter): CellValue<number> {
+  const text = decimalPoint(cell, delimiter);
+  if (text === null) return { ok: false, reason: `'${cell}' is not a number (use '.' for decimals)` };
+  if (BARE.test(text)) return exactly(positive(cell, Number(text) * scale), cell, scale, delimiter);
+  const parsed = parseQuantity(normaliseHertz(text), "Hz");
+  if (!parsed.ok) {
+    return {
+      ok: false,
+      reason:
+        parsed.reason === "expected a number"
+          ? `'${cell}' is not a frequency`
+          : `'${cell}': ${parsed.reason}`,
+    };
+  }
+  return positive(cell, parsed.value as number);
+}
+
+type Count = { ok: true; value: number | "continuous" | null } | { ok: false; reason: string };
+
+function readCount(cell: string): Count {
+  if (cell === "") return { ok: true, value: null };
+  if (CONTINUOUS.has(cell.toLowerCase())) return { ok: true, value: "continuous" };
+  const value = BARE.test(cell) ? Number(cell) : Number.NaN;
+  if (!Number.isInteger(value)) {
+    return {
+      ok: false,
+      reason: `'${cell}' is not a whole number of pulses (or 'cont' for a continuous train)`,
+    };
+  }
+  if (value < 1) return { ok: false, reason: `'${cell}': the count must be 1 or more` };
+  if (value > MAX_PULSE_COUNT) {
+    return {
+      ok: false,
+      reason: `'${cell}' is too many pulses to store; leave the cell empty for a continuous train`,
+    };
+  }
+  return { ok: true, value };
+}
+
+function readRow(
+  cells: readonly string[],
+  row: number,
+  position: number,
+  layout: Layout,
+  delimiter: Delimiter,
+): MeasurementRow {
+  const errors: CsvIssue[] = [];
+  const cellOf = (column: Column | undefined) => (column === undefined ? "" : (cells[column.index] ?? ""));
+  const value = (column: Column | undefined, read: CellValue<number>): number => {
+    if (read.ok) return read.value;
+    errors.push(csvIssue(row, column?.name ?? null, read.reason));
+    return Number.NaN;
+  };
+  const { voltage, current, width, period, frequency, count } = layout;
+  const amount = (column: Column | undefined, quantity: "voltage" | "current") => {
+    const cell = cellOf(column);
+    const scale = column?.scale ?? 1;
+    return value(column, exactly(readNumber(cell, quantity, scale, delimiter), cell, scale, delimiter));
+  };
+  const v = amount(voltage, "voltage");
+  const i = amount(current, "current");
+  const duration = value(width, readTime(cellOf(width), width?.scale ?? 1, delimiter));
+
+  const label = cellOf(layout.label) || `P${position}`;
+  if (label.length > MAX_LABEL_LENGTH) {
+    errors.push(
+      csvIssue(
+        row,
+        layout.label!.name,
+        `the label has ${label.length} characters; the limit is ${MAX_LABEL_LENGTH}`,
+      ),
+    );
+  }
+
+  let kind: "rect" | "triangle" = "rect";
+  const shapeCell = cellOf(layout.shape);
+  if (shapeCell !== "") {
+    const shape = SHAPES[shapeCell.toLowerCase()];
+    if (shape === undefined) {
+      errors.push(
+        csvIssue(row, layout.shape!.name, `'${shapeCell}' is not a pulse shape (write rect or triangle)`),
+      );
+    } else kind = shape;
+  }
+
+  const periodCell = cellOf(period);
+  const frequencyCell = cellOf(frequency);
+  let repeatPeriod: number | null = null;
+  let source: Column | undefined;
+  if (periodCell !== "") {
+    repeatPeriod = value(period, readTime(periodCell, period!.scale, delimiter));
+    source = period;
+  }
+  if (frequencyCell !== "") {
+    const f = value(frequency, readFrequency(frequencyCell, frequency!.scale, delimiter));
+    if (repeatPeriod === null) {
+      repeatPeriod = 1 / f;
+      source = frequency;
+    } else if (Math.abs(repeatPeriod - 1 / f) > PERIOD_AGREEMENT * repeatPeriod) {
+      errors.push(
+        csvIssue(
+          row,
+          frequency!.name,
+          `'${frequencyCell}' means a period of ${formatQuantity(1 / f, "s")}, which disagrees with ` +
+            `'${periodCell}' in ${period!.name}; keep one of them`,
+        ),
+      );
+    }
+  }
+  if (
+    repeatPeriod !== null &&
+    Number.isFinite(repeatPeriod) &&
+    Number.isFinite(duration) &&
+    !(repeatPeriod > duration)
+  ) {
+    errors.push(
+      csvIssue(
+        row,
+        source!.name,
+        `the period (${formatQuantity(repeatPeriod, "s")}) must be longer than the pulse (${formatQuantity(duration, "s")})`,
+      ),
+    );
+  }
+
+  const counted = readCount(cellOf(count));
+  let repeat: Repeat | undefined;
+  if (!counted.ok) errors.push(csvIssue(row, count!.name, counted.reason));
+  else if (repeatPeriod !== null) {
+    repeat =
+      typeof counted.value === "number"
+        ? { period: repeatPeriod, count: counted.value }
+        : { period: repeatPeriod };
+  } else if (counted.value === "continuous" || (counted.value !== null && counted.value > 1)) {
+    const what = counted.value === "continuous" ? "a continuous train needs" : `${counted.value} pulses need`;
+    errors.push(csvIssue(row, count!.name, `${what} a period or a frequency to repeat at`));
+  }
+
+  return { row, label, kind, v, i, duration, ...(repeat === undefined ? {} : { repeat }), errors };
+}
+
+function startsWithNumber(cells: readonly string[]): boolean {
+  return NUMERIC_START.test(cells.find((cell) => cell !== "") ?? "");
+}
+
+/** Reads pasted pulse rows into a preview (see the rules at the top of this file). Never throws. */
+export function parseMeasurementPaste(text: string): MeasurementPaste {
+  const empty = (errors: CsvIssue[], hasHeader = false): MeasurementPaste => ({
+    rows: [],
+    errors,
+    hasHeader,
+    columns: { ignored: [] },
+  });
+  const read = readTable(text);
+  if (!read.ok) return empty(read.issues.list());
+  const { rows: table, delimiter } = read.table;
+  const first = table.findIndex((cells) => cells.length > 0);
+  if (first < 0) return empty([csvIssue(null, null, "nothing was pasted")]);
+  const widest = table.reduce((most, cells) => Math.max(most, cells.length), 0);
+  if (widest <= 1) {
+    return empty([
+      csvIssue(null, null, "only one column was found: separate the columns by tabs, commas or semicolons"),
+    ]);
+  }
+
+  const errors = createIssueList();
+  const hasHeader = !startsWithNumber(table[first]);
+  let layout: Layout;
+  let ignored: IgnoredColumn[];
+  let unnamed: number[];
+  if (hasHeader) {
+    ({ layout, ignored, unnamed } = readHeader(table[first], first + 1, errors));
+  } else {
+    layout = {};
+    HEADERLESS.forEach((field, index) => {
+      layout[field] = { index, name: HEADERLESS_NAME[field]!, scale: 1 };
+    });
+    ignored = [];
+    unnamed = [];
+  }
+  const known = new Set(Object.values(layout).map((column) => column.index));
+  for (let index = hasHeader ? table[first].length : HEADERLESS.length; index < widest; index++) {
+    if (!known.has(index)) unnamed.push(index);
+  }
+  if (errors.count > 0) return { ...empty(errors.list(), hasHeader), columns: columnsOf(layout, ignored) };
+
+  const rows: MeasurementRow[] = [];
+  const filled = new Set<number>();
+  let left = 0;
+  for (let k = hasHeader ? first + 1 : first; k < table.length; k++) {
+    const cells = table[k];
+    if (cells.length === 0) continue;
+    if (rows.length === MAX_MEASUREMENT_ROWS) {
+      left++;
+      continue;
+    }
+    for (const index of unnamed) if ((cells[index] ?? "") !== "") filled.add(index);
+    rows.push(readRow(cells, k + 1, rows.length + 1, layout, delimiter));
+  }
+  for (const index of unnamed.filter((u) => filled.has(u)).sort((a, b) => a - b)) {
+    const note = hasHeader
+      ? "no header names this column"
+      : "without a header only V, I, width, shape, period and count are read";
+    ignored.push({ index, header: columnLetter(index), note });
+  }
+  if (rows.length === 0) errors.add(null, null, "no pulse rows below the header");
+  if (left > 0) {
+    const last = rows[rows.length - 1].row;
+    errors.add(
+      null,
+      null,
+      `${left} more pulse ${left === 1 ? "row" : "rows"} after row ${last} were left out: ` +
+        `at most ${MAX_MEASUREMENT_ROWS.toLocaleString("en-GB")} are read from one paste`,
+    );
+  }
+  return { rows, errors: errors.list(), hasHeader, columns: columnsOf(layout, ignored) };
+}
+
+function columnsOf(layout: Layout, ignored: IgnoredColumn[]): MeasurementColumns {
+  const columns: MeasurementColumns = { ignored: [...ignored].sort((a, b) => a.index - b.index) };
+  for (const [field, column] of Object.entries(layout) as [MeasurementField, Column][]) {
+    columns[field] = column.index;
+  }
+  return columns;
+}
+
+const measuredValue = (what: string) =>
+  z.number({ error: `${what} must be a finite number` }).gt(0, { error: `${what} must be greater than 0` });
+
+/** One measured pulse as the save route accepts it: SI units, a period longer than the pulse. */
+export const measurementRowSchema = z
+  .object({
+    label: z
+      .string({ error: "the label must be text" })
+      .trim()
+      .min(1, { error: "the label must not be empty" })
+      .max(MAX_LABEL_LENGTH, { error: `the label must be at most ${MAX_LABEL_LENGTH} characters` }),
+    kind: z.enum(["rect", "triangle"], { error: 'the shape must be "rect" or "triangle"' }),
+    v: measuredValue("the voltage"),
+    i: measuredValue("the current"),
+    duration: measuredValue("the pulse width"),
+    repeat: z
+      .object({
+        period: measuredValue("the period"),
+        count: z
+          .int({ error: "the count must be a whole number" })
+          .min(1, { error: "the count must be 1 or more" })
+          .max(MAX_PULSE_COUNT, { error: "the count is too large; leave it out for a continuous train" })
+          .optional(),
+      })
+      .optional(),
+  })
+  .refine((row) => row.repeat === undefined || row.repeat.period > row.duration, {
+    path: ["repeat", "period"],
+    error: "the period must be longer than the pulse width",
+  });
+
+export type MeasurementInput = z.infer<typeof measurementRowSchema>;

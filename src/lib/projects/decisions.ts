@@ -1,0 +1,215 @@
+import "server-only";
+import { isDeepStrictEqual } from "node:util";
+import { and, desc, eq, isNull, ne } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { isUuid } from "@/db/queries/parts";
+import { type Decision, decisions, type Project } from "@/db/schema";
+import type { MemberCaller } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import type { PartLimits, PulseResult, Verdict } from "@/lib/soa/types";
+import { checkProject } from "./check";
+import { rankCandidates } from "./matrix";
+import { type Candidate, loadCandidates } from "./projects";
+
+export type Checked = Awaited<ReturnType<typeof checkProject>>;
+
+/** Everything a decision rested on, frozen as JSON: later library or project edits never change it. */
+export interface DecisionSnapshot {
+  takenAt: string;
+  project: { id: string; name: string; description: string | null; caseTemp: number };
+  policy: Checked["policy"];
+  candidates: (Checked["candidates"][number] & {
+    part: {
+      package: string;
+      technology: string;
+      vdsMax: number;
+      idPulseMax: number | null;
+      rdsOn: number | null;
+      tjMax: number;
+      rthJc: number | null;
+      datasheetRevision: string | null;
+    };
+    limits: PartLimits | null;
+  })[];
+  pulses: Checked["pulses"];
+  results: Checked["results"];
+  worstByPulse: Checked["worstByPulse"];
+  ranking: ReturnType<typeof rankCandidates>;
+}
+
+export function buildSnapshot(project: Project, candidates: Candidate[], checked: Checked): DecisionSnapshot {
+  return {
+    takenAt: new Date().toISOString(),
+    project: {
+      id: project.id,
+      name: project.name,
+      description: project.description,
+      caseTemp: project.caseTemp,
+    },
+    policy: checked.policy,
+    candidates: checked.candidates.map((c) => {
+      const full = candidates.find((x) => x.part.id === c.partId)!;
+      return {
+        ...c,
+        part: {
+          package: full.part.package,
+          technology: full.part.technology,
+          vdsMax: full.part.vdsMax,
+          idPulseMax: full.part.idPulseMax,
+          rdsOn: full.part.rdsOn,
+          tjMax: full.part.tjMax,
+          rthJc: full.part.rthJc,
+          datasheetRevision: full.part.datasheetRevision,
+        },
+        limits: full.limits,
+      };
+    }),
+    pulses: checked.pulses,
+    results: checked.results,
+    worstByPulse: checked.worstByPulse,
+    ranking: rankCandidates(
+      checked.candidates,
+      checked.pulses.map((p) => p.id),
+      checked.results,
+    ),
+  };
+}
+
+/** The project's current check, and the snapshot it would freeze now. */
+export async function snapshotNow(project: Project): Promise<DecisionSnapshot> {
+  const candidates = await loadCandidates(project.id);
+  const checked = await checkProject(project, { candidates });
+  return buildSnapshot(project, candidates, checked);
+}
+
+/** Records a lead's decision with its frozen snapshot; the previous standing decision is superseded. */
+export async function signDecision(
+  caller: MemberCaller,
+  project: Project,
+  input: { partId: string; rationale: string },
+): Promise<Decision> {
+  const snapshot = await snapshotNow(project);
+  const chosen = snapshot.candidates.find((c) => c.partId === input.partId);
+  if (!chosen) throw new AppError("invalid:candidate", "Choose one of the project's candidates.");
+  return db.transaction(async (tx) => {
+    const [decision] = await tx
+      .insert(decisions)
+      .values({
+        workspaceId: caller.workspaceId,
+        projectId: project.id,
+        chosenPartId: chosen.partId,
+        chosenLabel: `${chosen.maker} ${chosen.partNumber}`,
+        rationale: input.rationale,
+        snapshot: snapshot as unknown as Record<string, unknown>,
+        signedBy: caller.user.id,
+        signedByName: caller.user.name,
+      })
+      .returning();
+    await tx
+      .update(decisions)
+      .set({ supersededBy: decision.id, supersededAt: decision.signedAt })
+      .where(
+        and(
+          eq(decisions.projectId, project.id),
+          isNull(decisions.supersededBy),
+          ne(decisions.id, decision.id),
+        ),
+      );
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "decision.signed",
+        subjectType: "project",
+        subjectId: project.id,
+        details: { decisionId: decision.id, chosen: decision.chosenLabel },
+      },
+      tx,
+    );
+    return decision;
+  });
+}
+
+export function listDecisions(projectId: string) {
+  return db
+    .select({
+      id: decisions.id,
+      chosenPartId: decisions.chosenPartId,
+      chosenLabel: decisions.chosenLabel,
+      rationale: decisions.rationale,
+      signedByName: decisions.signedByName,
+      signedAt: decisions.signedAt,
+      supersededBy: decisions.supersededBy,
+      supersededAt: decisions.supersededAt,
+    })
+    .from(decisions)
+    .where(eq(decisions.projectId, projectId))
+    .orderBy(desc(decisions.signedAt));
+}
+
+export async function loadDecision(projectId: string, decisionId: string): Promise<Decision> {
+  const [row] = isUuid(decisionId)
+    ? await db
+        .select()
+        .from(decisions)
+        .where(and(eq(decisions.projectId, projectId), eq(decisions.id, decisionId)))
+    : [];
+  if (!row) throw new AppError("not_found:decision", "No such decision in this project.");
+  return row;
+}
+
+export interface DriftItem {
+  partId: string;
+  pulseId: string;
+  label: string;
+  frozen: { verdict: Verdict; utilisation: number | null } | null;
+  now: { verdict: Verdict; utilisation: number | null } | null;
+}
+
+export interface Drift {
+  policyChanged: boolean;
+  caseTempChanged: { frozen: number; now: number } | null;
+  curveSetsChanged: { partId: string; label: string }[];
+  pulsesAdded: string[];
+  pulsesRemoved: string[];
+  results: DriftItem[];
+}
+
+const brief = (r: PulseResult | undefined) => (r ? { verdict: r.verdict, utilisation: r.utilisation } : null);
+
+/** What would differ if the project were checked now: settings, curve versions, pulses, and changed results. */
+export function computeDrift(frozen: DecisionSnapshot, now: DecisionSnapshot): Drift {
+  const label = (partId: string, pulseId: string, snap: DecisionSnapshot) => {
+    const c = snap.candidates.find((x) => x.partId === partId);
+    const p = snap.pulses.find((x) => x.id === pulseId);
+    return `${c?.partNumber ?? "removed part"} × ${p?.name ?? "removed pulse"}`;
+  };
+  const results: DriftItem[] = [];
+  const partIds = new Set([...frozen.candidates, ...now.candidates].map((c) => c.partId));
+  const pulseIds = new Set([...frozen.pulses, ...now.pulses].map((p) => p.id));
+  for (const partId of partIds) {
+    for (const pulseId of pulseIds) {
+      const a = brief(frozen.results[partId]?.[pulseId]);
+      const b = brief(now.results[partId]?.[pulseId]);
+      if (!isDeepStrictEqual(a, b)) {
+        results.push({ partId, pulseId, label: label(partId, pulseId, b ? now : frozen), frozen: a, now: b });
+      }
+    }
+  }
+  const { caseTemp: frozenTemp, ...frozenPolicy } = frozen.policy;
+  const { caseTemp: nowTemp, ...nowPolicy } = now.policy;
+  return {
+    policyChanged: !isDeepStrictEqual(frozenPolicy, nowPolicy),
+    caseTempChanged: frozenTemp !== nowTemp ? { frozen: frozenTemp, now: nowTemp } : null,
+    curveSetsChanged: frozen.candidates
+      .filter((c) => {
+        const current = now.candidates.find((x) => x.partId === c.partId);
+        return current && !isDeepStrictEqual(current.limits, c.limits);
+      })
+      .map((c) => ({ partId: c.partId, label: `${c.maker} ${c.partNumber}` })),
+    pulsesAdded: now.pulses.filter((p) => !frozen.pulses.some((f) => f.id === p.id)).map((p) => p.name),
+    pulsesRemoved: frozen.pulses.filter((p) => !now.pulses.some((f) => f.id === p.id)).map((p) => p.name),
+    results,
+  };
+}

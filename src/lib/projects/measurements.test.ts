@@ -1,0 +1,206 @@
+// Bench evidence: paste → preview verdicts → save in one transaction → one e-mail per failing pulse.
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DELETE as deleteMeasurement } from "@/app/api/projects/[id]/measurements/[measurementId]/route";
+import { POST as previewPost } from "@/app/api/projects/[id]/measurements/preview/route";
+import { POST as savePost } from "@/app/api/projects/[id]/measurements/route";
+import { curveSets, curves, measuredPulses, parts, projectCandidates, projects } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import {
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { readInbox, waitForMail } from "@/test/services";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+let ws: TestWorkspace;
+let projectId: string;
+
+beforeAll(async () => {
+  ws = await createTestWorkspace("Bench");
+  const { db } = testDb;
+  const [project] = await db
+    .insert(projects)
+    .values({
+      workspaceId: ws.id,
+      name: `Bench evidence ${crypto.randomUUID().slice(0, 4)}`,
+      caseTemp: 25,
+      ownerId: ws.members.engineer.id,
+    })
+    .returning();
+  projectId = project.id;
+  const [part] = await db
+    .insert(parts)
+    .values({
+      workspaceId: ws.id,
+      partNumber: "BN-1",
+      maker: "Bench Devices",
+      technology: "si-mosfet",
+      package: "TO-220",
+      vdsMax: 60,
+      tjMax: 175,
+    })
+    .returning();
+  const [set] = await db
+    .insert(curveSets)
+    .values({
+      workspaceId: ws.id,
+      partId: part.id,
+      objectKey: `test/${crypto.randomUUID()}`,
+      fileName: "s.csv",
+      size: 1,
+      sha256: "0".repeat(64),
+      shape: "long",
+      active: true,
+    })
+    .returning();
+  await db.insert(curves).values([
+    {
+      curveSetId: set.id,
+      position: 0,
+      duration: 1e-3,
+      points: [
+        [1, 100],
+        [10, 40],
+        [60, 5],
+      ],
+    },
+    {
+      curveSetId: set.id,
+      position: 1,
+      duration: 1e-2,
+      points: [
+        [1, 60],
+        [10, 16],
+        [60, 2],
+      ],
+    },
+  ]);
+  await db.insert(projectCandidates).values({ projectId, partId: part.id });
+});
+
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+const paste = [
+  "label\tV_DS [V]\tI_D [A]\tt_p",
+  "P1\t12\t5\t1 ms",
+  "P2\t24\t40\t1 ms",
+  "P3\t30\tabc\t1 ms",
+  "P4\t48\t1\t5 ms",
+  "P5\t20\t10\t2 ms",
+].join("\r\n");
+
+describe("measured pulses", () => {
+  it("previews every row with its problems and its verdict on each candidate, saving nothing", async () => {
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const res = await call(h(previewPost), "POST", {
+      cookie,
+      params: { id: projectId },
+      body: { text: paste },
+    });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.rows).toHaveLength(5);
+    const [candidate] = body.candidates;
+    const verdict = (label: string) =>
+      body.rows.find((r: { label: string }) => r.label === label).verdicts[candidate.partId]?.verdict;
+    expect(verdict("P1")).toBe("pass");
+    expect(verdict("P2")).toBe("fail");
+    expect(body.rows.find((r: { label: string }) => r.label === "P3").errors[0].message).toMatch(
+      /row 4, column I_D \[A\]/,
+    );
+    expect(
+      await testDb.db.select().from(measuredPulses).where(eq(measuredPulses.projectId, projectId)),
+    ).toEqual([]);
+  });
+
+  it("saves the rows in one transaction, attributed, and e-mails the owner exactly once per failing pulse", async () => {
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const before = (await readInbox()).length;
+    const rows = [
+      { label: "Q1", kind: "rect", v: 12, i: 5, duration: 1e-3 },
+      { label: "Q2", kind: "rect", v: 24, i: 40, duration: 1e-3 },
+    ];
+    const res = await call(h(savePost), "POST", {
+      cookie,
+      params: { id: projectId },
+      body: { rows, note: "after rework", boardSerial: "TW-0042", probe: "100:1 diff, 30 A clamp" },
+    });
+    expect(res.status).toBe(201);
+    const body = await res.json();
+    expect(body.saved).toHaveLength(2);
+    expect(body.notified).toBe(1);
+    const mail = await waitForMail(ws.members.engineer.email);
+    expect(mail.subject).toContain('"Q2" fails');
+    const link = /http\S+\/projects\/[0-9a-f-]+\?pulse=[0-9a-f-]+/.exec(mail.text)?.[0];
+    expect(link).toContain(`/projects/${projectId}?pulse=${body.saved[1]}`);
+    const saved = await testDb.db
+      .select()
+      .from(measuredPulses)
+      .where(eq(measuredPulses.projectId, projectId));
+    expect(saved.map((r) => [r.label, r.createdBy, r.boardSerial])).toEqual([
+      ["Q1", ws.members.technician.id, "TW-0042"],
+      ["Q2", ws.members.technician.id, "TW-0042"],
+    ]);
+    // Saving more evidence re-checks the project but never mails about Q2 again.
+    await call(h(savePost), "POST", { cookie, params: { id: projectId }, body: { rows: [rows[0]] } });
+    await new Promise((r) => setTimeout(r, 300));
+    const toOwner = (await readInbox())
+      .slice(before)
+      .filter((m) => m.to.some((t) => t.address === ws.members.engineer.email));
+    expect(toOwner).toHaveLength(1);
+  });
+
+  it("saves nothing when one row is invalid", async () => {
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const count = async () =>
+      (await testDb.db.select().from(measuredPulses).where(eq(measuredPulses.projectId, projectId))).length;
+    const n = await count();
+    const res = await call(h(savePost), "POST", {
+      cookie,
+      params: { id: projectId },
+      body: {
+        rows: [
+          { label: "ok", kind: "rect", v: 1, i: 1, duration: 1e-3 },
+          { label: "bad", kind: "rect", v: -1, i: 1, duration: 1e-3 },
+        ],
+      },
+    });
+    expect(res.status).toBe(400);
+    expect(await count()).toBe(n);
+  });
+
+  it("lets a technician delete their own rows but not another's; a lead deletes any", async () => {
+    const [other] = await testDb.db
+      .insert(measuredPulses)
+      .values({
+        projectId,
+        label: "E1",
+        kind: "rect",
+        v: 5,
+        i: 1,
+        duration: 1e-3,
+        createdBy: ws.members.engineer.id,
+      })
+      .returning();
+    const tech = await sessionCookie(ws.members.technician.id, ws.id);
+    const denied = await call(h(deleteMeasurement), "DELETE", {
+      cookie: tech,
+      params: { id: projectId, measurementId: other.id },
+    });
+    expect(denied.status).toBe(403);
+    const lead = await sessionCookie(ws.members.lead.id, ws.id);
+    const ok = await call(h(deleteMeasurement), "DELETE", {
+      cookie: lead,
+      params: { id: projectId, measurementId: other.id },
+    });
+    expect(ok.status).toBe(200);
+  });
+});
