@@ -3,9 +3,20 @@
 // `--print-sign-in` prints the demo sign-in lines for the start command instead.
 import { and, eq } from "drizzle-orm";
 import { db } from "../src/db";
-import { memberships, parts, pendingUploads, users, workspaces } from "../src/db/schema";
+import {
+  faultCases,
+  measuredPulses,
+  memberships,
+  parts,
+  pendingUploads,
+  projectCandidates,
+  projects,
+  users,
+  workspaces,
+} from "../src/db/schema";
 import { hashPassword } from "../src/lib/auth/password";
-import { DEMO_PARTS, demoCurveSetCsv, demoCurveSetFileName } from "../src/lib/demo/parts";
+import { DEMO_PARTS, DEMO_SCENARIO, demoCurveSetCsv, demoCurveSetFileName } from "../src/lib/demo/parts";
+import { demoFaultCases, demoMeasuredPulses, demoProjectName } from "../src/lib/demo/project";
 import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
 import { registerCurveSet } from "../src/lib/library/curve-upload";
 import { storage } from "../src/lib/storage";
@@ -88,7 +99,41 @@ async function seedParts(workspaceId: string, engineerId: string): Promise<void>
   }
 }
 
+/** The scenario's project: candidates, fault cases from the pulse builders, and a few measured pulses. */
+async function seedProject(workspaceId: string, ids: Record<string, string>): Promise<void> {
+  const existing = await db
+    .select({ id: projects.id })
+    .from(projects)
+    .where(and(eq(projects.workspaceId, workspaceId), eq(projects.name, demoProjectName)));
+  if (existing.length) return;
+  const demoParts = await db.select({ id: parts.id }).from(parts).where(eq(parts.workspaceId, workspaceId));
+  await db.transaction(async (tx) => {
+    const [project] = await tx
+      .insert(projects)
+      .values({
+        workspaceId,
+        name: demoProjectName,
+        description:
+          "Battery disconnect unit between the 13-cell pack and the motor controller of an electric cargo bike. " +
+          "Invented demo project.",
+        caseTemp: DEMO_SCENARIO.caseTemp,
+        ownerId: ids.engineer,
+      })
+      .returning({ id: projects.id });
+    await tx
+      .insert(projectCandidates)
+      .values(demoParts.map((p) => ({ projectId: project.id, partId: p.id })));
+    await tx
+      .insert(faultCases)
+      .values(demoFaultCases().map((c) => ({ ...c, projectId: project.id, createdBy: ids.engineer })));
+    await tx
+      .insert(measuredPulses)
+      .values(demoMeasuredPulses().map((m) => ({ ...m, projectId: project.id, createdBy: ids.technician })));
+  });
+}
+
 const workspaceId = await seedWorkspace();
 const ids = await seedUsers(workspaceId);
 await seedParts(workspaceId, ids.engineer);
+await seedProject(workspaceId, ids);
 process.exit(0);
