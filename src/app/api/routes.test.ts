@@ -84,6 +84,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/projects/[id]/candidates": async () => ({ id: await project() }),
   "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements": async () => ({ id: await project() }),
+  "/api/v1/projects/[id]/measurements": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements/preview": async () => ({ id: await project() }),
   "/api/projects/[id]/uploads": async () => ({ id: await project() }),
   "/api/projects/[id]/captures": async () => ({ id: await project() }),

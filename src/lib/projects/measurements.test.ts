@@ -204,3 +204,20 @@ describe("measured pulses", () => {
     expect(ok.status).toBe(200);
   });
 });
+
+describe("bench scripts", () => {
+  it("post measurements with an API token and get each verdict back", async () => {
+    const { POST: createToken } = await import("@/app/api/account/tokens/route");
+    const { POST: v1Save } = await import("@/app/api/v1/projects/[id]/measurements/route");
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "rig 1" } })).json();
+    const res = await call(h(v1Save), "POST", {
+      bearer: token.secret,
+      params: { id: projectId },
+      body: { rows: [{ label: "R1", kind: "rect", v: 12, i: 5, duration: 1e-3 }], boardSerial: "TW-9" },
+    });
+    expect(res.status).toBe(201);
+    const body = await res.json();
+    expect(body.verdicts[0]).toMatchObject({ worst: "pass", byCandidate: { "BN-1": { verdict: "pass" } } });
+  });
+});

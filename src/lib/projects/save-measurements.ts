@@ -1,0 +1,76 @@
+import "server-only";
+import { z } from "zod";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { measuredPulses, type Project } from "@/db/schema";
+import type { MemberCaller } from "@/lib/auth/guard";
+import { MAX_MEASUREMENT_ROWS, measurementRowSchema } from "@/lib/csv/measurements";
+import { checkProject } from "./check";
+import { notifyFailingEvidence } from "./notify";
+
+const optionalText = (max: number) =>
+  z.preprocess((v) => (v === "" || v === null ? undefined : v), z.string().trim().max(max).optional());
+
+/** What the save routes accept: the rows in SI units, and the bench setup they were measured on. */
+export const saveMeasurementsSchema = z.object({
+  rows: z.array(measurementRowSchema).min(1, { message: "No rows to save" }).max(MAX_MEASUREMENT_ROWS),
+  note: optionalText(2000),
+  boardSerial: optionalText(80),
+  probe: optionalText(120),
+});
+
+/**
+ * Saves measured pulses in one transaction, attributed to the caller; then checks the project and e-mails its
+ * owner once for each saved pulse that fails or has no data on any candidate. Returns the saved ids, how many
+ * notices went out, and the verdicts of the saved pulses on every candidate.
+ */
+export async function saveMeasurements(
+  caller: MemberCaller,
+  project: Project,
+  input: z.output<typeof saveMeasurementsSchema>,
+) {
+  const saved = await db.transaction(async (tx) => {
+    const rows = await tx
+      .insert(measuredPulses)
+      .values(
+        input.rows.map((r) => ({
+          projectId: project.id,
+          label: r.label,
+          kind: r.kind,
+          v: r.v,
+          i: r.i,
+          duration: r.duration,
+          repeatPeriod: r.repeat?.period ?? null,
+          repeatCount: r.repeat?.count ?? null,
+          note: input.note ?? null,
+          boardSerial: input.boardSerial ?? null,
+          probe: input.probe ?? null,
+          createdBy: caller.user.id,
+        })),
+      )
+      .returning({ id: measuredPulses.id });
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "measurements.added",
+        subjectType: "project",
+        subjectId: project.id,
+        details: { count: rows.length, boardSerial: input.boardSerial ?? null, via: caller.via },
+      },
+      tx,
+    );
+    return rows;
+  });
+  const ids = saved.map((r) => r.id);
+  const checked = await checkProject(project);
+  const notified = await notifyFailingEvidence(project, checked, ids);
+  const verdicts = ids.map((id) => ({
+    id,
+    worst: checked.worstByPulse[id],
+    byCandidate: Object.fromEntries(
+      checked.candidates.map((c) => [c.partNumber, checked.results[c.partId]?.[id] ?? null]),
+    ),
+  }));
+  return { saved: ids, notified, verdicts };
+}
