@@ -37,10 +37,10 @@ export async function loadProjectPulses(
  */
 export async function checkProject(
   project: Project,
-  extra: { captures?: () => Promise<ProjectPulse[]> } = {},
+  extra: { captures?: () => Promise<ProjectPulse[]>; candidates?: Candidate[] } = {},
 ) {
   const [candidates, pulses] = await Promise.all([
-    loadCandidates(project.id),
+    extra.candidates ?? loadCandidates(project.id),
     loadProjectPulses(project, extra),
   ]);
   const evaluation = await evaluate(

@@ -464,14 +464,20 @@ function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): void {
     .fillColor(muted)
     .text("V_DS (V)", x0, y0 + h + 16, { width: w, align: "center" });
   doc.text("I_D (A)", x0 - 40, y0 - 12);
+  const path = (points: [number, number][]) => {
+    points.forEach(([v, i], j) => {
+      if (j === 0) doc.moveTo(x(v), y(i));
+      else doc.lineTo(x(v), y(i));
+    });
+  };
   const shades = ["#0a4558", "#1d6f8a", "#3a86a0", "#6aa6ba", "#9cc4d1", "#bcd7df"];
   doc.rect(x0, y0, w, h).clip();
   limits.curves.forEach((curve, k) => {
     const colour = shades[Math.min(k, shades.length - 1)];
-    curve.points.forEach(([v, i], j) => (j === 0 ? doc.moveTo(x(v), y(i)) : doc.lineTo(x(v), y(i))));
+    path(curve.points);
     doc.lineWidth(1.2).strokeColor(colour).stroke();
     const derated = limits.derated[k];
-    derated.points.forEach(([v, i], j) => (j === 0 ? doc.moveTo(x(v), y(i)) : doc.lineTo(x(v), y(i))));
+    path(derated.points);
     doc.dash(3, { space: 2 }).lineWidth(1).strokeColor(colour).stroke().undash();
   });
   for (const p of snapshot.pulses) {
