@@ -1,8 +1,10 @@
-// Benchmarks for the SOA engine: figures are printed, never asserted.
+// Benchmarks for the SOA engine and the capture pipeline: figures are printed, never asserted.
 // Run with `npm run bench`. Each section lives in scripts/bench/.
 
+import { runCaptureBench } from "./bench/capture";
 import { runMatrixBench } from "./bench/matrix";
 import { runThermalBench } from "./bench/thermal";
 
 runThermalBench();
 runMatrixBench();
+await runCaptureBench();

@@ -6,6 +6,7 @@ import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   apiTokens,
+  captures,
   curveSets,
   curves,
   decisions,
@@ -85,6 +86,38 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements": async () => ({ id: await project() }),
   "/api/v1/projects/[id]/measurements": async () => ({ id: await project() }),
+  "/api/projects/[id]/captures/[captureId]": async () => {
+    const id = await project();
+    const key = `${a.id}/projects/${id}/capture/${crypto.randomUUID()}`;
+    const [row] = await testDb.db
+      .insert(captures)
+      .values({
+        projectId: id,
+        name: "C1",
+        objectKey: `${key}.csv`,
+        samplesKey: `${key}.samples.f64`,
+        fileName: "c.csv",
+        size: 1,
+        sha256: "0".repeat(64),
+        mapping: {},
+        summary: {
+          samples: 2,
+          uniform: true,
+          tStart: 0,
+          tEnd: 1e-6,
+          vMax: 1,
+          iMaxAbs: 1,
+          pPeak: 1,
+          tPeak: 0,
+          energy: 1e-6,
+          equivalent: { ok: false, flag: "pulse-too-short" },
+        },
+        trace: { t: [], v: [], i: [], p: [] },
+        createdBy: tokenOwner || null,
+      })
+      .returning({ id: captures.id });
+    return { id, captureId: row.id };
+  },
   "/api/projects/[id]/measurements/preview": async () => ({ id: await project() }),
   "/api/projects/[id]/uploads": async () => ({ id: await project() }),
   "/api/projects/[id]/captures": async () => ({ id: await project() }),

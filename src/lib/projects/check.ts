@@ -1,5 +1,7 @@
 import "server-only";
 import type { Project } from "@/db/schema";
+import { captureProjectPulses } from "@/lib/capture/store";
+import { storage } from "@/lib/storage";
 import { evaluate, type ProjectPulse } from "./evaluate";
 import { type Candidate, loadCandidates } from "./projects";
 import { faultCasePulse, listFaultCases, listMeasuredPulses, measuredPulse } from "./pulses";
@@ -21,7 +23,8 @@ export async function loadProjectPulses(
   const [cases, measured, captured] = await Promise.all([
     listFaultCases(project.id),
     listMeasuredPulses(project.id),
-    extra.captures?.() ?? Promise.resolve([]),
+    // Captures are read back from storage only when there are any; a caller may pass its own loader.
+    (extra.captures ?? (() => captureProjectPulses(storage(), project)))(),
   ]);
   return [
     ...cases.map((c) => faultCasePulse(project, c)),

@@ -1,0 +1,57 @@
+import { route } from "@/lib/auth/guard";
+import { junctionTrace } from "@/lib/capture/process";
+import { deleteCapture, getCapture, loadCaptureSamples } from "@/lib/capture/store";
+import { AppError } from "@/lib/errors";
+import { json } from "@/lib/http";
+import { loadCandidates, loadProject } from "@/lib/projects/projects";
+import { powerFromVI } from "@/lib/soa/thermal-waveform";
+import { storage } from "@/lib/storage";
+
+type Params = { id: string; captureId: string };
+
+/**
+ * GET /api/projects/:id/captures/:captureId: the capture's summary and drawn trace, and for each candidate with a
+ * Foster network its junction temperature through the capture (from rest at the project's case temperature):
+ * peak, when, and a trace decimated on the same buckets as the capture's.
+ */
+export const GET = route<Params>({ action: "workspace.read" }, async (_req, caller, { id, captureId }) => {
+  const project = await loadProject(caller, id);
+  const row = await getCapture({ projectId: project.id, captureId });
+  // The object keys stay on the server.
+  const { objectKey, samplesKey, ...capture } = row;
+  const candidates = await loadCandidates(project.id);
+  const thermal = candidates.some((c) => c.part.foster?.length);
+  const samples = thermal ? await loadCaptureSamples(storage(), row) : null;
+  const p = samples ? powerFromVI(samples.v, samples.i) : null;
+  return json({
+    capture,
+    caseTemp: project.caseTemp,
+    candidates: candidates.map(({ part }) => ({
+      partId: part.id,
+      partNumber: part.partNumber,
+      maker: part.maker,
+      tjMax: part.tjMax,
+      junction:
+        samples && p && part.foster?.length
+          ? junctionTrace(samples.t, p, part.foster, project.caseTemp)
+          : null,
+    })),
+  });
+});
+
+/** DELETE /api/projects/:id/captures/:captureId: by whoever uploaded it, or a lead or admin. */
+export const DELETE = route<Params>(
+  { action: "measurement.write" },
+  async (_req, caller, { id, captureId }) => {
+    const project = await loadProject(caller, id);
+    const capture = await getCapture({ projectId: project.id, captureId });
+    if (capture.createdBy !== caller.user.id && caller.role !== "lead" && caller.role !== "admin") {
+      throw new AppError(
+        "forbidden:capture",
+        "Only the person who uploaded a capture, or a lead, can delete it.",
+      );
+    }
+    await deleteCapture(storage(), { capture, caller });
+    return json({ status: "ok" });
+  },
+);

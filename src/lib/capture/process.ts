@@ -1,0 +1,271 @@
+// What the server keeps of a capture besides its samples: the summary (METHODS.md §6: p = v·i, energy, peak, the
+// equal-energy rectangle at peak power), min/max-decimated traces for drawing, and the samples themselves as a
+// compact binary object so that a later check reloads them without parsing the CSV again. Pure. Decisions:
+// - energy integrates p over the whole capture by the trapezoid rule with a compensated (Neumaier) sum; the
+//   rectangle's energy is the engine's, over the window around the peak where p ≥ 5 % of it;
+// - a capture counts as uniform when every time stamp lies within a quarter step of the uniform grid from the first
+//   to the last (a scope samples uniformly, but time printed to 8 or 9 significant digits jitters each step by a
+//   few per cent; a missing sample or a gap moves stamps by half a step or more);
+// - decimation splits the samples into `buckets` runs of equal count (a uniform capture: equal time), each drawn
+//   at its first sample's time as [min, max] of the run, so that no spike between drawn points is lost; NaN
+//   samples are left out of min and max (a run of only NaN gives [NaN, NaN]);
+// - the binary form is a 16-byte header ("PFCS", version, sample count, 0) and then t, v and i as little-endian
+//   Float64, each a contiguous block: decoding is a bounds check and three typed-array views.
+import type { CaptureSummary, CaptureTrace } from "@/db/schema";
+import { waveformEquivalent } from "@/lib/soa/equivalent-rectangle";
+import type { FosterTerm } from "@/lib/soa/foster";
+import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
+import type { CaptureSamples } from "./parse-stream";
+
+/** Points per series of a drawn trace. */
+export const TRACE_BUCKETS = 2000;
+
+const UNIFORM_TOLERANCE = 0.25;
+
+export interface MinMaxTrace {
+  t: number[];
+  y: [number, number][];
+}
+
+/**
+ * Min/max decimation of y(t) into at most `buckets` runs of (nearly) equal sample count; fewer samples than
+ * buckets keep every sample ([y, y]). Lengths may differ: the shorter one counts. Empty input → empty trace.
+ */
+export function decimateMinMax(
+  t: ArrayLike<number>,
+  y: ArrayLike<number>,
+  buckets = TRACE_BUCKETS,
+): MinMaxTrace {
+  const n = Math.min(t.length, y.length);
+  const count = Math.min(n, Math.max(1, Math.floor(buckets)));
+  const out: MinMaxTrace = { t: new Array(count), y: new Array(count) };
+  for (let b = 0; b < count; b++) {
+    const first = Math.floor((b * n) / count);
+    const end = Math.floor(((b + 1) * n) / count);
+    let min = Number.POSITIVE_INFINITY;
+    let max = Number.NEGATIVE_INFINITY;
+    for (let k = first; k < end; k++) {
+      const value = y[k];
+      if (value < min) min = value;
+      if (value > max) max = value;
+    }
+    out.t[b] = t[first];
+    out.y[b] = min <= max ? [min, max] : [Number.NaN, Number.NaN];
+  }
+  return out;
+}
+
+/**
+ * Summary of a capture with power p (p = v·i, see `powerFromVI`). Peak power and its time are those of the first
+ * sample of maximum p. Fewer than one sample → RangeError.
+ */
+export function summariseCapture(
+  t: ArrayLike<number>,
+  v: ArrayLike<number>,
+  i: ArrayLike<number>,
+  p: ArrayLike<number>,
+): CaptureSummary {
+  const n = t.length;
+  if (n < 1 || v.length !== n || i.length !== n || p.length !== n) {
+    throw new RangeError(`a capture needs one or more samples of t, v, i and p of equal length (t has ${n})`);
+  }
+  const t0 = t[0];
+  const meanStep = n > 1 ? (t[n - 1] - t0) / (n - 1) : 0;
+  const tolerance = UNIFORM_TOLERANCE * meanStep;
+  let uniform = true;
+  let vMax = Number.NEGATIVE_INFINITY;
+  let iMaxAbs = 0;
+  let pPeak = Number.NEGATIVE_INFINITY;
+  let peakIndex = 0;
+  let sum = 0;
+  let compensation = 0;
+  for (let k = 0; k < n; k++) {
+    if (v[k] > vMax) vMax = v[k];
+    const current = Math.abs(i[k]);
+    if (current > iMaxAbs) iMaxAbs = current;
+    if (p[k] > pPeak) {
+      pPeak = p[k];
+      peakIndex = k;
+    }
+    if (Math.abs(t[k] - (t0 + k * meanStep)) > tolerance) uniform = false;
+    if (k === 0) continue;
+    const step = t[k] - t[k - 1];
+    const term = ((p[k - 1] + p[k]) / 2) * step;
+    const next = sum + term;
+    compensation += Math.abs(sum) >= Math.abs(term) ? sum - next + term : term - next + sum;
+    sum = next;
+  }
+  const rect = waveformEquivalent(t, p);
+  return {
+    samples: n,
+    uniform,
+    tStart: t[0],
+    tEnd: t[n - 1],
+    vMax,
+    iMaxAbs,
+    pPeak,
+    tPeak: t[peakIndex],
+    energy: sum + compensation,
+    equivalent: rect.ok
+      ? { ok: true, v: Math.abs(v[rect.peakIndex]), i: Math.abs(i[rect.peakIndex]), duration: rect.duration }
+      : { ok: false, flag: rect.flag },
+  };
+}
+
+/** The drawn trace of a capture: V, I and P decimated on the same buckets. */
+export function captureTrace(
+  t: ArrayLike<number>,
+  v: ArrayLike<number>,
+  i: ArrayLike<number>,
+  p: ArrayLike<number>,
+  buckets = TRACE_BUCKETS,
+): CaptureTrace {
+  const dv = decimateMinMax(t, v, buckets);
+  return { t: dv.t, v: dv.y, i: decimateMinMax(t, i, buckets).y, p: decimateMinMax(t, p, buckets).y };
+}
+
+export interface ProcessedCapture {
+  p: Float64Array;
+  summary: CaptureSummary;
+  trace: CaptureTrace;
+}
+
+/** Power, summary and drawn trace of parsed samples. */
+export function processCapture(samples: CaptureSamples, buckets = TRACE_BUCKETS): ProcessedCapture {
+  const { t, v, i } = samples;
+  const p = powerFromVI(v, i);
+  return { p, summary: summariseCapture(t, v, i, p), trace: captureTrace(t, v, i, p, buckets) };
+}
+
+export interface JunctionTrace {
+  /** Highest junction temperature over the sample instants, °C. */
+  tjPeak: number;
+  /** When it is reached, s. */
+  tPeak: number;
+  /** Tj in °C, decimated like the capture's trace. */
+  trace: MinMaxTrace;
+}
+
+/**
+ * Junction temperature through a capture on a Foster network from rest at `caseTemp` (METHODS.md §4, the engine's
+ * exact update), with its decimated trace.
+ */
+export function junctionTrace(
+  t: ArrayLike<number>,
+  p: ArrayLike<number>,
+  network: readonly FosterTerm[],
+  caseTemp: number,
+  buckets = TRACE_BUCKETS,
+): JunctionTrace {
+  const rise = waveformRise(t, p, network, { trace: true });
+  const tj = rise.trace ?? new Float64Array(0);
+  for (let k = 0; k < tj.length; k++) tj[k] += caseTemp;
+  return {
+    tjPeak: caseTemp + rise.peak,
+    tPeak: rise.peakIndex >= 0 ? t[rise.peakIndex] : Number.NaN,
+    trace: decimateMinMax(t, tj, buckets),
+  };
+}
+
+const MAGIC = 0x53434650; // "PFCS" read as a little-endian uint32
+const VERSION = 1;
+const HEADER_BYTES = 16;
+const LITTLE_ENDIAN = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;
+
+function header(n: number): Uint8Array {
+  const bytes = new Uint8Array(HEADER_BYTES);
+  const view = new DataView(bytes.buffer);
+  view.setUint32(0, MAGIC, true);
+  view.setUint32(4, VERSION, true);
+  view.setUint32(8, n, true);
+  return bytes;
+}
+
+/**
+ * The binary object as four pieces, header, t, v and i, the last three sharing the samples' memory: 48 MB for
+ * 2 M samples are sent to storage without being copied. On a big-endian machine, one piece (copied).
+ */
+export function encodeSamplesParts(samples: CaptureSamples): Uint8Array[] {
+  const n = samples.t.length;
+  if (samples.v.length !== n || samples.i.length !== n) {
+    throw new RangeError("t, v and i must have the same number of samples");
+  }
+  const series = [samples.t, samples.v, samples.i];
+  if (LITTLE_ENDIAN)
+    return [header(n), ...series.map((s) => new Uint8Array(s.buffer, s.byteOffset, s.byteLength))];
+  const bytes = new Uint8Array(HEADER_BYTES + 24 * n);
+  bytes.set(header(n));
+  const view = new DataView(bytes.buffer);
+  series.forEach((s, k) => {
+    for (let j = 0; j < n; j++) view.setFloat64(HEADER_BYTES + 8 * (n * k + j), s[j], true);
+  });
+  return [bytes];
+}
+
+/** The samples as one binary object: header, then t, v and i as little-endian Float64. */
+export function encodeSamples(samples: CaptureSamples): Uint8Array {
+  const parts = encodeSamplesParts(samples);
+  if (parts.length === 1) return parts[0];
+  const bytes = new Uint8Array(parts.reduce((sum, part) => sum + part.byteLength, 0));
+  let offset = 0;
+  for (const part of parts) {
+    bytes.set(part, offset);
+    offset += part.byteLength;
+  }
+  return bytes;
+}
+
+/**
+ * Reads a samples object from a stream of chunks into one buffer sized from its header: a download costs one
+ * copy of the samples, no more. Errors as `decodeSamples`.
+ */
+export async function decodeSamplesStream(source: AsyncIterable<Uint8Array>): Promise<CaptureSamples> {
+  let bytes: Uint8Array | null = null;
+  let head = new Uint8Array(0);
+  let filled = 0;
+  for await (const chunk of source) {
+    if (bytes === null) {
+      const joined = new Uint8Array(head.length + chunk.length);
+      joined.set(head);
+      joined.set(chunk, head.length);
+      head = joined;
+      if (head.length < HEADER_BYTES) continue;
+      bytes = new Uint8Array(Math.max(HEADER_BYTES + 24 * sampleCount(head), head.length));
+      bytes.set(head);
+      filled = head.length;
+      continue;
+    }
+    if (filled + chunk.length > bytes.length)
+      throw new RangeError("capture samples object longer than its header says");
+    bytes.set(chunk, filled);
+    filled += chunk.length;
+  }
+  return decodeSamples((bytes ?? head).subarray(0, bytes === null ? head.length : filled));
+}
+
+/** The sample count of a samples object's header; RangeError when it is not one. */
+function sampleCount(bytes: Uint8Array): number {
+  if (bytes.byteLength < HEADER_BYTES) throw new RangeError("not a capture samples object (too short)");
+  const view = new DataView(bytes.buffer, bytes.byteOffset, HEADER_BYTES);
+  if (view.getUint32(0, true) !== MAGIC) throw new RangeError("not a capture samples object");
+  if (view.getUint32(4, true) !== VERSION) throw new RangeError("unknown capture samples version");
+  return view.getUint32(8, true);
+}
+
+/** Samples from `encodeSamples`' bytes; anything else → RangeError. Shares the bytes' memory when aligned. */
+export function decodeSamples(bytes: Uint8Array): CaptureSamples {
+  const n = sampleCount(bytes);
+  if (bytes.byteLength !== HEADER_BYTES + 24 * n) {
+    throw new RangeError(`capture samples object of ${bytes.byteLength} bytes does not hold ${n} samples`);
+  }
+  const aligned = bytes.byteOffset % 8 === 0 ? bytes : bytes.slice();
+  const series = (k: number) => {
+    const offset = aligned.byteOffset + HEADER_BYTES + 8 * n * k;
+    if (LITTLE_ENDIAN) return new Float64Array(aligned.buffer, offset, n);
+    const out = new Float64Array(n);
+    const data = new DataView(aligned.buffer, offset, 8 * n);
+    for (let j = 0; j < n; j++) out[j] = data.getFloat64(8 * j, true);
+    return out;
+  };
+  return { t: series(0), v: series(1), i: series(2) };
+}

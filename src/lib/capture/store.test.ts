@@ -1,0 +1,383 @@
+// Capture upload → storage → streaming parse → objects and row, against the real storage fake and PostgreSQL.
+import { createHash } from "node:crypto";
+import { eq, inArray } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import {
+  DELETE as captureDelete,
+  GET as captureGet,
+} from "@/app/api/projects/[id]/captures/[captureId]/route";
+import { GET as capturesGet, POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
+import { POST as uploadPost } from "@/app/api/projects/[id]/uploads/route";
+import {
+  captures,
+  curveSets,
+  curves,
+  type FosterTermRow,
+  type Part,
+  parts,
+  pendingUploads,
+  projectCandidates,
+  projects,
+} from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { presignUpload } from "@/lib/library/curve-upload";
+import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
+import { createStorage } from "@/lib/storage/storage";
+import {
+  addMember,
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { requireEnv, waitForMail } from "@/test/services";
+import { captureMappingSchema, previewCaptureText } from "./parse";
+import { parseCaptureText } from "./parse-stream";
+import { processCapture } from "./process";
+import { loadCaptureSamples, registerCapture, samplesKeyOf } from "./store";
+
+const storage = createStorage({
+  endpoint: requireEnv("S3_ENDPOINT"),
+  region: "us-east-1",
+  bucket: requireEnv("S3_BUCKET"),
+  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
+  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
+});
+const h = (handler: unknown) => handler as GuardedHandler;
+const { db } = testDb;
+
+/**
+ * A bench capture of a pre-charge: 24 V into 470 µF, the MOSFET's gate holding 24 V/ms (11.3 A) for 1 ms,
+ * sampled every µs from 0.2 ms before the gate, with a few lines of scope settings first.
+ */
+function inrushCsv(samples = 2000): string {
+  const lines = [
+    "Instrument,Bench scope (simulated)",
+    "Sample Interval,1e-06",
+    "Probe CH2,current probe 100 mV/A",
+    "",
+  ];
+  lines.push("Time (s),CH1 (V),CH2 (A)");
+  for (let k = 0; k < samples; k++) {
+    const t = (k - 200) * 1e-6;
+    const charging = t >= 0 && t < 1e-3;
+    const wobble = 0.01 * Math.sin(k * 1.7);
+    const vds = (t < 0 ? 24 : charging ? 24 - 24_000 * t : 0.02) + wobble;
+    const id = (charging ? 470e-6 * 24_000 : t >= 1e-3 ? 0.4 : 0) + wobble;
+    lines.push(`${t.toExponential(6)},${vds.toFixed(4)},${id.toFixed(4)}`);
+  }
+  return `${lines.join("\r\n")}\r\n`;
+}
+
+const network: FosterTermRow[] = [
+  { r: 0.1, tau: 1e-4 },
+  { r: 0.4, tau: 1e-3 },
+  { r: 0.8, tau: 1e-2 },
+  { r: 0.7, tau: 0.1 },
+];
+
+let ws: TestWorkspace;
+let other: TestWorkspace;
+let cookies: Record<"technician" | "otherTechnician" | "engineer" | "lead" | "outsider", string>;
+let projectId: string;
+let secondProjectId: string;
+let small: Part;
+let big: Part;
+
+async function newPart(name: string, scale: number, foster: FosterTermRow[] | null): Promise<Part> {
+  const [part] = await db
+    .insert(parts)
+    .values({
+      workspaceId: ws.id,
+      partNumber: `${name}-${crypto.randomUUID().slice(0, 6)}`,
+      maker: "Capture Test Devices",
+      technology: "si-mosfet",
+      package: "TO-220",
+      vdsMax: 60,
+      tjMax: 175,
+      foster,
+      status: "verified",
+    })
+    .returning();
+  const [set] = await db
+    .insert(curveSets)
+    .values({
+      workspaceId: ws.id,
+      partId: part.id,
+      objectKey: `${ws.id}/parts/${part.id}/curve-set/${crypto.randomUUID()}.csv`,
+      fileName: "soa.csv",
+      size: 1,
+      sha256: "0".repeat(64),
+      shape: "long",
+      active: true,
+    })
+    .returning();
+  await db.insert(curves).values([
+    {
+      curveSetId: set.id,
+      position: 0,
+      duration: 1e-4,
+      points: [
+        [1, 150 * scale],
+        [100, 5 * scale],
+      ],
+    },
+    {
+      curveSetId: set.id,
+      position: 1,
+      duration: 1e-3,
+      points: [
+        [1, 50 * scale],
+        [100, 1.5 * scale],
+      ],
+    },
+  ]);
+  return part;
+}
+
+async function newProject(name: string): Promise<string> {
+  const [project] = await db
+    .insert(projects)
+    .values({ workspaceId: ws.id, name, caseTemp: 40, ownerId: ws.members.engineer.id })
+    .returning({ id: projects.id });
+  return project.id;
+}
+
+/** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
+async function browserUpload(text: string, cookie = cookies.technician, project = projectId) {
+  const res = await call(h(uploadPost), "POST", {
+    cookie,
+    params: { id: project },
+    body: { fileName: "precharge-run-3.csv", size: Buffer.byteLength(text), purpose: "capture" },
+  });
+  expect(res.status).toBe(201);
+  const ticket = (await res.json()) as { uploadId: string; objectKey: string; url: string };
+  const put = await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
+  expect(put.status).toBe(200);
+  return ticket;
+}
+
+async function register(text: string, body: Record<string, unknown> = {}, cookie = cookies.technician) {
+  const ticket = await browserUpload(text, cookie);
+  const mapping = previewCaptureText(text.slice(0, 65_536)).mapping;
+  const res = await call(h(capturesPost), "POST", {
+    cookie,
+    params: { id: projectId },
+    body: { uploadId: ticket.uploadId, name: "Pre-charge, run 3", mapping, ...body },
+  });
+  return { res, ticket, mapping };
+}
+
+async function pendingFor(keys: string[]) {
+  return db.select().from(pendingUploads).where(inArray(pendingUploads.objectKey, keys));
+}
+
+beforeAll(async () => {
+  ws = await createTestWorkspace("Captures");
+  other = await createTestWorkspace("Elsewhere");
+  const otherTechnician = await addMember(ws.id, "technician");
+  cookies = {
+    technician: await sessionCookie(ws.members.technician.id, ws.id),
+    otherTechnician: await sessionCookie(otherTechnician.id, ws.id),
+    engineer: await sessionCookie(ws.members.engineer.id, ws.id),
+    lead: await sessionCookie(ws.members.lead.id, ws.id),
+    outsider: await sessionCookie(other.members.engineer.id, other.id),
+  };
+  projectId = await newProject("Pre-charge stage");
+  secondProjectId = await newProject("Fan driver");
+  small = await newPart("PFT-S", 1, network);
+  big = await newPart("PFT-B", 10, null);
+  await db.insert(projectCandidates).values([
+    { projectId, partId: small.id },
+    { projectId, partId: big.id },
+  ]);
+});
+
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await deleteWorkspace(other.id);
+  await testDb.sql.end();
+});
+
+describe("capture upload", () => {
+  it("stores the CSV, the binary samples and the row with summary, trace, size and SHA-256; samples reload bit for bit", async () => {
+    const text = inrushCsv();
+    const { res, ticket, mapping } = await register(text, { note: "ambient 23 °C", boardSerial: "PC-0042" });
+    expect(res.status).toBe(201);
+    const body = await res.json();
+    const [row] = await db.select().from(captures).where(eq(captures.id, body.capture.id));
+    const parsed = parseCaptureText(text, captureMappingSchema.parse(mapping));
+    const { summary, trace } = processCapture(parsed);
+    expect(body.capture).toEqual({ id: row.id, name: "Pre-charge, run 3", summary: row.summary });
+    expect(row).toMatchObject({
+      projectId,
+      objectKey: ticket.objectKey,
+      samplesKey: samplesKeyOf(ticket.objectKey),
+      fileName: "precharge-run-3.csv",
+      size: Buffer.byteLength(text),
+      sha256: createHash("sha256").update(text).digest("hex"),
+      mapping: { ...mapping, skipRows: 4, header: true },
+      note: "ambient 23 °C",
+      boardSerial: "PC-0042",
+      probe: null,
+      createdBy: ws.members.technician.id,
+    });
+    expect(row.summary).toEqual(summary);
+    expect(row.summary.samples).toBe(2000);
+    expect(row.trace).toEqual(trace);
+    expect((await storage.get(ticket.objectKey))?.toString()).toBe(text);
+    expect((await storage.head(row.samplesKey))?.size).toBe(16 + 24 * 2000);
+    expect(await pendingFor([row.objectKey, row.samplesKey])).toEqual([]);
+    const samples = await loadCaptureSamples(storage, row);
+    for (const key of ["t", "v", "i"] as const) {
+      expect(Buffer.from(samples[key].buffer, samples[key].byteOffset, samples[key].byteLength)).toEqual(
+        Buffer.from(parsed[key].buffer, parsed[key].byteOffset, parsed[key].byteLength),
+      );
+    }
+  });
+
+  it("answers with each candidate's verdict and e-mails the owner once when one fails", async () => {
+    const { res } = await register(inrushCsv(1500));
+    expect(res.status).toBe(201);
+    const body = await res.json();
+    expect(body.verdicts[small.id]).toMatchObject({
+      verdict: "fail",
+      flags: expect.arrayContaining(["equivalent-rectangle"]),
+    });
+    expect(body.verdicts[big.id]).toMatchObject({ verdict: "pass", tjPeak: null });
+    expect(body.notified).toBe(1);
+    const mail = await waitForMail(ws.members.engineer.email);
+    expect(mail.text).toContain(body.capture.id);
+  });
+
+  it("leaves no row, no object and no pending upload behind when the file is malformed", async () => {
+    const lines = inrushCsv().split("\r\n");
+    lines[206] = lines[206].replace(/,[^,]+,/, ",23.97G0,");
+    const text = lines.join("\r\n");
+    const { res, ticket } = await register(text);
+    expect(res.status).toBe(400);
+    const error = (await res.json()).error;
+    expect(error.code).toBe("invalid:csv");
+    expect(error.details.issues[0]).toMatchObject({ row: 207, column: "CH1 (V)" });
+    expect(await db.select().from(captures).where(eq(captures.objectKey, ticket.objectKey))).toEqual([]);
+    expect(await storage.head(ticket.objectKey)).toBeNull();
+    expect(await storage.head(samplesKeyOf(ticket.objectKey))).toBeNull();
+    expect(await pendingFor([ticket.objectKey, samplesKeyOf(ticket.objectKey)])).toEqual([]);
+  });
+
+  it("removes the stored samples again when the row cannot be written", async () => {
+    const [project] = await db.select().from(projects).where(eq(projects.id, projectId));
+    const gone = { ...project, id: crypto.randomUUID() };
+    const ticket = await presignUpload(storage, {
+      workspaceId: ws.id,
+      userId: ws.members.technician.id,
+      owner: `projects/${gone.id}`,
+      fileName: "late-failure.csv",
+      size: 100,
+      purpose: "capture",
+      maxBytes: 200e6,
+    });
+    const text = inrushCsv(50);
+    await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
+    const caller = { workspaceId: ws.id, user: { id: ws.members.technician.id } } as Parameters<
+      typeof registerCapture
+    >[1]["caller"];
+    await expect(
+      registerCapture(storage, {
+        project: gone,
+        caller,
+        upload: { id: ticket.uploadId, objectKey: ticket.objectKey, fileName: "late-failure.csv" },
+        name: "orphan",
+        mapping: captureMappingSchema.parse({ time: 0, voltage: 1, current: 2 }),
+      }),
+    ).rejects.toThrow();
+    expect(await storage.head(ticket.objectKey)).toBeNull();
+    expect(await storage.head(samplesKeyOf(ticket.objectKey))).toBeNull();
+    expect(await pendingFor([ticket.objectKey, samplesKeyOf(ticket.objectKey)])).toEqual([]);
+  });
+
+  it("refuses an upload made for another project, and other purposes and sizes at the ticket", async () => {
+    const ticket = await browserUpload(inrushCsv(50), cookies.technician, secondProjectId);
+    const res = await call(h(capturesPost), "POST", {
+      cookie: cookies.technician,
+      params: { id: projectId },
+      body: {
+        uploadId: ticket.uploadId,
+        name: "wrong project",
+        mapping: { time: 0, voltage: 1, current: 2 },
+      },
+    });
+    expect(res.status).toBe(404);
+    expect(await storage.head(ticket.objectKey)).not.toBeNull();
+    const ask = (body: Record<string, unknown>) =>
+      call(h(uploadPost), "POST", {
+        cookie: cookies.technician,
+        params: { id: projectId },
+        body: { fileName: "x.csv", size: 10, purpose: "capture", ...body },
+      });
+    expect((await ask({ purpose: "curve-set" })).status).toBe(400);
+    expect((await ask({ size: 200_000_001 })).status).toBe(413);
+    expect((await ask({ fileName: "capture.xlsx" })).status).toBe(400);
+  });
+});
+
+describe("capture routes", () => {
+  let captureId: string;
+
+  beforeAll(async () => {
+    const { res } = await register(inrushCsv(), { name: "for the chart" });
+    captureId = (await res.json()).capture.id;
+  });
+
+  it("GET draws the capture and, per candidate with a Foster network, the engine's Tj through it", async () => {
+    const res = await call(h(captureGet), "GET", {
+      cookie: cookies.technician,
+      params: { id: projectId, captureId },
+    });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.capture).not.toHaveProperty("objectKey");
+    expect(body.capture).not.toHaveProperty("samplesKey");
+    expect(body.capture.trace.t).toHaveLength(2000);
+    const [row] = await db.select().from(captures).where(eq(captures.id, captureId));
+    const samples = await loadCaptureSamples(storage, row);
+    const rise = waveformRise(samples.t, powerFromVI(samples.v, samples.i), network);
+    const bySmall = body.candidates.find((c: { partId: string }) => c.partId === small.id);
+    expect(bySmall.junction.tjPeak).toBe(40 + rise.peak);
+    expect(bySmall.junction.tPeak).toBe(samples.t[rise.peakIndex]);
+    expect(bySmall.junction.trace.t).toEqual(body.capture.trace.t);
+    expect(body.candidates.find((c: { partId: string }) => c.partId === big.id).junction).toBeNull();
+    const list = await (
+      await call(h(capturesGet), "GET", { cookie: cookies.lead, params: { id: projectId } })
+    ).json();
+    expect(list.captures.map((c: { id: string }) => c.id)).toContain(captureId);
+    expect(list.captures[0]).not.toHaveProperty("trace");
+  });
+
+  it("is a 404 from another workspace, from another project and for a malformed id", async () => {
+    const get = (cookie: string, id: string, capture: string) =>
+      call(h(captureGet), "GET", { cookie, params: { id, captureId: capture } });
+    expect((await get(cookies.outsider, projectId, captureId)).status).toBe(404);
+    expect((await get(cookies.technician, secondProjectId, captureId)).status).toBe(404);
+    expect((await get(cookies.technician, projectId, "not-a-uuid")).status).toBe(404);
+  });
+
+  it("DELETE is for whoever uploaded it, or a lead; it removes the row and both objects", async () => {
+    const [row] = await db.select().from(captures).where(eq(captures.id, captureId));
+    const del = (cookie: string, capture = captureId) =>
+      call(h(captureDelete), "DELETE", { cookie, params: { id: projectId, captureId: capture } });
+    expect((await del(cookies.otherTechnician)).status).toBe(403);
+    expect((await del(cookies.engineer)).status).toBe(403);
+    expect((await del(cookies.technician)).status).toBe(200);
+    expect(await db.select().from(captures).where(eq(captures.id, captureId))).toEqual([]);
+    expect(await storage.head(row.objectKey)).toBeNull();
+    expect(await storage.head(row.samplesKey)).toBeNull();
+    expect(await pendingFor([row.objectKey, row.samplesKey])).toEqual([]);
+    expect((await del(cookies.technician)).status).toBe(404);
+
+    const { res } = await register(inrushCsv(100), { name: "lead removes it" });
+    expect((await del(cookies.lead, (await res.json()).capture.id)).status).toBe(200);
+  });
+});

@@ -1,0 +1,266 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { Readable } from "node:stream";
+import { and, desc, eq, inArray } from "drizzle-orm";
+import { db } from "@/db";
+import { recordAudit } from "@/db/queries/audit";
+import { isUuid } from "@/db/queries/parts";
+import { type Capture, captures, type Project, pendingUploads } from "@/db/schema";
+import type { MemberCaller } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import { discardUpload } from "@/lib/library/curve-upload";
+import type { ProjectPulse } from "@/lib/projects/evaluate";
+import type { WaveformPulse } from "@/lib/soa/types";
+import type { Storage } from "@/lib/storage";
+import { type CaptureMapping, MAX_CAPTURE_BYTES } from "./parse";
+import { type CaptureSamples, parseCaptureStream } from "./parse-stream";
+import { decodeSamplesStream, encodeSamplesParts, processCapture } from "./process";
+
+// A capture lives in three places: the uploaded CSV and its parsed samples (binary) in object storage, and its row.
+// Every object is written or removed with a row in pending_uploads standing for it until the capture row is
+// committed (or, on deletion, until the object is gone): whatever fails, storage and rows end consistent, at the
+// latest after the stale-upload cleanup (src/lib/library/curve-upload.ts) has run.
+
+/** Where a capture's binary samples are stored: beside its CSV. */
+export function samplesKeyOf(objectKey: string): string {
+  return `${objectKey.replace(/\.csv$/i, "")}.samples.f64`;
+}
+
+/** The columns a list or a result shows; the drawn trace and the mapping stay out. */
+const listed = {
+  id: captures.id,
+  projectId: captures.projectId,
+  name: captures.name,
+  fileName: captures.fileName,
+  size: captures.size,
+  summary: captures.summary,
+  note: captures.note,
+  boardSerial: captures.boardSerial,
+  probe: captures.probe,
+  createdBy: captures.createdBy,
+  createdAt: captures.createdAt,
+};
+
+/**
+ * Streams an uploaded capture CSV from storage, parses and summarises it, stores the samples as a binary object
+ * beside it and, in one transaction, inserts the capture row and retires the pending upload. Any failure removes
+ * both objects and the pending rows (the cleanup step finishes the job if storage cannot be reached). Returns the
+ * row and the parsed samples (to check them without reading them back).
+ */
+export async function registerCapture(
+  storage: Storage,
+  input: {
+    project: Project;
+    caller: Pick<MemberCaller, "workspaceId" | "user">;
+    upload: { id: string; objectKey: string; fileName: string };
+    name: string;
+    mapping: CaptureMapping;
+    note?: string;
+    boardSerial?: string;
+    probe?: string;
+  },
+): Promise<{ capture: Capture; samples: CaptureSamples }> {
+  const { project, caller, upload } = input;
+  if (!upload.objectKey.startsWith(`${project.workspaceId}/projects/${project.id}/`)) {
+    throw new AppError("not_found:upload", "No such upload for this project. Upload the file again.");
+  }
+  const samplesKey = samplesKeyOf(upload.objectKey);
+  const [reserved] = await db
+    .insert(pendingUploads)
+    .values({
+      workspaceId: project.workspaceId,
+      userId: caller.user.id,
+      objectKey: samplesKey,
+      fileName: upload.fileName,
+      purpose: "capture-samples",
+    })
+    .onConflictDoNothing()
+    .returning({ id: pendingUploads.id });
+  if (!reserved) throw new AppError("conflict:capture", "This upload is already being registered.");
+  try {
+    const head = await storage.head(upload.objectKey);
+    const stream = head ? await storage.stream(upload.objectKey) : null;
+    if (!head || !stream) {
+      throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
+    }
+    if (head.size > MAX_CAPTURE_BYTES) {
+      stream.destroy();
+      throw new AppError("too_large:file", `The file is larger than ${MAX_CAPTURE_BYTES / 1e6} MB.`);
+    }
+    const hash = createHash("sha256");
+    const parsed = await parseCaptureStream(stream, input.mapping, {
+      sizeHint: head.size,
+      onChunk: (chunk) => hash.update(chunk),
+    });
+    const sha256 = hash.digest("hex");
+    const { summary, trace } = processCapture(parsed);
+    const parts = encodeSamplesParts(parsed);
+    await storage.put(
+      samplesKey,
+      Readable.from(parts.map((part) => Buffer.from(part.buffer, part.byteOffset, part.byteLength))),
+      {
+        contentType: "application/octet-stream",
+        contentLength: parts.reduce((sum, part) => sum + part.byteLength, 0),
+      },
+    );
+    const capture = await db.transaction(async (tx) => {
+      const [row] = await tx
+        .insert(captures)
+        .values({
+          projectId: project.id,
+          name: input.name,
+          objectKey: upload.objectKey,
+          samplesKey,
+          fileName: upload.fileName,
+          size: parsed.bytes,
+          sha256,
+          mapping: parsed.mapping,
+          summary,
+          trace,
+          note: input.note ?? null,
+          boardSerial: input.boardSerial ?? null,
+          probe: input.probe ?? null,
+          createdBy: caller.user.id,
+        })
+        .returning();
+      await recordAudit(
+        {
+          workspaceId: project.workspaceId,
+          actorId: caller.user.id,
+          action: "capture.added",
+          subjectType: "project",
+          subjectId: project.id,
+          details: { captureId: row.id, name: row.name, fileName: row.fileName, samples: summary.samples },
+        },
+        tx,
+      );
+      await tx.delete(pendingUploads).where(inArray(pendingUploads.id, [upload.id, reserved.id]));
+      return row;
+    });
+    return { capture, samples: parsed };
+  } catch (error) {
+    await discardUpload(storage, { id: reserved.id, objectKey: samplesKey });
+    await discardUpload(storage, upload);
+    throw error;
+  }
+}
+
+/** The project's capture, or a 404. */
+export async function getCapture(input: { projectId: string; captureId: string }): Promise<Capture> {
+  const [row] = isUuid(input.captureId)
+    ? await db
+        .select()
+        .from(captures)
+        .where(and(eq(captures.projectId, input.projectId), eq(captures.id, input.captureId)))
+    : [];
+  if (!row) throw new AppError("not_found:capture", "No such capture in this project.");
+  return row;
+}
+
+/** The project's captures, newest first, without their traces. */
+export function listCaptures(projectId: string) {
+  return db
+    .select(listed)
+    .from(captures)
+    .where(eq(captures.projectId, projectId))
+    .orderBy(desc(captures.createdAt));
+}
+
+/** The samples a capture was parsed into, as stored (streamed into one buffer). */
+export async function loadCaptureSamples(
+  storage: Storage,
+  capture: Pick<Capture, "id" | "samplesKey">,
+): Promise<CaptureSamples> {
+  const unreadable = (cause: unknown) =>
+    new AppError("internal:capture-samples", "The capture's samples could not be read from storage.", {
+      cause,
+    });
+  const stream = await storage.stream(capture.samplesKey);
+  if (!stream) throw unreadable(`no object ${capture.samplesKey} for capture ${capture.id}`);
+  try {
+    return await decodeSamplesStream(stream);
+  } catch (error) {
+    throw error instanceof RangeError ? unreadable(error) : error;
+  }
+}
+
+/**
+ * Deletes a capture's row, then its two objects. The objects are entered in pending_uploads (dated long ago) in
+ * the same transaction, so that if storage fails now the next cleanup removes them.
+ */
+export async function deleteCapture(
+  storage: Storage,
+  input: { capture: Capture; caller: Pick<MemberCaller, "workspaceId" | "user"> },
+): Promise<void> {
+  const { capture, caller } = input;
+  const doomed = await db.transaction(async (tx) => {
+    await tx.delete(captures).where(eq(captures.id, capture.id));
+    const rows = await tx
+      .insert(pendingUploads)
+      .values(
+        [capture.objectKey, capture.samplesKey].map((objectKey) => ({
+          workspaceId: caller.workspaceId,
+          userId: caller.user.id,
+          objectKey,
+          fileName: capture.fileName,
+          purpose: "capture-deleted",
+          createdAt: new Date(0),
+        })),
+      )
+      .returning({ id: pendingUploads.id, objectKey: pendingUploads.objectKey });
+    await recordAudit(
+      {
+        workspaceId: caller.workspaceId,
+        actorId: caller.user.id,
+        action: "capture.deleted",
+        subjectType: "project",
+        subjectId: capture.projectId,
+        details: { captureId: capture.id, name: capture.name, fileName: capture.fileName },
+      },
+      tx,
+    );
+    return rows;
+  });
+  for (const row of doomed) await discardUpload(storage, row);
+}
+
+/**
+ * A capture as a pulse of its project's check, drawn at its equal-energy rectangle; the samples are loaded only
+ * when the check needs them.
+ */
+export function capturePulse(
+  project: Project,
+  capture: Pick<Capture, "id" | "name" | "summary">,
+  samples: CaptureSamples | (() => Promise<CaptureSamples>),
+): ProjectPulse {
+  const rect = capture.summary.equivalent;
+  // The engine walks any array-like; WaveformPulse names number[] for the JSON contract.
+  const asPulse = (s: CaptureSamples) =>
+    ({ id: capture.id, kind: "waveform", ...s }) as unknown as WaveformPulse;
+  return {
+    id: capture.id,
+    source: "capture",
+    name: capture.name,
+    caseTemp: project.caseTemp,
+    v: rect.ok ? rect.v : null,
+    i: rect.ok ? rect.i : null,
+    duration: rect.ok ? rect.duration : null,
+    kind: "waveform",
+    pulse: typeof samples === "function" ? async () => asPulse(await samples()) : asPulse(samples),
+  };
+}
+
+/** Every capture of a project as pulses for `checkProject(project, { captures })`, oldest first. */
+export async function captureProjectPulses(storage: Storage, project: Project): Promise<ProjectPulse[]> {
+  const rows = await db
+    .select({
+      id: captures.id,
+      name: captures.name,
+      summary: captures.summary,
+      samplesKey: captures.samplesKey,
+    })
+    .from(captures)
+    .where(eq(captures.projectId, project.id))
+    .orderBy(captures.createdAt);
+  return rows.map((row) => capturePulse(project, row, () => loadCaptureSamples(storage, row)));
+}
