@@ -15,6 +15,8 @@ import {
   workspaces,
 } from "../src/db/schema";
 import { hashPassword } from "../src/lib/auth/password";
+import { registerCapture } from "../src/lib/capture/store";
+import { demoCaptureCsv, demoCaptureFileName, demoCaptureName } from "../src/lib/demo/capture";
 import { DEMO_PARTS, DEMO_SCENARIO, demoCurveSetCsv, demoCurveSetFileName } from "../src/lib/demo/parts";
 import { demoFaultCases, demoMeasuredPulses, demoProjectName } from "../src/lib/demo/project";
 import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
@@ -129,6 +131,49 @@ async function seedProject(workspaceId: string, ids: Record<string, string>): Pr
     await tx
       .insert(measuredPulses)
       .values(demoMeasuredPulses().map((m) => ({ ...m, projectId: project.id, createdBy: ids.technician })));
+  });
+  await seedCapture(workspaceId, ids.technician);
+}
+
+/** One scope capture, through the same path as a technician's upload (CSV in storage → streamed parse → rows). */
+async function seedCapture(workspaceId: string, technicianId: string): Promise<void> {
+  const [project] = await db
+    .select()
+    .from(projects)
+    .where(and(eq(projects.workspaceId, workspaceId), eq(projects.name, demoProjectName)));
+  const objectKey = `${workspaceId}/projects/${project.id}/capture/${crypto.randomUUID()}.csv`;
+  const [upload] = await db
+    .insert(pendingUploads)
+    .values({
+      workspaceId,
+      userId: technicianId,
+      objectKey,
+      fileName: demoCaptureFileName,
+      purpose: "capture",
+    })
+    .returning();
+  await storage().put(objectKey, demoCaptureCsv(), { contentType: "text/csv" });
+  const technician = demoUsers.find((u) => u.role === "technician")!;
+  await registerCapture(storage(), {
+    project,
+    caller: { workspaceId, user: { id: technicianId, email: technician.email, name: technician.name } },
+    upload,
+    name: demoCaptureName,
+    mapping: {
+      skipRows: 2,
+      header: true,
+      time: 0,
+      voltage: 1,
+      current: 2,
+      timeScale: 1,
+      vScale: 1,
+      vOffset: 0,
+      iScale: 1,
+      iOffset: 0,
+    },
+    boardSerial: "TW-03",
+    probe: "100:1 differential, 50 A current probe",
+    note: "Invented demo capture.",
   });
 }
 
