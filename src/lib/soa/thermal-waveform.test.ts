@@ -3,7 +3,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { FosterTerm } from "./foster";
 import { rectRise } from "./thermal-rect";
-import { powerFromVI, rampFactor, waveformRise } from "./thermal-waveform";
+import type { WaveformRise } from "./thermal-waveform";
+import { powerFromVI, rampFactor, waveformRise, waveformRiseVI } from "./thermal-waveform";
 
 // odex ships its TypeScript source rather than declarations, and that source fails this project's strict type
 // check; it is loaded untyped and the part used here is described.
@@ -195,6 +196,90 @@ describe("waveformRise", () => {
       peak: Number.NaN,
       peakIndex: -1,
     });
+  });
+});
+
+/** Asserts that two results are the same bit for bit: peak, peakIndex and every trace value (−0 ≠ 0). */
+function expectSameBits(actual: WaveformRise, expected: WaveformRise): void {
+  expect(Object.is(actual.peak, expected.peak)).toBe(true);
+  expect(actual.peakIndex).toBe(expected.peakIndex);
+  expect(actual.trace === undefined).toBe(expected.trace === undefined);
+  if (actual.trace !== undefined && expected.trace !== undefined) {
+    expect(new BigUint64Array(actual.trace.buffer)).toEqual(new BigUint64Array(expected.trace.buffer));
+  }
+}
+
+describe("waveformRiseVI", () => {
+  const channel = fc.double({ min: -1000, max: 1000, noNaN: true });
+
+  // Derived: p = v·i formed inside the pass is the same product powerFromVI stores, fed to the same update, so
+  // the fused and split routes must agree bit for bit on either path, with or without a trace, for any term count.
+  it("gives waveformRise(t, powerFromVI(v, i)) bit for bit, on uniform and non-uniform axes", () => {
+    fc.assert(
+      fc.property(
+        network,
+        fc.array(fc.tuple(channel, channel, fc.double({ min: 0, max: 1, noNaN: true })), {
+          minLength: 0,
+          maxLength: 300,
+        }),
+        fc.double({ min: -8, max: -2, noNaN: true }).map((e) => 10 ** e),
+        fc.boolean(),
+        fc.boolean(),
+        (net, samples, h, uniform, trace) => {
+          const v = samples.map(([vj]) => vj);
+          const i = samples.map(([, ij]) => ij);
+          // Non-uniform: random steps up to 2h, zero steps included (about one in ten).
+          let time = 0;
+          const t = samples.map(([, , u], j) => {
+            if (j > 0) time += u < 0.1 ? 0 : 2 * h * u;
+            return uniform ? j * h : time;
+          });
+          const options = { trace };
+          expectSameBits(
+            waveformRiseVI(t, v, i, net, options),
+            waveformRise(t, powerFromVI(v, i), net, options),
+          );
+          const typed = [t, v, i].map((x) => Float64Array.from(x));
+          expectSameBits(
+            waveformRiseVI(typed[0], typed[1], typed[2], net, options),
+            waveformRise(typed[0], powerFromVI(typed[1], typed[2]), net, options),
+          );
+        },
+      ),
+    );
+  });
+
+  it("handles an empty capture and a 2-sample one", () => {
+    expect(waveformRiseVI([], [], [], ONE_TERM)).toEqual({ peak: 0, peakIndex: -1 });
+    expect(waveformRiseVI([], [], [], ONE_TERM, { trace: true }).trace).toHaveLength(0);
+    // 48 V × 2 A = 96 W, then 24 V × 0.5 A = 12 W: a 96 → 12 W ramp over one τ, by the update of METHODS.md §4.
+    const x = 1;
+    const expected = 96 * -Math.expm1(-x) + (12 - 96) * (1 + Math.expm1(-x) / x);
+    const uniform = waveformRiseVI([0, x], [48, 24], [2, 0.5], ONE_TERM, { trace: true });
+    expectRelative(uniform.trace![1], expected, 1e-15);
+    expectSameBits(uniform, waveformRise([0, x], [96, 12], ONE_TERM, { trace: true }));
+  });
+
+  it("gives 0 everywhere for an empty network, and a NaN peak at index −1 for NaN or infinite power", () => {
+    expect(waveformRiseVI([0, 1, 3], [1, 2, 3], [1, 1, 1], [], { trace: true }).trace).toEqual(
+      new Float64Array(3),
+    );
+    expect(waveformRiseVI([0, 1, 2], [1, Number.POSITIVE_INFINITY, 1], [1, 0, 1], ONE_TERM)).toEqual({
+      peak: Number.NaN,
+      peakIndex: -1,
+    });
+    expect(waveformRiseVI([0, 1, 3], [1, 1, Number.NaN], [1, 1, 1], ONE_TERM)).toEqual({
+      peak: Number.NaN,
+      peakIndex: -1,
+    });
+  });
+
+  it("rejects differing lengths and a decreasing time axis with a RangeError, as waveformRise does", () => {
+    expect(() => waveformRiseVI([0, 1], [1], [1, 1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRiseVI([0, 1], [1, 1], [1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRiseVI([0], [1, 1], [1, 1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRiseVI([], [1], [1], ONE_TERM)).toThrow(RangeError);
+    expect(() => waveformRiseVI([0, 2, 1], [1, 1, 1], [1, 1, 1], ONE_TERM)).toThrow(RangeError);
   });
 });
 

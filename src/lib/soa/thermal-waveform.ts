@@ -10,7 +10,8 @@
 // is applied as θ += α·p_n + β·p_(n+1) − (1 − a)·θ: a itself, rounded next to 1 when h ≪ τ, would carry a
 // relative error of up to 1e-16/x into the decay rate on every step, whereas 1 − a keeps full relative precision.
 // Cost is O(N·K) in one pass. A uniform time axis (the usual capture) shares one set of coefficients per term;
-// a non-uniform one recomputes them per step, reusing them while the step repeats exactly.
+// a non-uniform one recomputes them per step, reusing them while the step repeats exactly. From a capture, p = v·i
+// is formed sample by sample inside the same pass (waveformRiseVI) rather than stored first.
 // Z_th per JEDEC JESD24-3; the starting state is rest (θ_i = 0 at t_0).
 
 import type { FosterTerm } from "./foster";
@@ -43,7 +44,10 @@ export function rampFactor(x: number): number {
   return 1 + Math.expm1(-x) / x;
 }
 
-/** p = v·i sample by sample, in W. Lengths must match (RangeError otherwise). */
+/**
+ * p = v·i sample by sample, in W. Lengths must match (RangeError otherwise). For the rise, waveformRiseVI forms p
+ * inside its pass instead of storing it.
+ */
 export function powerFromVI(v: ArrayLike<number>, i: ArrayLike<number>): Float64Array {
   if (v.length !== i.length) throw new RangeError(`v has ${v.length} samples but i has ${i.length}`);
   const p = new Float64Array(v.length);
@@ -62,15 +66,52 @@ export function waveformRise(
   network: readonly FosterTerm[],
   options?: { trace?: boolean },
 ): WaveformRise {
+  if (p.length !== t.length) throw new RangeError(`t has ${t.length} samples but p has ${p.length}`);
+  // p·1 is p exactly (−0, ±∞ and NaN included), so this is the same pass as waveformRiseVI.
+  return risePass(t, p, UNIT, 0, network, options);
+}
+
+/**
+ * waveformRise(t, powerFromVI(v, i), network, options) with p = v·i formed sample by sample inside the pass, so the
+ * power is never stored: the same result, bit for bit. Lengths of t, v and i differing → RangeError.
+ */
+export function waveformRiseVI(
+  t: ArrayLike<number>,
+  v: ArrayLike<number>,
+  i: ArrayLike<number>,
+  network: readonly FosterTerm[],
+  options?: { trace?: boolean },
+): WaveformRise {
   const n = t.length;
-  if (p.length !== n) throw new RangeError(`t has ${n} samples but p has ${p.length}`);
+  if (v.length !== n || i.length !== n) {
+    throw new RangeError(`t has ${n} samples but v has ${v.length} and i has ${i.length}`);
+  }
+  return risePass(t, v, i, 1, network, options);
+}
+
+// The second factor of the power for waveformRise, read at index 0 only (stride 0).
+const UNIT = Float64Array.of(1);
+
+/**
+ * The pass behind both entry points, for power p_j = a_j·b_(j·bStride) with lengths already checked. Both read the
+ * power the same way, so that V8 compiles one loop for both rather than one that deoptimises on the other's input.
+ */
+function risePass(
+  t: ArrayLike<number>,
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  bStride: number,
+  network: readonly FosterTerm[],
+  options: { trace?: boolean } | undefined,
+): WaveformRise {
+  const n = t.length;
   const trace = options?.trace ? new Float64Array(n) : undefined;
   if (n === 0) return withTrace({ peak: 0, peakIndex: -1 }, trace);
 
   const step = uniformStep(t);
   const result = Number.isNaN(step)
-    ? generalPass(t, p, network, trace)
-    : uniformPasses(p, step, network, trace);
+    ? generalPass(t, a, b, bStride, network, trace)
+    : uniformPasses(a, b, bStride, step, network, trace);
   if (!Number.isFinite(result.last)) return withTrace({ peak: Number.NaN, peakIndex: -1 }, trace);
   return withTrace({ peak: result.peak, peakIndex: result.peakIndex }, trace);
 }
@@ -85,6 +126,9 @@ interface PassResult {
   peakIndex: number;
   last: number;
 }
+
+// Stands in for the partial sums of earlier term groups when there are none: read at index 0 only (stride 0).
+const NO_PARTIAL_SUMS = new Float64Array(1);
 
 /** The common step if every step is within UNIFORM_TOLERANCE of the mean step, else NaN. */
 function uniformStep(t: ArrayLike<number>): number {
@@ -107,18 +151,24 @@ function uniformStep(t: ArrayLike<number>): number {
 /**
  * Uniform axis: per term θ_(n+1) = θ_n + α·p_n + β·p_(n+1) − (1 − a)·θ_n with α = R·(1 − a − φ), β = R·φ fixed.
  * Terms go four at a time through one unrolled sample-major loop (state in locals, one read of p per sample); with
- * more than four terms, earlier groups leave their partial sums in a buffer the next group adds to.
+ * more than four terms, earlier groups leave their partial sums in a buffer the next group adds to. Power is
+ * p_j = a_j·b_(j·bStride), formed again by every group: the same product each time.
  */
 function uniformPasses(
-  p: ArrayLike<number>,
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  bStride: number,
   h: number,
   network: readonly FosterTerm[],
   trace: Float64Array | undefined,
 ): PassResult {
+  const n = a.length;
   const groups = Math.max(1, Math.ceil(network.length / 4));
-  const buffer = groups > 1 ? (trace ?? new Float64Array(p.length)) : null;
+  // Without a trace, the last group writes every sum to one slot (stride 0), which ends holding the last sum.
+  const lastSum = new Float64Array(1);
+  const partial = groups > 1 ? (trace ?? new Float64Array(n)) : NO_PARTIAL_SUMS;
   const coefficients = new Float64Array(12);
-  let result: PassResult = { peak: 0, peakIndex: 0, last: 0 };
+  let result = { peak: 0, peakIndex: 0 };
   for (let g = 0; g < groups; g++) {
     coefficients.fill(0);
     for (let lane = 0; lane < 4; lane++) {
@@ -131,20 +181,41 @@ function uniformPasses(
       coefficients[4 + lane] = term.r * (oneMinusA - ramp);
       coefficients[8 + lane] = term.r * ramp;
     }
-    const isLast = g === groups - 1;
-    const acc = g === 0 ? null : buffer;
-    const out = isLast ? (trace ?? null) : buffer;
-    result = uniformGroup(p, coefficients, acc, out);
+    const first = g === 0;
+    const toPartial = g < groups - 1;
+    const out = toPartial ? partial : (trace ?? lastSum);
+    const outStride = toPartial || trace !== undefined ? 1 : 0;
+    result = uniformGroup(
+      a,
+      b,
+      bStride,
+      coefficients,
+      first ? NO_PARTIAL_SUMS : partial,
+      first ? 0 : 1,
+      out,
+      outStride,
+    );
   }
-  return result;
+  const last = trace === undefined ? lastSum[0] : trace[n - 1];
+  return { peak: result.peak, peakIndex: result.peakIndex, last };
 }
 
+/**
+ * One group of up to four terms over all samples. acc (partial sums in) and out (sums out) are read and written
+ * with a stride of 1, or 0 where they are single slots, so that every call runs the same loop body: an operation
+ * first reached inside V8's optimised loop (a trace store an earlier call skipped) would drop the rest of the pass
+ * back to the interpreter. Power is p_j = a_j·b_(j·bStride), as in uniformPasses.
+ */
 function uniformGroup(
-  p: ArrayLike<number>,
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  bStride: number,
   c: Float64Array,
-  acc: Float64Array | null,
-  out: Float64Array | null,
-): PassResult {
+  acc: Float64Array,
+  accStride: number,
+  out: Float64Array,
+  outStride: number,
+): { peak: number; peakIndex: number } {
   const e0 = c[0];
   const e1 = c[1];
   const e2 = c[2];
@@ -157,38 +228,41 @@ function uniformGroup(
   const be1 = c[9];
   const be2 = c[10];
   const be3 = c[11];
-  const n = p.length;
+  const n = a.length;
   let th0 = 0;
   let th1 = 0;
   let th2 = 0;
   let th3 = 0;
   let peak = 0;
   let peakIndex = 0;
-  let sum = 0;
-  if (out !== null) out[0] = 0;
-  let previous = p[0];
+  out[0] = 0;
+  let previous = a[0] * b[0];
   for (let j = 1; j < n; j++) {
-    const current = p[j];
+    const current = a[j] * b[j * bStride];
     th0 += al0 * previous + be0 * current - e0 * th0;
     th1 += al1 * previous + be1 * current - e1 * th1;
     th2 += al2 * previous + be2 * current - e2 * th2;
     th3 += al3 * previous + be3 * current - e3 * th3;
-    sum = th0 + th1 + th2 + th3;
-    if (acc !== null) sum += acc[j];
-    if (out !== null) out[j] = sum;
+    const sum = th0 + th1 + th2 + th3 + acc[j * accStride];
+    out[j * outStride] = sum;
     if (sum > peak) {
       peak = sum;
       peakIndex = j;
     }
     previous = current;
   }
-  return { peak, peakIndex, last: sum };
+  return { peak, peakIndex };
 }
 
-/** Non-uniform axis: coefficients per step and term, recomputed only when the step length changes. */
+/**
+ * Non-uniform axis: coefficients per step and term, recomputed only when the step length changes. Power is
+ * p_j = a_j·b_(j·bStride), as in uniformPasses.
+ */
 function generalPass(
   t: ArrayLike<number>,
-  p: ArrayLike<number>,
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  bStride: number,
   network: readonly FosterTerm[],
   trace: Float64Array | undefined,
 ): PassResult {
@@ -203,13 +277,15 @@ function generalPass(
   const decay = new Float64Array(k);
   const alpha = new Float64Array(k);
   const beta = new Float64Array(k);
+  const n = t.length;
+  // As in uniformGroup: without a trace, every sum goes to one slot (stride 0).
+  const out = trace ?? new Float64Array(1);
+  const outStride = trace === undefined ? 0 : 1;
   let lastStep = Number.NaN;
   let peak = 0;
   let peakIndex = 0;
-  let sum = 0;
-  if (trace !== undefined) trace[0] = 0;
-  const n = t.length;
-  let previous = p[0];
+  out[0] = 0;
+  let previous = a[0] * b[0];
   for (let j = 1; j < n; j++) {
     const h = t[j] - t[j - 1];
     if (!(h >= 0)) throw new RangeError(`t must be non-decreasing: t[${j}] = ${t[j]} after ${t[j - 1]}`);
@@ -224,20 +300,20 @@ function generalPass(
       }
       lastStep = h;
     }
-    const current = p[j];
-    sum = 0;
+    const current = a[j] * b[j * bStride];
+    let sum = 0;
     for (let i = 0; i < k; i++) {
       const th = theta[i];
       const next = th + (alpha[i] * previous + beta[i] * current - decay[i] * th);
       theta[i] = next;
       sum += next;
     }
-    if (trace !== undefined) trace[j] = sum;
+    out[j * outStride] = sum;
     if (sum > peak) {
       peak = sum;
       peakIndex = j;
     }
     previous = current;
   }
-  return { peak, peakIndex, last: sum };
+  return { peak, peakIndex, last: out[(n - 1) * outStride] };
 }
