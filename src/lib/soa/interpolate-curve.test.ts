@@ -12,7 +12,10 @@ function d3Reading(points: readonly CurvePoint[], v: number): number {
   return scaleLog().domain([i0, i1]).range([0, 1]).invert(fraction);
 }
 
-/** Curves of 2–10 points, V strictly rising, every V and I > 0. */
+/**
+ * Curves of 2–10 points, V strictly rising (neighbours at least 0.1 % apart, as a digitiser gives them: closer
+ * points make ln(V_(j+1)/V_j) tiny and amplify rounding in any implementation), every V and I > 0.
+ */
 const curveArb = fc
   .array(
     fc.tuple(
@@ -25,7 +28,7 @@ const curveArb = fc
     },
   )
   .map((pts) =>
-    pts.sort((a, b) => a[0] - b[0]).filter((p, k, all) => k === 0 || p[0] > all[k - 1][0] * (1 + 1e-6)),
+    pts.sort((a, b) => a[0] - b[0]).filter((p, k, all) => k === 0 || p[0] > all[k - 1][0] * (1 + 1e-3)),
   )
   .filter((pts) => pts.length >= 2) as fc.Arbitrary<CurvePoint[]>;
 
@@ -48,10 +51,13 @@ describe("interpolateCurve", () => {
     // Reference: d3-scale scaleLog (general-purpose library), one log scale per axis.
     fc.assert(
       fc.property(curveArb, fc.double({ min: 0, max: 1, noNaN: true }), (points, u) => {
-        const v = points[0][0] * (points[points.length - 1][0] / points[0][0]) ** u;
+        const [first, last] = [points[0][0], points[points.length - 1][0]];
+        // Clamped: first·(last/first)^1 can round one ulp above the last point, outside the curve.
+        const v = Math.min(last, first * (last / first) ** u);
         const expected = d3Reading(points, v);
         const { current } = interpolateCurve(points, v);
-        expect(Math.abs((current as number) / expected - 1)).toBeLessThan(1e-12);
+        // Two correct implementations agree to 1e-9 relative (METHODS.md); rounding alone stays far below that.
+        expect(Math.abs((current as number) / expected - 1)).toBeLessThan(1e-10);
       }),
     );
   });
