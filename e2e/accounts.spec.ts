@@ -28,7 +28,7 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     await signUp(page, admin);
     await expect(page.getByRole("heading", { level: 1, name: "Overview" })).toBeVisible();
     await expect(page.getByText(admin.workspaceName).first()).toBeVisible();
-    expect(await shell.itemNames()).toEqual(["Overview", "Team", "Account"]);
+    expect(await shell.itemNames()).toEqual(["Overview", "Library", "Projects", "Team", "Account"]);
   });
 
   await test.step("the admin invites a technician from the Team page", async () => {
@@ -60,14 +60,14 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     await expect(page.getByText("Technician", { exact: true })).toBeVisible();
     await acceptInvitation(page, link, technician);
     await expect(page.getByRole("heading", { level: 1, name: "Overview" })).toBeVisible();
-    expect(await shell.itemNames()).toEqual(["Overview", "Account"]);
+    expect(await shell.itemNames()).toEqual(["Overview", "Library", "Projects", "Account"]);
     await expect(shell.item("Team")).toHaveCount(0);
   });
 
   await test.step("the technician signs out and in again, still without Team", async () => {
     await shell.signOut();
     await signIn(page, technician);
-    expect(await shell.itemNames()).toEqual(["Overview", "Account"]);
+    expect(await shell.itemNames()).toEqual(["Overview", "Library", "Projects", "Account"]);
     await page.goto("/team");
     await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
   });

@@ -1,6 +1,6 @@
 import type { Action } from "@/lib/auth/permissions";
 
-export type NavIcon = "overview" | "team" | "account";
+export type NavIcon = "overview" | "library" | "team" | "account";
 
 export interface NavItem {
   href: string;
@@ -14,6 +14,8 @@ export interface NavItem {
  */
 const items: (NavItem & { action?: Action })[] = [
   { href: "/app", label: "Overview", icon: "overview", action: "workspace.read" },
+  { href: "/library", label: "Library", icon: "library", action: "workspace.read" },
+  { href: "/projects", label: "Projects", icon: "overview", action: "workspace.read" },
   { href: "/team", label: "Team", icon: "team", action: "member.invite" },
   { href: "/account", label: "Account", icon: "account" },
 ];

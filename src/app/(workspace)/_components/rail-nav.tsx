@@ -14,6 +14,12 @@ const icons: Record<NavIcon, ReactNode> = {
       <path d="M9 13.5h4.5M9 11.25h4.5M9 9h4.5" />
     </>
   ),
+  library: (
+    <>
+      <path d="M2.5 13.5V2.5M2.5 4.5h4.5l6.5 6.5" />
+      <path d="M2.5 13.5h11" />
+    </>
+  ),
   team: (
     <>
       <circle cx="6" cy="5.5" r="2.25" />

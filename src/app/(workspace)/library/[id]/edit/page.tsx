@@ -1,0 +1,64 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { editable } from "@/components/library/format";
+import { PartForm } from "@/components/library/part-form";
+import { TitleBar } from "@/components/library/title-bar";
+import { getPart, partFacets } from "@/db/queries/parts";
+import { requireAction } from "@/lib/auth/page";
+
+export const metadata: Metadata = { title: "Edit part" };
+
+export default async function EditPartPage({ params }: { params: Promise<{ id: string }> }) {
+  const member = await requireAction("part.write");
+  const { id } = await params;
+  const [part, facets] = await Promise.all([
+    getPart({ workspaceId: member.workspace.id, partId: id }),
+    partFacets({ workspaceId: member.workspace.id }),
+  ]);
+  if (!part) notFound();
+  return (
+    <div className="space-y-5">
+      <TitleBar
+        title={`Edit ${part.partNumber}`}
+        context={
+          <>
+            <Link href="/library" className="hover:text-ink hover:underline">
+              Library
+            </Link>{" "}
+            ·{" "}
+            <Link href={`/library/${part.id}`} className="hover:text-ink hover:underline">
+              {part.maker} {part.partNumber}
+            </Link>
+          </>
+        }
+      />
+      {part.status === "verified" ? (
+        <p className="rounded-md border border-line border-l-2 border-l-accent bg-sunken px-3 py-2 text-sm">
+          This part is verified. Changing V<sub>DSS</sub>, I<sub>DM</sub>, R<sub>DS(on)</sub>, T
+          <sub>j,max</sub> or R<sub>th(j-c)</sub> returns it to draft until a lead checks it again.
+        </p>
+      ) : null}
+      <PartForm
+        partId={part.id}
+        facets={facets}
+        defaults={{
+          partNumber: part.partNumber,
+          maker: part.maker,
+          technology: part.technology,
+          package: part.package,
+          vdsMax: editable(part.vdsMax),
+          idMax: editable(part.idMax),
+          idPulseMax: editable(part.idPulseMax),
+          rdsOn: editable(part.rdsOn),
+          tjMax: editable(part.tjMax, "plain"),
+          rthJc: editable(part.rthJc, "plain"),
+          unitCost: part.unitCost === null ? "" : String(part.unitCost),
+          currency: part.currency ?? "",
+          datasheetRevision: part.datasheetRevision ?? "",
+          notes: part.notes ?? "",
+        }}
+      />
+    </div>
+  );
+}

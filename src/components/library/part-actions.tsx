@@ -1,0 +1,99 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState, useTransition } from "react";
+import { messageOf, sendJson } from "@/components/api-client";
+import { Button } from "@/components/form";
+
+/**
+ * The part's actions by role: edit and archive with part.write, "Mark verified" with part.verify. Technicians see
+ * none of them (and the server refuses them anyway).
+ */
+export function PartActions({
+  partId,
+  archived,
+  status,
+  hasCurves,
+  canWrite,
+  canVerify,
+}: {
+  partId: string;
+  archived: boolean;
+  status: "draft" | "verified";
+  hasCurves: boolean;
+  canWrite: boolean;
+  canVerify: boolean;
+}) {
+  const router = useRouter();
+  const [refreshing, startTransition] = useTransition();
+  const [confirming, setConfirming] = useState(false);
+  const refresh = () => startTransition(() => router.refresh());
+  const archive = useMutation({
+    mutationFn: (value: boolean) => sendJson("POST", `/api/parts/${partId}/archive`, { archived: value }),
+    onSuccess: () => {
+      setConfirming(false);
+      refresh();
+    },
+  });
+  const verify = useMutation({
+    mutationFn: () => sendJson("POST", `/api/parts/${partId}/verify`),
+    onSuccess: refresh,
+  });
+  const error = archive.error ?? verify.error;
+  if (!canWrite && !canVerify) return null;
+  return (
+    <>
+      {canVerify && status === "draft" && !archived ? (
+        <Button
+          variant="primary"
+          pending={verify.isPending || refreshing}
+          disabled={!hasCurves}
+          title={
+            hasCurves ? "Confirm the ratings and curves against the datasheet" : "Upload the SOA curves first"
+          }
+          onClick={() => verify.mutate()}
+        >
+          Mark verified
+        </Button>
+      ) : null}
+      {canWrite ? (
+        <>
+          <Link
+            href={`/library/${partId}/edit`}
+            className="inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken"
+          >
+            Edit part
+          </Link>
+          {archived ? (
+            <Button pending={archive.isPending || refreshing} onClick={() => archive.mutate(false)}>
+              Restore
+            </Button>
+          ) : confirming ? (
+            <span className="inline-flex items-center gap-2 text-sm">
+              Archive this part?
+              <Button
+                variant="danger"
+                pending={archive.isPending || refreshing}
+                onClick={() => archive.mutate(true)}
+              >
+                Archive
+              </Button>
+              <Button variant="quiet" onClick={() => setConfirming(false)}>
+                Keep
+              </Button>
+            </span>
+          ) : (
+            <Button onClick={() => setConfirming(true)}>Archive…</Button>
+          )}
+        </>
+      ) : null}
+      {error ? (
+        <span role="alert" className="basis-full text-right text-sm text-fail">
+          {messageOf(error)}
+        </span>
+      ) : null}
+    </>
+  );
+}

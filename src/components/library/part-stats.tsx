@@ -1,0 +1,54 @@
+import type { ReactNode } from "react";
+import { DateText } from "@/components/date-text";
+import { quantityText } from "./format";
+import { PartStatus } from "./part-status";
+import { Sym } from "./symbols";
+
+export interface PartFigures {
+  vdsMax: number;
+  idPulseMax: number | null;
+  rdsOn: number | null;
+  tjMax: number;
+  rthJc: number | null;
+  status: "draft" | "verified";
+  verifiedByName: string | null;
+  verifiedAt: Date | string | null;
+}
+
+function Stat({ label, value, note }: { label: ReactNode; value: ReactNode; note?: ReactNode }) {
+  return (
+    <div className="rounded-md border border-line bg-panel px-4 py-3">
+      <dt className="text-xs text-ink-muted">{label}</dt>
+      <dd className="num mt-1 font-mono text-lg leading-7 text-ink">{value}</dd>
+      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
+    </div>
+  );
+}
+
+/** The part's key figures, and who verified it when. */
+export function PartStats({ part }: { part: PartFigures }) {
+  return (
+    <dl className="grid grid-cols-[repeat(auto-fill,minmax(9.5rem,1fr))] gap-3" aria-label="Key figures">
+      <Stat label={<Sym main="V" sub="DSS" />} value={quantityText(part.vdsMax, "V")} />
+      <Stat label={<Sym main="I" sub="DM" />} value={quantityText(part.idPulseMax, "A")} note="pulsed" />
+      <Stat label={<Sym main="R" sub="DS(on)" />} value={quantityText(part.rdsOn, "Ω")} note="at 25 °C" />
+      <Stat label={<Sym main="T" sub="j,max" />} value={quantityText(part.tjMax, "°C")} />
+      <Stat label={<Sym main="R" sub="th(j-c)" />} value={quantityText(part.rthJc, "K/W")} />
+      <div className="rounded-md border border-line bg-panel px-4 py-3" data-testid="part-status">
+        <dt className="text-xs text-ink-muted">Status</dt>
+        <dd className="mt-1 leading-7">
+          <PartStatus status={part.status} />
+        </dd>
+        <dd className="text-xs text-ink-faint">
+          {part.status === "verified" && part.verifiedAt ? (
+            <>
+              Verified by {part.verifiedByName ?? "a former member"} on <DateText value={part.verifiedAt} />
+            </>
+          ) : (
+            "Not yet checked by a lead"
+          )}
+        </dd>
+      </div>
+    </dl>
+  );
+}

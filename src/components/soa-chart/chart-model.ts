@@ -1,0 +1,173 @@
+import { formatQuantity } from "@/lib/soa/units";
+import { type ChartColours, curveHues } from "./chart-colours";
+import { decadeDomain } from "./log-ticks";
+import type { ChartCurve, ChartDuration, SoaChartProps } from "./types";
+
+// What the SOA chart draws, worked out from its props before any pixel: the lines with their styles, the
+// whole-decade domains, and the layout that gives a decade the same length on both axes.
+
+export type LineKind = "curve" | "derated" | "interpolated";
+
+export interface ChartLine {
+  key: string;
+  kind: LineKind;
+  duration: ChartDuration;
+  /** Its name in the legend and the tooltip ("1 ms", "DC", "2 ms, interpolated"). */
+  name: string;
+  /** Its label at the line's end, kept short ("1 ms", "2 ms interp."). */
+  label: string;
+  points: [number, number][];
+  stroke: string;
+  text: string;
+  dash?: string;
+  strokeWidth: number;
+}
+
+export const DERATED_DASH = "5 3";
+export const INTERPOLATED_DASH = "9 3 2 3";
+
+/** "10 µs", "1 ms" or "DC". */
+export function durationName(duration: ChartDuration): string {
+  return duration === "DC" ? "DC" : formatQuantity(duration, "s");
+}
+
+function order(duration: ChartDuration): number {
+  return duration === "DC" ? Number.POSITIVE_INFINITY : duration;
+}
+
+export function sortByDuration(curves: readonly ChartCurve[]): ChartCurve[] {
+  return [...curves].sort((a, b) => order(a.duration) - order(b.duration));
+}
+
+export function buildLines(props: SoaChartProps, colours: ChartColours): ChartLine[] {
+  const curves = sortByDuration(props.curves);
+  const hues = curveHues(colours, curves.length);
+  const hueOf = (d: ChartDuration) =>
+    hues[
+      Math.max(
+        0,
+        curves.findIndex((c) => c.duration === d),
+      )
+    ];
+  const lines: ChartLine[] = curves.map((c, k) => ({
+    key: `curve-${k}`,
+    kind: "curve",
+    duration: c.duration,
+    name: durationName(c.duration),
+    label: durationName(c.duration),
+    points: c.points,
+    stroke: hues[k].line,
+    text: hues[k].text,
+    strokeWidth: 1.75,
+  }));
+  if (props.derated && props.derated.factor < 1) {
+    sortByDuration(props.derated.curves).forEach((c, k) => {
+      const hue = hueOf(c.duration);
+      lines.push({
+        key: `derated-${k}`,
+        kind: "derated",
+        duration: c.duration,
+        name: `${durationName(c.duration)} at ${formatQuantity(props.derated!.caseTemp, "°C")}`,
+        label: durationName(c.duration),
+        points: c.points,
+        stroke: hue?.line ?? colours.accent,
+        text: hue?.text ?? colours.accent,
+        dash: DERATED_DASH,
+        strokeWidth: 1.5,
+      });
+    });
+  }
+  if (props.interpolated && props.interpolated.points.length > 1) {
+    const note = props.interpolated.note ?? "interpolated";
+    lines.push({
+      key: "interpolated",
+      kind: "interpolated",
+      duration: props.interpolated.width,
+      name: `${durationName(props.interpolated.width)}, ${note}`,
+      label: `${durationName(props.interpolated.width)}${note.includes("interpolated") ? " interp." : ""}`,
+      points: props.interpolated.points,
+      stroke: colours.ink,
+      text: colours.ink,
+      dash: INTERPOLATED_DASH,
+      strokeWidth: 1.75,
+    });
+  }
+  return lines;
+}
+
+/** Whole decades around the curves and pulses; derated lines are clipped so the axes stay put. */
+export function chartDomains(props: SoaChartProps) {
+  const points = props.curves.flatMap((c) => c.points);
+  const vs = [...points.map(([v]) => v), ...(props.pulses ?? []).map((p) => p.v)];
+  const is = [...points.map(([, i]) => i), ...(props.pulses ?? []).map((p) => p.i)];
+  return {
+    x: decadeDomain(vs, [0.1, 100], 2),
+    y: decadeDomain(is, [0.1, 1000], 2),
+  };
+}
+
+export interface ChartLayout {
+  width: number;
+  height: number;
+  margin: { top: number; right: number; bottom: number; left: number };
+  plot: { left: number; top: number; width: number; height: number };
+  decade: number;
+  /** Where the legend starts; below the plot it may run in `columns` columns of `width / columns`. */
+  legend: { x: number; y: number; width: number; columns: number };
+}
+
+const margin = { top: 14, left: 54, bottom: 50 };
+const maxPlotHeight = 500;
+const defaultLegendWidth = 200;
+export const LEGEND_ROW = 17;
+
+/** Pixel width of a label at the chart's 11 px text, generously estimated. */
+export function textWidth(text: string): number {
+  return text.length * 6.3 + 4;
+}
+
+/**
+ * Square decades: one length per decade on both axes, as large as fits the width (the legend beside the plot
+ * when there is room, else below it) and at most `maxPlotHeight` tall. With `flowLegend`, the legend goes below
+ * whenever that gives larger decades, in as many columns of `legendWidth` as fit.
+ */
+export function chartLayout(
+  available: number,
+  domains: { x: [number, number]; y: [number, number] },
+  gutter: number,
+  legendRows: number,
+  legendWidth = defaultLegendWidth,
+  flowLegend = false,
+): ChartLayout {
+  const decadesX = Math.log10(domains.x[1] / domains.x[0]);
+  const decadesY = Math.log10(domains.y[1] / domains.y[0]);
+  const decadeFor = (room: number) => Math.max(44, Math.min(150, room / decadesX, maxPlotHeight / decadesY));
+  const besideDecade = decadeFor(available - margin.left - gutter - legendWidth);
+  const belowDecade = decadeFor(available - margin.left - gutter);
+  const fits = available - margin.left - gutter - legendWidth >= decadesX * 70;
+  const beside = fits && (!flowLegend || besideDecade >= belowDecade * 0.97);
+  const decade = beside ? besideDecade : belowDecade;
+  const plot = { left: margin.left, top: margin.top, width: decade * decadesX, height: decade * decadesY };
+  const plotBottom = plot.top + plot.height + margin.bottom;
+  const width = beside
+    ? plot.left + plot.width + gutter + legendWidth
+    : Math.max(available, plot.left + plot.width + gutter);
+  const columns = beside || !flowLegend ? 1 : Math.max(1, Math.floor((width - plot.left) / legendWidth));
+  const legendHeight = Math.ceil(legendRows / columns) * LEGEND_ROW + 8;
+  const height = beside ? Math.max(plotBottom, plot.top + legendHeight) : plotBottom + legendHeight;
+  return {
+    width: Math.round(width),
+    height: Math.round(height),
+    margin: {
+      top: plot.top,
+      left: plot.left,
+      right: width - plot.left - plot.width,
+      bottom: height - plot.top - plot.height,
+    },
+    plot,
+    decade,
+    legend: beside
+      ? { x: plot.left + plot.width + gutter + 8, y: plot.top, width: legendWidth - 8, columns }
+      : { x: plot.left, y: plotBottom, width: width - plot.left, columns },
+  };
+}

@@ -1,0 +1,55 @@
+import type { Verdict } from "@/components/verdict-shape";
+
+/** Pulse width of a curve in seconds, or "DC". */
+export type ChartDuration = number | "DC";
+
+/** One limit line: its pulse width and its [V, I] points, sorted by V (SI units). */
+export interface ChartCurve {
+  duration: ChartDuration;
+  points: [number, number][];
+}
+
+/** A quality finding of a curve set (src/lib/soa/findings.ts), marked on its curve at its voltage. */
+export interface ChartFinding {
+  kind: string;
+  curve: { index: number; duration: ChartDuration };
+  location: { v: number } | { index: number };
+  message: string;
+}
+
+/** A pulse drawn at (V, I) in its verdict's shape; `label` is shown on hover and in the text alternative. */
+export interface ChartPulse {
+  id: string;
+  v: number;
+  i: number;
+  verdict: Verdict;
+  label: string;
+}
+
+/** The curves scaled for a case temperature (METHODS.md §5), drawn dashed in their curve's hue. */
+export interface ChartDerated {
+  caseTemp: number;
+  /** The derating factor k applied to every curve. */
+  factor: number;
+  curves: ChartCurve[];
+}
+
+/** The limit line for a typed pulse width, read between the curves. */
+export interface ChartInterpolated {
+  width: number;
+  points: [number, number][];
+  /** Extra words for its label and legend, e.g. "interpolated" or "next longer curve". */
+  note?: string;
+}
+
+export interface SoaChartProps {
+  /** What the chart shows, for its accessible name and the export file names (e.g. the part number). */
+  title: string;
+  curves: ChartCurve[];
+  /** Case temperature of the curves as specified (25 °C unless the datasheet says otherwise). */
+  refCaseTemp?: number;
+  derated?: ChartDerated | null;
+  interpolated?: ChartInterpolated | null;
+  findings?: ChartFinding[];
+  pulses?: ChartPulse[];
+}
