@@ -1,0 +1,46 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CompareActions } from "@/components/decisions/compare-actions";
+import { CompareView } from "@/components/decisions/compare-view";
+import { TitleBar } from "@/components/library/title-bar";
+import { requireMember } from "@/lib/auth/page";
+import { AppError } from "@/lib/errors";
+import { loadProject } from "@/lib/projects/projects";
+
+export const metadata: Metadata = { title: "Compare and decide" };
+
+export default async function ComparePage({ params }: { params: Promise<{ id: string }> }) {
+  const member = await requireMember();
+  const { id } = await params;
+  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
+    if (error instanceof AppError) notFound();
+    throw error;
+  });
+  const canSign = member.can("decision.sign");
+
+  return (
+    <div className="space-y-6">
+      <TitleBar
+        title="Compare and decide"
+        context={
+          <>
+            <Link href="/projects" className="hover:text-ink hover:underline">
+              Projects
+            </Link>
+            {" / "}
+            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
+              {project.name}
+            </Link>
+            {" · "}
+            <Link href={`/projects/${project.id}/decisions`} className="hover:text-ink hover:underline">
+              Decisions
+            </Link>
+          </>
+        }
+        actions={<CompareActions projectId={project.id} canSign={canSign} />}
+      />
+      <CompareView projectId={project.id} projectName={project.name} canSign={canSign} />
+    </div>
+  );
+}

@@ -1,0 +1,87 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AuditList } from "@/components/decisions/audit-list";
+import { DecisionHistory } from "@/components/decisions/decision-history";
+import { TitleBar } from "@/components/library/title-bar";
+import { Section } from "@/components/page-header";
+import { requireMember } from "@/lib/auth/page";
+import { AppError } from "@/lib/errors";
+import { listDecisions } from "@/lib/projects/decisions";
+import { loadProject } from "@/lib/projects/projects";
+
+export const metadata: Metadata = { title: "Decisions" };
+
+const button =
+  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
+
+export default async function DecisionsPage({ params }: { params: Promise<{ id: string }> }) {
+  const member = await requireMember();
+  const { id } = await params;
+  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
+    if (error instanceof AppError) notFound();
+    throw error;
+  });
+  const decisions = await listDecisions(project.id);
+  const canSign = member.can("decision.sign");
+
+  return (
+    <div className="space-y-8">
+      <TitleBar
+        title="Decisions"
+        context={
+          <>
+            <Link href="/projects" className="hover:text-ink hover:underline">
+              Projects
+            </Link>
+            {" / "}
+            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
+              {project.name}
+            </Link>
+          </>
+        }
+        actions={
+          <Link href={`/projects/${project.id}/compare`} className={button}>
+            Compare and decide
+          </Link>
+        }
+      />
+
+      <Section
+        id="history"
+        title="Decision history"
+        description="Newest first. A decision is never edited: a later one supersedes it, and each keeps the evaluation it was signed on."
+      >
+        {decisions.length === 0 ? (
+          <div className="rounded-md border border-line bg-panel px-4 py-8 text-center text-sm text-ink-muted">
+            <p>No decision has been recorded for this project yet.</p>
+            <p className="mt-2">
+              {canSign ? (
+                <Link
+                  href={`/projects/${project.id}/compare?decide=1`}
+                  className="text-accent underline underline-offset-2"
+                >
+                  Compare the candidates and record the decision
+                </Link>
+              ) : (
+                "A lead records it from the comparison of the candidates."
+              )}
+            </p>
+          </div>
+        ) : (
+          <DecisionHistory projectId={project.id} decisions={decisions} />
+        )}
+      </Section>
+
+      {member.can("audit.read") ? (
+        <Section
+          id="audit"
+          title="Project history"
+          description="Who changed the project's fault cases, measurements, candidates and decisions, and when."
+        >
+          <AuditList projectId={project.id} />
+        </Section>
+      ) : null}
+    </div>
+  );
+}

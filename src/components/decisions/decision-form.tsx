@@ -1,0 +1,138 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useEffect, useRef } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import { z } from "zod";
+import { sendJson } from "@/components/api-client";
+import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
+import { applyServerErrors } from "@/components/form-errors";
+import { TextAreaField } from "@/components/library/fields";
+import type { MatrixRow } from "@/lib/projects/matrix";
+import { percent, verdictWords } from "./format";
+import { bestPassing } from "./matrix-model";
+import { type CheckedCandidate, decisionKeys } from "./types";
+
+/** The same rules as POST /api/projects/:id/decisions. */
+const decisionSchema = z.object({
+  partId: z.string().min(1, { message: "Choose a candidate" }),
+  rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
+});
+
+type DecisionValues = z.infer<typeof decisionSchema>;
+
+/**
+ * A lead signs the choice: the candidate (the best one that passes every pulse, unless changed) and why. The
+ * server freezes the evaluation with it; on success the decision's record opens.
+ */
+export function DecisionForm({
+  projectId,
+  candidates,
+  ranking,
+  onCancel,
+}: {
+  projectId: string;
+  candidates: CheckedCandidate[];
+  ranking: MatrixRow[];
+  onCancel: () => void;
+}) {
+  const router = useRouter();
+  const client = useQueryClient();
+  const form = useForm<DecisionValues>({
+    resolver: zodResolver(decisionSchema),
+    defaultValues: { partId: bestPassing(ranking) ?? "", rationale: "" },
+  });
+  const { errors, isSubmitting, isSubmitSuccessful } = form.formState;
+  const partId = useWatch({ control: form.control, name: "partId" });
+  const chosen = ranking.find((r) => r.partId === partId);
+  const byId = new Map(candidates.map((c) => [c.partId, c]));
+  const frame = useRef<HTMLFormElement>(null);
+  // Opened from the title bar: bring the form into view and put the caret in the rationale.
+  useEffect(() => {
+    frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
+    form.setFocus("rationale");
+  }, [form]);
+
+  async function onSubmit(values: DecisionValues) {
+    try {
+      const { decision } = await sendJson<{ decision: { id: string } }>(
+        "POST",
+        `/api/projects/${projectId}/decisions`,
+        values,
+      );
+      await client.invalidateQueries({ queryKey: decisionKeys.decisions(projectId) });
+      router.push(`/projects/${projectId}/decisions/${decision.id}`);
+    } catch (error) {
+      applyServerErrors(error, form.setError, ["partId", "rationale"], { "invalid:candidate": "partId" });
+    }
+  }
+
+  return (
+    <form
+      ref={frame}
+      id="record-decision"
+      onSubmit={form.handleSubmit(onSubmit)}
+      noValidate
+      aria-labelledby="record-decision-title"
+      className="rounded-md border border-line border-l-2 border-l-accent bg-panel p-5"
+    >
+      <h2 id="record-decision-title" className="text-sm font-semibold">
+        Record decision
+      </h2>
+      <p className="mt-0.5 text-sm text-ink-muted">
+        The current evaluation of every candidate and pulse is frozen with your signature; it is never edited,
+        only superseded by a later decision.
+      </p>
+      <div className="mt-4 grid gap-4 md:grid-cols-[minmax(0,22rem)_1fr]">
+        <SelectField
+          id="decision-part"
+          label="Chosen candidate"
+          error={errors.partId?.message}
+          hint={
+            chosen
+              ? `${byId.get(chosen.partId)?.maker ?? ""}. ${
+                  chosen.passesAll
+                    ? `Passes every pulse, worst utilisation ${percent(chosen.worstUtilisation)}.`
+                    : `Worst verdict ${verdictWords[chosen.worstVerdict]}: say in the rationale why it is still the choice.`
+                }`
+              : ranking.some((r) => r.passesAll)
+                ? undefined
+                : "No candidate passes every pulse."
+          }
+          {...form.register("partId")}
+        >
+          <option value="">Choose…</option>
+          {ranking.map((r) => {
+            const c = byId.get(r.partId);
+            return c ? (
+              <option key={r.partId} value={r.partId}>
+                {r.rank}. {c.partNumber} —{" "}
+                {r.passesAll ? "passes all" : `worst ${verdictWords[r.worstVerdict]}`}
+              </option>
+            ) : null;
+          })}
+        </SelectField>
+        <TextAreaField
+          id="decision-rationale"
+          label="Rationale"
+          rows={4}
+          placeholder="Why this part: margins on the decisive cases, cost, availability, bench evidence…"
+          error={errors.rationale?.message}
+          hint="At least 10 characters. It goes into the record and the report as written."
+          {...form.register("rationale")}
+        />
+      </div>
+      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
+      <FormActions aside="Signing is final: a later decision supersedes this one, nothing edits it.">
+        <Button variant="quiet" onClick={onCancel} disabled={isSubmitting}>
+          Cancel
+        </Button>
+        <Button type="submit" variant="primary" pending={isSubmitting || isSubmitSuccessful}>
+          Sign decision
+        </Button>
+      </FormActions>
+    </form>
+  );
+}

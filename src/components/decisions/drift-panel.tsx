@@ -1,0 +1,138 @@
+import type { Verdict } from "@/lib/soa/types";
+import { percent, q } from "./format";
+import type { DecisionSnapshot, Drift } from "./types";
+import { VerdictMark } from "./verdict-mark";
+
+type Policy = DecisionSnapshot["policy"];
+
+const betweenWords = { loglog: "log-log interpolation", "next-longer": "next longer curve" } as const;
+
+function policyText(p: Policy): string {
+  return `utilisation limit ${percent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K, between curves: ${betweenWords[p.betweenCurves]}`;
+}
+
+function Outcome({ value }: { value: { verdict: Verdict; utilisation: number | null } | null }) {
+  if (!value) return <span className="text-ink-faint">not checked</span>;
+  return (
+    <span className="inline-flex items-center gap-2">
+      <span className="font-mono num">{percent(value.utilisation)}</span>
+      {VerdictMark({ verdict: value.verdict })}
+    </span>
+  );
+}
+
+/** True when checking again would give exactly what was frozen. */
+function driftIsEmpty(drift: Drift): boolean {
+  return (
+    !drift.policyChanged &&
+    drift.caseTempChanged === null &&
+    drift.curveSetsChanged.length === 0 &&
+    drift.pulsesAdded.length === 0 &&
+    drift.pulsesRemoved.length === 0 &&
+    drift.results.length === 0
+  );
+}
+
+/**
+ * "Checked again now": what differs between the frozen evaluation and the project checked today. The record
+ * itself never changes; this only says how far the world has moved from it.
+ */
+export function DriftPanel({ drift, frozen, now }: { drift: Drift; frozen: Policy; now: Policy }) {
+  if (driftIsEmpty(drift)) {
+    return (
+      <p
+        className="rounded-md border border-line border-l-2 border-l-pass bg-panel px-4 py-3 text-sm"
+        data-testid="drift"
+      >
+        Nothing has changed since the decision: checked again now, every candidate and pulse gives the frozen
+        result.
+      </p>
+    );
+  }
+  const changes: { key: string; what: string; detail: string }[] = [];
+  if (drift.caseTempChanged) {
+    changes.push({
+      key: "temp",
+      what: "Case temperature",
+      detail: `${q(drift.caseTempChanged.frozen, "°C")} → ${q(drift.caseTempChanged.now, "°C")}`,
+    });
+  }
+  if (drift.policyChanged) {
+    changes.push({
+      key: "policy",
+      what: "Margin policy",
+      detail: `${policyText(frozen)} → ${policyText(now)}`,
+    });
+  }
+  for (const c of drift.curveSetsChanged) {
+    changes.push({
+      key: `curves-${c.partId}`,
+      what: "Part data",
+      detail: `${c.label}: its SOA curves or ratings differ from those frozen`,
+    });
+  }
+  if (drift.pulsesAdded.length) {
+    changes.push({ key: "added", what: "Pulses added", detail: drift.pulsesAdded.join(", ") });
+  }
+  if (drift.pulsesRemoved.length) {
+    changes.push({ key: "removed", what: "Pulses removed", detail: drift.pulsesRemoved.join(", ") });
+  }
+  return (
+    <div
+      className="space-y-3 rounded-md border border-line border-l-2 border-l-marginal bg-panel p-4"
+      data-testid="drift"
+    >
+      <p className="text-sm">
+        Checked again now, the project differs from the frozen evaluation. The record and its report stay as
+        signed.
+      </p>
+      {changes.length ? (
+        <dl className="grid gap-x-6 gap-y-1.5 text-sm sm:grid-cols-[max-content_1fr]">
+          {changes.map((c) => (
+            <div key={c.key} className="contents">
+              <dt className="text-ink-muted">{c.what}</dt>
+              <dd>{c.detail}</dd>
+            </div>
+          ))}
+        </dl>
+      ) : null}
+      {drift.results.length ? (
+        <div className="max-h-80 overflow-auto rounded-md border border-line">
+          <table
+            aria-label="Results that changed"
+            className="w-full border-separate border-spacing-0 text-sm"
+          >
+            <thead>
+              <tr>
+                {["Candidate × pulse", "Frozen", "Now"].map((h) => (
+                  <th
+                    key={h}
+                    scope="col"
+                    className="sticky top-0 h-8 border-b border-line bg-sunken px-3 text-left text-xs font-medium text-ink-muted"
+                  >
+                    {h}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {drift.results.map((r) => (
+                <tr key={`${r.partId}-${r.pulseId}`}>
+                  <th scope="row" className="h-9 border-b border-line px-3 text-left font-normal">
+                    {r.label}
+                  </th>
+                  <td className="h-9 border-b border-line px-3 text-xs">
+                    <Outcome value={r.frozen} />
+                  </td>
+                  <td className="h-9 border-b border-line px-3 text-xs">
+                    <Outcome value={r.now} />
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+import { triangleEquivalent } from "@/lib/soa/equivalent-rectangle";
+import type { PulseResult, Verdict } from "@/lib/soa/types";
+import { formatQuantity, type Unit } from "@/lib/soa/units";
+import type { CheckedPulse, PulseSource } from "./types";
+
+export const verdictWords: Record<Verdict, string> = {
+  pass: "pass",
+  marginal: "marginal",
+  fail: "fail",
+  "no-data": "no data",
+};
+
+export const sourceWords: Record<PulseSource, string> = {
+  "fault-case": "fault case",
+  measured: "measured",
+  capture: "capture",
+};
+
+/** A quantity, or a dash where there is none (JSON turns NaN into null). */
+export function q(value: number | null | undefined, unit: Unit | "", digits = 3): string {
+  return value === null || value === undefined || !Number.isFinite(value)
+    ? "—"
+    : formatQuantity(value, unit, digits);
+}
+
+/** Utilisation as a percentage: 0.834 → "83 %", 1.32 → "132 %", 0.042 → "4.2 %". */
+export function percent(u: number | null | undefined): string {
+  if (u === null || u === undefined || !Number.isFinite(u)) return "—";
+  return `${u < 0.1 ? (u * 100).toPrecision(2) : Math.round(u * 100)}\u2009%`;
+}
+
+/** "1 pulse", "3 pulses". */
+export function plural(count: number, noun: string): string {
+  return `${count} ${noun}${count === 1 ? "" : "s"}`;
+}
+
+export const shapeWords = { rect: "rectangle", triangle: "falling triangle", waveform: "waveform" } as const;
+
+/** A unit cost with its currency ("2.85 EUR"), or a dash. */
+export function money(value: number | null, currency: string | null): string {
+  if (value === null) return "—";
+  return `${value.toFixed(2)}${currency ? `\u2009${currency}` : ""}`;
+}
+
+/**
+ * The width the curves are read at for a pulse (METHODS.md §6): a triangle's equal-energy rectangle lasts half
+ * its width; a capture's width is already its rectangle's; null when the pulse has none.
+ */
+export function readWidth(pulse: CheckedPulse): number | null {
+  if (pulse.duration === null || !(pulse.duration > 0)) return null;
+  if (pulse.kind === "triangle" && pulse.v !== null && pulse.i !== null) {
+    return triangleEquivalent(pulse.v, pulse.i, pulse.duration).duration;
+  }
+  return pulse.duration;
+}
+
+/** A pulse in one line: "fault case · 48 V · 1.5 A · 48 ms". */
+export function pulseLine(pulse: CheckedPulse): string {
+  return [sourceWords[pulse.source], q(pulse.v, "V"), q(pulse.i, "A"), q(pulse.duration, "s")].join(" · ");
+}
+
+/** How a result was found, in one line for a cell's hover text. */
+export function resultLine(result: PulseResult | undefined): string {
+  if (!result) return "no data: the part has no SOA curves";
+  const parts = [
+    `${verdictWords[result.verdict]}, utilisation ${percent(result.utilisation)}`,
+    `allowed ${q(result.allowedCurrent, "A")}`,
+    result.tjPeak !== null ? `Tj peak ${q(result.tjPeak, "°C")}` : null,
+    `derating ×${result.derating.toFixed(2)}`,
+    result.flags.length ? `flags: ${result.flags.join(", ")}` : null,
+  ];
+  return parts.filter(Boolean).join("; ");
+}

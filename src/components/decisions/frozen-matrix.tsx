@@ -1,0 +1,33 @@
+"use client";
+
+import { useState } from "react";
+import { CellDetails } from "./cell-details";
+import { type CellRef, MatrixTable } from "./matrix-table";
+import type { MatrixData, MatrixRow } from "./types";
+
+/** A decision's matrix exactly as frozen, in its frozen rank order; a cell opens how it was found then. */
+export function FrozenMatrix({ data, ranking }: { data: MatrixData; ranking: MatrixRow[] }) {
+  const [selected, setSelected] = useState<CellRef | null>(null);
+  return (
+    <>
+      <MatrixTable
+        label="Frozen matrix"
+        data={data}
+        ranking={ranking}
+        pulses={data.pulses}
+        selected={selected}
+        onSelect={setSelected}
+      />
+      {selected ? (
+        <div className="mt-3">
+          <CellDetails
+            data={data}
+            partId={selected.partId}
+            pulseId={selected.pulseId}
+            onClose={() => setSelected(null)}
+          />
+        </div>
+      ) : null}
+    </>
+  );
+}

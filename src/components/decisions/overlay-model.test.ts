@@ -1,0 +1,34 @@
+import { describe, expect, it } from "vitest";
+import { lineGroups } from "./overlay-model";
+import type { CheckedPulse } from "./types";
+
+const pulse = (
+  id: string,
+  source: CheckedPulse["source"],
+  extra: Partial<CheckedPulse> = {},
+): CheckedPulse => ({
+  id,
+  source,
+  name: id,
+  caseTemp: 85,
+  v: 48,
+  i: 2,
+  duration: 0.01,
+  kind: "rect",
+  ...extra,
+});
+
+describe("overlay lines", () => {
+  it("lineGroups(pulses) reads a triangle at half its width and merges pulses read alike", () => {
+    const groups = lineGroups([
+      pulse("t", "fault-case", { kind: "triangle", duration: 0.048 }),
+      pulse("r", "measured", { duration: 0.024 }),
+      pulse("x", "measured", { duration: null }),
+      pulse("h", "fault-case", { duration: 0.024, caseTemp: 100 }),
+    ]);
+    expect(groups.map((g) => [g.width, g.caseTemp])).toEqual([
+      [0.024, 85],
+      [0.024, 100],
+    ]);
+  });
+});

@@ -1,0 +1,29 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { callJson } from "@/components/library/api";
+import { type AuditEvent, type DecisionSummary, decisionKeys, type ProjectCheck } from "./types";
+
+/** The project checked now: always fetched fresh on mount, since the library may have changed. */
+export function useCheck(projectId: string) {
+  return useQuery({
+    queryKey: decisionKeys.check(projectId),
+    queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
+    staleTime: 0,
+  });
+}
+
+export function useDecisions(projectId: string) {
+  return useQuery({
+    queryKey: decisionKeys.decisions(projectId),
+    queryFn: () => callJson<{ decisions: DecisionSummary[] }>("GET", `/api/projects/${projectId}/decisions`),
+  });
+}
+
+export function useAudit(projectId: string) {
+  return useQuery({
+    queryKey: decisionKeys.audit(projectId),
+    queryFn: () => callJson<{ events: AuditEvent[] }>("GET", `/api/projects/${projectId}/audit`),
+    staleTime: 0,
+  });
+}
