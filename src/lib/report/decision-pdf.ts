@@ -60,6 +60,7 @@ export function renderDecisionPdf(input: {
   const { decision, snapshot } = input;
   const doc = new PDFDocument({
     size: "A4",
+    bufferPages: true,
     margins: { top: 48, bottom: 56, left: 48, right: 48 },
     font: fonts.regular,
     info: {
@@ -113,7 +114,7 @@ export function renderDecisionPdf(input: {
 
   const chosen = snapshot.candidates.find((c) => c.partId === decision.chosenPartId);
   if (chosen?.limits) {
-    doc.addPage();
+    ensureSpace(doc, 470);
     section(
       doc,
       `SOA of ${chosen.partNumber} at ${q(snapshot.policy.caseTemp, "°C")} case, with every pulse`,
@@ -202,7 +203,12 @@ interface Column {
 function table(
   doc: Doc,
   columns: Column[],
-  rows: { cells: string[]; colours?: (string | undefined)[] }[],
+  rows: {
+    cells: string[];
+    colours?: (string | undefined)[];
+    /** A verdict per cell: its shape is drawn before the text, so a verdict never rests on colour alone. */
+    verdicts?: (Verdict | undefined)[];
+  }[],
 ): void {
   const x0 = doc.page.margins.left;
   const rowHeight = 15;
@@ -238,12 +244,16 @@ function table(
     const y = doc.y;
     row.cells.forEach((cell, k) => {
       const c = columns[k];
+      const verdict = row.verdicts?.[k];
+      if (verdict) marker(doc, x + 6, y + 4, verdict, 2.6);
+      const indent = verdict ? 10 : 0;
       doc
         .font(c.align === "right" ? "mono" : "regular")
         .fontSize(8)
         .fillColor(row.colours?.[k] ?? ink)
-        .text(cell, x + 2, y, {
-          width: c.width - 4,
+        .text(cell, x + 2 + indent, y, {
+          width: c.width - 4 - indent,
+          height: 11,
           align: c.align ?? "left",
           lineBreak: false,
           ellipsis: true,
@@ -260,53 +270,73 @@ function candidatesTable(doc: Doc, snapshot: DecisionSnapshot): void {
   table(
     doc,
     [
-      { title: "Rank", width: 28, align: "right" },
-      { title: "Part", width: 82 },
-      { title: "Maker", width: 125 },
+      { title: "Rank", width: 26, align: "right" },
+      { title: "Part", width: 78 },
+      { title: "Maker", width: 112 },
       { title: "V_DSS", width: 45, align: "right" },
       { title: "R_DS(on)", width: 50, align: "right" },
       { title: "Tj,max", width: 45, align: "right" },
       { title: "Cost", width: 45, align: "right" },
-      { title: "Worst", width: 45, align: "right" },
-      { title: "Verdict", width: 34 },
+      { title: "Worst", width: 40, align: "right" },
+      { title: "Verdict", width: 58 },
     ],
-    [...snapshot.candidates]
-      .sort((a, b) => (rankOf(a.partId)?.rank ?? 99) - (rankOf(b.partId)?.rank ?? 99))
-      .map((c) => {
-        const r = rankOf(c.partId);
-        const verdict = r?.worstVerdict ?? "no-data";
-        return {
-          cells: [
-            String(r?.rank ?? "—"),
-            c.partNumber,
-            c.maker,
-            q(c.part.vdsMax, "V"),
-            q(c.part.rdsOn, "Ω"),
-            q(c.part.tjMax, "°C"),
-            c.unitCost === null ? "—" : `${c.unitCost.toFixed(2)} ${c.currency ?? ""}`,
-            pct(r?.worstUtilisation ?? null),
-            verdictWord[verdict],
-          ],
-          colours: [
-            undefined,
-            undefined,
-            undefined,
-            undefined,
-            undefined,
-            undefined,
-            undefined,
-            undefined,
-            verdictColour[verdict],
-          ],
-        };
-      }),
+    byRank(snapshot).map((c) => {
+      const r = rankOf(c.partId);
+      const verdict = r?.worstVerdict ?? "no-data";
+      return {
+        cells: [
+          String(r?.rank ?? "—"),
+          c.partNumber,
+          c.maker,
+          q(c.part.vdsMax, "V"),
+          q(c.part.rdsOn, "Ω"),
+          q(c.part.tjMax, "°C"),
+          c.unitCost === null ? "—" : `${c.unitCost.toFixed(2)} ${c.currency ?? ""}`,
+          pct(r?.worstUtilisation ?? null),
+          verdictWord[verdict],
+        ],
+        colours: [
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          verdictColour[verdict],
+        ],
+        verdicts: [
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          undefined,
+          verdict,
+        ],
+      };
+    }),
   );
 }
 
-function cell(result: PulseResult | undefined): { text: string; colour: string } {
-  if (!result) return { text: "no data", colour: verdictColour["no-data"] };
+function cell(result: PulseResult | undefined): { text: string; colour: string; verdict: Verdict } {
+  if (!result) return { text: "no data", colour: verdictColour["no-data"], verdict: "no-data" };
   const u = result.utilisation === null ? "" : ` ${pct(result.utilisation)}`;
-  return { text: `${verdictWord[result.verdict]}${u}`, colour: verdictColour[result.verdict] };
+  return {
+    text: `${verdictWord[result.verdict]}${u}`,
+    colour: verdictColour[result.verdict],
+    verdict: result.verdict,
+  };
+}
+
+/** The candidates in the order of the ranking frozen with the decision. */
+function byRank(snapshot: DecisionSnapshot) {
+  const rank = (id: string) =>
+    snapshot.ranking.find((r) => r.partId === id)?.rank ?? Number.POSITIVE_INFINITY;
+  return [...snapshot.candidates].sort((a, b) => rank(a.partId) - rank(b.partId));
 }
 
 function matrix(doc: Doc, snapshot: DecisionSnapshot): void {
@@ -325,11 +355,12 @@ function matrix(doc: Doc, snapshot: DecisionSnapshot): void {
     table(
       doc,
       [{ title: "Candidate", width: 100 }, ...pulses.map((p) => ({ title: p.name, width }))],
-      snapshot.candidates.map((c) => {
+      byRank(snapshot).map((c) => {
         const cells = pulses.map((p) => cell(snapshot.results[c.partId]?.[p.id]));
         return {
           cells: [c.partNumber, ...cells.map((x) => x.text)],
           colours: [undefined, ...cells.map((x) => x.colour)],
+          verdicts: [undefined, ...cells.map((x) => x.verdict)],
         };
       }),
     );
@@ -507,8 +538,7 @@ function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): void {
     );
 }
 
-function marker(doc: Doc, cx: number, cy: number, verdict: Verdict): void {
-  const r = 3.5;
+function marker(doc: Doc, cx: number, cy: number, verdict: Verdict, r = 3.5): void {
   const colour = verdictColour[verdict];
   if (verdict === "pass") doc.circle(cx, cy, r).fill(colour);
   else if (verdict === "marginal")
@@ -530,6 +560,9 @@ function footer(doc: Doc, snapshot: DecisionSnapshot): void {
   const range = doc.bufferedPageRange();
   for (let k = range.start; k < range.start + range.count; k++) {
     doc.switchToPage(k);
+    // Writing inside the bottom margin would make pdfkit start a new page: lift the margin while the footer is set.
+    const margin = doc.page.margins.bottom;
+    doc.page.margins.bottom = 0;
     const bottom = doc.page.height - 36;
     doc.font("regular").fontSize(7).fillColor(muted);
     doc.text(
@@ -542,5 +575,6 @@ function footer(doc: Doc, snapshot: DecisionSnapshot): void {
         lineBreak: false,
       },
     );
+    doc.page.margins.bottom = margin;
   }
 }
