@@ -1,6 +1,6 @@
 import type { Action } from "@/lib/auth/permissions";
 
-export type NavIcon = "overview" | "library" | "team" | "account";
+export type NavIcon = "overview" | "library" | "projects" | "team" | "account";
 
 export interface NavItem {
   href: string;
@@ -10,12 +10,11 @@ export interface NavItem {
 
 /**
  * The rail's items, each shown only to roles whose permission table allows its action (none: everyone).
- * Library and Projects join this list with their own actions.
  */
 const items: (NavItem & { action?: Action })[] = [
   { href: "/app", label: "Overview", icon: "overview", action: "workspace.read" },
   { href: "/library", label: "Library", icon: "library", action: "workspace.read" },
-  { href: "/projects", label: "Projects", icon: "overview", action: "workspace.read" },
+  { href: "/projects", label: "Projects", icon: "projects", action: "workspace.read" },
   { href: "/team", label: "Team", icon: "team", action: "member.invite" },
   { href: "/account", label: "Account", icon: "account" },
 ];

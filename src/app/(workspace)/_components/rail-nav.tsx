@@ -20,6 +20,12 @@ const icons: Record<NavIcon, ReactNode> = {
       <path d="M2.5 13.5h11" />
     </>
   ),
+  projects: (
+    <>
+      <rect x="2.5" y="3" width="11" height="10" rx="1" />
+      <path d="M2.5 6h11M5 8.5l1.5 1.5L9 7.5" />
+    </>
+  ),
   team: (
     <>
       <circle cx="6" cy="5.5" r="2.25" />

@@ -1,0 +1,72 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { TitleBar } from "@/components/library/title-bar";
+import { ProjectWorkspace } from "@/components/projects/project-workspace";
+import { listMembers } from "@/db/queries/members";
+import { requireMember } from "@/lib/auth/page";
+import { AppError } from "@/lib/errors";
+import { loadProject } from "@/lib/projects/projects";
+
+export const metadata: Metadata = { title: "Project" };
+
+const linkButton =
+  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
+
+export default async function ProjectPage({ params }: { params: Promise<{ id: string }> }) {
+  const member = await requireMember();
+  const { id } = await params;
+  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
+    if (error instanceof AppError) notFound();
+    throw error;
+  });
+  const members = await listMembers({ workspaceId: member.workspace.id });
+  const owner = members.find((m) => m.userId === project.ownerId);
+  const canWrite = member.can("project.write");
+
+  return (
+    <div className="space-y-6">
+      <TitleBar
+        title={project.name}
+        context={
+          <>
+            <Link href="/projects" className="hover:text-ink hover:underline">
+              Projects
+            </Link>
+            {owner ? ` · owner ${owner.name}` : ""}
+          </>
+        }
+        actions={
+          <>
+            <Link href={`/projects/${project.id}/compare`} className={linkButton}>
+              Compare and decide
+            </Link>
+            <Link href={`/projects/${project.id}/decisions`} className={linkButton}>
+              Decisions
+            </Link>
+            {canWrite ? (
+              <Link href={`/projects/${project.id}/settings`} className={linkButton}>
+                Settings
+              </Link>
+            ) : null}
+          </>
+        }
+      />
+      {project.archivedAt ? (
+        <p className="rounded-md border border-line border-l-2 border-l-nodata bg-sunken px-3 py-2 text-sm">
+          This project is archived: it is out of the projects list and kept for the record.
+        </p>
+      ) : null}
+      {project.description ? (
+        <p className="max-w-3xl text-sm whitespace-pre-line text-ink-muted">{project.description}</p>
+      ) : null}
+      <ProjectWorkspace
+        projectId={project.id}
+        viewer={{ id: member.user.id, role: member.role }}
+        canWrite={canWrite}
+        canMeasure={member.can("measurement.write")}
+        people={members.map((m) => ({ id: m.userId, name: m.name }))}
+      />
+    </div>
+  );
+}

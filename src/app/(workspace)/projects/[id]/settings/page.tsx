@@ -1,0 +1,69 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { TitleBar } from "@/components/library/title-bar";
+import { Section } from "@/components/page-header";
+import { ArchiveProject } from "@/components/projects/archive-project";
+import { ProjectForm } from "@/components/projects/project-form";
+import { listMembers } from "@/db/queries/members";
+import { requireAction } from "@/lib/auth/page";
+import { roleLabels } from "@/lib/auth/permissions";
+import { AppError } from "@/lib/errors";
+import { loadProject } from "@/lib/projects/projects";
+
+export const metadata: Metadata = { title: "Project settings" };
+
+export default async function ProjectSettingsPage({ params }: { params: Promise<{ id: string }> }) {
+  const member = await requireAction("project.write");
+  const { id } = await params;
+  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
+    if (error instanceof AppError) notFound();
+    throw error;
+  });
+  const members = await listMembers({ workspaceId: member.workspace.id });
+  const owners = members
+    .filter((m) => m.role !== "technician")
+    .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));
+  return (
+    <div className="space-y-8">
+      <TitleBar
+        title="Project settings"
+        context={
+          <>
+            <Link href="/projects" className="hover:text-ink hover:underline">
+              Projects
+            </Link>{" "}
+            ·{" "}
+            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
+              {project.name}
+            </Link>
+          </>
+        }
+      />
+      <ProjectForm
+        projectId={project.id}
+        owners={owners}
+        defaults={{
+          name: project.name,
+          description: project.description ?? "",
+          caseTemp: String(project.caseTemp),
+          utilisationLimit: String(Number((project.utilisationLimit * 100).toPrecision(6))),
+          tjGuard: String(project.tjGuard),
+          betweenCurves: project.betweenCurves,
+          ownerId: project.ownerId ?? "",
+        }}
+      />
+      <Section
+        id="archive"
+        title={project.archivedAt ? "Archived" : "Archive"}
+        description={
+          project.archivedAt
+            ? "This project is archived: it is out of the projects list and kept as it was for the record."
+            : "Archiving takes the project out of the projects list; nothing is deleted and it can be restored."
+        }
+      >
+        <ArchiveProject projectId={project.id} archived={project.archivedAt !== null} />
+      </Section>
+    </div>
+  );
+}

@@ -1,0 +1,176 @@
+import { type QueryClient, useQuery } from "@tanstack/react-query";
+import { callJson } from "@/components/library/api";
+import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
+import type { CsvIssue } from "@/lib/csv/issues";
+import type { MeasurementColumns } from "@/lib/csv/measurements";
+import type { Flag, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
+
+// The project screens' view of our route handlers: the JSON they answer with (dates as ISO text), their query
+// keys, and the one invalidation every change of a project goes through.
+
+export interface ProjectRecord {
+  id: string;
+  name: string;
+  description: string | null;
+  caseTemp: number;
+  utilisationLimit: number;
+  tjGuard: number;
+  betweenCurves: "loglog" | "next-longer";
+  ownerId: string | null;
+  archivedAt: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface CandidatePart {
+  id: string;
+  partNumber: string;
+  maker: string;
+  package: string;
+  vdsMax: number;
+  status: "draft" | "verified";
+  foster: unknown[] | null;
+  unitCost: number | null;
+  currency: string | null;
+  archivedAt: string | null;
+}
+
+export interface FaultCaseRecord {
+  id: string;
+  name: string;
+  kind: "rect" | "triangle";
+  v: number;
+  i: number;
+  duration: number;
+  repeatPeriod: number | null;
+  repeatCount: number | null;
+  caseTemp: number | null;
+  notes: string | null;
+  origin: { builder: string; input: Record<string, unknown>; figures: Record<string, unknown> } | null;
+  createdBy: string | null;
+  createdAt: string;
+}
+
+export interface MeasuredRecord {
+  id: string;
+  label: string;
+  kind: "rect" | "triangle";
+  v: number;
+  i: number;
+  duration: number;
+  repeatPeriod: number | null;
+  repeatCount: number | null;
+  note: string | null;
+  boardSerial: string | null;
+  probe: string | null;
+  createdBy: string | null;
+  createdAt: string;
+}
+
+export interface ProjectDetail {
+  project: ProjectRecord;
+  candidates: { part: CandidatePart; hasCurves: boolean }[];
+  faultCases: FaultCaseRecord[];
+  measuredPulses: MeasuredRecord[];
+}
+
+export type PulseSource = "fault-case" | "measured" | "capture";
+
+export interface CheckedPulse {
+  id: string;
+  source: PulseSource;
+  name: string;
+  caseTemp: number;
+  v: number | null;
+  i: number | null;
+  duration: number | null;
+  kind: "rect" | "triangle" | "waveform";
+  repeat?: Repeat;
+}
+
+export interface CheckedCandidate {
+  partId: string;
+  partNumber: string;
+  maker: string;
+  status: "draft" | "verified";
+  unitCost: number | null;
+  currency: string | null;
+  hasCurves: boolean;
+  hasThermalModel: boolean;
+  curveSetId: string | null;
+}
+
+export interface ProjectCheck {
+  policy: {
+    caseTemp: number;
+    utilisationLimit: number;
+    tjGuard: number;
+    betweenCurves: "loglog" | "next-longer";
+  };
+  candidates: CheckedCandidate[];
+  pulses: CheckedPulse[];
+  results: Record<string, Record<string, PulseResult>>;
+  worstByPulse: Record<string, Verdict>;
+}
+
+export interface CandidateLimits {
+  refCaseTemp: number;
+  caseTemp: number;
+  derating: number;
+  curves: ChartCurve[];
+  derated: ChartCurve[];
+  findings: ChartFinding[];
+}
+
+export interface PreviewRow {
+  row: number;
+  label: string;
+  kind: "rect" | "triangle";
+  v: number | null;
+  i: number | null;
+  duration: number | null;
+  repeat?: Repeat;
+  errors: CsvIssue[];
+  verdicts: Record<string, PulseResult | null>;
+}
+
+export interface MeasurementPreview {
+  candidates: { partId: string; partNumber: string; maker: string; hasCurves: boolean }[];
+  rows: PreviewRow[];
+  errors: CsvIssue[];
+  hasHeader: boolean;
+  columns: MeasurementColumns;
+}
+
+export type { Flag, PulseResult, Verdict };
+
+export const projectKeys = {
+  detail: (id: string) => ["project", id] as const,
+  check: (id: string) => ["project-check", id] as const,
+  limits: (partId: string, curveSetId: string | null, caseTemp: number, policy: string) =>
+    ["project-limits", partId, curveSetId, caseTemp, policy] as const,
+};
+
+export function useProject(projectId: string) {
+  return useQuery({
+    queryKey: projectKeys.detail(projectId),
+    queryFn: () => callJson<ProjectDetail>("GET", `/api/projects/${projectId}`),
+  });
+}
+
+/** The check is always fetched fresh on mount: the library may have changed since it was last seen. */
+export function useProjectCheck(projectId: string) {
+  return useQuery({
+    queryKey: projectKeys.check(projectId),
+    queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
+    staleTime: 0,
+  });
+}
+
+/** After any change to a project, its pulses or its candidates: refetch the project and its check. */
+export function invalidateProject(client: QueryClient, projectId: string): Promise<void> {
+  return Promise.all([
+    client.invalidateQueries({ queryKey: projectKeys.detail(projectId) }),
+    client.invalidateQueries({ queryKey: projectKeys.check(projectId) }),
+  ]).then(() => undefined);
+}

@@ -1,0 +1,104 @@
+import type { ReactNode } from "react";
+import { Button, FormMessage } from "@/components/form";
+import type { Repeat } from "@/lib/soa/types";
+import { q, repeatText, shapeWords } from "../format";
+import { FigureList } from "./figures";
+
+/** A fault case as a builder makes it, with where it came from. */
+export interface BuiltCase {
+  name: string;
+  kind: "rect" | "triangle";
+  v: number;
+  i: number;
+  duration: number;
+  repeat: Repeat | null;
+  origin: { builder: string; input: object; figures: object };
+}
+
+export interface BuilderProps {
+  /** Saves the built case as a fault case of the project; throws an ApiError when the server refuses it. */
+  create: (built: BuiltCase) => Promise<void>;
+}
+
+/** The pulse a builder will save, in words and figures. */
+export function PulseSummary({ pulse }: { pulse: Omit<BuiltCase, "name" | "origin"> }) {
+  return (
+    <p className="text-sm" data-testid="built-pulse">
+      <span className="font-medium">{shapeWords[pulse.kind]}</span>{" "}
+      <span className="num">
+        {q(pulse.v, "V")} × {q(pulse.i, "A")}
+        {pulse.kind === "triangle" ? " peak" : ""} for {q(pulse.duration, "s")}
+      </span>
+      , {repeatText(pulse.repeat) ?? "single pulse"}
+    </p>
+  );
+}
+
+/**
+ * A builder's frame: its inputs at the left, the engine's intermediate figures live at the right with the pulse
+ * it makes, and the name and the action to save it at the bottom right.
+ */
+export function BuilderLayout({
+  title,
+  description,
+  fields,
+  figures,
+  reason,
+  result,
+  footer,
+  error,
+  pending,
+  action = "Create fault case",
+  onSubmit,
+}: {
+  title: string;
+  description: ReactNode;
+  fields: ReactNode;
+  figures: object | null;
+  reason: string | null;
+  result: ReactNode;
+  footer?: ReactNode;
+  error?: string;
+  pending: boolean;
+  action?: string | null;
+  onSubmit: () => void;
+}) {
+  return (
+    <form
+      aria-label={`${title} builder`}
+      noValidate
+      onSubmit={(event) => {
+        event.preventDefault();
+        onSubmit();
+      }}
+      className="rounded-md border border-line bg-panel p-4"
+    >
+      <p className="mb-4 max-w-3xl text-sm text-ink-muted">{description}</p>
+      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_21rem]">
+        <div className="min-w-0 space-y-4">{fields}</div>
+        <aside aria-label="Figures" className="rounded-md bg-sunken p-3" aria-live="polite">
+          <h4 className="mb-2 text-xs font-semibold tracking-wide text-ink-muted uppercase">Figures</h4>
+          {figures ? (
+            <FigureList figures={figures} testId="builder-figures" />
+          ) : (
+            <p className="text-sm text-ink-muted">
+              {reason ?? "Fill in the fields; the figures appear here."}
+            </p>
+          )}
+          {result ? <div className="mt-3 border-t border-line pt-3">{result}</div> : null}
+        </aside>
+      </div>
+      <FormMessage tone="error">{error}</FormMessage>
+      {footer || action ? (
+        <div className="mt-4 flex flex-wrap items-end justify-between gap-3 border-t border-line pt-4">
+          <div className="min-w-0 flex-1">{footer}</div>
+          {action ? (
+            <Button type="submit" variant="primary" pending={pending}>
+              {action}
+            </Button>
+          ) : null}
+        </div>
+      ) : null}
+    </form>
+  );
+}

@@ -1,0 +1,85 @@
+import { z } from "zod";
+import { optionalQuantity, quantity } from "@/lib/library/part-schema";
+import { parseQuantity } from "@/lib/soa/units";
+
+// The builders' form fields: text in engineering notation ("1.5m", "1.5 mF") read into SI numbers, so the
+// engine's builders get plain values. A slew rate is typed in V/ms (the field says so) or with its own unit.
+
+const SLEW_UNITS: Record<string, number> = { "V/s": 1, "V/ms": 1e3, "V/us": 1e6, "V/µs": 1e6, "V/μs": 1e6 };
+
+export const slewQuantity = z.string().transform((text, ctx): number => {
+  const match = /^(.*?)\s*(V\/(?:s|ms|us|µs|μs))?\s*$/.exec(text.trim());
+  const parsed = parseQuantity(match?.[1] ?? "");
+  const scale = SLEW_UNITS[match?.[2] ?? "V/ms"];
+  if (!parsed.ok || parsed.unit !== null || typeof parsed.value !== "number") {
+    ctx.addIssue({ code: "custom", message: "Enter a slew rate such as 1 (V/ms), 0.5 V/ms or 200 V/s" });
+    return z.NEVER;
+  }
+  if (!(parsed.value > 0)) {
+    ctx.addIssue({ code: "custom", message: "Must be greater than zero" });
+    return z.NEVER;
+  }
+  return parsed.value * scale;
+});
+
+/** A tolerance in percent ("1", "0.5 %") as a fraction. */
+export const tolerance = quantity("%", { positive: false })
+  .refine((p) => p >= 0 && p < 100, { message: "Between 0 and 100 %" })
+  .transform((p) => p / 100);
+
+const name = z.string().trim().min(1, { message: "Name the fault case" }).max(120);
+
+export const inrushForm = z.object({
+  name,
+  supply: quantity("V"),
+  capacitance: quantity("F"),
+  slew: slewQuantity,
+  load: optionalQuantity("Ω"),
+  equivalent: z.enum(["rect", "triangle"]),
+});
+
+export const currentLimitForm = z
+  .object({
+    name,
+    busVoltageMax: quantity("V"),
+    currentLimitMax: quantity("A"),
+    faultTimeMax: quantity("s"),
+    retry: z.boolean(),
+    retryPeriod: optionalQuantity("s"),
+    retryCount: z.preprocess(
+      (v) => (v === "" ? undefined : v),
+      z.coerce.number().int({ message: "A whole number" }).min(1, { message: "1 or more" }).optional(),
+    ),
+  })
+  .superRefine((f, ctx) => {
+    if (f.retry && f.retryPeriod === undefined) {
+      ctx.addIssue({ code: "custom", path: ["retryPeriod"], message: "Give the retry period" });
+    }
+  });
+
+export const tripWindowForm = z
+  .object({
+    shunt: quantity("Ω"),
+    shuntTolerance: tolerance,
+    reference: quantity("V"),
+    referenceTolerance: tolerance,
+    divider: z.boolean(),
+    r1: optionalQuantity("Ω"),
+    r2: optionalQuantity("Ω"),
+    dividerTolerance: tolerance,
+    offset: optionalQuantity("V", { positive: false }),
+  })
+  .superRefine((f, ctx) => {
+    if (!f.divider) return;
+    if (f.r1 === undefined) ctx.addIssue({ code: "custom", path: ["r1"], message: "Give R1" });
+    if (f.r2 === undefined) ctx.addIssue({ code: "custom", path: ["r2"], message: "Give R2" });
+  });
+
+export const clampForm = z.object({
+  name,
+  inductance: quantity("H"),
+  tripCurrent: quantity("A"),
+  busVoltage: quantity("V"),
+  clampVoltage: quantity("V"),
+  delay: optionalQuantity("s", { positive: false }),
+});

@@ -1,0 +1,161 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { applyServerErrors } from "@/components/form-errors";
+import { UnitField } from "@/components/library/fields";
+import { Sym } from "@/components/library/symbols";
+import { clampTurnOff } from "@/lib/soa/builders";
+import { BuilderLayout, type BuilderProps, type BuiltCase, PulseSummary } from "./builder-layout";
+import { clampForm } from "./builder-schemas";
+
+type Values = z.input<typeof clampForm>;
+
+type Input = z.output<typeof clampForm>;
+
+function build(input: Input) {
+  const circuit = {
+    inductance: input.inductance,
+    tripCurrent: input.tripCurrent,
+    busVoltage: input.busVoltage,
+    clampVoltage: input.clampVoltage,
+    ...(input.delay !== undefined ? { delay: input.delay } : {}),
+  };
+  const built = clampTurnOff(circuit);
+  if (!built.ok) return built;
+  const pulse = built.pulses[0];
+  if (pulse.kind !== "triangle") return { ok: false as const, reason: "the builder made no triangle" };
+  return {
+    ok: true as const,
+    figures: built.figures,
+    pulse: { kind: "triangle" as const, v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
+    origin: { input: circuit, figures: built.figures },
+  };
+}
+
+/** A short turned off into a clamp: the loop inductance drives the current down through the clamp voltage. */
+export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurrent?: string }) {
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<Values, unknown, Input>({
+    resolver: zodResolver(clampForm),
+    mode: "onTouched",
+    defaultValues: {
+      name: "Short at turn-off, clamped",
+      inductance: "",
+      tripCurrent: tripCurrent ?? "",
+      busVoltage: "",
+      clampVoltage: "",
+      delay: "",
+    },
+  });
+  const values = useWatch({ control });
+  const parsed = clampForm.safeParse(values);
+  const built = parsed.success ? build(parsed.data) : null;
+
+  const onSubmit = handleSubmit(async (input) => {
+    const result = build(input);
+    if (!result.ok) {
+      setError("root.server", { message: result.reason });
+      return;
+    }
+    const made: BuiltCase = {
+      name: input.name,
+      ...result.pulse,
+      origin: { builder: "clamp", ...result.origin },
+    };
+    try {
+      await create(made);
+    } catch (error) {
+      applyServerErrors(error, setError, ["name"]);
+    }
+  });
+
+  return (
+    <BuilderLayout
+      title="Clamp turn-off"
+      description={
+        <>
+          A short is detected at I<sub>trip,max</sub> and, after the turn-off delay, the transistor opens into
+          a clamp. The current keeps rising by V<sub>bus</sub>/L during the delay, then falls through the
+          clamp voltage: a falling triangle at V<sub>cl</sub>.
+        </>
+      }
+      fields={
+        <div className="grid gap-4 sm:grid-cols-3">
+          <UnitField
+            id="clamp-l"
+            label="Loop inductance L"
+            unit="H"
+            placeholder="1µ"
+            error={errors.inductance?.message}
+            {...register("inductance")}
+          />
+          <UnitField
+            id="clamp-trip"
+            label={<Sym main="I" sub="trip,max" />}
+            unit="A"
+            inputMode="decimal"
+            hint="From the trip window"
+            error={errors.tripCurrent?.message}
+            {...register("tripCurrent")}
+          />
+          <UnitField
+            id="clamp-delay"
+            label={
+              <>
+                Turn-off delay <Sym main="t" sub="delay" />
+              </>
+            }
+            unit="s"
+            placeholder="0"
+            hint="Optional"
+            error={errors.delay?.message}
+            {...register("delay")}
+          />
+          <UnitField
+            id="clamp-bus"
+            label={<Sym main="V" sub="bus" />}
+            unit="V"
+            inputMode="decimal"
+            error={errors.busVoltage?.message}
+            {...register("busVoltage")}
+          />
+          <UnitField
+            id="clamp-vcl"
+            label={
+              <>
+                Clamp <Sym main="V" sub="cl" />
+              </>
+            }
+            unit="V"
+            inputMode="decimal"
+            hint="Above the bus voltage"
+            error={errors.clampVoltage?.message}
+            {...register("clampVoltage")}
+          />
+        </div>
+      }
+      figures={built?.ok ? built.figures : null}
+      reason={built && !built.ok ? built.reason : null}
+      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
+      footer={
+        <UnitField
+          id="clamp-name"
+          label="Fault case name"
+          className="max-w-sm"
+          error={errors.name?.message}
+          {...register("name")}
+        />
+      }
+      error={errors.root?.server?.message}
+      pending={isSubmitting}
+      onSubmit={onSubmit}
+    />
+  );
+}

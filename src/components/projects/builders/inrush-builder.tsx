@@ -1,0 +1,202 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { applyServerErrors } from "@/components/form-errors";
+import { UnitField } from "@/components/library/fields";
+import { Sym } from "@/components/library/symbols";
+import { inrushPulses } from "@/lib/soa/builders";
+import { BuilderLayout, type BuilderProps, type BuiltCase, PulseSummary } from "./builder-layout";
+import { inrushForm } from "./builder-schemas";
+
+type Values = z.input<typeof inrushForm>;
+
+const defaults: Values = {
+  name: "Pre-charge inrush",
+  supply: "",
+  capacitance: "",
+  slew: "",
+  load: "",
+  equivalent: "triangle",
+};
+
+type Input = z.output<typeof inrushForm>;
+
+/**
+ * The fault case an inrush makes. Without a load it is the engine's falling triangle. With a resistive load the
+ * engine gives a waveform; a fault case is a rectangle or a triangle, so the waveform is replaced by a pulse of
+ * the same energy at the same peak power (V*, I* at the peak): a rectangle E/P_peak wide, or a falling triangle
+ * twice that. The curves read both exactly as they read the waveform itself (METHODS.md §6).
+ */
+export function buildInrush(input: Input) {
+  const { name: _name, equivalent, ...circuit } = input;
+  const built = inrushPulses({ ...circuit, samples: 3 });
+  if (!built.ok) return { ok: false as const, reason: built.reason };
+  const { figures } = built;
+  const pulse = built.pulses[0];
+  if (pulse.kind === "triangle") {
+    return {
+      ok: true as const,
+      figures,
+      pulse: { kind: "triangle" as const, v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
+      origin: { input: circuit, figures },
+    };
+  }
+  const t = figures.peakPowerTime;
+  const v = circuit.supply - circuit.slew * t;
+  const i = figures.chargeCurrent + (circuit.slew * t) / circuit.load!;
+  const width = (equivalent === "rect" ? 1 : 2) * (figures.energy / figures.peakPower);
+  const shown = { ...figures, equivalentV: v, equivalentI: i, equivalentWidth: width };
+  return {
+    ok: true as const,
+    figures: shown,
+    pulse: { kind: equivalent, v, i, duration: width, repeat: null },
+    origin: { input: { ...circuit, equivalent }, figures: shown },
+  };
+}
+
+export function InrushBuilder({ create }: BuilderProps) {
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<Values, unknown, Input>({
+    resolver: zodResolver(inrushForm),
+    defaultValues: defaults,
+    mode: "onTouched",
+  });
+  const values = useWatch({ control });
+  const parsed = inrushForm.safeParse(values);
+  const built = parsed.success ? buildInrush(parsed.data) : null;
+  const withLoad = String(values.load ?? "").trim() !== "";
+
+  const onSubmit = handleSubmit(async (input) => {
+    const result = buildInrush(input);
+    if (!result.ok) {
+      setError("root.server", { message: result.reason });
+      return;
+    }
+    const built: BuiltCase = {
+      name: input.name,
+      ...result.pulse,
+      origin: { builder: "inrush", ...result.origin },
+    };
+    try {
+      await create(built);
+    } catch (error) {
+      applyServerErrors(error, setError, ["name"]);
+    }
+  });
+
+  return (
+    <BuilderLayout
+      title="Inrush"
+      description={
+        <>
+          Charging the load capacitance C<sub>L</sub> at a controlled slew S from V<sub>in</sub>: the
+          transistor carries C<sub>L</sub>·S while its V<sub>DS</sub> falls from V<sub>in</sub> to 0, a
+          falling triangle of power. The energy is ½·C<sub>L</sub>·V<sub>in</sub>² whatever the slew; a slower
+          slew lowers the peak but stretches the pulse.
+        </>
+      }
+      fields={
+        <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
+          <UnitField
+            id="inrush-supply"
+            label={
+              <>
+                Supply <Sym main="V" sub="in" />
+              </>
+            }
+            unit="V"
+            inputMode="decimal"
+            placeholder="48"
+            error={errors.supply?.message}
+            {...register("supply")}
+          />
+          <UnitField
+            id="inrush-capacitance"
+            label={
+              <>
+                Load capacitance <Sym main="C" sub="L" />
+              </>
+            }
+            unit="F"
+            placeholder="1.5m"
+            error={errors.capacitance?.message}
+            {...register("capacitance")}
+          />
+          <UnitField
+            id="inrush-slew"
+            label="Slew rate dV/dt"
+            unit="V/ms"
+            inputMode="decimal"
+            placeholder="1"
+            error={errors.slew?.message}
+            {...register("slew")}
+          />
+          <UnitField
+            id="inrush-load"
+            label={
+              <>
+                Resistive load <Sym main="R" sub="L" />
+              </>
+            }
+            unit="Ω"
+            hint="Optional: present from the start"
+            error={errors.load?.message}
+            {...register("load")}
+          />
+          {withLoad ? (
+            <fieldset className="sm:col-span-2 xl:col-span-4">
+              <legend className="text-sm font-medium">With a load the pulse is a waveform; save it as</legend>
+              <div className="mt-1.5 flex flex-wrap gap-x-6 gap-y-1 text-sm">
+                <label className="inline-flex items-center gap-2">
+                  <input
+                    type="radio"
+                    value="triangle"
+                    {...register("equivalent")}
+                    className="accent-[var(--color-accent)]"
+                  />
+                  an equal-energy falling triangle at the peak power
+                </label>
+                <label className="inline-flex items-center gap-2">
+                  <input
+                    type="radio"
+                    value="rect"
+                    {...register("equivalent")}
+                    className="accent-[var(--color-accent)]"
+                  />
+                  an equal-energy rectangle at the peak power
+                </label>
+              </div>
+              <p className="mt-1 text-xs text-ink-muted">
+                Fault cases are rectangles or triangles, so the waveform is replaced by a pulse with the same
+                energy and the same peak power (at V* and I* of the peak). The SOA curves read either exactly
+                as they read the waveform itself; with a thermal model the triangle is the closer of the two.
+              </p>
+            </fieldset>
+          ) : null}
+        </div>
+      }
+      figures={built?.ok ? built.figures : null}
+      reason={built && !built.ok ? built.reason : null}
+      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
+      footer={
+        <UnitField
+          id="inrush-name"
+          label="Fault case name"
+          className="max-w-sm"
+          error={errors.name?.message}
+          {...register("name")}
+        />
+      }
+      error={errors.root?.server?.message}
+      pending={isSubmitting}
+      onSubmit={onSubmit}
+    />
+  );
+}

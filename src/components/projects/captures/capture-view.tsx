@@ -1,0 +1,213 @@
+"use client";
+
+import type { ReactNode } from "react";
+import { messageOf } from "@/components/api-client";
+import { Caution } from "@/components/caution";
+import { Sym } from "@/components/library/symbols";
+import { Table, Td, Th, Tr } from "@/components/table";
+import { VerdictBadge } from "@/components/verdict-shape";
+import { explainFlag } from "@/lib/soa/explain";
+import type { PulseResult } from "@/lib/soa/types";
+import type { ProjectCheck } from "../api";
+import { q } from "../format";
+import { UtilisationBar } from "../results/utilisation-bar";
+import { useCapture } from "./capture-api";
+import { TraceCharts, type TracePanel } from "./trace-charts";
+
+const junctionStyles = [
+  { stroke: "var(--color-accent)", dash: undefined },
+  { stroke: "var(--color-ink)", dash: "6 3" },
+  { stroke: "var(--color-ink-muted)", dash: "2 2" },
+  { stroke: "var(--color-accent-strong)", dash: "9 3 2 3" },
+];
+
+function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
+  return (
+    <div className="rounded-md border border-line bg-panel px-3 py-2">
+      <dt className="text-xs text-ink-muted">{label}</dt>
+      <dd className="num mt-0.5 font-mono text-sm">{value}</dd>
+      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
+    </div>
+  );
+}
+
+/**
+ * One capture: its figures, its verdict against every candidate, and V, I, P and T_j against a shared time axis.
+ * Verdicts come from the project's check (or, right after an upload, from the upload's answer).
+ */
+export function CaptureView({
+  projectId,
+  captureId,
+  check,
+  fresh,
+}: {
+  projectId: string;
+  captureId: string;
+  check: ProjectCheck | undefined;
+  fresh: Record<string, PulseResult | null> | null;
+}) {
+  const detail = useCapture(projectId, captureId);
+  if (detail.isPending) return <div className="h-96 animate-pulse rounded-md border border-line bg-panel" />;
+  if (detail.isError) {
+    return (
+      <p role="alert" className="text-sm text-fail">
+        {messageOf(detail.error)}
+      </p>
+    );
+  }
+  const { capture, candidates, caseTemp } = detail.data;
+  const { summary, trace } = capture;
+  const eq = summary.equivalent;
+  const verdictOf = (partId: string): PulseResult | null | undefined =>
+    check?.results[partId]?.[captureId] ?? fresh?.[partId];
+
+  const panels: TracePanel[] = [
+    {
+      key: "v",
+      symbol: { main: "V", sub: "DS" },
+      name: "V_DS",
+      unit: "V",
+      series: [{ key: "v", label: "V_DS", t: trace.t, y: trace.v, stroke: "var(--color-accent)" }],
+    },
+    {
+      key: "i",
+      symbol: { main: "I", sub: "D" },
+      name: "I_D",
+      unit: "A",
+      series: [{ key: "i", label: "I_D", t: trace.t, y: trace.i, stroke: "var(--color-accent)" }],
+    },
+    {
+      key: "p",
+      symbol: { main: "P" },
+      name: "P",
+      unit: "W",
+      series: [{ key: "p", label: "P", t: trace.t, y: trace.p, stroke: "var(--color-accent)" }],
+    },
+  ];
+  const junctions = candidates.filter((c) => c.junction !== null);
+  if (junctions.length) {
+    panels.push({
+      key: "tj",
+      symbol: { main: "T", sub: "j" },
+      name: "T_j",
+      unit: "°C",
+      series: junctions.map((c, k) => ({
+        key: `tj-${c.partId}`,
+        label: c.partNumber,
+        t: c.junction!.trace.t,
+        y: c.junction!.trace.y,
+        ...junctionStyles[k % junctionStyles.length],
+      })),
+    });
+  }
+
+  return (
+    <div className="space-y-5" data-testid="capture-view">
+      <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
+        <Figure
+          label="Samples"
+          value={summary.samples.toLocaleString("en-GB")}
+          note={summary.uniform ? "uniform time step" : "uneven time step"}
+        />
+        <Figure label="Length" value={q(summary.tEnd - summary.tStart, "s")} />
+        <Figure
+          label={
+            <>
+              Highest <Sym main="V" sub="DS" />
+            </>
+          }
+          value={q(summary.vMax, "V")}
+        />
+        <Figure
+          label={
+            <>
+              Highest |<Sym main="I" sub="D" />|
+            </>
+          }
+          value={q(summary.iMaxAbs, "A")}
+        />
+        <Figure label="Peak power" value={q(summary.pPeak, "W")} note={`at ${q(summary.tPeak, "s")}`} />
+        <Figure label="Energy" value={q(summary.energy, "J")} />
+        <Figure
+          label="Equal-energy rectangle"
+          value={eq.ok ? q(eq.duration, "s") : "none"}
+          note={
+            eq.ok
+              ? `at ${q(eq.v, "V")} × ${q(eq.i, "A")}`
+              : explainFlag(eq.flag as Parameters<typeof explainFlag>[0])
+          }
+        />
+      </dl>
+
+      <div>
+        <Table label={`Verdicts for ${capture.name}`}>
+          <thead>
+            <tr>
+              <Th>Candidate</Th>
+              <Th>Verdict</Th>
+              <Th numeric>Utilisation</Th>
+              <Th numeric>
+                Allowed <Sym main="I" sub="D" />
+              </Th>
+              <Th numeric>
+                <Sym main="T" sub="j,peak" />
+              </Th>
+              <Th>How it was read</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {candidates.map((c) => {
+              const result = verdictOf(c.partId);
+              return (
+                <Tr key={c.partId}>
+                  <Td className="font-medium">{c.partNumber}</Td>
+                  <Td data-verdict={result?.verdict ?? "no-data"}>
+                    {result === undefined ? (
+                      <span className="text-ink-faint">not checked yet</span>
+                    ) : (
+                      <VerdictBadge verdict={result?.verdict ?? "no-data"} />
+                    )}
+                  </Td>
+                  <Td className="text-right">
+                    {result ? (
+                      <UtilisationBar
+                        utilisation={result.utilisation}
+                        limit={check?.policy.utilisationLimit ?? 0.8}
+                        verdict={result.verdict}
+                      />
+                    ) : (
+                      "—"
+                    )}
+                  </Td>
+                  <Td numeric>{q(result?.allowedCurrent, "A")}</Td>
+                  <Td numeric>
+                    {q(result?.tjPeak ?? c.junction?.tjPeak, "°C")}
+                    {c.junction ? <span className="text-ink-faint"> / {q(c.tjMax, "°C")}</span> : null}
+                  </Td>
+                  <Td className="max-w-md py-1.5 text-xs whitespace-normal text-ink-muted">
+                    {result?.flags.length ? (
+                      <ul className="min-w-72 space-y-0.5 whitespace-normal">
+                        {result.flags.map((f) => (
+                          <li key={f}>{explainFlag(f)}</li>
+                        ))}
+                      </ul>
+                    ) : (
+                      "—"
+                    )}
+                  </Td>
+                </Tr>
+              );
+            })}
+          </tbody>
+        </Table>
+        <p className="mt-2 text-xs text-ink-muted">
+          Read on the curves as the equal-energy rectangle at peak power; the junction temperature runs from
+          rest at {q(caseTemp, "°C")} case through every sample where the part has a thermal model.
+        </p>
+        <Caution className="mt-2" />
+      </div>
+
+      <TraceCharts key={capture.id} panels={panels} span={[summary.tStart, summary.tEnd]} />
+    </div>
+  );
+}

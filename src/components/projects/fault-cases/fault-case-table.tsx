@@ -1,0 +1,200 @@
+"use client";
+
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { Fragment, useState } from "react";
+import { messageOf, sendJson } from "@/components/api-client";
+import { Button, FormMessage } from "@/components/form";
+import { Sym } from "@/components/library/symbols";
+import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
+import { type FaultCaseRecord, invalidateProject } from "../api";
+import { builderNames, figureLines } from "../builders/figures";
+import { q, repeatOf, repeatText, shapeWords } from "../format";
+import { FaultCaseForm } from "./fault-case-form";
+
+/** The project's fault cases; engineers edit or delete each from its row, and open it to see its origin. */
+export function FaultCaseTable({
+  projectId,
+  faultCases,
+  canWrite,
+  projectCaseTemp,
+}: {
+  projectId: string;
+  faultCases: FaultCaseRecord[];
+  canWrite: boolean;
+  projectCaseTemp: number;
+}) {
+  const queryClient = useQueryClient();
+  const [editing, setEditing] = useState<string | null>(null);
+  const [open, setOpen] = useState<string | null>(null);
+  const [confirming, setConfirming] = useState<string | null>(null);
+  const remove = useMutation({
+    mutationFn: (id: string) => sendJson("DELETE", `/api/projects/${projectId}/fault-cases/${id}`),
+    onSuccess: async () => {
+      setConfirming(null);
+      await invalidateProject(queryClient, projectId);
+    },
+  });
+  const columns = canWrite ? 8 : 7;
+
+  return (
+    <>
+      <Table label="Fault cases">
+        <thead>
+          <tr>
+            <Th>Name</Th>
+            <Th>Shape</Th>
+            <Th numeric>
+              <Sym main="V" sub="DS" />
+            </Th>
+            <Th numeric>
+              <Sym main="I" sub="D" /> (peak)
+            </Th>
+            <Th numeric>Width</Th>
+            <Th>Repetition</Th>
+            <Th numeric>
+              <Sym main="T" sub="C" />
+            </Th>
+            {canWrite ? (
+              <Th className="w-40">
+                <span className="sr-only">Actions</span>
+              </Th>
+            ) : null}
+          </tr>
+        </thead>
+        <tbody>
+          {faultCases.length === 0 ? (
+            <EmptyRow colSpan={columns}>
+              {canWrite
+                ? "No fault cases yet. Build one from the circuit with a pulse builder below, or type it."
+                : "No fault cases yet. An engineer adds the pulses the design must survive."}
+            </EmptyRow>
+          ) : null}
+          {faultCases.map((row) => (
+            <Fragment key={row.id}>
+              <Tr>
+                <Td>
+                  <button
+                    type="button"
+                    aria-expanded={open === row.id}
+                    onClick={() => setOpen(open === row.id ? null : row.id)}
+                    className="inline-flex items-center gap-1.5 text-left font-medium hover:text-accent"
+                  >
+                    <svg
+                      width="10"
+                      height="10"
+                      viewBox="0 0 10 10"
+                      aria-hidden="true"
+                      className={`text-ink-faint transition-transform ${open === row.id ? "rotate-90" : ""}`}
+                    >
+                      <path d="M3 1.5 6.5 5 3 8.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
+                    </svg>
+                    {row.name}
+                  </button>
+                  {row.origin ? (
+                    <span className="ml-2 text-xs text-ink-faint">
+                      from the {builderNames[row.origin.builder] ?? row.origin.builder} builder
+                    </span>
+                  ) : null}
+                </Td>
+                <Td className="text-ink-muted">{shapeWords[row.kind]}</Td>
+                <Td numeric>{q(row.v, "V")}</Td>
+                <Td numeric>{q(row.i, "A")}</Td>
+                <Td numeric>{q(row.duration, "s")}</Td>
+                <Td className="text-ink-muted">{repeatText(repeatOf(row)) ?? "single pulse"}</Td>
+                <Td numeric>
+                  {row.caseTemp === null ? (
+                    <span className="text-ink-faint" title="The project's case temperature">
+                      {q(projectCaseTemp, "°C")}
+                    </span>
+                  ) : (
+                    q(row.caseTemp, "°C")
+                  )}
+                </Td>
+                {canWrite ? (
+                  <Td className="text-right">
+                    {confirming === row.id ? (
+                      <span className="inline-flex items-center gap-1">
+                        <Button
+                          size="sm"
+                          variant="danger"
+                          pending={remove.isPending}
+                          onClick={() => remove.mutate(row.id)}
+                        >
+                          Delete
+                        </Button>
+                        <Button size="sm" variant="quiet" onClick={() => setConfirming(null)}>
+                          Keep
+                        </Button>
+                      </span>
+                    ) : (
+                      <span className="inline-flex items-center gap-1 opacity-70 group-hover/row:opacity-100 focus-within:opacity-100">
+                        <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
+                          Edit
+                        </Button>
+                        <Button
+                          size="sm"
+                          variant="quiet"
+                          aria-label={`Delete ${row.name}`}
+                          onClick={() => setConfirming(row.id)}
+                        >
+                          Delete
+                        </Button>
+                      </span>
+                    )}
+                  </Td>
+                ) : null}
+              </Tr>
+              {open === row.id ? (
+                <tr>
+                  <td colSpan={columns} className="border-b border-line bg-surface px-3 py-3 text-sm">
+                    <FaultCaseOrigin row={row} />
+                  </td>
+                </tr>
+              ) : null}
+            </Fragment>
+          ))}
+        </tbody>
+      </Table>
+      {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
+      {editing ? (
+        <div className="mt-4">
+          <h3 className="mb-2 text-sm font-semibold">
+            Edit {faultCases.find((f) => f.id === editing)?.name ?? "fault case"}
+          </h3>
+          <FaultCaseForm
+            key={editing}
+            projectId={projectId}
+            editing={faultCases.find((f) => f.id === editing)}
+            onDone={() => setEditing(null)}
+          />
+        </div>
+      ) : null}
+    </>
+  );
+}
+
+function FaultCaseOrigin({ row }: { row: FaultCaseRecord }) {
+  const lines = row.origin ? figureLines(row.origin.builder, row.origin.input, row.origin.figures) : [];
+  return (
+    <div className="max-w-3xl space-y-2 whitespace-normal">
+      {row.origin ? (
+        <>
+          <p className="font-medium">
+            Built with the {builderNames[row.origin.builder] ?? row.origin.builder} builder
+          </p>
+          <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5 text-xs">
+            {lines.map((line) => (
+              <Fragment key={line.key}>
+                <dt className="text-ink-muted">{line.label}</dt>
+                <dd className="num font-mono">{line.value}</dd>
+              </Fragment>
+            ))}
+          </dl>
+        </>
+      ) : (
+        <p className="text-ink-muted">Typed by hand.</p>
+      )}
+      {row.notes ? <p className="whitespace-pre-line text-ink-muted">{row.notes}</p> : null}
+    </div>
+  );
+}

@@ -1,0 +1,229 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useTransition } from "react";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
+import { sendJson } from "@/components/api-client";
+import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
+import { applyServerErrors } from "@/components/form-errors";
+import { TextAreaField, UnitField } from "@/components/library/fields";
+import { Sym } from "@/components/library/symbols";
+import { projectSchema } from "@/lib/projects/schema";
+import { invalidateProject } from "./api";
+
+export interface ProjectFormValues {
+  name: string;
+  description: string;
+  caseTemp: string;
+  /** In percent on the form; the schema takes a fraction. */
+  utilisationLimit: string;
+  tjGuard: string;
+  betweenCurves: "loglog" | "next-longer";
+  ownerId: string;
+}
+
+export const emptyProject: ProjectFormValues = {
+  name: "",
+  description: "",
+  caseTemp: "25",
+  utilisationLimit: "80",
+  tjGuard: "25",
+  betweenCurves: "loglog",
+  ownerId: "",
+};
+
+const formSchema = z
+  .object({
+    name: z.string(),
+    description: z.string(),
+    caseTemp: z.string(),
+    utilisationLimit: z.string(),
+    tjGuard: z.string(),
+    betweenCurves: z.enum(["loglog", "next-longer"]),
+    ownerId: z.string(),
+  })
+  .superRefine((f, ctx) => {
+    const percent = Number(f.utilisationLimit.replace("%", ""));
+    if (f.utilisationLimit.trim() === "" || !(percent > 0 && percent <= 100)) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["utilisationLimit"],
+        message: "A percentage above 0 and at most 100",
+      });
+    }
+    const guard = Number(f.tjGuard);
+    if (f.tjGuard.trim() === "" || !(guard >= 0 && guard <= 200)) {
+      ctx.addIssue({ code: "custom", path: ["tjGuard"], message: "Kelvin from 0 to 200" });
+    }
+  })
+  .transform((f): z.input<typeof projectSchema> => {
+    const percent =
+      f.utilisationLimit.trim() === "" ? Number.NaN : Number(f.utilisationLimit.replace("%", ""));
+    return {
+      ...f,
+      utilisationLimit: percent / 100,
+      tjGuard: f.tjGuard.trim() === "" ? Number.NaN : Number(f.tjGuard),
+      ownerId: f.ownerId === "" ? null : f.ownerId,
+    };
+  })
+  .pipe(projectSchema);
+
+const fields = Object.keys(emptyProject) as (keyof ProjectFormValues)[];
+
+export interface OwnerChoice {
+  id: string;
+  name: string;
+  role: string;
+}
+
+/**
+ * A project's settings: new (POST /api/projects) or edited (PATCH /api/projects/:id). The margin policy is the
+ * utilisation limit in percent, the junction guard in kelvin below T_j,max, and how to read between curves.
+ */
+export function ProjectForm({
+  projectId,
+  defaults,
+  owners,
+}: {
+  projectId?: string;
+  defaults: ProjectFormValues;
+  owners: OwnerChoice[];
+}) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const [navigating, startTransition] = useTransition();
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<ProjectFormValues, unknown, z.output<typeof formSchema>>({
+    resolver: zodResolver(formSchema),
+    defaultValues: defaults,
+  });
+
+  const onSubmit = handleSubmit(async (values) => {
+    try {
+      const { project } = projectId
+        ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
+        : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
+      await invalidateProject(queryClient, project.id);
+      startTransition(() => {
+        router.push(`/projects/${project.id}`);
+        router.refresh();
+      });
+    } catch (error) {
+      applyServerErrors(error, setError, fields);
+    }
+  });
+
+  const err = (name: keyof ProjectFormValues) => errors[name]?.message as string | undefined;
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
+      <fieldset className="grid gap-4 md:grid-cols-2">
+        <legend className="mb-3 text-sm font-semibold">The design under review</legend>
+        <UnitField
+          id="project-name"
+          label="Name"
+          placeholder="48 V battery disconnect, rev B"
+          error={err("name")}
+          {...register("name")}
+        />
+        <SelectField
+          id="project-owner"
+          label="Owner"
+          hint="Receives an e-mail when a measured pulse or capture fails."
+          error={err("ownerId")}
+          {...register("ownerId")}
+        >
+          {projectId ? <option value="">No owner</option> : <option value="">Me</option>}
+          {owners.map((o) => (
+            <option key={o.id} value={o.id}>
+              {o.name} ({o.role})
+            </option>
+          ))}
+        </SelectField>
+        <TextAreaField
+          id="project-description"
+          label="Description"
+          hint="Optional: the circuit, the operating point, where the fault cases come from."
+          className="md:col-span-2"
+          error={err("description")}
+          {...register("description")}
+        />
+      </fieldset>
+
+      <fieldset className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+        <legend className="mb-1 text-sm font-semibold">Temperature and margin policy</legend>
+        <p className="col-span-full -mt-1 mb-1 text-xs text-ink-muted">
+          Every pulse is checked at this case temperature (a fault case may override it) against the curves
+          derated for it.
+        </p>
+        <UnitField
+          id="project-case-temp"
+          label={
+            <>
+              Case temperature <Sym main="T" sub="C" />
+            </>
+          }
+          unit="°C"
+          inputMode="decimal"
+          error={err("caseTemp")}
+          {...register("caseTemp")}
+        />
+        <UnitField
+          id="project-utilisation"
+          label="Utilisation limit"
+          unit="%"
+          inputMode="decimal"
+          hint="Above it, a pulse within the curves is marginal."
+          error={err("utilisationLimit")}
+          {...register("utilisationLimit")}
+        />
+        <UnitField
+          id="project-tj-guard"
+          label="Junction guard"
+          unit="K"
+          inputMode="decimal"
+          hint={
+            <>
+              Below <Sym main="T" sub="j,max" />, where a thermal model exists.
+            </>
+          }
+          error={err("tjGuard")}
+          {...register("tjGuard")}
+        />
+        <SelectField
+          id="project-between"
+          label="Between datasheet widths"
+          error={err("betweenCurves")}
+          {...register("betweenCurves")}
+        >
+          <option value="loglog">Interpolate (log-log)</option>
+          <option value="next-longer">Next longer curve (strict)</option>
+        </SelectField>
+      </fieldset>
+
+      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
+      <FormActions
+        aside={
+          <Link
+            href={projectId ? `/projects/${projectId}` : "/projects"}
+            className="hover:text-ink hover:underline"
+          >
+            Cancel
+          </Link>
+        }
+      >
+        <Button type="submit" variant="primary" pending={isSubmitting || navigating}>
+          {projectId ? "Save settings" : "Create project"}
+        </Button>
+      </FormActions>
+    </form>
+  );
+}

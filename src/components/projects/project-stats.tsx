@@ -1,0 +1,64 @@
+import { Sym } from "@/components/library/symbols";
+import { StatBlocks } from "@/components/stat-blocks";
+import type { ProjectCheck, ProjectDetail } from "./api";
+import { q } from "./format";
+
+function Figure({ children }: { children: string }) {
+  return <span className="num font-mono">{children}</span>;
+}
+
+function plural(n: number, one: string, many: string): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+/** The project's key figures: temperature, margin policy, and how many candidates and pulses it holds. */
+export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?: ProjectCheck }) {
+  if (!detail) {
+    return (
+      <div className="grid grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-3">
+        {[0, 1, 2, 3, 4].map((k) => (
+          <div key={k} className="h-[4.75rem] animate-pulse rounded-md border border-line bg-panel" />
+        ))}
+      </div>
+    );
+  }
+  const { project, candidates, faultCases, measuredPulses } = detail;
+  const captures = check?.pulses.filter((p) => p.source === "capture").length ?? 0;
+  const pulses = faultCases.length + measuredPulses.length + captures;
+  const withModel = candidates.filter((c) => c.part.foster?.length).length;
+  return (
+    <StatBlocks
+      items={[
+        {
+          label: "Case temperature",
+          value: <Figure>{q(project.caseTemp, "°C")}</Figure>,
+          note: "unless a fault case overrides it",
+        },
+        {
+          label: "Utilisation limit",
+          value: <Figure>{`${Number((project.utilisationLimit * 100).toPrecision(3))}\u2009%`}</Figure>,
+          note: "of the allowed current",
+        },
+        {
+          label: "Junction guard",
+          value: <Figure>{`${Number(project.tjGuard.toPrecision(3))}\u2009K`}</Figure>,
+          note: (
+            <>
+              below <Sym main="T" sub="j,max" />, with a thermal model
+            </>
+          ),
+        },
+        {
+          label: "Candidates",
+          value: <Figure>{String(candidates.length)}</Figure>,
+          note: `${withModel} with a thermal model`,
+        },
+        {
+          label: "Pulses",
+          value: <Figure>{String(pulses)}</Figure>,
+          note: `${plural(faultCases.length, "fault case", "fault cases")} · ${measuredPulses.length} measured · ${plural(captures, "capture", "captures")}`,
+        },
+      ]}
+    />
+  );
+}

@@ -1,0 +1,135 @@
+"use client";
+
+import { usePathname, useSearchParams } from "next/navigation";
+import { type KeyboardEvent, type ReactNode, useRef } from "react";
+import { messageOf } from "@/components/api-client";
+import { type ProjectCheck, type ProjectDetail, useProject, useProjectCheck } from "./api";
+import { BenchPanel } from "./bench/bench-panel";
+import { CapturesPanel } from "./captures/captures-panel";
+import { FaultCasesPanel } from "./fault-cases/fault-cases-panel";
+import { ProjectStats } from "./project-stats";
+import { ResultsPanel } from "./results/results-panel";
+
+export interface Viewer {
+  id: string;
+  role: "admin" | "lead" | "engineer" | "technician";
+}
+
+export interface Person {
+  id: string;
+  name: string;
+}
+
+const tabs = [
+  { key: "results", label: "Results" },
+  { key: "fault-cases", label: "Fault cases" },
+  { key: "bench", label: "Bench" },
+  { key: "captures", label: "Captures" },
+] as const;
+type TabKey = (typeof tabs)[number]["key"];
+
+export interface PanelProps {
+  projectId: string;
+  detail: ProjectDetail;
+  check: ProjectCheck | undefined;
+  viewer: Viewer;
+  canWrite: boolean;
+  canMeasure: boolean;
+  people: Person[];
+}
+
+/**
+ * The project's work area: its key figures, then the tabs (kept in the URL as ?tab=…) over the results, the
+ * fault cases, the bench measurements and the captures. Data comes from the project and check routes through
+ * TanStack Query; every change invalidates both.
+ */
+export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
+  const params = useSearchParams();
+  const pathname = usePathname();
+  const requested = params.get("tab");
+  const tab: TabKey = tabs.some((t) => t.key === requested) ? (requested as TabKey) : "results";
+  const detail = useProject(props.projectId);
+  const check = useProjectCheck(props.projectId);
+  const tabRefs = useRef<Record<string, HTMLButtonElement | null>>({});
+
+  function select(key: TabKey) {
+    const next = new URLSearchParams(params);
+    if (key === "results") next.delete("tab");
+    else next.set("tab", key);
+    if (key !== "results") next.delete("pulse");
+    const search = next.toString();
+    window.history.pushState(null, "", search ? `${pathname}?${search}` : pathname);
+  }
+
+  function onKeyDown(event: KeyboardEvent<HTMLDivElement>) {
+    const index = tabs.findIndex((t) => t.key === tab);
+    const step = event.key === "ArrowRight" ? 1 : event.key === "ArrowLeft" ? -1 : 0;
+    if (!step) return;
+    const next = tabs[(index + step + tabs.length) % tabs.length];
+    select(next.key);
+    tabRefs.current[next.key]?.focus();
+  }
+
+  let body: ReactNode;
+  if (detail.isPending) {
+    body = <div className="h-64 animate-pulse rounded-md border border-line bg-panel" />;
+  } else if (detail.isError) {
+    body = (
+      <p role="alert" className="text-sm text-fail">
+        {messageOf(detail.error)}
+      </p>
+    );
+  } else {
+    const panel: PanelProps = { ...props, detail: detail.data, check: check.data };
+    body =
+      tab === "results" ? (
+        <ResultsPanel {...panel} checkError={check.isError ? messageOf(check.error) : null} />
+      ) : tab === "fault-cases" ? (
+        <FaultCasesPanel {...panel} />
+      ) : tab === "bench" ? (
+        <BenchPanel {...panel} />
+      ) : (
+        <CapturesPanel {...panel} />
+      );
+  }
+
+  return (
+    <div className="space-y-6">
+      <ProjectStats detail={detail.data} check={check.data} />
+      <div>
+        <div
+          role="tablist"
+          aria-label="Project views"
+          className="flex gap-1 border-b border-line"
+          onKeyDown={onKeyDown}
+        >
+          {tabs.map((t) => (
+            <button
+              key={t.key}
+              ref={(el) => {
+                tabRefs.current[t.key] = el;
+              }}
+              type="button"
+              role="tab"
+              id={`tab-${t.key}`}
+              aria-selected={tab === t.key}
+              aria-controls={`panel-${t.key}`}
+              tabIndex={tab === t.key ? 0 : -1}
+              onClick={() => select(t.key)}
+              className={`-mb-px h-9 border-b-2 px-3 text-sm ${
+                tab === t.key
+                  ? "border-accent font-medium text-ink"
+                  : "border-transparent text-ink-muted hover:border-line-strong hover:text-ink"
+              }`}
+            >
+              {t.label}
+            </button>
+          ))}
+        </div>
+        <div role="tabpanel" id={`panel-${tab}`} aria-labelledby={`tab-${tab}`} className="pt-6">
+          {body}
+        </div>
+      </div>
+    </div>
+  );
+}

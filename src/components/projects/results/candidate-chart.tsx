@@ -1,0 +1,87 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { messageOf } from "@/components/api-client";
+import { callJson } from "@/components/library/api";
+import { type ChartPulse, SoaChart } from "@/components/soa-chart";
+import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
+import { percent, q, repeatText, shapeWords } from "../format";
+
+/** The chart's markers for one candidate: every pulse with a point, in its verdict's shape, labelled by width. */
+export function chartPulses(check: ProjectCheck, partId: string): ChartPulse[] {
+  const results = check.results[partId] ?? {};
+  return check.pulses.flatMap((p) => {
+    if (p.v === null || p.i === null || !(p.v > 0 && p.i > 0)) return [];
+    const result = results[p.id];
+    const words = [
+      `${q(p.duration, "s")} ${shapeWords[p.kind]}`,
+      repeatText(p.repeat),
+      result?.utilisation !== undefined && result.utilisation !== null
+        ? `utilisation ${percent(result.utilisation)}`
+        : null,
+      p.caseTemp !== check.policy.caseTemp ? `checked at ${q(p.caseTemp, "°C")}` : null,
+    ].filter(Boolean);
+    return [
+      {
+        id: p.id,
+        v: p.v,
+        i: p.i,
+        verdict: result?.verdict ?? "no-data",
+        label: `${p.name}: ${words.join(", ")}`,
+      },
+    ];
+  });
+}
+
+/** One candidate's SOA chart at the project's case temperature, with every pulse of the project on it. */
+export function CandidateChart({ candidate, check }: { candidate: CheckedCandidate; check: ProjectCheck }) {
+  const { caseTemp, betweenCurves } = check.policy;
+  const limits = useQuery({
+    queryKey: projectKeys.limits(candidate.partId, candidate.curveSetId, caseTemp, betweenCurves),
+    queryFn: () =>
+      callJson<CandidateLimits>(
+        "GET",
+        `/api/parts/${candidate.partId}/limits?${new URLSearchParams({ caseTemp: String(caseTemp), policy: betweenCurves })}`,
+      ),
+    enabled: candidate.hasCurves,
+  });
+  const data = limits.data;
+  return (
+    <section
+      aria-labelledby={`chart-${candidate.partId}`}
+      className="min-w-0 rounded-md border border-line bg-panel p-4"
+    >
+      <h3 id={`chart-${candidate.partId}`} className="text-sm font-semibold">
+        {candidate.partNumber} <span className="font-normal text-ink-muted">{candidate.maker}</span>
+      </h3>
+      <p className="mb-3 text-xs text-ink-muted">
+        {data && data.derating < 1
+          ? `Dashed: curves derated ×${data.derating.toFixed(2)} for ${q(caseTemp, "°C")} case. Hover a marker for its pulse.`
+          : `Curves at ${q(data?.refCaseTemp ?? 25, "°C")} case. Hover a marker for its pulse.`}
+      </p>
+      {!candidate.hasCurves ? (
+        <p className="rounded-md bg-sunken px-4 py-8 text-center text-sm text-ink-muted">
+          No SOA curves yet: every verdict for this part is &ldquo;no data&rdquo;.
+        </p>
+      ) : limits.isError ? (
+        <p role="alert" className="text-sm text-fail">
+          {messageOf(limits.error)}
+        </p>
+      ) : !data ? (
+        <div className="h-[26rem] animate-pulse rounded-md bg-sunken" />
+      ) : (
+        <SoaChart
+          title={candidate.partNumber}
+          curves={data.curves}
+          refCaseTemp={data.refCaseTemp}
+          derated={
+            data.derating < 1
+              ? { caseTemp: data.caseTemp, factor: data.derating, curves: data.derated }
+              : null
+          }
+          pulses={chartPulses(check, candidate.partId)}
+        />
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,94 @@
+import { Sym } from "@/components/library/symbols";
+import { VerdictBadge } from "@/components/verdict-shape";
+import { explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
+import type { CheckedPulse, ProjectCheck } from "../api";
+import { percent, q, repeatText, shapeWords, sourceWords } from "../format";
+
+/** The pulse as the check read it, in one sentence. */
+function pulseSentence(pulse: CheckedPulse, projectCaseTemp: number): string {
+  const parts = [
+    `${sourceWords[pulse.source]}, ${shapeWords[pulse.kind]}`,
+    pulse.kind === "waveform"
+      ? `equal-energy rectangle ${q(pulse.v, "V")} × ${q(pulse.i, "A")} for ${q(pulse.duration, "s")}`
+      : `${q(pulse.v, "V")}, ${q(pulse.i, "A")}${pulse.kind === "triangle" ? " peak" : ""} for ${q(pulse.duration, "s")}`,
+    repeatText(pulse.repeat) ?? "single pulse",
+    `checked at ${q(pulse.caseTemp, "°C")} case${pulse.caseTemp !== projectCaseTemp ? " (the fault case's own temperature)" : ""}`,
+  ];
+  return `${parts.join("; ")}.`;
+}
+
+/** How every candidate's verdict for one pulse was found: the figures, the derating, and each flag in words. */
+export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: ProjectCheck }) {
+  const { policy } = check;
+  return (
+    <div className="sticky left-3 max-w-5xl space-y-3 text-sm whitespace-normal" data-testid="result-details">
+      <p className="text-ink-muted">{pulseSentence(pulse, policy.caseTemp)}</p>
+      <ul className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
+        {check.candidates.map((c) => {
+          const result = check.results[c.partId]?.[pulse.id];
+          return (
+            <li key={c.partId} className="rounded-md border border-line bg-panel p-3">
+              <p className="flex items-baseline justify-between gap-2">
+                <span className="font-medium">{c.partNumber}</span>
+                <VerdictBadge verdict={result?.verdict ?? "no-data"} />
+              </p>
+              {!result ? (
+                <p className="mt-1 text-ink-muted">
+                  This part has no SOA curves yet, so nothing can be said about the pulse. An engineer uploads
+                  them on the part&apos;s library page.
+                </p>
+              ) : (
+                <>
+                  <p className="mt-1 text-ink-muted">{VERDICT_EXPLANATIONS[result.verdict]}</p>
+                  <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
+                    <dt className="text-ink-muted">
+                      Allowed <Sym main="I" sub="D" />
+                    </dt>
+                    <dd className="num font-mono">{q(result.allowedCurrent, "A")}</dd>
+                    <dt className="text-ink-muted">Utilisation</dt>
+                    <dd className="num font-mono">
+                      {percent(result.utilisation)}{" "}
+                      <span className="font-sans text-ink-faint">
+                        (limit {percent(policy.utilisationLimit)})
+                      </span>
+                    </dd>
+                    <dt className="text-ink-muted">Derating</dt>
+                    <dd className="num font-mono">
+                      ×{result.derating.toFixed(3)}{" "}
+                      <span className="font-sans text-ink-faint">for {q(pulse.caseTemp, "°C")} case</span>
+                    </dd>
+                    <dt className="text-ink-muted">
+                      <Sym main="T" sub="j,peak" />
+                    </dt>
+                    <dd className="num font-mono">
+                      {result.tjPeak === null ? (
+                        <span className="font-sans text-ink-faint">
+                          no thermal model: the curves alone decide
+                        </span>
+                      ) : (
+                        <>
+                          {q(result.tjPeak, "°C")}{" "}
+                          <span className="font-sans text-ink-faint">(guard {policy.tjGuard} K)</span>
+                        </>
+                      )}
+                    </dd>
+                  </dl>
+                  {result.flags.length ? (
+                    <ul
+                      className="mt-2 list-disc space-y-1 pl-4 text-xs text-ink-muted"
+                      aria-label="How it was read"
+                    >
+                      {result.flags.map((flag) => (
+                        <li key={flag}>{explainFlag(flag)}</li>
+                      ))}
+                    </ul>
+                  ) : null}
+                </>
+              )}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}
