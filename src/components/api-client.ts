@@ -18,12 +18,33 @@ export class ApiError extends Error {
   }
 }
 
-interface ErrorBody {
-  error?: { code?: string; message?: string; details?: { fieldErrors?: FieldErrors } };
+/** One row-level problem of an uploaded CSV, as the server lists them (src/lib/csv/issues.ts). */
+export interface FileIssue {
+  row: number | null;
+  column: string | null;
+  reason: string;
+  message: string;
 }
 
-export async function sendJson<T = unknown>(
-  method: "POST" | "PATCH" | "DELETE",
+/** A failure that carries the CSV rows the server rejected. */
+export class RejectedFile extends ApiError {
+  constructor(
+    status: number,
+    code: string,
+    message: string,
+    readonly issues: FileIssue[],
+  ) {
+    super(status, code, message);
+  }
+}
+
+interface ErrorBody {
+  error?: { code?: string; message?: string; details?: { fieldErrors?: FieldErrors; issues?: FileIssue[] } };
+}
+
+/** Calls a JSON route handler; a failure is an ApiError (a RejectedFile when the server lists CSV rows). */
+export async function requestJson<T = unknown>(
+  method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE",
   url: string,
   body?: unknown,
 ): Promise<T> {
@@ -42,12 +63,20 @@ export async function sendJson<T = unknown>(
   const payload: unknown = await res.json().catch(() => null);
   if (res.ok) return payload as T;
   const error = (payload as ErrorBody | null)?.error;
-  throw new ApiError(
-    res.status,
-    error?.code ?? `http:${res.status}`,
-    error?.message ?? `The server answered ${res.status}.`,
-    error?.details?.fieldErrors ?? {},
-  );
+  const message =
+    error?.message ?? (res.status === 413 ? "The file is too large." : `The server answered ${res.status}.`);
+  const code = error?.code ?? `http:${res.status}`;
+  if (error?.details?.issues?.length) throw new RejectedFile(res.status, code, message, error.details.issues);
+  throw new ApiError(res.status, code, message, error?.details?.fieldErrors ?? {});
+}
+
+/** A change (POST, PATCH, DELETE) through `requestJson`. */
+export function sendJson<T = unknown>(
+  method: "POST" | "PATCH" | "DELETE",
+  url: string,
+  body?: unknown,
+): Promise<T> {
+  return requestJson<T>(method, url, body);
 }
 
 /** A message for any thrown value, for inline display. */

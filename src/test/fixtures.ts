@@ -1,9 +1,20 @@
 // Fixtures for integration tests of route handlers: real database rows, real sessions, direct handler calls.
 import { eq } from "drizzle-orm";
 import { createDb } from "@/db/client";
-import { memberships, type Role, users, workspaces } from "@/db/schema";
+import {
+  curveSets,
+  curves,
+  memberships,
+  parts,
+  projectCandidates,
+  type Role,
+  users,
+  workspaces,
+} from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
 import { startSession } from "@/lib/auth/session";
+import { type DemoPart, demoCurves } from "@/lib/demo/parts";
+import type { PartLimits } from "@/lib/soa/types";
 import { requireEnv } from "./services";
 
 export const testDb = createDb(requireEnv("DATABASE_URL"), { max: 3 });
@@ -106,4 +117,69 @@ export async function deleteWorkspace(id: string): Promise<void> {
     .where(eq(memberships.workspaceId, id));
   await db.delete(workspaces).where(eq(workspaces.id, id));
   for (const r of rows) await db.delete(users).where(eq(users.id, r.userId));
+}
+
+/**
+ * A demo part (src/lib/demo/parts.ts) in the workspace's library with its modelled curves as the active curve set,
+ * added as a candidate of the project. Returns the ids and the part as the engine takes it.
+ */
+export async function addDemoCandidate(
+  workspaceId: string,
+  projectId: string,
+  demo: DemoPart,
+  options: { foster?: boolean } = {},
+): Promise<{ partId: string; setId: string; limits: PartLimits }> {
+  const { db } = testDb;
+  const withFoster = options.foster ?? true;
+  const [part] = await db
+    .insert(parts)
+    .values({
+      workspaceId,
+      partNumber: demo.partNumber,
+      maker: demo.maker,
+      technology: "si-mosfet",
+      package: demo.package,
+      vdsMax: demo.vdsMax,
+      idPulseMax: demo.idPulseMax,
+      rdsOn: demo.rdsOn,
+      tjMax: demo.tjMax,
+      rthJc: demo.rthJc,
+      foster: withFoster ? demo.foster : null,
+      unitCost: demo.unitCost,
+      currency: demo.currency,
+    })
+    .returning({ id: parts.id });
+  const [set] = await db
+    .insert(curveSets)
+    .values({
+      workspaceId,
+      partId: part.id,
+      objectKey: `test/${crypto.randomUUID()}`,
+      fileName: "soa.csv",
+      size: 1,
+      sha256: "0".repeat(64),
+      shape: "long",
+      active: true,
+    })
+    .returning({ id: curveSets.id });
+  const setCurves = demoCurves(demo);
+  await db.insert(curves).values(
+    setCurves.map((c, position) => ({
+      curveSetId: set.id,
+      position,
+      duration: c.duration === "DC" ? null : c.duration,
+      points: c.points,
+    })),
+  );
+  await db.insert(projectCandidates).values({ projectId, partId: part.id });
+  const limits: PartLimits = {
+    vdsMax: demo.vdsMax,
+    tjMax: demo.tjMax,
+    rdsOn: demo.rdsOn,
+    idPulseMax: demo.idPulseMax,
+    rthJc: demo.rthJc,
+    ...(withFoster ? { foster: demo.foster } : {}),
+    soa: { refCaseTemp: 25, curves: setCurves },
+  };
+  return { partId: part.id, setId: set.id, limits };
 }

@@ -1,47 +1,13 @@
-import { ApiError, type FieldErrors } from "@/components/api-client";
-import type { CsvIssue } from "@/lib/csv/issues";
+import { ApiError, requestJson } from "@/components/api-client";
 
-// Calls of the library screens that the shared `sendJson` does not cover: GET and PUT with the same typed
-// failure, the rejected rows of a CSV, and the browser's own upload of a file to storage with its progress.
+// Calls of the library screens: JSON through the shared client, and the browser's own upload of a file to
+// storage with its progress.
 
-interface ErrorBody {
-  error?: { code?: string; message?: string; details?: { fieldErrors?: FieldErrors; issues?: CsvIssue[] } };
-}
+export { RejectedFile } from "@/components/api-client";
 
-/** A failure that carries the CSV rows the server rejected, if any. */
-export class RejectedFile extends ApiError {
-  constructor(
-    status: number,
-    code: string,
-    message: string,
-    readonly issues: CsvIssue[],
-  ) {
-    super(status, code, message);
-  }
-}
-
-export async function callJson<T>(method: "GET" | "PUT" | "POST", url: string, body?: unknown): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(url, {
-      method,
-      credentials: "same-origin",
-      headers: body === undefined ? undefined : { "content-type": "application/json" },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-  } catch (cause) {
-    console.error(cause);
-    throw new ApiError(0, "network", "The server could not be reached. Check the connection and try again.");
-  }
-  const payload: unknown = await res.json().catch(() => null);
-  if (res.ok) return payload as T;
-  const error = (payload as ErrorBody | null)?.error;
-  const message =
-    error?.message ??
-    (res.status === 413 ? "The file is larger than 5 MB." : `The server answered ${res.status}.`);
-  const code = error?.code ?? `http:${res.status}`;
-  if (error?.details?.issues?.length) throw new RejectedFile(res.status, code, message, error.details.issues);
-  throw new ApiError(res.status, code, message, error?.details?.fieldErrors ?? {});
+/** GET, PUT and POST with the shared typed failure (kept under this name for the library's callers). */
+export function callJson<T>(method: "GET" | "PUT" | "POST", url: string, body?: unknown): Promise<T> {
+  return requestJson<T>(method, url, body);
 }
 
 /** PUTs a file to a presigned storage URL, reporting progress from 0 to 1. */

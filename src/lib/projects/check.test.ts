@@ -1,20 +1,13 @@
 // The project check route against the engine's contract on the same inputs, on the real database.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
-import {
-  curveSets,
-  curves,
-  faultCases,
-  measuredPulses,
-  parts,
-  projectCandidates,
-  projects,
-} from "@/db/schema";
+import { faultCases, measuredPulses, projects } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
-import { DEMO_PARTS, demoCurves } from "@/lib/demo/parts";
+import { DEMO_PARTS } from "@/lib/demo/parts";
 import { runCheck } from "@/lib/soa/check";
 import type { PartLimits, Pulse } from "@/lib/soa/types";
 import {
+  addDemoCandidate,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -42,55 +35,9 @@ beforeAll(async () => {
     .returning();
   projectId = project.id;
   for (const demo of DEMO_PARTS) {
-    const [part] = await db
-      .insert(parts)
-      .values({
-        workspaceId: ws.id,
-        partNumber: demo.partNumber,
-        maker: demo.maker,
-        technology: "si-mosfet",
-        package: demo.package,
-        vdsMax: demo.vdsMax,
-        idPulseMax: demo.idPulseMax,
-        rdsOn: demo.rdsOn,
-        tjMax: demo.tjMax,
-        rthJc: demo.rthJc,
-        // The second part without a thermal model: its repetitions read Z_th from the curves.
-        foster: demo.partNumber === "QM-100G28" ? null : demo.foster,
-      })
-      .returning();
-    const [set] = await db
-      .insert(curveSets)
-      .values({
-        workspaceId: ws.id,
-        partId: part.id,
-        objectKey: `test/${crypto.randomUUID()}`,
-        fileName: "soa.csv",
-        size: 1,
-        sha256: "0".repeat(64),
-        shape: "long",
-        active: true,
-      })
-      .returning();
-    const setCurves = demoCurves(demo);
-    await db.insert(curves).values(
-      setCurves.map((c, position) => ({
-        curveSetId: set.id,
-        position,
-        duration: c.duration === "DC" ? null : c.duration,
-        points: c.points,
-      })),
-    );
-    await db.insert(projectCandidates).values({ projectId, partId: part.id });
-    limitsByPart.set(part.id, {
-      vdsMax: demo.vdsMax,
-      tjMax: demo.tjMax,
-      rdsOn: demo.rdsOn,
-      idPulseMax: demo.idPulseMax,
-      rthJc: demo.rthJc,
-      ...(demo.partNumber === "QM-100G28" ? {} : { foster: demo.foster }),
-      soa: { refCaseTemp: 25, curves: setCurves },
-    });
+    // The second part without a thermal model: its repetitions read Z_th from the curves.
+    const added = await addDemoCandidate(ws.id, projectId, demo, { foster: demo.partNumber !== "QM-100G28" });
+    limitsByPart.set(added.partId, added.limits);
   }
   await db.insert(faultCases).values([
     { projectId, name: "Pre-charge inrush", kind: "triangle", v: 48, i: 1.5, duration: 0.048 },

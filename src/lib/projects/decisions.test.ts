@@ -9,18 +9,11 @@ import { GET as reportGet } from "@/app/api/projects/[id]/decisions/[decisionId]
 import { GET as decisionGet } from "@/app/api/projects/[id]/decisions/[decisionId]/route";
 import { GET as listGet, POST as signPost } from "@/app/api/projects/[id]/decisions/route";
 import { GET as matrixGet } from "@/app/api/projects/[id]/matrix/route";
-import {
-  curveSets,
-  curves,
-  faultCases,
-  measuredPulses,
-  parts,
-  projectCandidates,
-  projects,
-} from "@/db/schema";
+import { curves, faultCases, measuredPulses, projects } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
-import { DEMO_PARTS, demoCurves } from "@/lib/demo/parts";
+import { DEMO_PARTS } from "@/lib/demo/parts";
 import {
+  addDemoCandidate,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -52,48 +45,9 @@ beforeAll(async () => {
     .returning();
   projectId = project.id;
   for (const demo of DEMO_PARTS) {
-    const [part] = await db
-      .insert(parts)
-      .values({
-        workspaceId: ws.id,
-        partNumber: demo.partNumber,
-        maker: demo.maker,
-        technology: "si-mosfet",
-        package: demo.package,
-        vdsMax: demo.vdsMax,
-        idPulseMax: demo.idPulseMax,
-        rdsOn: demo.rdsOn,
-        tjMax: demo.tjMax,
-        rthJc: demo.rthJc,
-        foster: demo.foster,
-        unitCost: demo.unitCost,
-        currency: demo.currency,
-      })
-      .returning();
-    partIds[demo.partNumber] = part.id;
-    const [set] = await db
-      .insert(curveSets)
-      .values({
-        workspaceId: ws.id,
-        partId: part.id,
-        objectKey: `test/${crypto.randomUUID()}`,
-        fileName: "s.csv",
-        size: 1,
-        sha256: "0".repeat(64),
-        shape: "long",
-        active: true,
-      })
-      .returning();
-    setIds[demo.partNumber] = set.id;
-    await db.insert(curves).values(
-      demoCurves(demo).map((c, position) => ({
-        curveSetId: set.id,
-        position,
-        duration: c.duration === "DC" ? null : c.duration,
-        points: c.points,
-      })),
-    );
-    await db.insert(projectCandidates).values({ projectId, partId: part.id });
+    const added = await addDemoCandidate(ws.id, projectId, demo);
+    partIds[demo.partNumber] = added.partId;
+    setIds[demo.partNumber] = added.setId;
   }
   await db.insert(faultCases).values([
     { projectId, name: "Pre-charge inrush", kind: "triangle", v: 48, i: 1.5, duration: 0.048 },

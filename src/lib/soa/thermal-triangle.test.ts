@@ -1,32 +1,9 @@
-import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { type OdexSolver, Solver } from "@/test/odex";
 import { type FosterTerm, zth } from "./foster";
 import { trianglePeakRise } from "./thermal-triangle";
 import { waveformRise } from "./thermal-waveform";
-
-// odex ships its TypeScript source rather than declarations, and that source fails this project's strict type
-// check; it is loaded untyped and the part used here is described.
-interface OdexSolver {
-  relativeTolerance: number;
-  absoluteTolerance: number;
-  maxSteps: number;
-  denseOutput: boolean;
-  solve(
-    f: (x: number, y: number[]) => number[],
-    x: number,
-    y: number[],
-    xEnd: number,
-    observe?: (
-      n: number,
-      xOld: number,
-      x: number,
-      y: number[],
-      dense?: (i: number, x: number) => number,
-    ) => void,
-  ): { y: number[] };
-}
-const { Solver } = createRequire(import.meta.url)("odex") as { Solver: new (n: number) => OdexSolver };
 
 const TWO_TERMS: FosterTerm[] = [
   { r: 0.1, tau: 1e-3 },

@@ -1,20 +1,10 @@
-import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { Solver } from "@/test/odex";
 import type { FosterTerm } from "./foster";
 import { rectRise } from "./thermal-rect";
 import type { WaveformRise } from "./thermal-waveform";
 import { powerFromVI, rampFactor, waveformRise, waveformRiseVI } from "./thermal-waveform";
-
-// odex ships its TypeScript source rather than declarations, and that source fails this project's strict type
-// check; it is loaded untyped and the part used here is described.
-interface OdexSolver {
-  relativeTolerance: number;
-  absoluteTolerance: number;
-  maxSteps: number;
-  solve(f: (x: number, y: number[]) => number[], x: number, y: number[], xEnd: number): { y: number[] };
-}
-const { Solver } = createRequire(import.meta.url)("odex") as { Solver: new (n: number) => OdexSolver };
 
 const ONE_TERM: FosterTerm[] = [{ r: 1, tau: 1 }];
 const THREE_TERMS: FosterTerm[] = [
