@@ -6,6 +6,12 @@ import { linkIn, waitForMail } from "./pages/mail-inbox";
 import { TeamPage } from "./pages/team-page";
 import { saveScreenshot } from "./screenshots";
 
+/** A page must never carry a password hash (argon2id) or a stored token hash (64 hex digits). */
+function expectNoSecrets(html: string): void {
+  expect(html).not.toMatch(/\$argon2id\$/);
+  expect(html).not.toMatch(/\b[0-9a-f]{64}\b/);
+}
+
 const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
 const admin = {
   name: "Ines Varga",
@@ -38,6 +44,7 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     await team.invite(technician.email, "Technician");
     await expect(team.invitationRow(technician.email)).toContainText("Technician");
     await saveScreenshot(page, "team");
+    expectNoSecrets(await page.content());
   });
 
   await test.step("the admin creates an API token on the Account page", async () => {
@@ -45,6 +52,12 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     const secret = await new AccountPage(page).createToken("Bench 2 pulse rig");
     expect(secret.length).toBeGreaterThan(40);
     await saveScreenshot(page, "account");
+    // The page shows the new secret once, but never a stored hash or the session id behind the cookie.
+    const sessionId = (await page.context().cookies()).find((c) => c.name === "pulsefence_session")?.value;
+    expect(sessionId).toBeTruthy();
+    const html = await page.content();
+    expectNoSecrets(html);
+    expect(html).not.toContain(sessionId!);
     await shell.signOut();
   });
 
