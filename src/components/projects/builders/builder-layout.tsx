@@ -1,5 +1,7 @@
 import type { ReactNode } from "react";
+import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
 import { Button, FormMessage } from "@/components/form";
+import { applyServerErrors } from "@/components/form-errors";
 import type { Repeat } from "@/lib/soa/types";
 import { q, repeatText, shapeWords } from "../format";
 import { FigureList } from "./figures";
@@ -18,6 +20,33 @@ export interface BuiltCase {
 export interface BuilderProps {
   /** Saves the built case as a fault case of the project; throws an ApiError when the server refuses it. */
   create: (built: BuiltCase) => Promise<void>;
+}
+
+/** What a builder's `build` gives: the pulse to save and where it came from, or why there is none. */
+export type BuildResult =
+  | { ok: true; pulse: Omit<BuiltCase, "name" | "origin">; origin: { input: object; figures: object } }
+  | { ok: false; reason: string };
+
+/**
+ * Saves what a builder made as a fault case named by the form: a builder's refusal and the server's answer land
+ * on the form (the name field, or the form's own message).
+ */
+export async function saveBuilt<T extends FieldValues & { name: string }>(
+  builder: string,
+  name: string,
+  result: BuildResult,
+  create: BuilderProps["create"],
+  setError: UseFormSetError<T>,
+): Promise<void> {
+  if (!result.ok) {
+    setError("root.server", { message: result.reason });
+    return;
+  }
+  try {
+    await create({ name, ...result.pulse, origin: { builder, ...result.origin } });
+  } catch (error) {
+    applyServerErrors(error, setError, ["name" as Path<T>]);
+  }
 }
 
 /** The pulse a builder will save, in words and figures. */

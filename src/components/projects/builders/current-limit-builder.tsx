@@ -3,11 +3,10 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { applyServerErrors } from "@/components/form-errors";
 import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import { currentLimitFault } from "@/lib/soa/builders";
-import { BuilderLayout, type BuilderProps, type BuiltCase, PulseSummary } from "./builder-layout";
+import { BuilderLayout, type BuilderProps, PulseSummary, saveBuilt } from "./builder-layout";
 import { currentLimitForm } from "./builder-schemas";
 
 type Values = z.input<typeof currentLimitForm>;
@@ -65,23 +64,9 @@ export function CurrentLimitBuilder({ create, currentLimit }: BuilderProps & { c
   const parsed = currentLimitForm.safeParse(values);
   const built = parsed.success ? build(parsed.data) : null;
 
-  const onSubmit = handleSubmit(async (input) => {
-    const result = build(input);
-    if (!result.ok) {
-      setError("root.server", { message: result.reason });
-      return;
-    }
-    const made: BuiltCase = {
-      name: input.name,
-      ...result.pulse,
-      origin: { builder: "current-limit", ...result.origin },
-    };
-    try {
-      await create(made);
-    } catch (error) {
-      applyServerErrors(error, setError, ["name"]);
-    }
-  });
+  const onSubmit = handleSubmit((input) =>
+    saveBuilt("current-limit", input.name, build(input), create, setError),
+  );
 
   return (
     <BuilderLayout

@@ -3,11 +3,10 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { applyServerErrors } from "@/components/form-errors";
 import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import { inrushPulses } from "@/lib/soa/builders";
-import { BuilderLayout, type BuilderProps, type BuiltCase, PulseSummary } from "./builder-layout";
+import { BuilderLayout, type BuilderProps, PulseSummary, saveBuilt } from "./builder-layout";
 import { inrushForm } from "./builder-schemas";
 
 type Values = z.input<typeof inrushForm>;
@@ -73,23 +72,9 @@ export function InrushBuilder({ create }: BuilderProps) {
   const built = parsed.success ? buildInrush(parsed.data) : null;
   const withLoad = String(values.load ?? "").trim() !== "";
 
-  const onSubmit = handleSubmit(async (input) => {
-    const result = buildInrush(input);
-    if (!result.ok) {
-      setError("root.server", { message: result.reason });
-      return;
-    }
-    const built: BuiltCase = {
-      name: input.name,
-      ...result.pulse,
-      origin: { builder: "inrush", ...result.origin },
-    };
-    try {
-      await create(built);
-    } catch (error) {
-      applyServerErrors(error, setError, ["name"]);
-    }
-  });
+  const onSubmit = handleSubmit((input) =>
+    saveBuilt("inrush", input.name, buildInrush(input), create, setError),
+  );
 
   return (
     <BuilderLayout
