@@ -4,8 +4,9 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { ConfirmDelete } from "@/components/confirm-delete";
 import { DateText } from "@/components/date-text";
-import { Button, FormMessage } from "@/components/form";
+import { FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
@@ -116,31 +117,15 @@ export function MeasuredTable({
                 {canMeasure ? (
                   <Td className="text-right">
                     {mine || mayDeleteAny ? (
-                      confirming === row.id ? (
-                        <span className="inline-flex items-center gap-1">
-                          <Button
-                            size="sm"
-                            variant="danger"
-                            pending={remove.isPending}
-                            onClick={() => remove.mutate(row.id)}
-                          >
-                            Delete
-                          </Button>
-                          <Button size="sm" variant="quiet" onClick={() => setConfirming(null)}>
-                            Keep
-                          </Button>
-                        </span>
-                      ) : (
-                        <Button
-                          size="sm"
-                          variant="quiet"
-                          aria-label={`Delete ${row.label}`}
-                          className="opacity-70 group-hover/row:opacity-100 focus-visible:opacity-100"
-                          onClick={() => setConfirming(row.id)}
-                        >
-                          Delete
-                        </Button>
-                      )
+                      <ConfirmDelete
+                        label={row.label}
+                        confirming={confirming === row.id}
+                        pending={remove.isPending}
+                        onAsk={() => setConfirming(row.id)}
+                        onConfirm={() => remove.mutate(row.id)}
+                        onKeep={() => setConfirming(null)}
+                        className="opacity-70 group-hover/row:opacity-100 focus-within:opacity-100"
+                      />
                     ) : null}
                   </Td>
                 ) : null}

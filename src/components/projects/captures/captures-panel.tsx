@@ -5,8 +5,9 @@ import { usePathname, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
+import { ConfirmDelete } from "@/components/confirm-delete";
 import { DateText } from "@/components/date-text";
-import { Button, FormMessage } from "@/components/form";
+import { FormMessage } from "@/components/form";
 import { sizeText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
@@ -148,30 +149,14 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
                   {canMeasure ? (
                     <Td className="text-right">
                       {mine || mayDeleteAny ? (
-                        confirming === c.id ? (
-                          <span className="inline-flex items-center gap-1">
-                            <Button
-                              size="sm"
-                              variant="danger"
-                              pending={remove.isPending}
-                              onClick={() => remove.mutate(c.id)}
-                            >
-                              Delete
-                            </Button>
-                            <Button size="sm" variant="quiet" onClick={() => setConfirming(null)}>
-                              Keep
-                            </Button>
-                          </span>
-                        ) : (
-                          <Button
-                            size="sm"
-                            variant="quiet"
-                            aria-label={`Delete ${c.name}`}
-                            onClick={() => setConfirming(c.id)}
-                          >
-                            Delete
-                          </Button>
-                        )
+                        <ConfirmDelete
+                          label={c.name}
+                          confirming={confirming === c.id}
+                          pending={remove.isPending}
+                          onAsk={() => setConfirming(c.id)}
+                          onConfirm={() => remove.mutate(c.id)}
+                          onKeep={() => setConfirming(null)}
+                        />
                       ) : null}
                     </Td>
                   ) : null}

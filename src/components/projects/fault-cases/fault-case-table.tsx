@@ -3,6 +3,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { Fragment, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { ConfirmDelete } from "@/components/confirm-delete";
 import { Button, FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
@@ -112,35 +113,20 @@ export function FaultCaseTable({
                 </Td>
                 {canWrite ? (
                   <Td className="text-right">
-                    {confirming === row.id ? (
-                      <span className="inline-flex items-center gap-1">
-                        <Button
-                          size="sm"
-                          variant="danger"
-                          pending={remove.isPending}
-                          onClick={() => remove.mutate(row.id)}
-                        >
-                          Delete
-                        </Button>
-                        <Button size="sm" variant="quiet" onClick={() => setConfirming(null)}>
-                          Keep
-                        </Button>
-                      </span>
-                    ) : (
-                      <span className="inline-flex items-center gap-1 opacity-70 group-hover/row:opacity-100 focus-within:opacity-100">
+                    <ConfirmDelete
+                      label={row.name}
+                      confirming={confirming === row.id}
+                      pending={remove.isPending}
+                      onAsk={() => setConfirming(row.id)}
+                      onConfirm={() => remove.mutate(row.id)}
+                      onKeep={() => setConfirming(null)}
+                      className="opacity-70 group-hover/row:opacity-100 focus-within:opacity-100"
+                      before={
                         <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
                           Edit
                         </Button>
-                        <Button
-                          size="sm"
-                          variant="quiet"
-                          aria-label={`Delete ${row.name}`}
-                          onClick={() => setConfirming(row.id)}
-                        >
-                          Delete
-                        </Button>
-                      </span>
-                    )}
+                      }
+                    />
                   </Td>
                 ) : null}
               </Tr>
