@@ -63,7 +63,8 @@ export async function saveMeasurements(
     return rows;
   });
   const ids = saved.map((r) => r.id);
-  const checked = await checkProject(project);
+  // Only the saved pulses are notified and answered: the project's captures need not be read back from storage.
+  const checked = await checkProject(project, { captures: async () => [] });
   const notified = await notifyFailingEvidence(project, checked, ids);
   const verdicts = ids.map((id) => ({
     id,
