@@ -32,26 +32,32 @@ export const PATCH = route<{ id: string; measurementId: string }>(
     const project = await loadProject(caller, id);
     const existing = await loadOwnMeasurement(caller, project.id, measurementId);
     const values = await parseBody(req, measurementRowSchema);
-    const [row] = await db
-      .update(measuredPulses)
-      .set({
-        label: values.label,
-        kind: values.kind,
-        v: values.v,
-        i: values.i,
-        duration: values.duration,
-        repeatPeriod: values.repeat?.period ?? null,
-        repeatCount: values.repeat?.count ?? null,
-      })
-      .where(eq(measuredPulses.id, existing.id))
-      .returning();
-    await recordAudit({
-      workspaceId: caller.workspaceId,
-      actorId: caller.user.id,
-      action: "measurement.updated",
-      subjectType: "project",
-      subjectId: project.id,
-      details: { measurementId: row.id },
+    const row = await db.transaction(async (tx) => {
+      const [updated] = await tx
+        .update(measuredPulses)
+        .set({
+          label: values.label,
+          kind: values.kind,
+          v: values.v,
+          i: values.i,
+          duration: values.duration,
+          repeatPeriod: values.repeat?.period ?? null,
+          repeatCount: values.repeat?.count ?? null,
+        })
+        .where(eq(measuredPulses.id, existing.id))
+        .returning();
+      await recordAudit(
+        {
+          workspaceId: caller.workspaceId,
+          actorId: caller.user.id,
+          action: "measurement.updated",
+          subjectType: "project",
+          subjectId: project.id,
+          details: { measurementId: updated.id },
+        },
+        tx,
+      );
+      return updated;
     });
     return json({ measurement: row });
   },
