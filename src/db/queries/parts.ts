@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, gte, ilike, isNotNull, isNull, lte, or, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { curveSets, curves, parts, type Technology, users } from "@/db/schema";
+import { isUuid } from "@/lib/uuid";
 
 export const partSortKeys = [
   "partNumber",
@@ -149,8 +150,4 @@ export async function getActiveCurveSet({ partId }: { partId: string }) {
     ...set,
     curves: rows.map((c) => ({ duration: c.duration ?? ("DC" as const), points: c.points })),
   };
-}
-
-export function isUuid(id: string): boolean {
-  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
 }

@@ -8,6 +8,7 @@ import { type CsvIssue, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } fro
 import { AppError } from "@/lib/errors";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import type { Storage } from "@/lib/storage";
+import { isUuid } from "@/lib/uuid";
 
 /** An upload not registered within this time is removed by the cleanup step. */
 export const staleUploadMs = 60 * 60 * 1000;
@@ -58,7 +59,7 @@ export async function presignUpload(
 
 /** A pending upload of the workspace for this purpose, or a 404. */
 export async function getPendingUpload(input: { workspaceId: string; uploadId: string; purpose: string }) {
-  const [row] = /^[0-9a-f-]{36}$/i.test(input.uploadId)
+  const [row] = isUuid(input.uploadId)
     ? await db
         .select()
         .from(pendingUploads)

@@ -1,11 +1,11 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { isUuid } from "@/db/queries/parts";
 import { curveSets, curves, type Part, parts, projectCandidates, projects } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import type { PartLimits } from "@/lib/soa/types";
+import { isUuid } from "@/lib/uuid";
 
 /** The caller's workspace's project, or 404 (a project of another workspace does not exist for the caller). */
 export async function loadProject(caller: Pick<MemberCaller, "workspaceId">, projectId: string) {

@@ -5,10 +5,11 @@ import { apiTokens } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
+import { isUuid } from "@/lib/uuid";
 
 /** DELETE /api/account/tokens/:id: revokes one of the user's own tokens; it answers 401 from then on. */
 export const DELETE = route<{ id: string }>({ signedIn: true }, async (_req, caller, { id }) => {
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw new AppError("not_found:token", "No such token.");
+  if (!isUuid(id)) throw new AppError("not_found:token", "No such token.");
   await db.transaction(async (tx) => {
     const [revoked] = await tx
       .update(apiTokens)

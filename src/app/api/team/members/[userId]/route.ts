@@ -7,11 +7,10 @@ import { type MemberCaller, route } from "@/lib/auth/guard";
 import { changeRoleSchema } from "@/lib/auth/schemas";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
+import { isUuid } from "@/lib/uuid";
 
 async function loadMember(caller: MemberCaller, userId: string) {
-  const membership = /^[0-9a-f-]{36}$/i.test(userId)
-    ? await getMembership({ workspaceId: caller.workspaceId, userId })
-    : null;
+  const membership = isUuid(userId) ? await getMembership({ workspaceId: caller.workspaceId, userId }) : null;
   if (!membership) throw new AppError("not_found:member", "No such member in this workspace.");
   return membership;
 }

@@ -1,12 +1,12 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { isUuid } from "@/db/queries/parts";
 import { projectCandidates } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
 import { loadProject } from "@/lib/projects/projects";
+import { isUuid } from "@/lib/uuid";
 
 /** DELETE /api/projects/:id/candidates/:partId: removes a candidate (the part stays in the library). */
 export const DELETE = route<{ id: string; partId: string }>(

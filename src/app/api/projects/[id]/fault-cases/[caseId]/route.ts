@@ -1,7 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { isUuid } from "@/db/queries/parts";
 import { faultCases } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
@@ -9,6 +8,7 @@ import { json, parseBody } from "@/lib/http";
 import { loadProject } from "@/lib/projects/projects";
 import { faultCaseSchema } from "@/lib/projects/schema";
 import { faultCaseColumns } from "@/lib/projects/write";
+import { isUuid } from "@/lib/uuid";
 
 async function loadCase(projectId: string, caseId: string) {
   const [row] = isUuid(caseId)

@@ -1,13 +1,13 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { isUuid } from "@/db/queries/parts";
 import { measuredPulses } from "@/db/schema";
 import { type MemberCaller, route } from "@/lib/auth/guard";
 import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { loadProject } from "@/lib/projects/projects";
+import { isUuid } from "@/lib/uuid";
 
 /** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
 async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measurementId: string) {

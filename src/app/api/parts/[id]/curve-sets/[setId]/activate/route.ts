@@ -1,12 +1,12 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { isUuid } from "@/db/queries/parts";
 import { curveSets, parts } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
 import { loadPart } from "@/lib/library/parts";
+import { isUuid } from "@/lib/uuid";
 
 /** POST /api/parts/:id/curve-sets/:setId/activate: makes an earlier revision the active one; back to draft. */
 export const POST = route<{ id: string; setId: string }>(

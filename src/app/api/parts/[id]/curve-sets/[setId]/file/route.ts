@@ -1,11 +1,11 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { isUuid } from "@/db/queries/parts";
 import { curveSets } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { loadPart } from "@/lib/library/parts";
 import { storage } from "@/lib/storage";
+import { isUuid } from "@/lib/uuid";
 
 /** GET /api/parts/:id/curve-sets/:setId/file: the original uploaded file, by a short-lived storage link. */
 export const GET = route<{ id: string; setId: string }>(
