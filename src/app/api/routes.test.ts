@@ -110,7 +110,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
           pPeak: 1,
           tPeak: 0,
           energy: 1e-6,
-          equivalent: { ok: false, flag: "pulse-too-short" },
+          equivalent: { ok: false, flag: "no-power" },
         },
         trace: { t: [], v: [], i: [], p: [] },
         createdBy: tokenOwner || null,

@@ -27,6 +27,12 @@ const result = (verdict: Verdict, utilisation: number | null): PulseResult => ({
   derating: 0.6,
   verdict,
   flags: [],
+  curveVerdict: verdict,
+  thermalVerdict: null,
+  stabilityVerdict: null,
+  stability: null,
+  equivalentWidth: 0.01,
+  repetitionScale: null,
 });
 
 const candidate = (partId: string, unitCost: number | null = null) => ({

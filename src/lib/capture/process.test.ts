@@ -103,13 +103,14 @@ describe("summariseCapture", () => {
     expect(summary.vMax).toBe(-40);
   });
 
-  it("integrates energy over the whole capture, beyond the 5 % window of the rectangle", () => {
+  // METHODS.md §6 (v2): the whole record's energy, by the trapezoid rule (worked by hand here).
+  it("integrates energy over the whole capture and draws the rectangle at E/p_peak", () => {
     const t = f64([0, 1, 2, 3, 4]);
     const v = f64([10, 10, 10, 10, 10]);
     const i = f64([0.2, 0.2, 10, 0.2, 0.2]);
     const summary = summariseCapture(t, v, i, powerFromVI(v, i));
     expect(summary.energy).toBeCloseTo(2 + 2 * 51 + 2, 12);
-    expect(summary.equivalent).toEqual({ ok: false, flag: "pulse-too-short" });
+    expect(summary.equivalent).toEqual({ ok: true, v: 10, i: 10, duration: 1.06 });
   });
 
   it("flags a capture without positive power as no-power", () => {
@@ -138,7 +139,7 @@ describe("summariseCapture", () => {
       uniform: true,
       energy: 0,
       tPeak: 0.5,
-      equivalent: { ok: false, flag: "pulse-too-short" },
+      equivalent: { ok: false, flag: "too-few-samples" },
     });
     expect(() => summariseCapture(f64([]), f64([]), f64([]), f64([]))).toThrow(RangeError);
     expect(() => summariseCapture(f64([0, 1]), f64([1]), f64([1, 2]), f64([1, 2]))).toThrow(RangeError);

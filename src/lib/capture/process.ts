@@ -1,8 +1,8 @@
 // What the server keeps of a capture besides its samples: the summary (METHODS.md §6: p = v·i, energy, peak, the
 // equal-energy rectangle at peak power), min/max-decimated traces for drawing, and the samples themselves as a
 // compact binary object so that a later check reloads them without parsing the CSV again. Pure. Decisions:
-// - energy integrates p over the whole capture by the trapezoid rule with a compensated (Neumaier) sum; the
-//   rectangle's energy is the engine's, over the window around the peak where p ≥ 5 % of it;
+// - energy integrates max(p, 0) over the whole capture by the trapezoid rule with a compensated (Neumaier) sum, as
+//   the engine does (METHODS.md §6, v2); the equal-energy rectangle is drawn at the peak-power sample;
 // - a capture counts as uniform when every time stamp lies within a quarter step of the uniform grid from the first
 //   to the last (a scope samples uniformly, but time printed to 8 or 9 significant digits jitters each step by a
 //   few per cent; a missing sample or a gap moves stamps by half a step or more);
@@ -12,7 +12,7 @@
 // - the binary form is a 16-byte header ("PFCS", version, sample count, 0) and then t, v and i as little-endian
 //   Float64, each a contiguous block: decoding is a bounds check and three typed-array views.
 import type { CaptureSummary, CaptureTrace } from "@/db/schema";
-import { waveformEquivalent } from "@/lib/soa/equivalent-rectangle";
+import { recordEnergy, waveformEquivalent } from "@/lib/soa/equivalent-rectangle";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
 import type { CaptureSamples } from "./parse-stream";
@@ -77,8 +77,6 @@ export function summariseCapture(
   let iMaxAbs = 0;
   let pPeak = Number.NEGATIVE_INFINITY;
   let peakIndex = 0;
-  let sum = 0;
-  let compensation = 0;
   for (let k = 0; k < n; k++) {
     if (v[k] > vMax) vMax = v[k];
     const current = Math.abs(i[k]);
@@ -88,12 +86,6 @@ export function summariseCapture(
       peakIndex = k;
     }
     if (Math.abs(t[k] - (t0 + k * meanStep)) > tolerance) uniform = false;
-    if (k === 0) continue;
-    const step = t[k] - t[k - 1];
-    const term = ((p[k - 1] + p[k]) / 2) * step;
-    const next = sum + term;
-    compensation += Math.abs(sum) >= Math.abs(term) ? sum - next + term : term - next + sum;
-    sum = next;
   }
   const rect = waveformEquivalent(t, p);
   return {
@@ -105,10 +97,18 @@ export function summariseCapture(
     iMaxAbs,
     pPeak,
     tPeak: t[peakIndex],
-    energy: sum + compensation,
-    equivalent: rect.ok
-      ? { ok: true, v: Math.abs(v[rect.peakIndex]), i: Math.abs(i[rect.peakIndex]), duration: rect.duration }
-      : { ok: false, flag: rect.flag },
+    energy: n > 1 ? recordEnergy(t, p) : 0,
+    equivalent:
+      n < 2
+        ? { ok: false, flag: "too-few-samples" }
+        : rect.ok
+          ? {
+              ok: true,
+              v: Math.abs(v[rect.peakIndex]),
+              i: Math.abs(i[rect.peakIndex]),
+              duration: rect.duration,
+            }
+          : { ok: false, flag: rect.flag },
   };
 }
 

@@ -133,6 +133,17 @@ async function newPart(name: string, scale: number, foster: FosterTermRow[] | nu
         [100, 1.5 * scale],
       ],
     },
+    {
+      // A 10 ms curve: a capture's low-power samples are read at widths up to the record's own length
+      // (METHODS.md §6), beyond 1 ms here.
+      curveSetId: set.id,
+      position: 2,
+      duration: 1e-2,
+      points: [
+        [1, 20 * scale],
+        [100, 0.6 * scale],
+      ],
+    },
   ]);
   return part;
 }

@@ -10,6 +10,12 @@ const result = (verdict: Verdict, utilisation: number | null): PulseResult => ({
   derating: 1,
   verdict,
   flags: [],
+  curveVerdict: verdict,
+  thermalVerdict: null,
+  stabilityVerdict: null,
+  stability: null,
+  equivalentWidth: 0.01,
+  repetitionScale: null,
 });
 const candidate = (partId: string, unitCost: number | null = null) => ({
   partId,

@@ -3,13 +3,9 @@ import { describe, expect, it } from "vitest";
 import { allowedCurrent } from "./allowed-current";
 import { checkPulse, prepareCheck, runCheck } from "./check";
 import { prepareCurveSet } from "./curve-set";
-import { waveformEquivalent } from "./equivalent-rectangle";
 import type { FosterTerm } from "./foster";
-import { repetitionScale } from "./repetition";
-import { impedanceFromFoster } from "./thermal-impedance";
-import { rectRise, trainRise } from "./thermal-rect";
+import { rectRise } from "./thermal-rect";
 import { trianglePeakRise } from "./thermal-triangle";
-import { waveformRise } from "./thermal-waveform";
 import type {
   CheckRequest,
   Curve,
@@ -132,59 +128,106 @@ describe("runCheck, pulse shapes", () => {
     expect(result.flags).toEqual(["equivalent-rectangle"]);
   });
 
-  it("scales a repeated rectangle by the duty-cycle impedance and takes Tj from the train", () => {
-    const repeat = { period: 5e-3, count: 4 };
+  // METHODS.md §7 (v2): with a Foster network the scale is Z_th(t_eq)/Z_rep with Z_rep the exact peak of N
+  // rectangles, Σ R_i·(1 − a_i)·(1 − b_i^N)/(1 − b_i) (derived from the Foster formula, written out here).
+  const zRep = (width: number, period: number, count?: number) =>
+    twoTerms.reduce((sum, { r, tau }) => {
+      const a = Math.exp(-width / tau);
+      const b = Math.exp(-period / tau);
+      return sum + (r * (1 - a) * (count === undefined ? 1 : 1 - b ** count)) / (1 - b);
+    }, 0);
+  const zOne = (width: number) =>
+    twoTerms.reduce((sum, { r, tau }) => sum + r * (1 - Math.exp(-width / tau)), 0);
+
+  it("scales a repeated rectangle by the exact train impedance and takes Tj from the train", () => {
     const single = one(fullPart, { kind: "rect", v: 20, i: 30, duration: 1e-3 });
-    const repeated = one(fullPart, { kind: "rect", v: 20, i: 30, duration: 1e-3, repeat });
-    const scale = repetitionScale(impedanceFromFoster(twoTerms), 1e-3, 5e-3).scale as number;
-    expect(scale).toBeLessThan(1);
-    expect(repeated.allowedCurrent).toBeCloseTo((single.allowedCurrent as number) * scale, 12);
-    expect(repeated.tjPeak).toBeCloseTo(25 + trainRise(twoTerms, 600, 1e-3, 5e-3, 4), 12);
-    const continuous = one(fullPart, {
-      kind: "rect",
-      v: 20,
-      i: 30,
-      duration: 1e-3,
-      repeat: { period: 5e-3 },
-    });
-    expect(continuous.tjPeak).toBeCloseTo(25 + trainRise(twoTerms, 600, 1e-3, 5e-3), 12);
-    expect(continuous.allowedCurrent).toBe(repeated.allowedCurrent);
+    for (const count of [4, undefined]) {
+      const repeat = { period: 5e-3, count };
+      const repeated = one(fullPart, { kind: "rect", v: 20, i: 30, duration: 1e-3, repeat });
+      const scale = zOne(1e-3) / zRep(1e-3, 5e-3, count);
+      expect(repeated.repetitionScale).toBeCloseTo(scale, 12);
+      expect(repeated.allowedCurrent).toBeCloseTo((single.allowedCurrent as number) * scale, 12);
+      expect(repeated.tjPeak).toBeCloseTo(25 + 600 * zRep(1e-3, 5e-3, count), 10);
+      expect(repeated.flags).toEqual(["repetition-applied"]);
+    }
+    expect(single.repetitionScale).toBeNull();
   });
 
-  it("repeats a triangle with D = (w/2)/T and Tj over the last triangle of the train", () => {
+  it("repeats a triangle at t_eq = w/2 and takes Tj over the last triangle of the train", () => {
     const repeat = { period: 1e-2, count: 3 };
     const result = one(fullPart, { kind: "triangle", v: 20, i: 30, duration: 2e-3, repeat });
     const single = one(fullPart, { kind: "triangle", v: 20, i: 30, duration: 2e-3 });
-    const scale = repetitionScale(impedanceFromFoster(twoTerms), 1e-3, 1e-2).scale as number;
+    const scale = zOne(1e-3) / zRep(1e-3, 1e-2, 3);
     expect(result.allowedCurrent).toBeCloseTo((single.allowedCurrent as number) * scale, 12);
     expect(result.tjPeak).toBeCloseTo(25 + trianglePeakRise(twoTerms, 600, 2e-3, repeat), 12);
-    expect(result.flags).toEqual(["equivalent-rectangle"]);
+    expect(result.flags).toEqual(["equivalent-rectangle", "repetition-applied"]);
+    expect(result.equivalentWidth).toBe(1e-3);
   });
 
-  it("reads a capture at its peak-power sample with width E/p_peak, and Tj over the whole capture", () => {
-    const t = [0, 1e-4, 2e-4, 3e-4, 4e-4, 5e-4];
-    const v = [30, 28, 25, 20, 10, 0];
-    const i = [0, 20, 40, 30, 10, 5];
-    const result = check(fullPart, [{ id: "cap", kind: "waveform", t, v, i }], 40)[0];
-    const p = t.map((_, n) => v[n] * i[n]);
-    const rect = waveformEquivalent(t, p);
-    if (!rect.ok) throw new Error("expected a rectangle");
-    expect(rect.peakIndex).toBe(2);
-    const k = (175 - 40) / 150;
-    const read = allowedCurrent(prepareCurveSet(fullPart.soa), 25, rect.duration).current as number;
-    expect(result.allowedCurrent).toBeCloseTo(k * read, 12);
-    expect(result.utilisation).toBeCloseTo(40 / (k * read), 12);
-    expect(result.tjPeak).toBeCloseTo(40 + waveformRise(t, p, twoTerms).peak, 12);
-    // Derived: window samples 1–4 (560, 1000, 600, 100 W), E = (780 + 800 + 350 W)·100 µs = 0.193 J.
-    expect(rect.duration).toBeCloseTo(1.93e-4, 15);
+  // METHODS.md §10 worked value "v2 capture phases" (derived): 80 V for 10 ms, then 20 V × 38 A for 0.2 ms. The
+  // 80 V samples are read at min(E/p_n, T_rec) = T_rec ≈ 10.2 ms, not at E/p_peak ≈ 2.8 ms.
+  it("reads every capture sample at its own width and reports the binding one", () => {
+    const part: PartLimits = {
+      vdsMax: 100,
+      tjMax: 175,
+      soa: {
+        curves: [
+          {
+            duration: 1e-3,
+            points: [
+              [1, 100],
+              [100, 100],
+            ],
+          },
+          {
+            duration: 1e-2,
+            points: [
+              [1, 50],
+              [40, 50],
+              [100, 1.5],
+            ],
+          },
+          {
+            duration: 1e-1,
+            points: [
+              [1, 20],
+              [40, 20],
+              [100, 1],
+            ],
+          },
+        ],
+      },
+    };
+    const e = 1e-9;
+    const t = [0, e, 10e-3, 10e-3 + e, 10.2e-3, 10.2e-3 + e];
+    const result = one(part, {
+      kind: "waveform",
+      t,
+      v: [80, 80, 80, 20, 20, 20],
+      i: [0, 2.5, 2.5, 38, 38, 0],
+    });
+    const tRec = 10.2e-3 + e;
+    // By hand (METHODS.md §2, §3): each curve at 80 V on its 40–100 V segment, then log-log between 10 and 100 ms.
+    const at80 = (i40: number, i100: number) => i40 * 2 ** (Math.log(i100 / i40) / Math.log(2.5));
+    const i10 = at80(50, 1.5);
+    const i100 = at80(20, 1);
+    const allowed = i10 * (i100 / i10) ** (Math.log(tRec / 1e-2) / Math.log(10));
+    expect(result.at).toEqual({ t: e, v: 80, i: 2.5, width: tRec });
+    expect(result.allowedCurrent).toBeCloseTo(allowed, 12);
+    expect(result.utilisation).toBeCloseTo(2.5 / allowed, 12);
+    const energy = 200 * 1e-2 + 760 * 0.2e-3;
+    expect(result.equivalentWidth).toBeCloseTo(energy / 760, 8);
     expect(result.flags).toEqual(["interpolated", "equivalent-rectangle"]);
   });
 
-  it("reads a capture with both probes reversed as the normal one", () => {
+  // METHODS.md §6: only samples with v > 0 and i > 0.001·max|i| are read; both probes reversed read none.
+  it("heats the same with both probes reversed, but reads no sample on the curves", () => {
     const t = [0, 1e-3, 2e-3, 3e-3];
     const normal = one(fullPart, { kind: "waveform", t, v: [0, 20, 20, 0], i: [0, 10, 10, 0] });
     const reversed = one(fullPart, { kind: "waveform", t, v: [0, -20, -20, 0], i: [0, -10, -10, 0] });
-    expect(reversed).toEqual(normal);
+    expect(reversed.tjPeak).toBe(normal.tjPeak);
+    expect(normal.curveVerdict).toBe("pass");
+    expect(reversed).toMatchObject({ curveVerdict: "no-data", allowedCurrent: null, at: null });
   });
 
   it("has no Tj and no thermal verdict without a Foster network", () => {
@@ -245,11 +288,18 @@ describe("runCheck, flags and verdicts", () => {
       tjPeak: null,
       derating: 0,
       verdict: "fail",
-      flags: ["case-at-or-above-tj-max"],
+      flags: [],
+      curveVerdict: "fail",
+      thermalVerdict: null,
+      stabilityVerdict: null,
+      stability: null,
+      equivalentWidth: 1e-3,
+      repetitionScale: null,
     });
-    expect(one(utilisationPart, rect(200, 1, 1e-3), 180)).toMatchObject({
+    // METHODS.md §8: no value on the curves is no data, even at Tj,max (without a thermal model to say more).
+    expect(one({ ...utilisationPart, vdsMax: 300 }, rect(200, 1, 1e-3), 180)).toMatchObject({
       allowedCurrent: null,
-      verdict: "fail",
+      verdict: "no-data",
     });
   });
 
@@ -267,23 +317,25 @@ describe("runCheck, flags and verdicts", () => {
 
   it("below-curve-range keeps the first current; above-curve-range has no data", () => {
     expect(one(fullPart, rect(1, 1, 1e-3))).toMatchObject({
-      allowedCurrent: 300,
+      allowedCurrent: expect.closeTo(300, 10),
       flags: ["below-curve-range"],
     });
     expect(one({ ...fullPart, vdsMax: 80 }, rect(70, 1, 1e-3))).toMatchObject({
       allowedCurrent: null,
       verdict: "no-data",
-      flags: ["above-curve-range"],
+      flags: ["voltage-margin", "above-curve-range"],
     });
   });
 
-  it("pulse-too-short and no-power leave a capture without a point on the curves", () => {
+  it("reads a one-sample spike at E/p = 1 ms; no power leaves a capture without a point on the curves", () => {
     const t = [0, 1e-3, 2e-3];
+    // Derived: p = 0, 100, 0 W, E = 0.1 J by the trapezoid rule, so the spike is read at 1 ms: 40 A.
     expect(one(utilisationPart, { kind: "waveform", t, v: [0, 20, 0], i: [0, 5, 0] })).toMatchObject({
-      allowedCurrent: null,
-      utilisation: null,
-      verdict: "no-data",
-      flags: ["pulse-too-short"],
+      allowedCurrent: expect.closeTo(40, 10),
+      utilisation: expect.closeTo(0.125, 10),
+      verdict: "pass",
+      flags: ["equivalent-rectangle"],
+      at: { t: 1e-3, v: 20, i: 5, width: expect.closeTo(1e-3, 15) },
     });
     expect(one(fullPart, { kind: "waveform", t, v: [0, 20, 0], i: [0, 0, 0] })).toMatchObject({
       allowedCurrent: null,
@@ -297,7 +349,7 @@ describe("runCheck, flags and verdicts", () => {
     expect(result).toMatchObject({
       allowedCurrent: null,
       verdict: "no-data",
-      flags: ["repetition-outside-data"],
+      flags: ["repetition-applied", "repetition-outside-data"],
     });
   });
 
@@ -305,7 +357,7 @@ describe("runCheck, flags and verdicts", () => {
     // Z_k from the curves (METHODS.md §7): 1 ms and 10 ms curves, R_th from the part.
     const part: PartLimits = { ...utilisationPart, rthJc: 2 };
     const result = one(part, rect(20, 1, 1e-3, { repeat: { period: 5e-3 } }));
-    expect(result.flags).toEqual([]);
+    expect(result.flags).toEqual(["repetition-applied"]);
     const set = prepareCurveSet(part.soa);
     const zk = (p: number) => 150 / p;
     const z = (t: number) => zk(40 * 100) * (t / 1e-3) ** (Math.log(zk(1600) / zk(4000)) / Math.log(10));
@@ -435,5 +487,172 @@ describe("runCheck, properties", () => {
         },
       ),
     );
+  });
+});
+
+// Issue 10: six ways revision 1 could answer pass where the part's own data say otherwise. Each request is the
+// regression test of one v2 rule of METHODS.md (the expected answers are the rules applied by hand).
+describe("revision 2 regressions", () => {
+  // Request 1 (METHODS.md §6): an 80 V phase of a capture, where the 10 ms curve falls steeply, was never read.
+  it("1. reads the 80 V phase of a two-phase capture: fail at u ≈ 1.29, not pass at 0.658", () => {
+    const request = {
+      part: {
+        vdsMax: 100,
+        tjMax: 175,
+        soa: {
+          curves: [
+            {
+              duration: 0.001,
+              points: [
+                [1, 300],
+                [4, 300],
+                [40, 30],
+                [100, 4.8],
+              ],
+            },
+            {
+              duration: 0.01,
+              points: [
+                [1, 300],
+                [1.333, 300],
+                [40, 10],
+                [100, 1.6],
+              ],
+            },
+          ],
+        },
+      },
+      caseTemp: 25,
+      pulses: [
+        {
+          id: "two-phase",
+          kind: "waveform",
+          t: [0, 1e-9, 0.001, 0.001000001, 0.002, 0.002000001],
+          v: [80, 80, 80, 10, 10, 10],
+          i: [0, 7, 7, 57, 57, 0],
+        },
+      ],
+    } as CheckRequest;
+    const [result] = runCheck(request).results;
+    expect(result.verdict).toBe("fail");
+    expect(result.utilisation).toBeCloseTo(1.29, 1);
+    expect(result.at).toMatchObject({ v: 80, i: 7 });
+  });
+
+  // Request 2 (METHODS.md §6): energy outside a window around the peak counts. 12 V × 9.75 A for 1 s, then 199 A for
+  // 100 µs: revision 1 read the spike alone at 100 µs (u = 199/250 = 0.796).
+  it("2. keeps a 1 s pre-heat in the width: the spike is not a pass", () => {
+    const part: PartLimits = {
+      vdsMax: 60,
+      tjMax: 175,
+      soa: {
+        curves: [1e-4, 1e-3, 1e-2, 1e-1, 1].map((duration, k) => ({
+          duration,
+          points: [
+            [1, [250, 100, 40, 16, 8][k]],
+            [50, [250, 100, 40, 16, 8][k]],
+          ],
+        })),
+      },
+    };
+    const e = 1e-9;
+    const result = one(part, {
+      kind: "waveform",
+      t: [0, e, 1, 1 + e, 1 + 1e-4, 1 + 1e-4 + e],
+      v: [12, 12, 12, 12, 12, 12],
+      i: [0, 9.75, 9.75, 199, 199, 0],
+    });
+    expect(result.verdict).toBe("fail");
+    // The width is the whole record's energy over the peak power: (117 W·1 s + 2388 W·100 µs)/2388 W ≈ 49 ms.
+    expect(result.equivalentWidth).toBeCloseTo((117 + 0.2388) / 2388, 6);
+  });
+
+  // Request 3 (METHODS.md §7): one pulse with count 1 is the single pulse.
+  it("3. a 2 ms pulse with repeat { period: 4 ms, count: 1 } equals the pulse alone", () => {
+    const pulse = { kind: "rect" as const, v: 20, i: 9, duration: 2e-3 };
+    const alone = one(utilisationPart, pulse, 100);
+    const once = one(utilisationPart, { ...pulse, repeat: { period: 4e-3, count: 1 } }, 100);
+    expect(once.allowedCurrent).toBe(alone.allowedCurrent);
+    expect(once.verdict).toBe(alone.verdict);
+    expect(once.repetitionScale).toBe(1);
+    expect(once.flags).toEqual([...alone.flags, "repetition-applied"]);
+  });
+
+  // Request 4 (METHODS.md §3): crossing curves never let a longer pulse carry more current.
+  it("4. with next-longer, a 2 ms pulse fails where the same pulse at 1 ms fails", () => {
+    const crossing: PartLimits = {
+      vdsMax: 100,
+      tjMax: 175,
+      soa: {
+        curves: [
+          { duration: 1e-3, points: [[20, 30]] },
+          { duration: 1e-2, points: [[20, 50]] },
+        ],
+      },
+    };
+    const policy = { betweenCurves: "next-longer" as const };
+    expect(one(crossing, { kind: "rect", v: 20, i: 32, duration: 1e-3 }, 25, policy).verdict).toBe("fail");
+    const longer = one(crossing, { kind: "rect", v: 20, i: 32, duration: 2e-3 }, 25, policy);
+    expect(longer.verdict).toBe("fail");
+    expect(longer.allowedCurrent).toBeCloseTo(30, 12);
+    expect(longer.flags).toContain("capped-by-shorter-curve");
+  });
+
+  // Request 5 (METHODS.md §9) is in schema.test.ts and scripts/soa.test.ts (exit code 2 naming the path).
+
+  // Request 6 (METHODS.md §4, §6): the peak between samples, and what came before the record.
+  it("6. a two-sample falling ramp from rest peaks as the same triangle does", () => {
+    const triangle = one(fullPart, { kind: "triangle", v: 40, i: 100, duration: 2e-3 });
+    const ramp = one(fullPart, { kind: "waveform", t: [0, 2e-3], v: [40, 40], i: [100, 0], start: "rest" });
+    expect(ramp.tjPeak).toBeCloseTo(triangle.tjPeak as number, 9);
+    expect(ramp.flags).toContain("starts-mid-pulse");
+  });
+
+  it("6. a record that begins mid-pulse starts settled, is read on the DC curve and is at best marginal", () => {
+    const t = [0, 1e-3, 2e-3];
+    const result = one(fullPart, { kind: "waveform", t, v: [10, 10, 10], i: [1, 1, 0] });
+    expect(result.flags).toContain("starts-mid-pulse");
+    expect(result.curveVerdict).toBe("pass");
+    expect(result.verdict).toBe("marginal");
+    // Settled at 10 W: θ_i = R_i·10 W from the start, so Tj starts at 25 °C + 0.5 K/W·10 W.
+    expect(result.tjPeak).toBeGreaterThanOrEqual(30);
+    // Stated as rest by the user: the heating starts from rest and nothing caps the verdict.
+    const rest = one(fullPart, { kind: "waveform", t, v: [10, 10, 10], i: [1, 1, 0], start: "rest" });
+    expect(rest.verdict).toBe("pass");
+    expect(rest.tjPeak).toBeLessThan(30);
+  });
+});
+
+describe("revision 2 rules", () => {
+  const rect = (v: number, i: number, duration: number) => ({ kind: "rect" as const, v, i, duration });
+
+  // METHODS.md §8 (v2): above f_V·V_DSS (default 0.8) but not above V_DSS, the curve verdict is at least marginal.
+  it("voltage-margin: 49 V on a 60 V part is marginal; 47 V is not; 0.9 moves the limit", () => {
+    expect(one(fullPart, rect(49, 0.1, 1e-3))).toMatchObject({
+      curveVerdict: "marginal",
+      flags: ["voltage-margin"],
+    });
+    expect(one(fullPart, rect(47, 0.1, 1e-3)).curveVerdict).toBe("pass");
+    expect(one(fullPart, rect(49, 0.1, 1e-3), 25, { voltageLimit: 0.9 }).curveVerdict).toBe("pass");
+  });
+
+  it("ends-mid-pulse caps the verdict at marginal; negative power is clamped and flagged", () => {
+    const t = [0, 1e-3, 2e-3];
+    const ends = one(fullPart, { kind: "waveform", t, v: [10, 10, 10], i: [0, 1, 1] });
+    expect(ends.flags).toContain("ends-mid-pulse");
+    expect(ends.verdict).toBe("marginal");
+    const back = one(fullPart, {
+      kind: "waveform",
+      t: [0, 1e-3, 2e-3, 3e-3],
+      v: [0, 10, -10, 0],
+      i: [0, 1, 1, 0],
+    });
+    expect(back.flags).toContain("negative-power-clamped");
+  });
+
+  it("reports each view's verdict: curves, thermal, and stability (null until section 12 data)", () => {
+    const result = one(fullPart, rect(20, 30, 1e-3));
+    expect(result).toMatchObject({ curveVerdict: "pass", thermalVerdict: "pass", stabilityVerdict: null });
+    expect(result.stability).toBeNull();
   });
 });

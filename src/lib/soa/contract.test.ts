@@ -82,9 +82,24 @@ describe("handleCheckRequest", () => {
           const results = outcome.body.results;
           expect(results.map((r) => r.id)).toEqual(pulses.map((p) => p.id));
           for (const r of results) {
-            expect(Object.keys(r).sort()).toEqual(
-              ["allowedCurrent", "derating", "flags", "id", "tjPeak", "utilisation", "verdict"].sort(),
-            );
+            // METHODS.md §9: revision 2 adds the partial verdicts, stability, equivalent width, repetition
+            // scale and, for captures, the binding sample.
+            const keys = [
+              "allowedCurrent",
+              "derating",
+              "flags",
+              "id",
+              "tjPeak",
+              "utilisation",
+              "verdict",
+              "curveVerdict",
+              "thermalVerdict",
+              "stabilityVerdict",
+              "stability",
+              "equivalentWidth",
+              "repetitionScale",
+            ];
+            expect(Object.keys(r).sort()).toEqual((r.id === "capture" ? [...keys, "at"] : keys).sort());
             expect(r.derating).toBeCloseTo(0.6, 12);
             expect(["pass", "marginal", "fail", "no-data"]).toContain(r.verdict);
             for (const f of r.flags) expect(FLAGS).toContain(f);

@@ -6,7 +6,7 @@
 export interface EquivalentRectangle {
   /** Width of the rectangle in s. */
   duration: number;
-  /** Energy of the pulse (or of the window around its peak) in J. */
+  /** Energy of the pulse in J. */
   energy: number;
   /** Peak power in W. */
   peakPower: number;
@@ -21,24 +21,19 @@ export function triangleEquivalent(v: number, iPeak: number, width: number): Equ
   return { duration: width / 2, energy: (peakPower * width) / 2, peakPower };
 }
 
-/** Share of the peak power that bounds the window around a capture's peak (METHODS.md §6). */
-export const WINDOW_THRESHOLD = 0.05;
-
 export interface WaveformRectangle extends EquivalentRectangle {
   ok: true;
   /** Sample of peak power (first one if several are equal). */
   peakIndex: number;
-  /** First and last sample of the window where p ≥ 5 % of the peak, contiguous around the peak. */
-  window: [first: number, last: number];
 }
 
-export type WaveformEquivalent = WaveformRectangle | { ok: false; flag: "pulse-too-short" | "no-power" };
+export type WaveformEquivalent = WaveformRectangle | { ok: false; flag: "no-power" };
 
 /**
- * Equal-energy rectangle of a capture with times `t` (strictly increasing) and power samples `p`: peak p at
- * the first sample of maximum power; E by the trapezoid rule (compensated sum) over the contiguous window
- * where p ≥ 5 % of the peak; duration E/p_peak. Fewer than one sample, or a peak power that is not > 0 (NaN
- * included): `no-power`. A window of a single sample has no width: `pulse-too-short`.
+ * Equal-energy rectangle of a record with times `t` (strictly increasing) and power samples `p` (METHODS.md §6,
+ * v2): power taken as max(p, 0); peak at the first sample of maximum power; E by the trapezoid rule (compensated
+ * sum) over the whole record; duration t_eq = E/p_peak. No sample, or a peak power that is not > 0 (NaN
+ * included): `no-power`.
  */
 export function waveformEquivalent(t: ArrayLike<number>, p: ArrayLike<number>): WaveformEquivalent {
   const n = Math.min(t.length, p.length);
@@ -51,21 +46,34 @@ export function waveformEquivalent(t: ArrayLike<number>, p: ArrayLike<number>): 
     }
   }
   if (!(peakPower > 0)) return { ok: false, flag: "no-power" };
-  const threshold = WINDOW_THRESHOLD * peakPower;
-  let first = peakIndex;
-  while (first > 0 && p[first - 1] >= threshold) first--;
-  let last = peakIndex;
-  while (last < n - 1 && p[last + 1] >= threshold) last++;
-  if (first === last) return { ok: false, flag: "pulse-too-short" };
-  // Neumaier-compensated trapezoid sum: captures run to 10^5–10^6 samples.
+  const energy = recordEnergy(t, p, undefined, n);
+  return { ok: true, duration: energy / peakPower, energy, peakPower, peakIndex };
+}
+
+/**
+ * Trapezoid integral of p_k = max(a_k·b_k, 0) over the first n samples at times t (b omitted: p_k = max(a_k, 0)),
+ * Neumaier-compensated: captures run to 10^7 samples.
+ */
+export function recordEnergy(
+  t: ArrayLike<number>,
+  a: ArrayLike<number>,
+  b?: ArrayLike<number>,
+  n = t.length,
+): number {
+  const factor = b ?? ONE;
+  const stride = b === undefined ? 0 : 1;
   let sum = 0;
   let compensation = 0;
-  for (let k = first; k < last; k++) {
-    const term = ((p[k] + p[k + 1]) / 2) * (t[k + 1] - t[k]);
+  let previous = Math.max(a[0] * factor[0], 0);
+  for (let k = 1; k < n; k++) {
+    const current = Math.max(a[k] * factor[k * stride], 0);
+    const term = ((previous + current) / 2) * (t[k] - t[k - 1]);
     const next = sum + term;
     compensation += Math.abs(sum) >= Math.abs(term) ? sum - next + term : term - next + sum;
     sum = next;
+    previous = current;
   }
-  const energy = sum + compensation;
-  return { ok: true, duration: energy / peakPower, energy, peakPower, peakIndex, window: [first, last] };
+  return n > 0 ? sum + compensation : 0;
 }
+
+const ONE = Float64Array.of(1);

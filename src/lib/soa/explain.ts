@@ -1,48 +1,79 @@
 // Plain words for every flag and verdict, for the explanation panel beside each result. The wording is our
-// own; the facts behind it are METHODS.md §2–§8.
+// own; the facts behind it are METHODS.md §2–§8 (revision 2). Each text says what the rule assumes and never
+// promises more than the rule gives.
 import type { Flag, Verdict } from "./types";
 
 export const FLAG_EXPLANATIONS: Readonly<Record<Flag, string>> = {
   "over-voltage":
-    "The pulse's voltage exceeds the part's maximum drain-source voltage. That is a fail whatever the SOA " +
-    "curves say.",
+    "The pulse's largest voltage exceeds the part's maximum drain-source voltage. That is a fail whatever the " +
+    "SOA curves say.",
   "over-current":
-    "The pulse's current exceeds the part's maximum pulsed drain current. That is a fail whatever the SOA " +
-    "curves say.",
-  "case-at-or-above-tj-max":
-    "The case temperature is at or above the maximum junction temperature, so the derated curves allow no " +
-    "current at all.",
+    "The pulse's largest current exceeds the part's maximum pulsed drain current. That is a fail whatever the " +
+    "SOA curves say.",
+  "voltage-margin":
+    "The pulse's largest voltage is above the margin policy's voltage limit (a share of the maximum " +
+    "drain-source voltage) but not above the rating itself, so the curve verdict is at best marginal.",
   "shorter-than-shortest-curve":
-    "The pulse is shorter than the shortest curve on the datasheet, so the shortest curve was used " +
-    "unchanged. A shorter pulse would be allowed at least this much, so the reading is on the safe side.",
+    "The pulse is shorter than the shortest curve on the datasheet, so the shortest curve was used unchanged. " +
+    "This assumes that a shorter pulse is allowed at least as much current as a longer one, which holds for " +
+    "the thermally limited part of the curves.",
   interpolated:
     "The pulse width lies between two datasheet curves; the limit was interpolated on log-log axes between " +
-    "them. This is exact where the thermal impedance grows as the square root of time, but it can " +
-    "overstate the limit (by up to about 27 % within a decade) where the impedance flattens toward its " +
-    "steady-state value. The thermal check and the utilisation limit are there to cover that.",
+    "them. This is exact where the thermal impedance grows as the square root of time, but it can overstate " +
+    "the limit (by up to about 27 % within a decade for a single-term thermal model, typically 2–7 %) where " +
+    "the impedance flattens toward its steady-state value. The utilisation limit and, where the part has a " +
+    "thermal model, the junction-temperature check are meant to cover that; the strict or thermal reading " +
+    "between widths avoids it.",
   "next-longer-curve":
-    "The pulse width lies between two datasheet curves; the margin policy reads the next longer curve, " +
-    "which never allows more than the true limit.",
+    "The pulse width lies between two datasheet curves; the next longer curve was read. That assumes the " +
+    "curves are ordered by width at this voltage (a longer pulse never allowed more), which the cap by " +
+    "shorter curves enforces.",
+  "thermal-scaled":
+    "The limit was read on the next shorter curve and scaled by the thermal model: I = I_k·Z_th(t_k)/Z_th(t). " +
+    "This is exact where that curve is thermally limited; it assumes the part's thermal model matches the " +
+    "datasheet's own impedance.",
+  "thermal-scaling-unavailable":
+    "The margin policy asks for a thermal reading between widths, but the part has no thermal model; the next " +
+    "longer curve (or the DC curve) was read instead.",
   "dc-curve-used":
-    "The pulse is longer than every pulse curve on the datasheet, so the DC curve was used. That is on the " +
-    "safe side.",
+    "The width is longer than every pulse curve on the datasheet, so the DC curve was read, capped by every " +
+    "pulse curve.",
   "longer-than-longest-curve":
-    "The pulse is longer than every curve on the datasheet and there is no DC curve, so the curves say " +
-    "nothing about it.",
+    "The width is longer than every curve on the datasheet and there is no DC curve, so the curves say nothing " +
+    "about it.",
+  "capped-by-shorter-curve":
+    "The reading was lowered to a curve of a shorter pulse width, which allows less current at this voltage: " +
+    "a longer pulse is never allowed more than a shorter one. The datasheet's curves cross here; check the " +
+    "digitising.",
   "below-curve-range":
-    "The voltage lies below the lowest point of the curve; the curve's lowest-voltage current was used. In " +
-    "that region the on-resistance or the package limits the current, not heating.",
+    "The voltage lies below the lowest point of a curve read; that curve's lowest-voltage current was used. " +
+    "This assumes the current limit there is the on-resistance or package line, which the curve does not " +
+    "draw at lower voltage.",
   "above-curve-range":
-    "The voltage lies above the highest point of the curve, so the curve gives no allowed current there.",
+    "The voltage lies above the highest point of a curve read, so that curve gives no allowed current there.",
   "equivalent-rectangle":
-    "The pulse is not rectangular. It was read on the curves as a rectangle of the same energy at its peak " +
-    "power, which never understates the heating.",
-  "pulse-too-short":
-    "Only one sample of the capture lies near its peak power, so the pulse has no measurable width. " +
-    "Capture it with a finer time step.",
+    "The pulse is not rectangular. Its width on the curves is its energy divided by its peak power (for a " +
+    "capture, over the whole record; each capture sample is read at its own width, energy over its own power, " +
+    "at most the record's length). With a thermal model whose terms are positive this never understates the " +
+    "peak heating of a record that starts from rest; it says nothing about limits the curves do not show.",
+  "negative-power-clamped":
+    "Some samples have negative power (probe skew or current flowing back). They were taken as zero power: " +
+    "power flowing back is never allowed to cool the junction in a check. Check the probes' deskew.",
   "no-power":
-    "The capture never dissipates positive power (the product of voltage and current), so there is nothing " +
-    "to read on the curves.",
+    "The capture never dissipates positive power (the product of voltage and current), so there is nothing to " +
+    "read on the curves.",
+  "starts-mid-pulse":
+    "The record's first sample already carries at least 1 % of its peak power: the pulse was under way before " +
+    "the record began. The check takes the first level as settled (heated to its steady state and read on the " +
+    "DC curve); unless the upload stated what came before, the verdict is at best marginal, because the record " +
+    "may miss part of the heating.",
+  "ends-mid-pulse":
+    "The record's last sample still carries at least 1 % of its peak power: the pulse may go on after the " +
+    "record ends, so the verdict is at best marginal. Capture the whole pulse.",
+  "repetition-applied":
+    "The pulse repeats. The single-pulse limit was multiplied by the repetition scale, the ratio of the " +
+    "single-pulse thermal impedance to the impedance of the train (exact with a thermal model; from the curves " +
+    "otherwise, by superposition or the duty-cycle approximation).",
   "repetition-outside-data":
     "The pulse repeats, but the thermal data do not reach the times needed to work out how the repetitions " +
     "add up. Add a thermal model (Foster network) to the part, or curves that span the period.",
@@ -50,8 +81,8 @@ export const FLAG_EXPLANATIONS: Readonly<Record<Flag, string>> = {
 
 export const VERDICT_EXPLANATIONS: Readonly<Record<Verdict, string>> = {
   pass:
-    "Within the allowed current with the margin the policy asks for, and the junction stays below its " +
-    "guard band.",
+    "Within the allowed current with the margin the policy asks for and, where the part has a thermal model, " +
+    "the junction stays below its guard band. It covers only what the part's data show.",
   marginal: "Within the limits, but closer to them than the margin policy asks for.",
   fail: "Outside the safe operating area, over a hard rating, or the junction gets hotter than its maximum.",
   "no-data": "The part's data do not cover this pulse, so no verdict can be given from them.",

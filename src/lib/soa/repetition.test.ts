@@ -53,24 +53,57 @@ describe("dutyCycleImpedance", () => {
 });
 
 describe("repetitionScale", () => {
-  it("scales by Z_th(t_eq)/Z(t_eq, D), capped at 1", () => {
-    const source = impedanceFromFoster([{ r: 1, tau: 1 }]);
-    const scale = repetitionScale(source, 0.1, 1);
-    expect(scale.flag).toBeNull();
-    // Derived: Z = D·R + (1 − D)·Z_th(1.1) − Z_th(1) + Z_th(0.1) with R = τ = 1 and D = 0.1.
-    const z = 0.1 - 0.9 * Math.expm1(-1.1) + Math.expm1(-1) - Math.expm1(-0.1);
-    expect(scale.scale).toBeCloseTo(-Math.expm1(-0.1) / z, 14);
-    // Inconsistent data that would up-rate the repeated pulse: capped (a repeat is never allowed more).
-    const upRating: ImpedanceSource = { zth: (t) => (t < 0.5 ? 1 : 0.1), rth: 0.1 };
-    expect(repetitionScale(upRating, 0.1, 1)).toEqual({ scale: 1, flag: null });
+  const noCurves: ImpedanceSource = { zth: () => null, rth: null };
+
+  // METHODS.md §10 worked value "v2 finite train, one term" (derived from the Foster formula): R = 1, t_p/τ = 0.1,
+  // T/τ = 1: N = 1 → 1; N = 3 → 0.665241; continuous → 0.632121.
+  it("takes the exact train peak with a Foster network: 1, 0.665241 and 0.632121", () => {
+    const network = [{ r: 1, tau: 1 }];
+    const scale = (count?: number) =>
+      repetitionScale({ network, curves: noCurves, tEq: 0.1, period: 1, count }).scale as number;
+    expect(scale(1)).toBe(1);
+    expect(scale(3)).toBeCloseTo(0.665241, 6);
+    expect(scale()).toBeCloseTo(0.632121, 6);
   });
 
-  it("flags missing data and data so inconsistent that Z is not positive", () => {
-    expect(repetitionScale({ zth: () => null, rth: 1 }, 0.1, 1)).toEqual({
+  // Issue 10, request 3: one pulse with `count: 1` is the single pulse, whatever the data.
+  it("gives exactly 1 for one pulse, even without any thermal data", () => {
+    expect(repetitionScale({ network: null, curves: noCurves, tEq: 0.1, period: 1, count: 1 })).toEqual({
+      scale: 1,
+      flag: null,
+    });
+  });
+
+  it("without a network: superposition when the curves reach (N − 1)·T + t_eq, else the duty-cycle form", () => {
+    // Z_th(t) = √t, read off curves from 1e-4 s to 1 s (within), R_th = 2 K/W. Superposition of 3 pulses of
+    // 0.01 s every 0.1 s (derived): √0.01 + (√0.11 − √0.1) + (√0.21 − √0.2).
+    const root: ImpedanceSource = { zth: (t) => (t >= 1e-4 && t <= 1 ? Math.sqrt(t) : null), rth: 2 };
+    const three = repetitionScale({ network: null, curves: root, tEq: 0.01, period: 0.1, count: 3 });
+    const superposed = 0.1 + (Math.sqrt(0.11) - Math.sqrt(0.1)) + (Math.sqrt(0.21) - Math.sqrt(0.2));
+    expect(three.scale).toBeCloseTo(0.1 / superposed, 14);
+    // Continuous: D·R + (1 − D)·Z(t + T) − Z(T) + Z(t) with D = 0.1.
+    const train = repetitionScale({ network: null, curves: root, tEq: 0.01, period: 0.1 });
+    const duty = 0.1 * 2 + 0.9 * Math.sqrt(0.11) - Math.sqrt(0.1) + 0.1;
+    expect(train.scale).toBeCloseTo(0.1 / duty, 14);
+    // 20 pulses reach 1.91 s, beyond the curves: the duty-cycle form.
+    const twenty = repetitionScale({ network: null, curves: root, tEq: 0.01, period: 0.1, count: 20 });
+    expect(twenty.scale).toBeCloseTo(0.1 / duty, 14);
+  });
+
+  it("caps at 1 and flags missing or inconsistent data", () => {
+    const upRating: ImpedanceSource = { zth: (t) => (t < 0.5 ? 1 : 0.1), rth: 0.1 };
+    expect(repetitionScale({ network: null, curves: upRating, tEq: 0.1, period: 1 })).toEqual({
+      scale: 1,
+      flag: null,
+    });
+    expect(repetitionScale({ network: null, curves: noCurves, tEq: 0.1, period: 1 })).toEqual({
       scale: null,
       flag: "repetition-outside-data",
     });
     const negative: ImpedanceSource = { zth: (t) => (t >= 1 ? 5 : 0.1), rth: 0.1 };
-    expect(repetitionScale(negative, 0.1, 1)).toEqual({ scale: null, flag: "repetition-outside-data" });
+    expect(repetitionScale({ network: null, curves: negative, tEq: 0.1, period: 1 })).toEqual({
+      scale: null,
+      flag: "repetition-outside-data",
+    });
   });
 });

@@ -72,12 +72,45 @@ describe("validateCheckRequest", () => {
     expect(validateCheckRequest(body).ok).toBe(true);
   });
 
-  it("ignores unknown keys", () => {
+  // METHODS.md §9 (v2): a key the contract does not know, anywhere, is invalid input naming its path.
+  it.each([
+    [
+      "a misspelt policy key",
+      (r: Json) => ((r.policy as Json).utilisationlimit = 0.5),
+      "policy.utilisationlimit",
+    ],
+    ["an extra top-level key", (r: Json) => (r.extra = true), "extra"],
+    ["an extra part key", (r: Json) => ((r.part as Json).maker = "x"), "part.maker"],
+    ["start on a rectangle", (r: Json) => ((r.pulses as Json[])[0].start = "rest"), "pulses[0].start"],
+  ])("rejects %s with its path", (_, change, path) => {
+    const result = validateCheckRequest(broken(change as never));
+    expect(result).toEqual({ ok: false, error: { path, message: "is not a field of the check contract" } });
+  });
+
+  it("accepts the v2 fields: voltage limit, thermal reading and a capture's start", () => {
     const body = broken((r) => {
-      r.extra = true;
-      (r.part as Json).maker = "x";
+      r.policy = { voltageLimit: 0.9, betweenCurves: "thermal" };
+      (r.pulses as Json[]).push({
+        id: "cap",
+        kind: "waveform",
+        t: [0, 1],
+        v: [1, 1],
+        i: [1, 1],
+        start: "steady",
+      });
     });
     expect(validateCheckRequest(body).ok).toBe(true);
+    const wrong = broken((r) => {
+      (r.pulses as Json[]).push({
+        id: "cap",
+        kind: "waveform",
+        t: [0, 1],
+        v: [1, 1],
+        i: [1, 1],
+        start: "hot",
+      });
+    });
+    expect(validateCheckRequest(wrong)).toMatchObject({ ok: false, error: { path: "pulses[3].start" } });
   });
 
   it.each([
@@ -203,7 +236,7 @@ describe("validateCheckRequest", () => {
       "an unknown policy",
       broken((r) => ((r.policy as Json).betweenCurves = "linear")),
       "policy.betweenCurves",
-      'expected "loglog" or "next-longer", got the string "linear"',
+      'expected "loglog", "next-longer" or "thermal", got the string "linear"',
     ],
     [
       "a long string for a number",

@@ -2,7 +2,9 @@
 // client forms. Shape and ranges are checked field by field; the rules that relate fields (sorted points,
 // unique widths and ids, a period longer than its pulse, a time axis that only moves forward) run once the
 // shape is right, so every error names the one field at fault. Decisions beyond METHODS.md:
-// - unknown keys are ignored; a capture with `repeat` is an error (repetition is for rect and triangle);
+// - a key the contract does not know, anywhere, is an error naming its path (revision 2: a misspelt
+//   `utilisationlimit` must not fall back to the default); a capture with `repeat` is an error (repetition is for
+//   rect and triangle) and so is `start` on anything but a capture;
 // - every curve holds at least one point, a Foster array at least one term; a request may hold no pulses;
 // - the reference case temperature must lie below Tj,max (else no derating factor exists);
 // - two curve widths within 1e-9 relative are the same width (the tolerance of METHODS.md §3).
@@ -28,7 +30,12 @@ const expected =
 const finite = () => z.number({ error: expected("a finite number") });
 const positive = () => finite().gt(0, { error: (issue) => `must be greater than 0, got ${issue.input}` });
 const object = <T extends z.core.$ZodLooseShape>(shape: T) =>
-  z.object(shape, { error: expected("an object") });
+  z.strictObject(shape, {
+    error: (issue) =>
+      issue.code === "unrecognized_keys"
+        ? "is not a field of the check contract"
+        : expected("an object")(issue),
+  });
 const array = <T extends z.core.SomeType>(item: T) => z.array(item, { error: expected("an array") });
 
 const fosterTerm = object({ r: positive(), tau: positive() });
@@ -71,9 +78,13 @@ const policy = object({
     .lte(1, { error: "must lie in (0, 1]" })
     .optional(),
   tjGuard: finite().gte(0, { error: "must be 0 K or more" }).optional(),
+  voltageLimit: finite()
+    .gt(0, { error: "must lie in (0, 1]" })
+    .lte(1, { error: "must lie in (0, 1]" })
+    .optional(),
   betweenCurves: z
-    .enum(["loglog", "next-longer"], {
-      error: (issue) => `expected "loglog" or "next-longer", got ${show(issue.input)}`,
+    .enum(["loglog", "next-longer", "thermal"], {
+      error: (issue) => `expected "loglog", "next-longer" or "thermal", got ${show(issue.input)}`,
     })
     .optional(),
 });
@@ -114,6 +125,11 @@ const waveform = object({
   t: array(finite()).min(2, { error: "a capture needs at least two samples" }),
   v: array(finite()),
   i: array(finite()),
+  start: z
+    .enum(["rest", "steady"], {
+      error: (issue) => `expected "rest" or "steady", got ${show(issue.input)}`,
+    })
+    .optional(),
   repeat: z
     .never({ error: "a capture cannot be repeated; repetition applies to rect and triangle pulses" })
     .optional(),
@@ -254,5 +270,6 @@ export function validateCheckRequest(body: unknown): Validation {
   const parsed = checkRequestSchema.safeParse(body);
   if (parsed.success) return { ok: true, request: parsed.data };
   const first = parsed.error.issues[0];
-  return { ok: false, error: { path: formatPath(first.path), message: first.message } };
+  const path = first.code === "unrecognized_keys" ? [...first.path, first.keys[0]] : first.path;
+  return { ok: false, error: { path: formatPath(path), message: first.message } };
 }

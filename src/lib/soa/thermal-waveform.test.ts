@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { Solver } from "@/test/odex";
 import type { FosterTerm } from "./foster";
 import { rectRise } from "./thermal-rect";
+import { trianglePeakRise } from "./thermal-triangle";
 import type { WaveformRise } from "./thermal-waveform";
 import { powerFromVI, rampFactor, waveformRise, waveformRiseVI } from "./thermal-waveform";
 
@@ -139,35 +140,41 @@ describe("waveformRise", () => {
     const whole = waveformRise(t, p, net, { trace: true });
     expect(traceDifference(whole.trace!, sum)).toBeLessThan(1e-14);
     const withoutTrace = waveformRise(t, p, net);
-    expect(withoutTrace).toEqual({ peak: whole.peak, peakIndex: whole.peakIndex });
+    expect(withoutTrace).toEqual({
+      peak: whole.peak,
+      peakIndex: whole.peakIndex,
+      maxRise: whole.maxRise,
+      maxTime: whole.maxTime,
+    });
     expect(whole.peak).toBe(Math.max(...whole.trace!));
   });
 
   it("reports the first sample of the peak, t_0 included: a waveform that only cools peaks at 0 at index 0", () => {
     expect(waveformRise([0, 1, 2], [5, 5, 5], [{ r: 1, tau: 0.1 }]).peakIndex).toBe(2);
-    expect(waveformRise([0, 1, 2, 3], [-5, -5, -5, -5], ONE_TERM)).toEqual({ peak: 0, peakIndex: 0 });
+    expect(waveformRise([0, 1, 2, 3], [-5, -5, -5, -5], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: 0 });
   });
 
   it("handles a 2-sample waveform, a single sample and an empty one", () => {
     expect(waveformRise([0, 2], [10, 10], ONE_TERM, { trace: true }).trace).toEqual(
       Float64Array.from([0, -10 * Math.expm1(-2)]),
     );
-    expect(waveformRise([5], [10], ONE_TERM, { trace: true })).toEqual({
+    expect(waveformRise([5], [10], ONE_TERM, { trace: true })).toMatchObject({
       peak: 0,
       peakIndex: 0,
+      maxRise: 0,
       trace: Float64Array.from([0]),
     });
-    expect(waveformRise([], [], ONE_TERM)).toEqual({ peak: 0, peakIndex: -1 });
+    expect(waveformRise([], [], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: -1, maxRise: 0 });
     expect(waveformRise([], [], ONE_TERM, { trace: true }).trace).toHaveLength(0);
   });
 
   it("gives 0 everywhere for an empty network, on both paths", () => {
     expect(waveformRise([0, 1, 2], [1, 2, 3], [], { trace: true }).trace).toEqual(new Float64Array(3));
-    expect(waveformRise([0, 1, 3], [1, 2, 3], [])).toEqual({ peak: 0, peakIndex: 0 });
+    expect(waveformRise([0, 1, 3], [1, 2, 3], [])).toMatchObject({ peak: 0, peakIndex: 0, maxRise: 0 });
   });
 
   it("treats a time axis with all samples at one instant as holding the rest state", () => {
-    expect(waveformRise([1, 1, 1], [1, 2, 3], ONE_TERM)).toEqual({ peak: 0, peakIndex: 0 });
+    expect(waveformRise([1, 1, 1], [1, 2, 3], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: 0, maxRise: 0 });
   });
 
   it("rejects differing lengths and a decreasing or NaN time axis with a RangeError", () => {
@@ -178,11 +185,12 @@ describe("waveformRise", () => {
   });
 
   it("gives a NaN peak at index −1 for NaN or infinite power", () => {
-    expect(waveformRise([0, 1, 2], [1, Number.NaN, 1], ONE_TERM)).toEqual({
+    expect(waveformRise([0, 1, 2], [1, Number.NaN, 1], ONE_TERM)).toMatchObject({
       peak: Number.NaN,
       peakIndex: -1,
+      maxRise: Number.NaN,
     });
-    expect(waveformRise([0, 1, 3], [1, 1, Number.POSITIVE_INFINITY], ONE_TERM)).toEqual({
+    expect(waveformRise([0, 1, 3], [1, 1, Number.POSITIVE_INFINITY], ONE_TERM)).toMatchObject({
       peak: Number.NaN,
       peakIndex: -1,
     });
@@ -192,6 +200,7 @@ describe("waveformRise", () => {
 /** Asserts that two results are the same bit for bit: peak, peakIndex and every trace value (−0 ≠ 0). */
 function expectSameBits(actual: WaveformRise, expected: WaveformRise): void {
   expect(Object.is(actual.peak, expected.peak)).toBe(true);
+  expect(Object.is(actual.maxRise, expected.maxRise)).toBe(true);
   expect(actual.peakIndex).toBe(expected.peakIndex);
   expect(actual.trace === undefined).toBe(expected.trace === undefined);
   if (actual.trace !== undefined && expected.trace !== undefined) {
@@ -240,7 +249,7 @@ describe("waveformRiseVI", () => {
   });
 
   it("handles an empty capture and a 2-sample one", () => {
-    expect(waveformRiseVI([], [], [], ONE_TERM)).toEqual({ peak: 0, peakIndex: -1 });
+    expect(waveformRiseVI([], [], [], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: -1 });
     expect(waveformRiseVI([], [], [], ONE_TERM, { trace: true }).trace).toHaveLength(0);
     // 48 V × 2 A = 96 W, then 24 V × 0.5 A = 12 W: a 96 → 12 W ramp over one τ, by the update of METHODS.md §4.
     const x = 1;
@@ -254,11 +263,11 @@ describe("waveformRiseVI", () => {
     expect(waveformRiseVI([0, 1, 3], [1, 2, 3], [1, 1, 1], [], { trace: true }).trace).toEqual(
       new Float64Array(3),
     );
-    expect(waveformRiseVI([0, 1, 2], [1, Number.POSITIVE_INFINITY, 1], [1, 0, 1], ONE_TERM)).toEqual({
+    expect(waveformRiseVI([0, 1, 2], [1, Number.POSITIVE_INFINITY, 1], [1, 0, 1], ONE_TERM)).toMatchObject({
       peak: Number.NaN,
       peakIndex: -1,
     });
-    expect(waveformRiseVI([0, 1, 3], [1, 1, Number.NaN], [1, 1, 1], ONE_TERM)).toEqual({
+    expect(waveformRiseVI([0, 1, 3], [1, 1, Number.NaN], [1, 1, 1], ONE_TERM)).toMatchObject({
       peak: Number.NaN,
       peakIndex: -1,
     });
@@ -291,5 +300,77 @@ describe("powerFromVI", () => {
   it("multiplies sample by sample and rejects differing lengths", () => {
     expect(powerFromVI([48, 24, 0], [2, 0.5, 7])).toEqual(Float64Array.from([96, 12, 0]));
     expect(() => powerFromVI([1, 2], [1])).toThrow(RangeError);
+  });
+});
+
+/** The same record with every segment cut into `parts` pieces (power linear inside, so the update stays exact). */
+function subdivide(t: number[], p: number[], parts: number): { t: number[]; p: number[] } {
+  const out = { t: [t[0]], p: [p[0]] };
+  for (let j = 0; j + 1 < t.length; j++) {
+    for (let k = 1; k <= parts; k++) {
+      out.t.push(t[j] + ((t[j + 1] - t[j]) * k) / parts);
+      out.p.push(p[j] + ((p[j + 1] - p[j]) * k) / parts);
+    }
+  }
+  return out;
+}
+
+describe("waveformRise between samples (METHODS.md §4, v2)", () => {
+  const THREE = [
+    { r: 0.7, tau: 30e-6 },
+    { r: 0.7, tau: 100e-6 },
+    { r: 1.0, tau: 2.3e-3 },
+  ];
+
+  // Worked value, METHODS.md §10 (derived from the Foster formula): the rate is negative at both ends of the
+  // 1.1–20 ms segment, yet the rise peaks inside it.
+  it("finds 129.372 K at about 10.14 ms inside a segment whose rate is negative at both ends", () => {
+    const rise = waveformRise([0, 1.1e-3, 20e-3], [81, 55, 53], THREE);
+    expect(rise.maxRise).toBeCloseTo(129.372, 3);
+    expect(rise.maxTime).toBeCloseTo(10.14e-3, 5);
+    expect(rise.peak).toBeLessThan(128);
+  });
+
+  // Derived: the exact update over many small pieces samples the true rise; its largest sample approaches the true
+  // maximum from below, to second order in the piece length.
+  it("agrees with a finely subdivided record and is never below it", () => {
+    fc.assert(
+      fc.property(
+        network,
+        fc.array(fc.double({ min: 0, max: 500, noNaN: true }), { minLength: 2, maxLength: 6 }),
+        fc.double({ min: -1, max: 2, noNaN: true }),
+        (net, p, decades) => {
+          const tauMin = Math.min(...net.map((term) => term.tau));
+          const h = tauMin * 10 ** decades;
+          const t = p.map((_, j) => h * (j + 0.37 * Math.floor(j / 2)));
+          // Pieces far shorter than both the fastest term and the segment itself.
+          const fine = subdivide(t, p, Math.ceil((1.37 * h) / (Math.min(tauMin, h) / 1000)));
+          const dense = waveformRise(fine.t, fine.p, net);
+          const sparse = waveformRise(t, p, net);
+          expect(sparse.maxRise).toBeGreaterThanOrEqual(dense.peak * (1 - 1e-12));
+          expect(sparse.maxRise - dense.peak).toBeLessThanOrEqual(1e-5 * dense.peak + 1e-12);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+
+  // Issue 10, request 6: a falling ramp from rest given as two samples peaks where the triangle does.
+  it("a two-sample falling ramp from rest peaks where the closed-form triangle does", () => {
+    const rise = waveformRise([0, 2e-3], [400, 0], THREE);
+    expectRelative(rise.maxRise, trianglePeakRise(THREE, 400, 2e-3), 1e-9);
+  });
+
+  it("starts settled at the first sample's power with `steady`: θ_i = R_i·p_0", () => {
+    const settled = waveformRise([0, 1e-3], [100, 100], THREE, { steady: true, trace: true });
+    expectRelative(settled.trace![0], 100 * 2.4, 1e-15);
+    expectRelative(settled.trace![1], 100 * 2.4, 1e-12);
+    expect(settled.maxRise).toBeCloseTo(240, 9);
+  });
+
+  it("takes negative power as zero: power flowing back never cools the junction", () => {
+    const clamped = waveformRise([0, 1e-3, 2e-3], [100, -500, 0], THREE, { trace: true });
+    const zeroed = waveformRise([0, 1e-3, 2e-3], [100, 0, 0], THREE, { trace: true });
+    expect(clamped.trace).toEqual(zeroed.trace);
   });
 });

@@ -29,12 +29,13 @@ export interface PartLimits {
 }
 
 /** How to read the curves between two digitised pulse widths (METHODS §3). */
-export type BetweenCurves = "loglog" | "next-longer";
+export type BetweenCurves = "loglog" | "next-longer" | "thermal";
 
-/** Margin policy of a project (METHODS §8). */
+/** Margin policy of a project (METHODS §8): u_max, ΔT_g (K), f_V (share of V_DSS) and the reading between widths. */
 export interface Policy {
   utilisationLimit?: number;
   tjGuard?: number;
+  voltageLimit?: number;
   betweenCurves?: BetweenCurves;
 }
 
@@ -67,6 +68,12 @@ export interface TrianglePulse {
   repeat?: Repeat;
 }
 
+/**
+ * What came before a captured record (METHODS §6): "rest" (nothing flowed before t_0) or "steady" (the first
+ * sample's power had flowed long enough to settle). Absent: the engine decides from the data.
+ */
+export type RecordStart = "rest" | "steady";
+
 /** A captured waveform: samples of time (s, strictly increasing), voltage (V) and current (A). */
 export interface WaveformPulse {
   id: string;
@@ -74,6 +81,7 @@ export interface WaveformPulse {
   t: number[];
   v: number[];
   i: number[];
+  start?: RecordStart;
 }
 
 export type Pulse = RectPulse | TrianglePulse | WaveformPulse;
@@ -86,25 +94,27 @@ export interface CheckRequest {
   pulses: Pulse[];
 }
 
-/**
- * Every flag a result can carry, in the order results list them. All but the last two are named by
- * METHODS.md; `case-at-or-above-tj-max` (derating factor 0: nothing is allowed) and `no-power` (a capture
- * whose peak power is not positive, so no equivalent rectangle exists) are this engine's own.
- */
+/** Every flag a result can carry (METHODS.md §2–§8), in the order results list them. */
 export const FLAGS = [
   "over-voltage",
   "over-current",
-  "case-at-or-above-tj-max",
+  "voltage-margin",
   "shorter-than-shortest-curve",
   "interpolated",
   "next-longer-curve",
+  "thermal-scaled",
+  "thermal-scaling-unavailable",
   "dc-curve-used",
   "longer-than-longest-curve",
+  "capped-by-shorter-curve",
   "below-curve-range",
   "above-curve-range",
   "equivalent-rectangle",
-  "pulse-too-short",
+  "negative-power-clamped",
   "no-power",
+  "starts-mid-pulse",
+  "ends-mid-pulse",
+  "repetition-applied",
   "repetition-outside-data",
 ] as const;
 
@@ -112,6 +122,16 @@ export type Flag = (typeof FLAGS)[number];
 
 /** Verdicts from best to worst: pass < marginal < no-data < fail. */
 export type Verdict = "pass" | "marginal" | "fail" | "no-data";
+
+/** The capture sample that decided a waveform's curve verdict (METHODS §6). */
+export interface BindingSample {
+  /** Time of the sample in s. */
+  t: number;
+  v: number;
+  i: number;
+  /** Width it was read at in s; null when the DC reading of a settled first sample binds. */
+  width: number | null;
+}
 
 export interface PulseResult {
   id: string;
@@ -125,6 +145,19 @@ export interface PulseResult {
   derating: number;
   verdict: Verdict;
   flags: Flag[];
+  /** The verdict of the curves alone (hard limits and voltage margin included). */
+  curveVerdict: Verdict;
+  /** Tj,peak against Tj,max and its guard; null without a Foster network. */
+  thermalVerdict: Verdict | null;
+  /** Electro-thermal stability (METHODS §12); null without transfer characteristics and a Foster network. */
+  stabilityVerdict: Verdict | null;
+  stability: number | null;
+  /** The width read on the curves: t_p, t_p/2 or E/p_peak; null without one. */
+  equivalentWidth: number | null;
+  /** Factor on the single-pulse allowed current for a repeated pulse; null when not repeated or unknown. */
+  repetitionScale: number | null;
+  /** Waveforms only: the binding sample. */
+  at?: BindingSample | null;
 }
 
 export interface CheckResponse {
