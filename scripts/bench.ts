@@ -2,9 +2,11 @@
 // Run with `npm run bench`. Each section lives in scripts/bench/.
 
 import { runCaptureBench } from "./bench/capture";
+import { runCaptureCheckBench } from "./bench/capture-check";
 import { runMatrixBench } from "./bench/matrix";
 import { runThermalBench } from "./bench/thermal";
 
 runThermalBench();
+runCaptureCheckBench();
 runMatrixBench();
 await runCaptureBench();

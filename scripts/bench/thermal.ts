@@ -10,14 +10,14 @@ const RUNS = 5;
 const CASE_TEMP = 85;
 const WINDOW = 60e-3;
 // A fictitious 4-term junction-to-case network.
-const NETWORK: FosterTerm[] = [
+export const NETWORK: FosterTerm[] = [
   { r: 0.015, tau: 2e-5 },
   { r: 0.08, tau: 4e-4 },
   { r: 0.22, tau: 6e-3 },
   { r: 0.18, tau: 5e-2 },
 ];
 
-interface Capture {
+export interface Capture {
   t: Float64Array;
   v: Float64Array;
   i: Float64Array;
@@ -27,7 +27,7 @@ interface Capture {
  * Pre-charge inrush as a scope would record it (METHODS.md §11 example): 48 V into 1000 µF at 1 V/ms with a
  * 4.8 Ω load, gate released 2 ms into the window; a 300 kHz ring on the current and ±1 % noise on both channels.
  */
-function inrushCapture(samples: number): Capture {
+export function inrushCapture(samples: number): Capture {
   const [vIn, slew, capacitance, load, delay] = [48, 1000, 1000e-6, 4.8, 2e-3];
   const h = WINDOW / (samples - 1);
   const t = new Float64Array(samples);

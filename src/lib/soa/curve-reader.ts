@@ -31,8 +31,8 @@ export function flagsOf(mask: number): Flag[] {
   return FLAGS.filter((_, k) => (mask & (1 << k)) !== 0);
 }
 
-// ln of the cap tolerance: a cap lowers the reading only when below it by more than 1e-12 relative.
-const CAP_TOLERANCE = 1e-12;
+// A cap lowers the reading only when below it by more than 1e-12 relative (as a difference of logarithms).
+const LN_CAP_TOLERANCE = Math.log1p(-1e-12);
 
 /** One curve in log-log form. */
 class LnCurve {
@@ -40,6 +40,8 @@ class LnCurve {
   readonly lnI: Float64Array;
   readonly slope: Float64Array;
   private hint = 0;
+  /** Where the last read fell: −1 below the first point, 1 above the last, else 0. */
+  side = 0;
 
   constructor(curve: Pick<PreparedCurve, "points">) {
     const n = curve.points.length;
@@ -55,35 +57,39 @@ class LnCurve {
     }
   }
 
-  /** ln I at ln V (−∞ reads below the range); NaN above the range or for an empty curve; `where` gets −1, 0 or 1. */
-  read(lnV: number, where: { side: number }): number {
-    const { lnV: xs, lnI } = this;
+  /** ln I at ln V (−∞ reads below the range); NaN above the range or for an empty curve; `side` tells which. */
+  read(lnV: number): number {
+    const xs = this.lnV;
+    const lnI = this.lnI;
     const n = xs.length;
-    where.side = 0;
+    let j = this.hint;
+    // The common case first: the segment the last read fell in.
+    if (xs[j] <= lnV && lnV < xs[j + 1]) {
+      this.side = 0;
+      return lnV === xs[j] ? lnI[j] : lnI[j] + this.slope[j] * (lnV - xs[j]);
+    }
+    this.side = 0;
     if (n === 0 || Number.isNaN(lnV)) return Number.NaN;
     if (lnV < xs[0]) {
-      where.side = -1;
+      this.side = -1;
       return lnI[0];
     }
     const last = n - 1;
     if (lnV > xs[last]) {
-      where.side = 1;
+      this.side = 1;
       return Number.NaN;
     }
     if (lnV === xs[last]) return lnI[last];
-    let j = this.hint;
-    if (!(xs[j] <= lnV && lnV < xs[j + 1])) {
-      // Largest j with ln V_j ≤ ln V (j < last here).
-      let lo = 0;
-      let hi = last - 1;
-      while (lo < hi) {
-        const mid = (lo + hi + 1) >> 1;
-        if (xs[mid] <= lnV) lo = mid;
-        else hi = mid - 1;
-      }
-      j = lo;
-      this.hint = j;
+    // Largest j with ln V_j ≤ ln V (j < last here).
+    let lo = 0;
+    let hi = last - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (xs[mid] <= lnV) lo = mid;
+      else hi = mid - 1;
     }
+    j = lo;
+    this.hint = j;
     return lnV === xs[j] ? lnI[j] : lnI[j] + this.slope[j] * (lnV - xs[j]);
   }
 }
@@ -97,7 +103,7 @@ export class CurveReader {
   private readonly lnWidths: Float64Array;
   private readonly lnZ: Float64Array | null;
   private readonly dc: LnCurve | null;
-  private readonly side = { side: 0 };
+  private readonly upper: Float64Array;
 
   constructor(
     set: PreparedCurveSet,
@@ -107,6 +113,7 @@ export class CurveReader {
     this.finite = set.finite.map((curve) => new LnCurve(curve));
     this.widths = Float64Array.from(set.finite, (curve) => curve.duration);
     this.lnWidths = this.widths.map(Math.log);
+    this.upper = this.widths.map((t) => t * (1 + WIDTH_TOLERANCE));
     this.lnZ =
       betweenCurves === "thermal" && network !== null && network.length > 0
         ? this.widths.map((t) => Math.log(zth(network, t)))
@@ -115,9 +122,9 @@ export class CurveReader {
   }
 
   private onCurve(curve: LnCurve): number {
-    const value = curve.read(this.lnV, this.side);
-    if (this.side.side < 0) this.flags |= FLAG_BIT["below-curve-range"];
-    else if (this.side.side > 0) this.flags |= FLAG_BIT["above-curve-range"];
+    const value = curve.read(this.lnV);
+    if (curve.side < 0) this.flags |= FLAG_BIT["below-curve-range"];
+    else if (curve.side > 0) this.flags |= FLAG_BIT["above-curve-range"];
     return value;
   }
 
@@ -136,7 +143,7 @@ export class CurveReader {
     let raw: number;
     let capTo: number; // cap by finite curves 0..capTo−1
     let k = 0;
-    while (k < m && widths[k] * (1 + WIDTH_TOLERANCE) < width) k++;
+    while (k < m && this.upper[k] < width) k++;
     if (k < m && Math.abs(width - widths[k]) <= WIDTH_TOLERANCE * widths[k]) {
       raw = this.onCurve(this.finite[k]);
       capTo = k;
@@ -153,10 +160,10 @@ export class CurveReader {
     if (Number.isNaN(raw)) return raw;
     let cap = Number.POSITIVE_INFINITY;
     for (let c = 0; c < capTo; c++) {
-      const value = this.finite[c].read(lnV, this.side);
+      const value = this.finite[c].read(lnV);
       if (value < cap) cap = value;
     }
-    if (cap < raw + Math.log1p(-CAP_TOLERANCE)) {
+    if (cap < raw + LN_CAP_TOLERANCE) {
       this.flags |= FLAG_BIT["capped-by-shorter-curve"];
       return cap;
     }

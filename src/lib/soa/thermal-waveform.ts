@@ -149,13 +149,6 @@ function termsOf(network: readonly FosterTerm[]): Terms {
   return terms;
 }
 
-/** A segment to search between its samples: its first sample, the terms' states there and a bound on its rise. */
-interface Candidate {
-  index: number;
-  theta: Float64Array;
-  bound: number;
-}
-
 /**
  * The pass behind both entry points, for power p_j = max(a_j·b_(j·bStride), 0) with lengths already checked. Both
  * read the power the same way, so that V8 compiles one loop for both rather than one that deoptimises on the other's
@@ -185,21 +178,14 @@ function risePass(
   }
   let maxRise = result.peak;
   let maxTime = t[result.peakIndex];
-  // Dense records: refine the segments the pass kept, most promising first, while one can still beat the best.
-  result.candidates.sort((x, y) => y.bound - x.bound);
-  for (const candidate of result.candidates) {
-    if (candidate.bound <= maxRise) break;
-    const j = candidate.index;
-    const found = segmentMaximum(
-      terms,
-      candidate.theta,
-      power(a, b, bStride, j),
-      power(a, b, bStride, j + 1),
-      step,
-    );
+  // Dense records: search again, between samples, the blocks whose bound beats the best rise at the samples.
+  const blocks = result.blockBounds;
+  for (let block = 0; block < blocks.length; block++) {
+    if (!(blocks[block] > maxRise)) continue;
+    const found = replayBlock(terms, a, b, bStride, step, block, result.blockStates, maxRise);
     if (found.rise > maxRise) {
       maxRise = found.rise;
-      maxTime = t[j] + found.s;
+      maxTime = t[found.index] + found.s;
     }
   }
   if (result.between.rise > maxRise) {
@@ -222,8 +208,9 @@ interface PassResult {
   peak: number;
   peakIndex: number;
   last: number;
-  /** Dense records: segments where the rate turns from positive to negative, kept for refinement. */
-  candidates: Candidate[];
+  /** Dense records: per block of BLOCK segments, a bound on the rise inside them, and the terms' states at its start. */
+  blockBounds: Float64Array;
+  blockStates: Float64Array;
   /** Other records: the best maximum found between samples (−∞ when none). */
   between: { rise: number; time: number };
 }
@@ -246,11 +233,16 @@ function uniformStep(t: ArrayLike<number>): number {
   return mean;
 }
 
+// Segments per block of a dense pass: the states at each block's start are kept, so that a block whose bound beats
+// the best rise can be searched again between its samples.
+const BLOCK = 4096;
+const NO_BLOCKS = new Float64Array(0);
+
 /**
  * Uniform axis, steps below min τ_i/8, up to four terms: per term θ_(n+1) = θ_n + α·p_n + β·p_(n+1) − (1 − a)·θ_n
- * with α = R·(1 − a − φ), β = R·φ fixed, in one unrolled loop with the state in locals. The rate Σ(R_i·p − θ_i)/τ_i
- * is followed too; where it turns from positive to negative and the segment's bound beats the best rise so far, the
- * segment is kept for refinement. Unused lanes have R = 0 and 1/τ = 0.
+ * with α = R·(1 − a − φ), β = R·φ fixed, in one unrolled loop with the state in locals. Unused lanes have R = 0.
+ * Per block of BLOCK segments it keeps the states at the block's start and a bound on the rise inside its segments:
+ * r(s) ≤ r_n + h·Σ_i R_i·max(p_n, p_(n+1))/τ_i, since every θ_i ≥ 0 makes each rate q_i ≤ R_i·p/τ_i.
  */
 function uniformPass(
   a: ArrayLike<number>,
@@ -261,7 +253,8 @@ function uniformPass(
   steady: boolean,
   trace: Float64Array | undefined,
 ): PassResult {
-  const c = new Float64Array(24);
+  const c = new Float64Array(16);
+  let gain = 0;
   for (let lane = 0; lane < terms.r.length; lane++) {
     const x = h / terms.tau[lane];
     const oneMinusA = -Math.expm1(-x);
@@ -269,78 +262,122 @@ function uniformPass(
     c[lane] = oneMinusA;
     c[4 + lane] = terms.r[lane] * (oneMinusA - ramp);
     c[8 + lane] = terms.r[lane] * ramp;
-    c[12 + lane] = terms.inverse[lane];
-    c[16 + lane] = terms.rate[lane];
-    if (steady) c[20 + lane] = terms.r[lane];
+    if (steady) c[12 + lane] = terms.r[lane];
+    gain += terms.rate[lane];
   }
-  const [e0, e1, e2, e3, al0, al1, al2, al3, be0, be1, be2, be3, w0, w1, w2, w3, g0, g1, g2, g3] = c;
+  const [e0, e1, e2, e3, al0, al1, al2, al3, be0, be1, be2, be3] = c;
+  const hGain = h * gain;
   const n = a.length;
+  const blocks = Math.ceil((n - 1) / BLOCK);
+  const blockBounds = new Float64Array(blocks);
+  const blockStates = new Float64Array(4 * blocks);
   // Without a trace, every sum goes to one slot (stride 0), which ends holding the last sum.
   const out = trace ?? new Float64Array(1);
   const outStride = trace === undefined ? 0 : 1;
   let previous = Math.max(a[0] * b[0], 0);
-  // Rest: θ_i = 0; settled: θ_i = R_i·p_0 (c[20..23] hold R_i only when steady).
-  let th0 = c[20] * previous;
-  let th1 = c[21] * previous;
-  let th2 = c[22] * previous;
-  let th3 = c[23] * previous;
+  // Rest: θ_i = 0; settled: θ_i = R_i·p_0 (c[12..15] hold R_i only when steady).
+  let th0 = c[12] * previous;
+  let th1 = c[13] * previous;
+  let th2 = c[14] * previous;
+  let th3 = c[15] * previous;
   let sum = th0 + th1 + th2 + th3;
   out[0] = sum;
   let peak = sum;
   let peakIndex = 0;
-  const candidates: Candidate[] = [];
-  let q0 = g0 * previous - w0 * th0;
-  let q1 = g1 * previous - w1 * th1;
-  let q2 = g2 * previous - w2 * th2;
-  let q3 = g3 * previous - w3 * th3;
-  let rate = q0 + q1 + q2 + q3;
-  for (let j = 1; j < n; j++) {
-    const current = Math.max(a[j] * b[j * bStride], 0);
-    const o0 = th0;
-    const o1 = th1;
-    const o2 = th2;
-    const o3 = th3;
-    th0 += al0 * previous + be0 * current - e0 * th0;
-    th1 += al1 * previous + be1 * current - e1 * th1;
-    th2 += al2 * previous + be2 * current - e2 * th2;
-    th3 += al3 * previous + be3 * current - e3 * th3;
-    const before = sum;
-    sum = th0 + th1 + th2 + th3;
-    out[j * outStride] = sum;
-    if (sum > peak) {
-      peak = sum;
-      peakIndex = j;
-    }
-    const n0 = g0 * current - w0 * th0;
-    const n1 = g1 * current - w1 * th1;
-    const n2 = g2 * current - w2 * th2;
-    const n3 = g3 * current - w3 * th3;
-    const nextRate = n0 + n1 + n2 + n3;
-    if (rate > 0 && !(nextRate > 0)) {
-      const bound =
-        before + h * (Math.max(q0, n0, 0) + Math.max(q1, n1, 0) + Math.max(q2, n2, 0) + Math.max(q3, n3, 0));
-      if (bound > peak) {
-        candidates.push({
-          index: j - 1,
-          theta: Float64Array.of(o0, o1, o2, o3).subarray(0, terms.r.length),
-          bound,
-        });
+  for (let block = 0; block < blocks; block++) {
+    blockStates[4 * block] = th0;
+    blockStates[4 * block + 1] = th1;
+    blockStates[4 * block + 2] = th2;
+    blockStates[4 * block + 3] = th3;
+    let bound = Number.NEGATIVE_INFINITY;
+    const end = Math.min(n, 1 + (block + 1) * BLOCK);
+    for (let j = 1 + block * BLOCK; j < end; j++) {
+      const current = Math.max(a[j] * b[j * bStride], 0);
+      th0 += al0 * previous + be0 * current - e0 * th0;
+      th1 += al1 * previous + be1 * current - e1 * th1;
+      th2 += al2 * previous + be2 * current - e2 * th2;
+      th3 += al3 * previous + be3 * current - e3 * th3;
+      const reach = sum + hGain * Math.max(previous, current);
+      if (reach > bound) bound = reach;
+      sum = th0 + th1 + th2 + th3;
+      out[j * outStride] = sum;
+      if (sum > peak) {
+        peak = sum;
+        peakIndex = j;
       }
+      previous = current;
     }
-    q0 = n0;
-    q1 = n1;
-    q2 = n2;
-    q3 = n3;
-    rate = nextRate;
-    previous = current;
+    blockBounds[block] = bound;
   }
   return {
     peak,
     peakIndex,
     last: sum,
-    candidates,
+    blockBounds,
+    blockStates,
     between: { rise: Number.NEGATIVE_INFINITY, time: Number.NaN },
   };
+}
+
+/**
+ * One block of a dense pass again, term by term from its stored states: each segment where the rate turns from
+ * positive to negative and whose bound beats `best` is searched between its samples. The update is the pass's own.
+ */
+function replayBlock(
+  terms: Terms,
+  a: ArrayLike<number>,
+  b: ArrayLike<number>,
+  bStride: number,
+  h: number,
+  block: number,
+  states: Float64Array,
+  best: number,
+): { rise: number; index: number; s: number } {
+  const k = terms.r.length;
+  const theta = states.slice(4 * block, 4 * block + k);
+  const decay = new Float64Array(k);
+  const alpha = new Float64Array(k);
+  const beta = new Float64Array(k);
+  for (let i = 0; i < k; i++) {
+    const x = h / terms.tau[i];
+    decay[i] = -Math.expm1(-x);
+    alpha[i] = terms.r[i] * (decay[i] - rampFactor(x));
+    beta[i] = terms.r[i] * rampFactor(x);
+  }
+  const found = { rise: Number.NEGATIVE_INFINITY, index: 0, s: 0 };
+  const first = block * BLOCK;
+  const end = Math.min(a.length - 1, first + BLOCK);
+  const old = new Float64Array(k);
+  let previous = power(a, b, bStride, first);
+  for (let j = first; j < end; j++) {
+    const current = power(a, b, bStride, j + 1);
+    let before = 0;
+    let rateBefore = 0;
+    let rateAfter = 0;
+    let bound = 0;
+    for (let i = 0; i < k; i++) {
+      const th = theta[i];
+      old[i] = th;
+      before += th;
+      const next = th + (alpha[i] * previous + beta[i] * current - decay[i] * th);
+      theta[i] = next;
+      const q0 = terms.rate[i] * previous - terms.inverse[i] * th;
+      const q1 = terms.rate[i] * current - terms.inverse[i] * next;
+      rateBefore += q0;
+      rateAfter += q1;
+      bound += Math.max(q0, q1, 0);
+    }
+    if (rateBefore > 0 && !(rateAfter > 0) && before + h * bound > Math.max(best, found.rise)) {
+      const inside = segmentMaximum(terms, old, previous, current, h);
+      if (inside.rise > found.rise) {
+        found.rise = inside.rise;
+        found.index = j;
+        found.s = inside.s;
+      }
+    }
+    previous = current;
+  }
+  return found;
 }
 
 /**
@@ -426,7 +463,7 @@ function generalPass(
     }
     previous = current;
   }
-  return { peak, peakIndex, last: sum, candidates: [], between };
+  return { peak, peakIndex, last: sum, blockBounds: NO_BLOCKS, blockStates: NO_BLOCKS, between };
 }
 
 /**
