@@ -258,7 +258,9 @@ export const pendingUploads = pgTable("pending_uploads", {
 // Projects ----------------------------------------------------------------------------------------------------
 
 export const pulseKindEnum = pgEnum("pulse_kind", ["rect", "triangle"]);
-export const betweenCurvesEnum = pgEnum("between_curves", ["loglog", "next-longer"]);
+export const betweenCurvesEnum = pgEnum("between_curves", ["loglog", "next-longer", "thermal"]);
+/** What came before a capture's record (METHODS.md §6); null: the engine decides from the data. */
+export const recordStartEnum = pgEnum("record_start", ["rest", "steady"]);
 
 /** One design under review: the case temperature to assume, the margin policy, its candidates and pulses. */
 export const projects = pgTable(
@@ -273,6 +275,7 @@ export const projects = pgTable(
     caseTemp: doublePrecision().notNull().default(25),
     utilisationLimit: doublePrecision().notNull().default(0.8),
     tjGuard: doublePrecision().notNull().default(25),
+    voltageLimit: doublePrecision().notNull().default(0.8),
     betweenCurves: betweenCurvesEnum().notNull().default("loglog"),
     ownerId: uuid().references(() => users.id, { onDelete: "set null" }),
     archivedAt: timestamp({ withTimezone: true }),
@@ -395,6 +398,7 @@ export const captures = pgTable(
     mapping: jsonb().$type<Record<string, unknown>>().notNull(),
     summary: jsonb().$type<CaptureSummary>().notNull(),
     trace: jsonb().$type<CaptureTrace>().notNull(),
+    start: recordStartEnum(),
     note: text(),
     boardSerial: text(),
     probe: text(),

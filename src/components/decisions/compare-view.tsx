@@ -121,7 +121,7 @@ function Comparison({
             note: (
               <>
                 limit {percent(check.policy.utilisationLimit)} · T<sub>j</sub> guard{" "}
-                {`${q(check.policy.tjGuard, "")}\u2009K`}
+                {`${q(check.policy.tjGuard, "")}\u2009K`} · voltage limit {percent(check.policy.voltageLimit)}
               </>
             ),
           },

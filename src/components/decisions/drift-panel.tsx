@@ -5,10 +5,15 @@ import { VerdictMark } from "./verdict-mark";
 
 type Policy = DecisionSnapshot["policy"];
 
-const betweenWords = { loglog: "log-log interpolation", "next-longer": "next longer curve" } as const;
+const betweenWords = {
+  loglog: "log-log interpolation",
+  "next-longer": "next longer curve",
+  thermal: "shorter curve scaled by the thermal model",
+} as const;
 
 function policyText(p: Policy): string {
-  return `utilisation limit ${percent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K, between curves: ${betweenWords[p.betweenCurves]}`;
+  const voltage = p.voltageLimit === undefined ? "" : `, voltage limit ${percent(p.voltageLimit)} of V_DSS`;
+  return `utilisation limit ${percent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K${voltage}, between curves: ${betweenWords[p.betweenCurves]}`;
 }
 
 function Outcome({ value }: { value: { verdict: Verdict; utilisation: number | null } | null }) {
@@ -24,6 +29,7 @@ function Outcome({ value }: { value: { verdict: Verdict; utilisation: number | n
 /** True when checking again would give exactly what was frozen. */
 function driftIsEmpty(drift: Drift): boolean {
   return (
+    drift.methodsChanged === null &&
     !drift.policyChanged &&
     drift.caseTempChanged === null &&
     drift.curveSetsChanged.length === 0 &&
@@ -50,6 +56,15 @@ export function DriftPanel({ drift, frozen, now }: { drift: Drift; frozen: Polic
     );
   }
   const changes: { key: string; what: string; detail: string }[] = [];
+  if (drift.methodsChanged) {
+    changes.push({
+      key: "methods",
+      what: "Methods",
+      detail:
+        `revision ${drift.methodsChanged.frozen} → ${drift.methodsChanged.now}: the rules of the check changed, so ` +
+        "verdicts below may differ for that reason alone, with nothing else changed",
+    });
+  }
   if (drift.caseTempChanged) {
     changes.push({
       key: "temp",

@@ -5,7 +5,7 @@ import { useEffect, useId, useState } from "react";
 import { messageOf } from "@/components/api-client";
 import { type ChartCurve, type ChartFinding, type ChartInterpolated, SoaChart } from "@/components/soa-chart";
 import { FLAG_EXPLANATIONS } from "@/lib/soa/explain";
-import type { Flag } from "@/lib/soa/types";
+import type { BetweenCurves, Flag } from "@/lib/soa/types";
 import { formatQuantity, parseQuantity } from "@/lib/soa/units";
 import { callJson } from "./api";
 import { FindingsList } from "./findings-list";
@@ -66,7 +66,7 @@ export function LimitsPanel({
   const ref = curveSet.refCaseTemp;
   const [caseTemp, setCaseTemp] = useState(ref);
   const [widthText, setWidthText] = useState("");
-  const [policy, setPolicy] = useState<"loglog" | "next-longer">("loglog");
+  const [policy, setPolicy] = useState<BetweenCurves>("loglog");
   const sentTemp = useDebounced(caseTemp, 120);
   const sentWidth = useDebounced(widthText.trim(), 300);
   const parsedWidth = sentWidth ? parseQuantity(sentWidth, "s") : null;
@@ -167,6 +167,7 @@ export function LimitsPanel({
               >
                 <option value="loglog">Interpolate between widths (log-log)</option>
                 <option value="next-longer">Use the next longer curve (strict)</option>
+                <option value="thermal">Scale the next shorter curve by the thermal model</option>
               </select>
             </div>
             <p

@@ -3,7 +3,7 @@ import { callJson } from "@/components/library/api";
 import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
 import type { CsvIssue } from "@/lib/csv/issues";
 import type { MeasurementColumns } from "@/lib/csv/measurements";
-import type { Flag, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
+import type { BetweenCurves, Flag, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
 
 // The project screens' view of our route handlers: the JSON they answer with (dates as ISO text), their query
 // keys, and the one invalidation every change of a project goes through.
@@ -15,7 +15,8 @@ export interface ProjectRecord {
   caseTemp: number;
   utilisationLimit: number;
   tjGuard: number;
-  betweenCurves: "loglog" | "next-longer";
+  voltageLimit: number;
+  betweenCurves: BetweenCurves;
   ownerId: string | null;
   archivedAt: string | null;
   createdAt: string;
@@ -105,7 +106,8 @@ export interface ProjectCheck {
     caseTemp: number;
     utilisationLimit: number;
     tjGuard: number;
-    betweenCurves: "loglog" | "next-longer";
+    voltageLimit: number;
+    betweenCurves: BetweenCurves;
   };
   candidates: CheckedCandidate[];
   pulses: CheckedPulse[];

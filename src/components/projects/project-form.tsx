@@ -22,7 +22,9 @@ export interface ProjectFormValues {
   /** In percent on the form; the schema takes a fraction. */
   utilisationLimit: string;
   tjGuard: string;
-  betweenCurves: "loglog" | "next-longer";
+  /** In percent of V_DSS on the form; the schema takes a fraction. */
+  voltageLimit: string;
+  betweenCurves: "loglog" | "next-longer" | "thermal";
   ownerId: string;
 }
 
@@ -32,6 +34,7 @@ export const emptyProject: ProjectFormValues = {
   caseTemp: "25",
   utilisationLimit: "80",
   tjGuard: "25",
+  voltageLimit: "80",
   betweenCurves: "loglog",
   ownerId: "",
 };
@@ -43,17 +46,16 @@ const formSchema = z
     caseTemp: z.string(),
     utilisationLimit: z.string(),
     tjGuard: z.string(),
-    betweenCurves: z.enum(["loglog", "next-longer"]),
+    voltageLimit: z.string(),
+    betweenCurves: z.enum(["loglog", "next-longer", "thermal"]),
     ownerId: z.string(),
   })
   .superRefine((f, ctx) => {
-    const percent = Number(f.utilisationLimit.replace("%", ""));
-    if (f.utilisationLimit.trim() === "" || !(percent > 0 && percent <= 100)) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["utilisationLimit"],
-        message: "A percentage above 0 and at most 100",
-      });
+    for (const key of ["utilisationLimit", "voltageLimit"] as const) {
+      const percent = percentOf(f[key]);
+      if (!(percent > 0 && percent <= 100)) {
+        ctx.addIssue({ code: "custom", path: [key], message: "A percentage above 0 and at most 100" });
+      }
     }
     const guard = Number(f.tjGuard);
     if (f.tjGuard.trim() === "" || !(guard >= 0 && guard <= 200)) {
@@ -61,11 +63,10 @@ const formSchema = z
     }
   })
   .transform((f): z.input<typeof projectSchema> => {
-    const percent =
-      f.utilisationLimit.trim() === "" ? Number.NaN : Number(f.utilisationLimit.replace("%", ""));
     return {
       ...f,
-      utilisationLimit: percent / 100,
+      utilisationLimit: percentOf(f.utilisationLimit) / 100,
+      voltageLimit: percentOf(f.voltageLimit) / 100,
       tjGuard: f.tjGuard.trim() === "" ? Number.NaN : Number(f.tjGuard),
       ownerId: f.ownerId === "" ? null : f.ownerId,
     };
@@ -73,6 +74,12 @@ const formSchema = z
   .pipe(projectSchema);
 
 const fields = Object.keys(emptyProject) as (keyof ProjectFormValues)[];
+
+/** A percentage as typed ("80", "80 %", "80,5"); NaN when empty or not a number. */
+function percentOf(text: string): number {
+  const trimmed = text.replace("%", "").replace(",", ".").trim();
+  return trimmed === "" ? Number.NaN : Number(trimmed);
+}
 
 export interface OwnerChoice {
   id: string;
@@ -158,7 +165,7 @@ export function ProjectForm({
         />
       </fieldset>
 
-      <fieldset className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
+      <fieldset className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         <legend className="mb-1 text-sm font-semibold">Temperature and margin policy</legend>
         <p className="col-span-full -mt-1 mb-1 text-xs text-ink-muted">
           Every pulse is checked at this case temperature (a fault case may override it) against the curves
@@ -198,15 +205,46 @@ export function ProjectForm({
           error={err("tjGuard")}
           {...register("tjGuard")}
         />
+        <UnitField
+          id="project-voltage-limit"
+          label="Voltage limit"
+          unit="%"
+          inputMode="decimal"
+          hint={
+            <>
+              Of <Sym main="V" sub="DSS" />; above it a pulse is at best marginal. Default 80 %.
+            </>
+          }
+          error={err("voltageLimit")}
+          {...register("voltageLimit")}
+        />
         <SelectField
           id="project-between"
           label="Between datasheet widths"
+          hint="How a width between two datasheet curves is read. Default: interpolate."
+          className="sm:col-span-2"
           error={err("betweenCurves")}
           {...register("betweenCurves")}
         >
           <option value="loglog">Interpolate (log-log)</option>
           <option value="next-longer">Next longer curve (strict)</option>
+          <option value="thermal">Scale the shorter curve by the thermal model</option>
         </SelectField>
+        <div className="col-span-full space-y-1 text-xs text-ink-muted" data-testid="policy-help">
+          <p>
+            <strong className="font-medium text-ink">Interpolate</strong> reads between the two neighbouring
+            curves on log-log axes, as an engineer reads the chart; it can overstate the limit by a few per
+            cent where the thermal impedance flattens.{" "}
+            <strong className="font-medium text-ink">Next longer</strong> never overstates it.{" "}
+            <strong className="font-medium text-ink">Thermal</strong> scales the next shorter curve by the
+            part&apos;s thermal model, Z<sub>th</sub>(t<sub>k</sub>)/Z<sub>th</sub>(t): exact where that curve
+            is thermally limited; a part without a thermal model is read as next longer.
+          </p>
+          <p>
+            Whatever the choice, a longer pulse is never allowed more current than a shorter one at the same
+            voltage.
+          </p>
+        </div>
       </fieldset>
 
       <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>

@@ -170,12 +170,14 @@ describe("junctionTrace", () => {
       { r: 0.3, tau: 6e-2 },
     ];
     const rise = waveformRise(t, p, network);
-    const junction = junctionTrace(t, p, network, 60, 400);
-    expect(junction.tjPeak).toBe(60 + rise.peak);
-    expect(junction.tPeak).toBe(t[rise.peakIndex]);
+    const junction = junctionTrace(t, p, network, 60, { buckets: 400 });
+    expect(junction.start).toBe("rest");
+    expect(junction.tjPeak).toBe(60 + rise.maxRise);
+    expect(junction.tPeak).toBe(rise.maxTime);
     expect(junction.trace.t).toEqual(decimateMinMax(t, p, 400).t);
     expect(junction.trace.y[0]).toEqual([60, expect.any(Number)]);
-    expect(Math.max(...junction.trace.y.map(([, max]) => max))).toBe(junction.tjPeak);
+    // The drawn trace holds the samples; the peak between them is at least as high.
+    expect(Math.max(...junction.trace.y.map(([, max]) => max))).toBeLessThanOrEqual(junction.tjPeak);
   });
 });
 

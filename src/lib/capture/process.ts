@@ -15,6 +15,8 @@ import type { CaptureSummary, CaptureTrace } from "@/db/schema";
 import { recordEnergy, waveformEquivalent } from "@/lib/soa/equivalent-rectangle";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
+import type { RecordStart } from "@/lib/soa/types";
+import { recordStart } from "@/lib/soa/waveform-check";
 import type { CaptureSamples } from "./parse-stream";
 
 /** Points per series of a drawn trace. */
@@ -138,31 +140,38 @@ export function processCapture(samples: CaptureSamples, buckets = TRACE_BUCKETS)
 }
 
 export interface JunctionTrace {
-  /** Highest junction temperature over the sample instants, °C. */
+  /** Highest junction temperature over the record, between samples included, °C. */
   tjPeak: number;
   /** When it is reached, s. */
   tPeak: number;
+  /** Whether the trace starts from rest or settled at the first sample's power (METHODS.md §6). */
+  start: RecordStart;
   /** Tj in °C, decimated like the capture's trace. */
   trace: MinMaxTrace;
 }
 
 /**
- * Junction temperature through a capture on a Foster network from rest at `caseTemp` (METHODS.md §4, the engine's
- * exact update), with its decimated trace.
+ * Junction temperature through a capture on a Foster network at `caseTemp` (METHODS.md §4, the engine's exact
+ * update), from the start the check uses (METHODS.md §6: as stated at upload, else decided from the data), with
+ * its decimated trace. Power below zero counts as zero, as in the check.
  */
 export function junctionTrace(
   t: ArrayLike<number>,
   p: ArrayLike<number>,
   network: readonly FosterTerm[],
   caseTemp: number,
-  buckets = TRACE_BUCKETS,
+  { start: given = null, buckets = TRACE_BUCKETS }: { start?: RecordStart | null; buckets?: number } = {},
 ): JunctionTrace {
-  const rise = waveformRise(t, p, network, { trace: true });
+  let peakPower = 0;
+  for (let k = 0; k < p.length; k++) if (p[k] > peakPower) peakPower = p[k];
+  const { start } = recordStart(Math.max(p[0] ?? 0, 0), peakPower, given ?? undefined);
+  const rise = waveformRise(t, p, network, { trace: true, steady: start === "steady" });
   const tj = rise.trace ?? new Float64Array(0);
   for (let k = 0; k < tj.length; k++) tj[k] += caseTemp;
   return {
-    tjPeak: caseTemp + rise.peak,
-    tPeak: rise.peakIndex >= 0 ? t[rise.peakIndex] : Number.NaN,
+    tjPeak: caseTemp + rise.maxRise,
+    tPeak: rise.maxTime,
+    start,
     trace: decimateMinMax(t, tj, buckets),
   };
 }

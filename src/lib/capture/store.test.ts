@@ -356,8 +356,8 @@ describe("capture routes", () => {
     const samples = await loadCaptureSamples(storage, row);
     const rise = waveformRise(samples.t, powerFromVI(samples.v, samples.i), network);
     const bySmall = body.candidates.find((c: { partId: string }) => c.partId === small.id);
-    expect(bySmall.junction.tjPeak).toBe(40 + rise.peak);
-    expect(bySmall.junction.tPeak).toBe(samples.t[rise.peakIndex]);
+    expect(bySmall.junction.tjPeak).toBe(40 + rise.maxRise);
+    expect(bySmall.junction.tPeak).toBe(rise.maxTime);
     expect(bySmall.junction.trace.t).toEqual(body.capture.trace.t);
     expect(body.candidates.find((c: { partId: string }) => c.partId === big.id).junction).toBeNull();
     const list = await (

@@ -9,7 +9,7 @@ import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { discardUpload } from "@/lib/library/curve-upload";
 import type { ProjectPulse } from "@/lib/projects/evaluate";
-import type { WaveformPulse } from "@/lib/soa/types";
+import type { RecordStart, WaveformPulse } from "@/lib/soa/types";
 import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
 import { type CaptureMapping, MAX_CAPTURE_BYTES } from "./parse";
@@ -34,6 +34,7 @@ const listed = {
   fileName: captures.fileName,
   size: captures.size,
   summary: captures.summary,
+  start: captures.start,
   note: captures.note,
   boardSerial: captures.boardSerial,
   probe: captures.probe,
@@ -55,6 +56,8 @@ export async function registerCapture(
     upload: { id: string; objectKey: string; fileName: string };
     name: string;
     mapping: CaptureMapping;
+    /** What came before the record (METHODS.md §6); absent: the engine decides from the data. */
+    start?: RecordStart | null;
     note?: string;
     boardSerial?: string;
     probe?: string;
@@ -117,6 +120,7 @@ export async function registerCapture(
           mapping: parsed.mapping,
           summary,
           trace,
+          start: input.start ?? null,
           note: input.note ?? null,
           boardSerial: input.boardSerial ?? null,
           probe: input.probe ?? null,
@@ -230,13 +234,18 @@ export async function deleteCapture(
  */
 export function capturePulse(
   project: Project,
-  capture: Pick<Capture, "id" | "name" | "summary">,
+  capture: Pick<Capture, "id" | "name" | "summary" | "start">,
   samples: CaptureSamples | (() => Promise<CaptureSamples>),
 ): ProjectPulse {
   const rect = capture.summary.equivalent;
   // The engine walks any array-like; WaveformPulse names number[] for the JSON contract.
   const asPulse = (s: CaptureSamples) =>
-    ({ id: capture.id, kind: "waveform", ...s }) as unknown as WaveformPulse;
+    ({
+      id: capture.id,
+      kind: "waveform",
+      ...s,
+      ...(capture.start === null ? {} : { start: capture.start }),
+    }) as unknown as WaveformPulse;
   return {
     id: capture.id,
     source: "capture",
@@ -257,6 +266,7 @@ export async function captureProjectPulses(storage: Storage, project: Project): 
       id: captures.id,
       name: captures.name,
       summary: captures.summary,
+      start: captures.start,
       samplesKey: captures.samplesKey,
     })
     .from(captures)

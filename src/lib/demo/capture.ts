@@ -17,7 +17,7 @@ function noise(seed: number): () => number {
 }
 
 export function demoCaptureCsv(): string {
-  const model = inrushPulses({ capacitance: 1.5e-3, slew: 1000, supply: 48, load: 10, samples: 12_001 });
+  const model = inrushPulses({ capacitance: 1.5e-3, slew: 1000, supply: 48, load: 40, samples: 12_001 });
   if (!model.ok || model.pulses[0].kind !== "waveform") throw new Error("the inrush model gave no waveform");
   const { t, v, i } = model.pulses[0];
   const dt = t[1] - t[0];
@@ -37,7 +37,7 @@ export function demoCaptureCsv(): string {
   for (let k = pre; k > 0; k--) row(-k * dt, 48, 0);
   for (let k = 0; k < t.length; k++) row(t[k], v[k], i[k]);
   const tEnd = t[t.length - 1];
-  const onCurrent = 48 / 10;
+  const onCurrent = 48 / 40;
   for (let k = 1; k <= post; k++) row(tEnd + k * dt, onCurrent * 0.003, onCurrent);
   return `${lines.join("\n")}\n`;
 }

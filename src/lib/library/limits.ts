@@ -1,6 +1,7 @@
 import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
+import type { FosterTerm } from "@/lib/soa/foster";
 import type { BetweenCurves, CurveSet, Duration, Flag } from "@/lib/soa/types";
 
 export interface LimitLine {
@@ -27,7 +28,7 @@ const samplesPerDecade = 24;
  */
 export function computeLimits(
   set: CurveSet,
-  part: { tjMax: number },
+  part: { tjMax: number; foster?: readonly FosterTerm[] | null },
   options: { caseTemp: number; width?: number; policy?: BetweenCurves },
 ): Limits {
   const prepared = prepareCurveSet(set);
@@ -47,7 +48,7 @@ export function computeLimits(
     const flags = new Set<Flag>();
     const points: [number, number][] = [];
     for (const v of voltageGrid(curves)) {
-      const result = allowedCurrent(prepared, v, options.width, policy);
+      const result = allowedCurrent(prepared, v, options.width, policy, part.foster ?? null);
       for (const f of result.flags) if (f !== "below-curve-range" && f !== "above-curve-range") flags.add(f);
       if (result.current !== null && !result.flags.includes("below-curve-range"))
         points.push([v, result.current * k]);

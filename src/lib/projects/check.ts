@@ -11,6 +11,7 @@ export function projectPolicy(project: Project) {
   return {
     utilisationLimit: project.utilisationLimit,
     tjGuard: project.tjGuard,
+    voltageLimit: project.voltageLimit,
     betweenCurves: project.betweenCurves,
   } as const;
 }

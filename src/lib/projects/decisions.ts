@@ -6,6 +6,8 @@ import { recordAudit } from "@/db/queries/audit";
 import { type Decision, decisions, type Project } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
+import { DEFAULT_POLICY } from "@/lib/soa/policy";
+import { METHODS_REVISION, revisionOf } from "@/lib/soa/revision";
 import type { PartLimits, PulseResult, Verdict } from "@/lib/soa/types";
 import { isUuid } from "@/lib/uuid";
 import { checkProject } from "./check";
@@ -17,6 +19,8 @@ export type Checked = Awaited<ReturnType<typeof checkProject>>;
 /** Everything a decision rested on, frozen as JSON: later library or project edits never change it. */
 export interface DecisionSnapshot {
   takenAt: string;
+  /** The revision of METHODS.md the evaluation was found under; absent in records of revision 1. */
+  methodsRevision?: number;
   project: { id: string; name: string; description: string | null; caseTemp: number };
   policy: Checked["policy"];
   candidates: (Checked["candidates"][number] & {
@@ -41,6 +45,7 @@ export interface DecisionSnapshot {
 export function buildSnapshot(project: Project, candidates: Candidate[], checked: Checked): DecisionSnapshot {
   return {
     takenAt: new Date().toISOString(),
+    methodsRevision: METHODS_REVISION,
     project: {
       id: project.id,
       name: project.name,
@@ -168,6 +173,8 @@ export interface DriftItem {
 }
 
 export interface Drift {
+  /** The methods' revision differs: verdicts may have changed because the rules did. */
+  methodsChanged: { frozen: number; now: number } | null;
   policyChanged: boolean;
   caseTempChanged: { frozen: number; now: number } | null;
   curveSetsChanged: { partId: string; label: string }[];
@@ -197,9 +204,17 @@ export function computeDrift(frozen: DecisionSnapshot, now: DecisionSnapshot): D
       }
     }
   }
-  const { caseTemp: frozenTemp, ...frozenPolicy } = frozen.policy;
+  // A record made before a policy field existed was checked without it: compare it as that field's default.
+  const { caseTemp: frozenTemp, ...frozenPolicy } = {
+    ...frozen.policy,
+    voltageLimit:
+      (frozen.policy as Partial<DecisionSnapshot["policy"]>).voltageLimit ?? DEFAULT_POLICY.voltageLimit,
+  };
   const { caseTemp: nowTemp, ...nowPolicy } = now.policy;
+  const frozenRevision = revisionOf(frozen);
+  const nowRevision = revisionOf(now);
   return {
+    methodsChanged: frozenRevision !== nowRevision ? { frozen: frozenRevision, now: nowRevision } : null,
     policyChanged: !isDeepStrictEqual(frozenPolicy, nowPolicy),
     caseTempChanged: frozenTemp !== nowTemp ? { frozen: frozenTemp, now: nowTemp } : null,
     curveSetsChanged: frozen.candidates

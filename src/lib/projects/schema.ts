@@ -15,7 +15,12 @@ export const projectSchema = z.object({
     .max(1, { message: "At most 1 (100 %)" })
     .default(0.8),
   tjGuard: z.coerce.number().min(0, { message: "0 K or more" }).max(200).default(25),
-  betweenCurves: z.enum(["loglog", "next-longer"]).default("loglog"),
+  voltageLimit: z.coerce
+    .number()
+    .gt(0, { message: "Above 0" })
+    .max(1, { message: "At most 1 (100 % of V_DSS)" })
+    .default(0.8),
+  betweenCurves: z.enum(["loglog", "next-longer", "thermal"]).default("loglog"),
   ownerId: z.uuid().nullable().optional(),
 });
 

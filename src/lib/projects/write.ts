@@ -63,6 +63,8 @@ export async function updateProject(caller: MemberCaller, projectId: string, val
           caseTemp: project.caseTemp,
           utilisationLimit: project.utilisationLimit,
           tjGuard: project.tjGuard,
+          voltageLimit: project.voltageLimit,
+          betweenCurves: project.betweenCurves,
         },
       },
       tx,

@@ -3,8 +3,15 @@ import PDFDocument from "pdfkit";
 import { computeLimits } from "@/lib/library/limits";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { CAUTION, explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
+import { revisionOf } from "@/lib/soa/revision";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
 import { formatQuantity } from "@/lib/soa/units";
+
+const BETWEEN_WORDS = {
+  loglog: "log-log interpolation between the neighbouring curves (may overstate by a few per cent)",
+  "next-longer": "the next longer curve",
+  thermal: "the next shorter curve scaled by the thermal model, Zth(tk)/Zth(t) (next longer without one)",
+} as const;
 
 // The decision report: one PDF, drawn from the decision's frozen snapshot only, so the record reads the same
 // however the library or the project change later. Fonts ship with the app (no system font is assumed).
@@ -98,11 +105,19 @@ export function renderDecisionPdf(input: {
   keyValues(doc, [
     ["Case temperature", q(snapshot.policy.caseTemp, "°C")],
     ["Utilisation limit", pct(snapshot.policy.utilisationLimit)],
-    ["Junction guard", `${snapshot.policy.tjGuard} K below Tj,max`],
+    ["Junction guard", `${snapshot.policy.tjGuard} K below Tj,max (where a part has a thermal model)`],
     [
-      "Between datasheet widths",
-      snapshot.policy.betweenCurves === "loglog" ? "log-log interpolation" : "next longer curve",
+      "Voltage limit",
+      snapshot.policy.voltageLimit === undefined
+        ? "none (checked before the voltage limit existed)"
+        : `${pct(snapshot.policy.voltageLimit)} of V_DSS; above it a pulse is at best marginal`,
     ],
+    ["Between datasheet widths", BETWEEN_WORDS[snapshot.policy.betweenCurves]],
+    [
+      "Longer pulses",
+      "never allowed more current than a shorter pulse at the same voltage (crossing curves are capped)",
+    ],
+    ["Methods", `revision ${revisionOf(snapshot)} of the check's methods`],
     ["Evaluated", stamp(new Date(snapshot.takenAt))],
   ]);
 

@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { CAUTION, explainFlag, explainFlags, FLAG_EXPLANATIONS, VERDICT_EXPLANATIONS } from "./explain";
+import {
+  CAUTION,
+  decidingViews,
+  explainFlag,
+  explainFlags,
+  FLAG_EXPLANATIONS,
+  VERDICT_EXPLANATIONS,
+} from "./explain";
 import { FLAGS } from "./types";
 
 describe("explain", () => {
@@ -19,5 +26,25 @@ describe("explain", () => {
       FLAG_EXPLANATIONS.interpolated,
     ]);
     expect(CAUTION).toContain("25 °C");
+  });
+
+  // Issue 10: no explanation promises more than its rule gives. The equal-energy rectangle bounds the heating only
+  // for a record that starts from rest and a thermal model with positive terms (METHODS.md §6); revision 1's text
+  // said it "never understates the heating" without either condition.
+  it("states what the equal-energy rectangle assumes instead of promising it never understates", () => {
+    const text = explainFlag("equivalent-rectangle");
+    expect(text).toContain("starts from rest");
+    expect(text).toContain("positive");
+    expect(text).not.toMatch(/never understates the heating\.$/);
+  });
+
+  it("says which views decided a result", () => {
+    const base = { curveVerdict: "pass", thermalVerdict: "pass", stabilityVerdict: null, flags: [] } as const;
+    expect(decidingViews({ ...base, verdict: "pass" })).toEqual(["curves", "thermal"]);
+    expect(decidingViews({ ...base, thermalVerdict: "fail", verdict: "fail" })).toEqual(["thermal"]);
+    expect(
+      decidingViews({ ...base, curveVerdict: "fail", verdict: "fail", flags: ["over-voltage"] }),
+    ).toEqual(["hard-limit"]);
+    expect(decidingViews({ ...base, verdict: "marginal", flags: ["ends-mid-pulse"] })).toEqual(["record"]);
   });
 });

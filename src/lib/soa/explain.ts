@@ -1,7 +1,7 @@
 // Plain words for every flag and verdict, for the explanation panel beside each result. The wording is our
 // own; the facts behind it are METHODS.md §2–§8 (revision 2). Each text says what the rule assumes and never
 // promises more than the rule gives.
-import type { Flag, Verdict } from "./types";
+import type { Flag, PulseResult, Verdict } from "./types";
 
 export const FLAG_EXPLANATIONS: Readonly<Record<Flag, string>> = {
   "over-voltage":
@@ -102,4 +102,33 @@ export function explainFlag(flag: Flag): string {
 /** The plain-words explanations of a result's flags, in the result's order. */
 export function explainFlags(flags: readonly Flag[]): string[] {
   return flags.map(explainFlag);
+}
+
+/** The views a verdict can come from (METHODS.md §8): the curves, a hard rating, the thermal model, stability,
+ * and the record's own limits (a capture that may miss part of its pulse). */
+export type View = "hard-limit" | "curves" | "thermal" | "stability" | "record";
+
+export const VIEW_WORDS: Readonly<Record<View, string>> = {
+  "hard-limit": "a hard rating (maximum voltage or pulsed current)",
+  curves: "the SOA curves",
+  thermal: "the junction temperature from the thermal model",
+  stability: "the electro-thermal stability factor",
+  record: "the record itself, which may miss part of the pulse",
+};
+
+/** Which views decided a result: every view whose own verdict equals the final one (pass: all views agree). */
+export function decidingViews(
+  result: Pick<PulseResult, "verdict" | "curveVerdict" | "thermalVerdict" | "stabilityVerdict"> & {
+    flags: readonly Flag[];
+  },
+): View[] {
+  const views: View[] = [];
+  const hard = result.flags.includes("over-voltage") || result.flags.includes("over-current");
+  if (result.curveVerdict === result.verdict)
+    views.push(hard && result.verdict === "fail" ? "hard-limit" : "curves");
+  if (result.thermalVerdict === result.verdict) views.push("thermal");
+  if (result.stabilityVerdict === result.verdict) views.push("stability");
+  const capped = result.flags.includes("ends-mid-pulse") || result.flags.includes("starts-mid-pulse");
+  if (views.length === 0 && capped && result.verdict === "marginal") views.push("record");
+  return views;
 }

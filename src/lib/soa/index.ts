@@ -14,6 +14,7 @@ export * from "./foster";
 export * from "./interpolate-curve";
 export * from "./policy";
 export * from "./repetition";
+export * from "./revision";
 export * from "./schema";
 export * from "./thermal-impedance";
 export * from "./thermal-rect";

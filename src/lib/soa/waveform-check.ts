@@ -15,6 +15,20 @@ export const MID_PULSE_SHARE = 0.01;
 /** Share of the record's largest |i| below which a sample is not read on the curves (probe noise, leakage). */
 export const READ_CURRENT_SHARE = 0.001;
 
+/**
+ * What came before a record (METHODS.md §6): the start given, else rest when p_0 < 0.01·p_peak and otherwise a
+ * settled level, decided by the engine (which caps the verdict). `startsMidPulse` whenever p_0 ≥ 0.01·p_peak.
+ */
+export function recordStart(
+  firstPower: number,
+  peakPower: number,
+  given?: RecordStart,
+): { start: RecordStart; decided: boolean; startsMidPulse: boolean } {
+  const startsMidPulse = peakPower > 0 && firstPower >= MID_PULSE_SHARE * peakPower;
+  if (given !== undefined) return { start: given, decided: false, startsMidPulse };
+  return { start: startsMidPulse ? "steady" : "rest", decided: startsMidPulse, startsMidPulse };
+}
+
 export interface WaveformReading {
   /** Largest v_n (V) and |i_n| (A), for the hard limits. */
   vMax: number;
@@ -75,14 +89,11 @@ export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating
     return reading;
   }
   const power = (k: number) => Math.max(v[k] * i[k], 0);
-  const midPulse = MID_PULSE_SHARE * peakPower;
-  const startsMid = power(0) >= midPulse;
-  if (startsMid) reading.flags |= FLAG_BIT["starts-mid-pulse"];
-  if (pulse.start === undefined && startsMid) {
-    reading.start = "steady";
-    reading.startDecided = true;
-  }
-  if (power(n - 1) >= midPulse) {
+  const begin = recordStart(power(0), peakPower, pulse.start);
+  if (begin.startsMidPulse) reading.flags |= FLAG_BIT["starts-mid-pulse"];
+  reading.start = begin.start;
+  reading.startDecided = begin.decided;
+  if (power(n - 1) >= MID_PULSE_SHARE * peakPower) {
     reading.endsMidPulse = true;
     reading.flags |= FLAG_BIT["ends-mid-pulse"];
   }

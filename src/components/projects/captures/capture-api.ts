@@ -13,6 +13,8 @@ export interface CaptureListItem {
   fileName: string;
   size: number;
   summary: CaptureSummary;
+  /** What came before the record, as stated at upload; null: the engine decided from the data. */
+  start: "rest" | "steady" | null;
   note: string | null;
   boardSerial: string | null;
   probe: string | null;

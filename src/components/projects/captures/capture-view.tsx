@@ -21,6 +21,12 @@ const junctionStyles = [
   { stroke: "var(--color-accent-strong)", dash: "9 3 2 3" },
 ];
 
+function startWords(start: "rest" | "steady" | null): string {
+  if (start === "rest") return "rest (as stated at upload)";
+  if (start === "steady") return "the first sample's level, settled (as stated at upload)";
+  return "rest, or from the first sample's level where the record begins mid-pulse";
+}
+
 function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
   return (
     <div className="rounded-md border border-line bg-panel px-3 py-2">
@@ -201,13 +207,32 @@ export function CaptureView({
           </tbody>
         </Table>
         <p className="mt-2 text-xs text-ink-muted">
-          Read on the curves as the equal-energy rectangle at peak power; the junction temperature runs from
-          rest at {q(caseTemp, "°C")} case through every sample where the part has a thermal model.
+          Every sample is read on the curves at its own voltage and at its own width (the record&apos;s energy
+          over its power, at most the record&apos;s length); the binding sample, marked on the traces, decided
+          the curve verdict. The junction temperature runs from {startWords(capture.start)} at{" "}
+          {q(caseTemp, "°C")} case through every sample, between samples included, where the part has a
+          thermal model.
         </p>
         <Caution className="mt-2" />
       </div>
 
-      <TraceCharts key={capture.id} panels={panels} span={[summary.tStart, summary.tEnd]} />
+      <TraceCharts
+        key={capture.id}
+        panels={panels}
+        span={[summary.tStart, summary.tEnd]}
+        marks={candidates.flatMap((c) => {
+          const result = verdictOf(c.partId);
+          if (!result?.at) return [];
+          return [
+            {
+              key: c.partId,
+              t: result.at.t,
+              verdict: result.verdict,
+              label: `${c.partNumber}: binding sample, ${q(result.at.v, "V")} × ${q(result.at.i, "A")}`,
+            },
+          ];
+        })}
+      />
     </div>
   );
 }

@@ -35,6 +35,7 @@ const pickerSchema = z
     vOffset: number("A number in V, e.g. 0"),
     iScale: number("A number, e.g. 0.1 for 100 mV/A").refine((n) => n !== 0, { message: "Not 0" }),
     iOffset: number("A number in A, e.g. 0"),
+    start: z.enum(["auto", "rest", "steady"]),
     boardSerial: z.string().max(80),
     probe: z.string().max(120),
     note: z.string().max(2000),
@@ -48,6 +49,8 @@ type PickerValues = z.input<typeof pickerSchema>;
 export type PickedCapture = {
   name: string;
   mapping: CaptureMapping;
+  /** What came before the record (METHODS.md §6); "auto": the engine decides from the data. */
+  start: "auto" | "rest" | "steady";
   boardSerial: string;
   probe: string;
   note: string;
@@ -104,6 +107,7 @@ export function ColumnPicker({
       vOffset: "0",
       iScale: String(suggested?.iScale ?? 1),
       iOffset: "0",
+      start: "auto",
       boardSerial: "",
       probe: "",
       note: "",
@@ -129,7 +133,14 @@ export function ColumnPicker({
       iScale: f.iScale,
       iOffset: f.iOffset,
     });
-    onPick({ name: f.name, mapping, boardSerial: f.boardSerial, probe: f.probe, note: f.note });
+    onPick({
+      name: f.name,
+      mapping,
+      start: f.start,
+      boardSerial: f.boardSerial,
+      probe: f.probe,
+      note: f.note,
+    });
   });
 
   const options = preview.columns.map((c) => (
@@ -322,6 +333,17 @@ export function ColumnPicker({
         <UnitField id="cap-board" label="Board serial" hint="Optional" {...register("boardSerial")} />
         <UnitField id="cap-probe" label="Probe" hint="Optional" {...register("probe")} />
         <UnitField id="cap-note" label="Note" hint="Optional" {...register("note")} />
+        <SelectField
+          id="cap-start"
+          label="Before the record"
+          className="sm:col-span-2"
+          hint="Whether the pulse was already under way when the record began. Let the data decide: a first sample at 1 % of the peak power or more counts as a settled level, and the verdict is then at best marginal."
+          {...register("start")}
+        >
+          <option value="auto">Let the data decide</option>
+          <option value="rest">Nothing flowed before (from rest)</option>
+          <option value="steady">A settled level (the first sample had flowed long enough to settle)</option>
+        </SelectField>
       </div>
       <FormActions
         aside={

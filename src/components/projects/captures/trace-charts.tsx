@@ -3,6 +3,7 @@
 import { scaleLinear } from "d3-scale";
 import { type PointerEvent, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/form";
+import { type Verdict, VerdictGlyph } from "@/components/verdict-shape";
 import { formatQuantity, type Unit } from "@/lib/soa/units";
 
 type Pair = [number | null, number | null];
@@ -14,6 +15,14 @@ export interface TraceSeries {
   y: Pair[];
   stroke: string;
   dash?: string;
+}
+
+/** A moment marked across every panel: a capture's binding sample for one candidate, say. */
+export interface TraceMark {
+  key: string;
+  t: number;
+  label: string;
+  verdict: Verdict;
 }
 
 export interface TracePanel {
@@ -87,7 +96,15 @@ function envelopePaths(
  * V, I, P and T_j panels against one shared time axis, each series drawn as its min/max envelope (no spike
  * between drawn points is lost). Drag across any panel to zoom all of them to that time span; "Reset zoom" returns.
  */
-export function TraceCharts({ panels, span }: { panels: TracePanel[]; span: [number, number] }) {
+export function TraceCharts({
+  panels,
+  span,
+  marks = [],
+}: {
+  panels: TracePanel[];
+  span: [number, number];
+  marks?: TraceMark[];
+}) {
   const { ref, width } = useWidth();
   const [domain, setDomain] = useState<[number, number]>(span);
   const [brush, setBrush] = useState<{ from: number; to: number } | null>(null);
@@ -238,6 +255,35 @@ export function TraceCharts({ panels, span }: { panels: TracePanel[]; span: [num
                         </g>
                       ))
                     : null}
+                  {marks
+                    .filter((m) => m.t >= domain[0] && m.t <= domain[1])
+                    .map((m, k) => (
+                      <g key={m.key} data-testid={index === 0 ? "binding-mark" : undefined}>
+                        <line
+                          x1={x(m.t)}
+                          x2={x(m.t)}
+                          y1={top}
+                          y2={top + PLOT_HEIGHT}
+                          stroke="var(--color-ink)"
+                          strokeWidth={1}
+                          strokeDasharray="3 2"
+                        />
+                        {index === 0 ? (
+                          <>
+                            <VerdictGlyph verdict={m.verdict} x={x(m.t)} y={top + 7 + 12 * k} size={8} />
+                            <text
+                              x={x(m.t) + (x(m.t) > MARGIN.left + plotWidth / 2 ? -7 : 7)}
+                              y={top + 10.5 + 12 * k}
+                              fontSize={10}
+                              textAnchor={x(m.t) > MARGIN.left + plotWidth / 2 ? "end" : "start"}
+                              fill="var(--color-ink)"
+                            >
+                              {m.label}
+                            </text>
+                          </>
+                        ) : null}
+                      </g>
+                    ))}
                   {brush ? (
                     <rect
                       x={Math.min(brush.from, brush.to)}

@@ -7,14 +7,23 @@ import { type ChartPulse, SoaChart } from "@/components/soa-chart";
 import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
 import { percent, q, repeatText, shapeWords } from "../format";
 
-/** The chart's markers for one candidate: every pulse with a point, in its verdict's shape, labelled by width. */
+/**
+ * The chart's markers for one candidate: every pulse with a point, in its verdict's shape, labelled by width; a
+ * capture at the sample that decided its verdict on this candidate.
+ */
 export function chartPulses(check: ProjectCheck, partId: string): ChartPulse[] {
   const results = check.results[partId] ?? {};
   return check.pulses.flatMap((p) => {
-    if (p.v === null || p.i === null || !(p.v > 0 && p.i > 0)) return [];
     const result = results[p.id];
+    // A capture is drawn at its binding sample for this candidate (METHODS.md §6), else at its peak-power sample.
+    const at = result?.at ?? null;
+    const v = at?.v ?? p.v;
+    const i = at?.i ?? p.i;
+    if (v === null || i === null || !(v > 0 && i > 0)) return [];
     const words = [
-      `${q(p.duration, "s")} ${shapeWords[p.kind]}`,
+      at
+        ? `binding sample at ${q(at.t, "s")}, read at ${at.width === null ? "unlimited width (DC)" : q(at.width, "s")}`
+        : `${q(p.duration, "s")} ${shapeWords[p.kind]}`,
       repeatText(p.repeat),
       result?.utilisation !== undefined && result.utilisation !== null
         ? `utilisation ${percent(result.utilisation)}`
@@ -24,8 +33,8 @@ export function chartPulses(check: ProjectCheck, partId: string): ChartPulse[] {
     return [
       {
         id: p.id,
-        v: p.v,
-        i: p.i,
+        v,
+        i,
         verdict: result?.verdict ?? "no-data",
         label: `${p.name}: ${words.join(", ")}`,
       },

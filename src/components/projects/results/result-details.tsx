@@ -1,6 +1,7 @@
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
+import { decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
+import type { PulseResult, Verdict } from "@/lib/soa/types";
 import type { CheckedPulse, ProjectCheck } from "../api";
 import { percent, q, repeatText, shapeWords, sourceWords } from "../format";
 
@@ -9,12 +10,25 @@ function pulseSentence(pulse: CheckedPulse, projectCaseTemp: number): string {
   const parts = [
     `${sourceWords[pulse.source]}, ${shapeWords[pulse.kind]}`,
     pulse.kind === "waveform"
-      ? `equal-energy rectangle ${q(pulse.v, "V")} × ${q(pulse.i, "A")} for ${q(pulse.duration, "s")}`
+      ? `every sample read at its own width; peak power at ${q(pulse.v, "V")} × ${q(pulse.i, "A")}, equal-energy width ${q(pulse.duration, "s")}`
       : `${q(pulse.v, "V")}, ${q(pulse.i, "A")}${pulse.kind === "triangle" ? " peak" : ""} for ${q(pulse.duration, "s")}`,
     repeatText(pulse.repeat) ?? "single pulse",
     `checked at ${q(pulse.caseTemp, "°C")} case${pulse.caseTemp !== projectCaseTemp ? " (the fault case's own temperature)" : ""}`,
   ];
   return `${parts.join("; ")}.`;
+}
+
+const viewVerdict = (verdict: Verdict | null, missing: string) =>
+  verdict === null ? (
+    <span className="font-sans text-ink-faint">{missing}</span>
+  ) : (
+    <VerdictBadge verdict={verdict} />
+  );
+
+/** The allowed current as read on the curves, before derating and the repetition scale. */
+function readingBefore(result: PulseResult): number | null {
+  if (result.allowedCurrent === null || !(result.derating > 0)) return null;
+  return result.allowedCurrent / result.derating / (result.repetitionScale ?? 1);
 }
 
 /** How every candidate's verdict for one pulse was found: the figures, the derating, and each flag in words. */
@@ -40,7 +54,47 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
               ) : (
                 <>
                   <p className="mt-1 text-ink-muted">{VERDICT_EXPLANATIONS[result.verdict]}</p>
+                  <p className="mt-1 text-xs" data-testid="decided-by">
+                    Decided by{" "}
+                    {decidingViews(result)
+                      .map((view) => VIEW_WORDS[view])
+                      .join(" and ")}
+                    .
+                  </p>
                   <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
+                    <dt className="text-ink-muted">Curves</dt>
+                    <dd>{viewVerdict(result.curveVerdict, "")}</dd>
+                    <dt className="text-ink-muted">Thermal</dt>
+                    <dd>{viewVerdict(result.thermalVerdict, "no thermal model")}</dd>
+                    <dt className="text-ink-muted">Stability</dt>
+                    <dd>{viewVerdict(result.stabilityVerdict, "not checked (needs transfer data)")}</dd>
+                    <dt className="text-ink-muted">Width read</dt>
+                    <dd className="num font-mono">
+                      {q(result.equivalentWidth, "s")}
+                      {pulse.kind !== "rect" ? (
+                        <span className="font-sans text-ink-faint"> (equal energy at peak power)</span>
+                      ) : null}
+                    </dd>
+                    {result.at ? (
+                      <>
+                        <dt className="text-ink-muted">Binding sample</dt>
+                        <dd className="num font-mono" data-testid="binding-sample">
+                          t = {q(result.at.t, "s")}: {q(result.at.v, "V")}, {q(result.at.i, "A")}, read at{" "}
+                          {result.at.width === null ? "unlimited width (DC)" : q(result.at.width, "s")}
+                        </dd>
+                      </>
+                    ) : null}
+                    <dt className="text-ink-muted">On the curves</dt>
+                    <dd className="num font-mono">
+                      {q(readingBefore(result), "A")}{" "}
+                      <span className="font-sans text-ink-faint">before derating</span>
+                    </dd>
+                    {result.repetitionScale !== null ? (
+                      <>
+                        <dt className="text-ink-muted">Repetition</dt>
+                        <dd className="num font-mono">×{result.repetitionScale.toFixed(3)}</dd>
+                      </>
+                    ) : null}
                     <dt className="text-ink-muted">
                       Allowed <Sym main="I" sub="D" />
                     </dt>

@@ -49,6 +49,7 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
           caseTemp: String(project.caseTemp),
           utilisationLimit: String(Number((project.utilisationLimit * 100).toPrecision(6))),
           tjGuard: String(project.tjGuard),
+          voltageLimit: String(Number((project.voltageLimit * 100).toPrecision(6))),
           betweenCurves: project.betweenCurves,
           ownerId: project.ownerId ?? "",
         }}

@@ -21,7 +21,7 @@ const limitsQuery = z.object({
       }
       return parsed.value;
     }),
-  policy: z.enum(["loglog", "next-longer"]).default("loglog"),
+  policy: z.enum(["loglog", "next-longer", "thermal"]).default("loglog"),
 });
 
 /**
@@ -40,7 +40,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (re
   if (!set) throw new AppError("not_found:curve-set", "This part has no SOA curves yet.");
   const limits = computeLimits(
     { refCaseTemp: set.refCaseTemp, curves: set.curves },
-    { tjMax: part.tjMax },
+    { tjMax: part.tjMax, foster: part.foster },
     parsed.data,
   );
   return json({ ...limits, findings: set.findings });

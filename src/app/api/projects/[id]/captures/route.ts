@@ -16,6 +16,11 @@ const registerSchema = z.object({
   uploadId: z.string().min(1),
   name: z.string().trim().min(1, { message: "Name the capture" }).max(120),
   mapping: captureMappingSchema,
+  // What came before the record (METHODS.md §6): "rest", "steady", or "auto" (the engine decides from the data).
+  start: z
+    .enum(["auto", "rest", "steady"], { message: "Choose what came before the record" })
+    .default("auto")
+    .transform((s) => (s === "auto" ? null : s)),
   note: optionalText(2000),
   boardSerial: optionalText(80),
   probe: optionalText(120),
@@ -28,7 +33,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
 });
 
 /**
- * POST /api/projects/:id/captures { uploadId, name, mapping, note, boardSerial, probe }: parses the uploaded CSV
+ * POST /api/projects/:id/captures { uploadId, name, mapping, start, note, boardSerial, probe }: parses the uploaded CSV
  * (streaming), stores its samples and summary, checks it against every candidate and e-mails the project's owner
  * if it fails or has no data on any of them. 201 with the capture's summary and its verdict per candidate.
  */

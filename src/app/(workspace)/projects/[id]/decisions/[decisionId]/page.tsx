@@ -16,6 +16,7 @@ import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
 import { computeDrift, type DecisionSnapshot, loadDecision, snapshotNow } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
+import { revisionOf } from "@/lib/soa/revision";
 
 export const metadata: Metadata = { title: "Decision" };
 
@@ -114,8 +115,16 @@ export default async function DecisionPage({
               <>
                 limit {percent(snapshot.policy.utilisationLimit)} · T<sub>j</sub> guard{" "}
                 {`${q(snapshot.policy.tjGuard, "")}\u2009K`}
+                {snapshot.policy.voltageLimit === undefined
+                  ? null
+                  : ` · voltage limit ${percent(snapshot.policy.voltageLimit)}`}
               </>
             ),
+          },
+          {
+            label: "Methods",
+            value: `revision ${revisionOf(snapshot)}`,
+            note: "the rules the evaluation was found under",
           },
         ]}
       />

@@ -11,8 +11,8 @@ type Params = { id: string; captureId: string };
 
 /**
  * GET /api/projects/:id/captures/:captureId: the capture's summary and drawn trace, and for each candidate with a
- * Foster network its junction temperature through the capture (from rest at the project's case temperature):
- * peak, when, and a trace decimated on the same buckets as the capture's.
+ * Foster network its junction temperature through the capture (at the project's case temperature, from the start the
+ * check uses): peak, when, and a trace decimated on the same buckets as the capture's.
  */
 export const GET = route<Params>({ action: "workspace.read" }, async (_req, caller, { id, captureId }) => {
   const project = await loadProject(caller, id);
@@ -33,7 +33,7 @@ export const GET = route<Params>({ action: "workspace.read" }, async (_req, call
       tjMax: part.tjMax,
       junction:
         samples && p && part.foster?.length
-          ? junctionTrace(samples.t, p, part.foster, project.caseTemp)
+          ? junctionTrace(samples.t, p, part.foster, project.caseTemp, { start: row.start })
           : null,
     })),
   });
