@@ -158,6 +158,7 @@ export function CaptureView({
               <Th numeric>
                 <Sym main="T" sub="j,peak" />
               </Th>
+              <Th>Binding sample</Th>
               <Th>How it was read</Th>
             </tr>
           </thead>
@@ -189,6 +190,21 @@ export function CaptureView({
                   <Td numeric>
                     {q(result?.tjPeak ?? c.junction?.tjPeak, "°C")}
                     {c.junction ? <span className="text-ink-faint"> / {q(c.tjMax, "°C")}</span> : null}
+                  </Td>
+                  <Td className="text-xs whitespace-nowrap" data-testid="binding-cell">
+                    {result?.at ? (
+                      <>
+                        <span className="num font-mono">
+                          {q(result.at.v, "V")} × {q(result.at.i, "A")}
+                        </span>
+                        <span className="block text-ink-faint">
+                          at {q(result.at.t, "s")}, read at{" "}
+                          {result.at.width === null ? "unlimited width" : q(result.at.width, "s")}
+                        </span>
+                      </>
+                    ) : (
+                      "—"
+                    )}
                   </Td>
                   <Td className="max-w-md py-1.5 text-xs whitespace-normal text-ink-muted">
                     {result?.flags.length ? (
