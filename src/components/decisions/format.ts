@@ -34,7 +34,12 @@ export function plural(count: number, noun: string): string {
   return `${count} ${noun}${count === 1 ? "" : "s"}`;
 }
 
-export const shapeWords = { rect: "rectangle", triangle: "falling triangle", waveform: "waveform" } as const;
+export const shapeWords = {
+  rect: "rectangle",
+  triangle: "falling triangle",
+  waveform: "waveform",
+  avalanche: "unclamped turn-off (avalanche)",
+} as const;
 
 /** A unit cost with its currency ("2.85 EUR"), or a dash. */
 export function money(value: number | null, currency: string | null): string {

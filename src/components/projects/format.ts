@@ -15,7 +15,12 @@ export const verdictWords: Record<Verdict, string> = {
   "no-data": "no data",
 };
 
-export const shapeWords = { rect: "rectangle", triangle: "falling triangle", waveform: "waveform" } as const;
+export const shapeWords = {
+  rect: "rectangle",
+  triangle: "falling triangle",
+  waveform: "waveform",
+  avalanche: "unclamped turn-off (avalanche)",
+} as const;
 
 export const sourceWords = { "fault-case": "fault case", measured: "measured", capture: "capture" } as const;
 

@@ -24,7 +24,9 @@ interface DemoFaultCase {
 function shaped(
   pulse: Pulse,
 ): Pick<DemoFaultCase, "kind" | "v" | "i" | "duration" | "repeatPeriod" | "repeatCount"> {
-  if (pulse.kind === "waveform") throw new Error("demo fault cases are rectangles or triangles");
+  if (pulse.kind === "waveform" || pulse.kind === "avalanche") {
+    throw new Error("demo fault cases are rectangles or triangles");
+  }
   return {
     kind: pulse.kind,
     v: pulse.v,

@@ -7,6 +7,7 @@ import type { FosterTerm } from "./foster";
 import { rectRise } from "./thermal-rect";
 import { trianglePeakRise } from "./thermal-triangle";
 import type {
+  AvalanchePulse,
   CheckRequest,
   Curve,
   PartLimits,
@@ -19,7 +20,11 @@ import type {
 } from "./types";
 
 /** A pulse without its id. */
-type Shape = Omit<RectPulse, "id"> | Omit<TrianglePulse, "id"> | Omit<WaveformPulse, "id">;
+type Shape =
+  | Omit<RectPulse, "id">
+  | Omit<TrianglePulse, "id">
+  | Omit<WaveformPulse, "id">
+  | Omit<AvalanchePulse, "id">;
 
 /**
  * METHODS.md §10 "across widths": 40 A at 1 ms, 16 A at 10 ms, flat over 1–100 V. Tj,max 175 °C, T_ref 25 °C.
@@ -654,5 +659,99 @@ describe("revision 2 rules", () => {
     const result = one(fullPart, rect(20, 30, 1e-3));
     expect(result).toMatchObject({ curveVerdict: "pass", thermalVerdict: "pass", stabilityVerdict: null });
     expect(result.stability).toBeNull();
+  });
+});
+
+// METHODS.md §12–§14 (revision 2): limits the datasheet curves do not show.
+describe("stability, avalanche and case heating", () => {
+  const transfer = {
+    temps: [25, 125] as [number, number],
+    curves: [
+      [
+        [3, 1],
+        [4, 20],
+      ],
+      [
+        [3, 3],
+        [4, 25],
+      ],
+    ] as [[number, number][], [number, number][]],
+  };
+  const stable: PartLimits = { ...utilisationPart, foster: twoTerms, transfer };
+
+  // Worked value, METHODS.md §10 "v2 instability": 5 A at 40 V for 10 ms, Z(10 ms) = 0.1380605 K/W → S = 0.241432.
+  it("computes S for a rectangle and a triangle, and flags thermal instability at S ≥ 1", () => {
+    const rect = one(stable, { kind: "rect", v: 40, i: 5, duration: 1e-2 });
+    expect(rect.stability).toBeCloseTo(0.241432, 6);
+    expect(rect.stabilityVerdict).toBe("pass");
+    // A triangle of 20 A peak over 20 ms reads t_eq = 10 ms and the largest α of 1–20 A: 0.0543034 A/K.
+    const tri = one(stable, { kind: "triangle", v: 40, i: 20, duration: 2e-2 });
+    expect(tri.stability).toBeCloseTo(40 * 0.0543034 * 0.1380605, 6);
+    // 5 A at 100 V for 1 s (Z → 0.5 K/W): S = 100·0.0437185·Z(1 s) > 1.
+    const hot = one({ ...stable, vdsMax: 200 }, { kind: "rect", v: 100, i: 5, duration: 1 });
+    expect(hot).toMatchObject({ stabilityVerdict: "fail", verdict: "fail" });
+    expect(hot.flags).toContain("thermal-instability");
+  });
+
+  it("says stability-outside-data where the transfer curves do not reach the current, and null without them", () => {
+    const outside = one(stable, { kind: "rect", v: 40, i: 30, duration: 1e-3 });
+    expect(outside).toMatchObject({ stability: null, stabilityVerdict: "no-data" });
+    expect(outside.flags).toContain("stability-outside-data");
+    expect(one(utilisationPart, { kind: "rect", v: 40, i: 5, duration: 1e-3 }).stabilityVerdict).toBeNull();
+    const { foster: _, ...noThermal } = stable;
+    expect(one(noThermal, { kind: "rect", v: 40, i: 5, duration: 1e-3 }).stabilityVerdict).toBeNull();
+  });
+
+  it("takes a capture's S as the largest over its read samples, each at its own width", () => {
+    const e = 1e-9;
+    const t = [0, e, 10e-3, 10e-3 + e];
+    const result = one(stable, { kind: "waveform", t, v: [40, 40, 40, 40], i: [0, 5, 5, 0] });
+    // Every sample carries 200 W; E = 2 J, so each is read at min(E/p, T_rec) = 10 ms (+1 ns).
+    expect(result.stability).toBeCloseTo(40 * 0.0437185 * 0.1380605, 5);
+  });
+
+  // Worked value, METHODS.md §10 "v2 avalanche".
+  it("checks an unclamped turn-off against E_AS derated for the starting temperature", () => {
+    const part: PartLimits = { ...utilisationPart, avalanche: { energy: 0.05, breakdown: 100, current: 30 } };
+    const result = one(part, { kind: "avalanche", inductance: 10e-6, current: 20, supply: 48 }, 100);
+    expect(result).toMatchObject({
+      allowedCurrent: null,
+      equivalentWidth: null,
+      derating: 0.5,
+      curveVerdict: "pass",
+      stabilityVerdict: null,
+      flags: ["avalanche"],
+    });
+    expect(result.utilisation).toBeCloseTo(0.153846, 6);
+    const over = one(part, { kind: "avalanche", inductance: 10e-6, current: 35, supply: 48 }, 100);
+    expect(over).toMatchObject({ curveVerdict: "fail", flags: ["avalanche", "over-avalanche-current"] });
+    expect(
+      one(utilisationPart, { kind: "avalanche", inductance: 1e-6, current: 5, supply: 12 }).curveVerdict,
+    ).toBe("no-data");
+    // With a thermal model the dumped power is a falling triangle of V_BR·I over t_av (METHODS.md §6).
+    const hot = one(
+      { ...part, foster: twoTerms },
+      { kind: "avalanche", inductance: 10e-6, current: 20, supply: 48 },
+      100,
+    );
+    expect(hot.tjPeak).toBeCloseTo(100 + trianglePeakRise(twoTerms, 2000, (10e-6 * 20) / 52), 9);
+  });
+
+  // METHODS.md §14 (derived by hand): 20 V × 12 A for 2 ms heats a one-term case path R = 0.05 K/W, τ = 1 ms by
+  // 240·0.05·(1 − e^(−2)) K; the curves are derated at the heated case and Tj adds the case rise.
+  it("derates at the heated case and adds the case rise to Tj with a case network", () => {
+    const caseNetwork = [{ r: 0.05, tau: 1e-3 }];
+    const pulses: Pulse[] = [{ id: "p", kind: "rect", v: 20, i: 12, duration: 2e-3 }];
+    const [result] = runCheck({
+      part: { ...utilisationPart, foster: twoTerms },
+      caseTemp: 100,
+      caseNetwork,
+      pulses,
+    }).results;
+    const caseRise = 240 * 0.05 * (1 - Math.exp(-2));
+    expect(result.derating).toBeCloseTo((175 - 100 - caseRise) / 150, 12);
+    const junctionRise = twoTerms.reduce((sum, { r, tau }) => sum + 240 * r * (1 - Math.exp(-2e-3 / tau)), 0);
+    expect(result.tjPeak).toBeCloseTo(100 + junctionRise + caseRise, 9);
+    expect(result.flags).toContain("case-heating");
   });
 });

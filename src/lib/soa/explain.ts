@@ -77,6 +77,24 @@ export const FLAG_EXPLANATIONS: Readonly<Record<Flag, string>> = {
   "repetition-outside-data":
     "The pulse repeats, but the thermal data do not reach the times needed to work out how the repetitions " +
     "add up. Add a thermal model (Foster network) to the part, or curves that span the period.",
+  "thermal-instability":
+    "The stability factor S = V·α·Z_th is 1 or more: at this voltage and current, where the current rises with " +
+    "temperature (below the transfer characteristic's zero-temperature-coefficient point), heating feeds more " +
+    "current faster than the junction sheds it, and a hot spot can run away. Many datasheet SOA curves do not " +
+    "show this limit. The factor rests on the typical transfer curves entered; parts vary.",
+  "stability-outside-data":
+    "The stability factor needs the transfer characteristics at this current, and the curves entered do not " +
+    "reach it (or not at both temperatures), so nothing is said about electro-thermal stability here.",
+  avalanche:
+    "An unclamped inductive turn-off: the inductor's energy is dumped in the transistor at breakdown. It is " +
+    "checked against the avalanche energy rating derated linearly to zero at Tj,max for the starting " +
+    "temperature; where the part gives no breakdown voltage, V_DSS is used, which overstates the energy.",
+  "over-avalanche-current":
+    "The current cut exceeds the part's avalanche current rating. That is a fail whatever the energy.",
+  "case-heating":
+    "The case heats during the pulse through the case path given. The curves are derated at the hottest case " +
+    "temperature the pulse reaches, and the junction temperature adds the case rise. Both networks are driven " +
+    "by the full power, which overstates the case rise; that is on the safe side.",
 };
 
 export const VERDICT_EXPLANATIONS: Readonly<Record<Verdict, string>> = {

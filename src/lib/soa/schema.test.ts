@@ -267,13 +267,13 @@ describe("validateCheckRequest", () => {
       "an unknown pulse kind",
       broken((r) => ((r.pulses as Json)[1].kind = "sine")),
       "pulses[1].kind",
-      'unknown pulse kind the string "sine": expected "rect", "triangle" or "waveform"',
+      'unknown pulse kind the string "sine": expected "rect", "triangle", "waveform" or "avalanche"',
     ],
     [
       "a missing pulse kind",
       broken((r) => delete (r.pulses as Json)[1].kind),
       "pulses[1].kind",
-      'is required: expected "rect", "triangle" or "waveform"',
+      'is required: expected "rect", "triangle", "waveform" or "avalanche"',
     ],
     ["an empty id", broken((r) => ((r.pulses as Json)[0].id = " ")), "pulses[0].id", "must not be empty"],
     [

@@ -62,6 +62,35 @@ const curveSet = object({
   curves: array(curve).min(1, { error: "at least one curve is required" }),
 });
 
+// Transfer characteristics (METHODS.md §12): exactly two temperatures and two curves of at least two points each;
+// the order of points is checked with the relations below.
+const transfer = object({
+  temps: z.tuple([finite(), finite()], {
+    error: (issue) =>
+      issue.code === "invalid_type"
+        ? expected("two temperatures [Ta, Tb]")(issue)
+        : "exactly two temperatures [Ta, Tb]",
+  }),
+  curves: z.tuple(
+    [
+      array(point).min(2, { error: "a transfer curve needs at least two points [vgs, id]" }),
+      array(point).min(2, { error: "a transfer curve needs at least two points [vgs, id]" }),
+    ],
+    {
+      error: (issue) =>
+        issue.code === "invalid_type"
+          ? expected("two curves")(issue)
+          : "exactly two curves, one per temperature",
+    },
+  ),
+});
+
+const avalancheRating = object({
+  energy: positive(),
+  current: positive().optional(),
+  breakdown: positive().optional(),
+});
+
 const part = object({
   vdsMax: positive(),
   tjMax: finite(),
@@ -70,6 +99,8 @@ const part = object({
   rthJc: positive().optional(),
   foster: array(fosterTerm).min(1, { error: "a Foster network needs at least one term" }).optional(),
   soa: curveSet,
+  transfer: transfer.optional(),
+  avalanche: avalancheRating.optional(),
 });
 
 const policy = object({
@@ -135,11 +166,19 @@ const waveform = object({
     .optional(),
 });
 
-const pulse = z.discriminatedUnion("kind", [rect, triangle, waveform], {
+const avalanchePulse = object({
+  id,
+  kind: z.literal("avalanche"),
+  inductance: positive(),
+  current: positive(),
+  supply: finite().gte(0, { error: (issue) => `must be 0 V or more, got ${issue.input}` }),
+});
+
+const pulse = z.discriminatedUnion("kind", [rect, triangle, waveform, avalanchePulse], {
   error: (issue) => {
     if (issue.code !== "invalid_union") return expected("an object")(issue);
     const kind = (issue.input as { kind?: unknown } | undefined)?.kind;
-    const known = `expected "rect", "triangle" or "waveform"`;
+    const known = `expected "rect", "triangle", "waveform" or "avalanche"`;
     return kind === undefined ? `is required: ${known}` : `unknown pulse kind ${show(kind)}: ${known}`;
   },
 });
@@ -195,6 +234,26 @@ function relations(request: CheckRequest): Issue | null {
       seen.set(points[p][0], p);
     }
   }
+  if (part.transfer !== undefined) {
+    const [ta, tb] = part.transfer.temps;
+    if (!(ta < tb)) return issue(["part", "transfer", "temps"], `Ta must be below Tb, got [${ta}, ${tb}]`);
+    for (let c = 0; c < 2; c++) {
+      const points = part.transfer.curves[c];
+      for (let p = 1; p < points.length; p++) {
+        for (const [axis, name] of [
+          [0, "V_GS"],
+          [1, "I_D"],
+        ] as const) {
+          if (!(points[p][axis] > points[p - 1][axis])) {
+            return issue(
+              ["part", "transfer", "curves", c, p],
+              `${name} must increase strictly in the order given: ${points[p][axis]} does not follow ${points[p - 1][axis]}`,
+            );
+          }
+        }
+      }
+    }
+  }
   const ids = new Map<string, number>();
   for (let k = 0; k < pulses.length; k++) {
     const pulse = pulses[k];
@@ -225,6 +284,14 @@ function relations(request: CheckRequest): Issue | null {
           );
         }
       }
+    } else if (pulse.kind === "avalanche") {
+      const breakdown = part.avalanche?.breakdown ?? part.vdsMax;
+      if (!(pulse.supply < breakdown)) {
+        return issue(
+          ["pulses", k, "supply"],
+          `must be below the breakdown voltage (${breakdown} V${part.avalanche?.breakdown === undefined ? ", V_DSS" : ""}), got ${pulse.supply} V`,
+        );
+      }
     } else if (pulse.repeat !== undefined && !(pulse.repeat.period > pulse.duration)) {
       return issue(
         ["pulses", k, "repeat", "period"],
@@ -239,6 +306,7 @@ function relations(request: CheckRequest): Issue | null {
 export const checkRequestSchema: z.ZodType<CheckRequest> = object({
   part,
   caseTemp: finite(),
+  caseNetwork: array(fosterTerm).min(1, { error: "a Foster network needs at least one term" }).optional(),
   policy: policy.optional(),
   pulses: array(pulse),
 }).check((payload) => {

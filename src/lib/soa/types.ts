@@ -17,6 +17,22 @@ export interface CurveSet {
   curves: Curve[];
 }
 
+/**
+ * Typical transfer characteristics I_D(V_GS) at two junction temperatures Ta < Tb (METHODS §12): each curve a list
+ * of [V_GS, I_D] points, V_GS and I_D strictly ascending.
+ */
+export interface TransferData {
+  temps: [number, number];
+  curves: [[number, number][], [number, number][]];
+}
+
+/** Avalanche ratings (METHODS §13): E_AS in J at 25 °C start, optionally I_AS (A) and V_BR (V, default V_DSS). */
+export interface AvalancheRating {
+  energy: number;
+  current?: number;
+  breakdown?: number;
+}
+
 /** The ratings of a part that a check needs. `foster` is the junction-to-case thermal model. */
 export interface PartLimits {
   vdsMax: number;
@@ -26,6 +42,8 @@ export interface PartLimits {
   rthJc?: number;
   foster?: FosterTerm[];
   soa: CurveSet;
+  transfer?: TransferData;
+  avalanche?: AvalancheRating;
 }
 
 /** How to read the curves between two digitised pulse widths (METHODS §3). */
@@ -84,12 +102,23 @@ export interface WaveformPulse {
   start?: RecordStart;
 }
 
-export type Pulse = RectPulse | TrianglePulse | WaveformPulse;
+/** An inductive current cut with no clamp below breakdown (METHODS §13): L (H), I (A) and supply V_DD (V). */
+export interface AvalanchePulse {
+  id: string;
+  kind: "avalanche";
+  inductance: number;
+  current: number;
+  supply: number;
+}
+
+export type Pulse = RectPulse | TrianglePulse | WaveformPulse | AvalanchePulse;
 export type PulseKind = Pulse["kind"];
 
 export interface CheckRequest {
   part: PartLimits;
   caseTemp: number;
+  /** Foster network from case to ambient (METHODS §14): the case heats with the pulse's power. */
+  caseNetwork?: FosterTerm[];
   policy?: Policy;
   pulses: Pulse[];
 }
@@ -116,6 +145,11 @@ export const FLAGS = [
   "ends-mid-pulse",
   "repetition-applied",
   "repetition-outside-data",
+  "thermal-instability",
+  "stability-outside-data",
+  "avalanche",
+  "over-avalanche-current",
+  "case-heating",
 ] as const;
 
 export type Flag = (typeof FLAGS)[number];
