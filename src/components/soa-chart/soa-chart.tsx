@@ -23,10 +23,11 @@ const snapDistance = 10;
 
 /** A finding's place on the chart: its curve's current at its voltage (the curve's end beyond its range). */
 export function findingPoint(finding: ChartFinding, lines: ChartLine[]): [number, number] | null {
-  if (!("v" in finding.location)) return null;
-  const line = lines.find((l) => l.kind === "curve" && l.duration === finding.curve.duration);
+  const { location, curve } = finding;
+  if (location === undefined || curve === undefined || !("v" in location)) return null;
+  const line = lines.find((l) => l.kind === "curve" && l.duration === curve.duration);
   if (!line || line.points.length === 0) return null;
-  const v = finding.location.v;
+  const v = location.v;
   const value = interpolateCurve(line.points, v).current;
   return value === null ? line.points[line.points.length - 1] : [v, value];
 }

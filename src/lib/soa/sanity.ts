@@ -1,0 +1,78 @@
+// Physical sanity limits for values entering Pulsefence (forms, CSV, paste, API, contract). A value beyond a
+// part's ratings is still evidence (a pulse that exceeded V(BR)DSS happened and must be shown as such), but a value
+// beyond these limits is a slip (a wrong prefix, a unit in the wrong column) and is refused with a message that
+// says so. The limits are deliberately wide: no power transistor circuit on a bench reaches them. Decisions:
+// - NaN, ±∞, zero and negatives are the callers' concern (they already demand finite values > 0); `saneValue`
+//   checks only the range and answers null for a value inside it;
+// - temperatures have their own display range: a computed Tj outside it is shown as off scale, not as digits.
+import { formatQuantity, type Unit } from "./units";
+
+export type SaneQuantity =
+  | "voltage"
+  | "current"
+  | "time"
+  | "frequency"
+  | "resistance"
+  | "thermal-resistance"
+  | "temperature";
+
+interface Range {
+  min: number;
+  max: number;
+  unit: Unit;
+  /** How a message names the quantity. */
+  noun: string;
+}
+
+/** The sane range of every quantity that enters the product, in SI units (°C for temperatures). */
+export const SANITY_LIMITS: Readonly<Record<SaneQuantity, Range>> = {
+  voltage: { min: 1e-6, max: 100e3, unit: "V", noun: "a voltage" },
+  current: { min: 1e-9, max: 1e6, unit: "A", noun: "a current" },
+  time: { min: 1e-12, max: 1e6, unit: "s", noun: "a time" },
+  frequency: { min: 1e-6, max: 1e12, unit: "Hz", noun: "a frequency" },
+  resistance: { min: 1e-6, max: 10e3, unit: "Ω", noun: "an on-resistance" },
+  "thermal-resistance": { min: 1e-4, max: 1e4, unit: "K/W", noun: "a thermal resistance" },
+  temperature: { min: -273.15, max: 1000, unit: "°C", noun: "a temperature" },
+};
+
+/** Computed junction temperatures outside this range are shown as off scale (°C). */
+export const TEMPERATURE_DISPLAY_RANGE = { min: -100, max: 2000 } as const;
+
+/**
+ * Null for a value within the sane range of its quantity, else the message that refuses it, e.g. "1 GV is above
+ * 100 kV, the most a voltage can be here: check the prefix and the unit". Non-finite values answer null.
+ */
+export function saneValue(value: number, quantity: SaneQuantity): string | null {
+  if (!Number.isFinite(value)) return null;
+  const { min, max, unit, noun } = SANITY_LIMITS[quantity];
+  const shown = (x: number) => formatQuantity(x, unit);
+  if (value > max)
+    return `${shown(value)} is above ${shown(max)}, the most ${noun} can be here: check the prefix and the unit`;
+  if (value < min && (quantity === "temperature" || value > 0))
+    return `${shown(value)} is below ${shown(min)}, the least ${noun} can be here: check the prefix and the unit`;
+  return null;
+}
+
+/** A part's ratings a pulse can exceed while still being evidence. */
+export interface RatedLimits {
+  vdsMax: number;
+  idPulseMax?: number | null;
+  idMax?: number | null;
+}
+
+/**
+ * What of a pulse lies beyond the part's ratings, in words ("V_DS 120 V above V(BR)DSS 100 V"); empty when within.
+ * The pulse is still checked: these flags say that the check's curves do not reach it.
+ */
+export function beyondRatings(pulse: { v: number; i: number }, part: RatedLimits): string[] {
+  const out: string[] = [];
+  if (pulse.v > part.vdsMax) {
+    out.push(`V_DS ${formatQuantity(pulse.v, "V")} above V(BR)DSS ${formatQuantity(part.vdsMax, "V")}`);
+  }
+  const iMax = part.idPulseMax ?? part.idMax ?? null;
+  if (iMax !== null && pulse.i > iMax) {
+    const name = part.idPulseMax != null ? "I_DM" : "I_D";
+    out.push(`I_D ${formatQuantity(pulse.i, "A")} above ${name} ${formatQuantity(iMax, "A")}`);
+  }
+  return out;
+}
