@@ -481,7 +481,7 @@ describe("examples and help", () => {
 
   test("the help names both shapes, the separators and the limit", () => {
     const help = curveCsvHelp.join(" ");
-    for (const words of ["5 MB", "Table form", "Digitiser form", "semicolon", "Decimal commas", "DC"]) {
+    for (const words of ["5 MB", "Table form", "Paired columns", "semicolon", "Decimal commas", "DC"]) {
       expect(help).toContain(words);
     }
   });

@@ -12,13 +12,14 @@ describe("saneValue", () => {
     expect(saneValue(2e6, "time")).toContain("the most a time can be");
   });
 
-  it("accepts values inside the limits, at the limits, and leaves NaN, zero and negatives to the caller", () => {
+  it("accepts values inside the limits, at the limits, and leaves NaN and zero to the caller", () => {
     expect(saneValue(2500, "current")).toBeNull();
     expect(saneValue(SANITY_LIMITS.voltage.max, "voltage")).toBeNull();
     expect(saneValue(SANITY_LIMITS.time.min, "time")).toBeNull();
     expect(saneValue(Number.NaN, "voltage")).toBeNull();
     expect(saneValue(0, "time")).toBeNull();
     expect(saneValue(-5, "current")).toBeNull();
+    expect(saneValue(-1e9, "voltage")).toContain("above 100\u2009kV");
   });
 
   it("treats temperatures on their own scale, negatives included", () => {

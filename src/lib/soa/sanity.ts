@@ -2,8 +2,8 @@
 // part's ratings is still evidence (a pulse that exceeded V(BR)DSS happened and must be shown as such), but a value
 // beyond these limits is a slip (a wrong prefix, a unit in the wrong column) and is refused with a message that
 // says so. The limits are deliberately wide: no power transistor circuit on a bench reaches them. Decisions:
-// - NaN, ±∞, zero and negatives are the callers' concern (they already demand finite values > 0); `saneValue`
-//   checks only the range and answers null for a value inside it;
+// - NaN, ±∞ and zero are the callers' concern (they already demand finite values); `saneValue` checks the
+//   magnitude of a negative value (an offset of −1 GV is as absurd as +1 GV) and answers null inside the range;
 // - temperatures have their own display range: a computed Tj outside it is shown as off scale, not as digits.
 import { formatQuantity, type Unit } from "./units";
 
@@ -30,7 +30,7 @@ export const SANITY_LIMITS: Readonly<Record<SaneQuantity, Range>> = {
   current: { min: 1e-9, max: 1e6, unit: "A", noun: "a current" },
   time: { min: 1e-12, max: 1e6, unit: "s", noun: "a time" },
   frequency: { min: 1e-6, max: 1e12, unit: "Hz", noun: "a frequency" },
-  resistance: { min: 1e-6, max: 10e3, unit: "Ω", noun: "an on-resistance" },
+  resistance: { min: 1e-6, max: 1e9, unit: "Ω", noun: "a resistance" },
   "thermal-resistance": { min: 1e-4, max: 1e4, unit: "K/W", noun: "a thermal resistance" },
   temperature: { min: -273.15, max: 1000, unit: "°C", noun: "a temperature" },
 };

@@ -112,7 +112,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         <Section
           id="upload"
           title="Upload a curve set"
-          description="Digitise the datasheet's SOA figure with any plotting digitiser and upload it as CSV."
+          description="Trace the datasheet's SOA figure into V_DS, I_D points and upload them as CSV: a table or paired columns."
         >
           <CurveUpload partId={part.id} />
         </Section>
