@@ -65,7 +65,9 @@ export function CurveSetRevisions({
                 <Td className="max-w-64 truncate font-medium" title={set.fileName}>
                   {set.fileName}
                 </Td>
-                <Td className="text-ink-muted">{set.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long}</Td>
+                <Td className="text-ink-muted">
+                  {set.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long}
+                </Td>
                 <Td numeric>{sizeText(set.size)}</Td>
                 <Td>{set.uploadedBy ?? <span className="text-ink-faint">—</span>}</Td>
                 <Td numeric>

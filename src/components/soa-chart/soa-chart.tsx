@@ -9,7 +9,7 @@ import { formatQuantity } from "@/lib/soa/units";
 import { useChartColours } from "./chart-colours";
 import { ChartExport } from "./chart-export-buttons";
 import { ChartLegend, FindingMark, legendRows } from "./chart-legend";
-import { buildLines, type ChartLine, chartDomains, chartLayout, textWidth } from "./chart-model";
+import { buildLines, type ChartLine, chartDomains, chartLayout, placePulse, textWidth } from "./chart-model";
 import { type Readout, ReadoutBox, Sym } from "./chart-readout";
 import { placeLabels } from "./label-layout";
 import { LogGrid, SubscriptLabel } from "./log-grid";
@@ -66,7 +66,7 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
     () => buildLines({ title, curves, derated, interpolated }, colours),
     [title, curves, derated, interpolated, colours],
   );
-  const domains = useMemo(() => chartDomains({ title, curves, pulses }), [title, curves, pulses]);
+  const domains = useMemo(() => chartDomains({ curves, pulses }), [curves, pulses]);
   const rows = useMemo(
     () => legendRows({ title, curves, derated, findings, pulses, refCaseTemp }, lines, colours),
     [title, curves, derated, findings, pulses, refCaseTemp, lines, colours],
@@ -259,27 +259,53 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
           )}
         </g>
         <g data-layer="pulses">
-          {(pulses ?? []).map((pulse) => (
-            <g
-              key={pulse.id}
-              data-pulse={pulse.id}
-              onPointerEnter={() =>
-                setReadout({
-                  left: x(pulse.v),
-                  top: y(pulse.i),
-                  title: `${pulse.label} (${pulse.verdict === "no-data" ? "no data" : pulse.verdict})`,
-                  rows: [
-                    { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
-                    { label: Sym.id, value: formatQuantity(pulse.i, "A") },
-                    { label: Sym.p, value: formatQuantity(pulse.v * pulse.i, "W") },
-                  ],
-                })
-              }
-              onPointerLeave={() => setReadout(null)}
-            >
-              <VerdictGlyph verdict={pulse.verdict} x={x(pulse.v)} y={y(pulse.i)} size={10} />
-            </g>
-          ))}
+          {(pulses ?? []).map((pulse) => {
+            const at = placePulse(pulse, domains);
+            const off = at.off.v || at.off.i;
+            const px = x(at.v);
+            const py = y(at.i);
+            const value = [
+              at.off.v ? formatQuantity(pulse.v, "V") : null,
+              at.off.i ? formatQuantity(pulse.i, "A") : null,
+            ]
+              .filter(Boolean)
+              .join(", ");
+            return (
+              <g
+                key={pulse.id}
+                data-pulse={pulse.id}
+                data-off-scale={off ? "true" : undefined}
+                onPointerEnter={() =>
+                  setReadout({
+                    left: px,
+                    top: py,
+                    title: `${pulse.label} (${pulse.verdict === "no-data" ? "no data" : pulse.verdict})${off ? ", off scale" : ""}`,
+                    rows: [
+                      { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
+                      { label: Sym.id, value: formatQuantity(pulse.i, "A") },
+                      { label: Sym.p, value: formatQuantity(pulse.v * pulse.i, "W") },
+                    ],
+                  })
+                }
+                onPointerLeave={() => setReadout(null)}
+              >
+                <VerdictGlyph verdict={pulse.verdict} x={px} y={py} size={10} />
+                {off ? (
+                  <OffScaleMark
+                    x={px}
+                    y={py}
+                    right={at.off.v && pulse.v > at.v}
+                    up={at.off.i && pulse.i > at.i}
+                    horizontal={at.off.v}
+                    vertical={at.off.i}
+                    text={`${value} off scale`}
+                    plot={plot}
+                    colour={colours.ink}
+                  />
+                ) : null}
+              </g>
+            );
+          })}
         </g>
         <ChartLegend
           rows={rows}
@@ -292,5 +318,57 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
       </XYChart>
       {readout ? <ReadoutBox readout={readout} frameWidth={layout.width} /> : null}
     </>
+  );
+}
+
+/** A 12 px arrow starting 7 px from (x, y) in the direction (dx, dy), with a 4 px head. */
+function arrow(x: number, y: number, dx: number, dy: number): string {
+  const length = Math.hypot(dx, dy) || 1;
+  const [ux, uy] = [dx / length, dy / length];
+  const [sx, sy] = [x + ux * 7, y + uy * 7];
+  const [ex, ey] = [sx + ux * 12, sy + uy * 12];
+  const [px, py] = [-uy, ux];
+  const head = (side: number) =>
+    `M${ex},${ey} L${ex - ux * 4 + px * 4 * side},${ey - uy * 4 + py * 4 * side}`;
+  return `M${sx},${sy} L${ex},${ey} ${head(1)} ${head(-1)}`;
+}
+
+/** An arrow from a pulse held at the edge toward where it really lies, with its value, kept inside the plot. */
+function OffScaleMark({
+  x,
+  y,
+  right,
+  up,
+  horizontal,
+  vertical,
+  text,
+  plot,
+  colour,
+}: {
+  x: number;
+  y: number;
+  right: boolean;
+  up: boolean;
+  horizontal: boolean;
+  vertical: boolean;
+  text: string;
+  plot: { left: number; top: number; width: number; height: number };
+  colour: string;
+}) {
+  const dx = horizontal ? (right ? 1 : -1) : 0;
+  const dy = vertical ? (up ? -1 : 1) : 0;
+  const width = textWidth(text);
+  const labelX = Math.min(plot.left + plot.width - width - 2, Math.max(plot.left + 2, x - width / 2));
+  const labelY = Math.min(
+    plot.top + plot.height - 6,
+    Math.max(plot.top + 12, y + (dy === 0 ? -12 : -dy * 16)),
+  );
+  return (
+    <g data-off-scale-mark>
+      <path d={arrow(x, y, dx, dy)} stroke={colour} strokeWidth={1.5} fill="none" />
+      <text x={labelX} y={labelY} fontSize={11} fill={colour}>
+        {text}
+      </text>
+    </g>
   );
 }

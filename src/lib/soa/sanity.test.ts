@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { beyondRatings, SANITY_LIMITS, saneValue } from "./sanity";
+import { beyondRatings, formatTemperature, SANITY_LIMITS, saneValue } from "./sanity";
 
 describe("saneValue", () => {
   it("refuses issue 12's absurd inputs with the limit and a hint", () => {
@@ -41,5 +41,14 @@ describe("beyondRatings", () => {
       "I_D 150\u2009A above I_D 100\u2009A",
     ]);
     expect(beyondRatings({ v: 50, i: 10 }, { vdsMax: 100 })).toEqual([]);
+  });
+});
+
+describe("formatTemperature", () => {
+  it("shows issue 12's runaway Tj as off scale, not as eleven digits", () => {
+    expect(formatTemperature(25644501323)).toBe("off scale (above 2000\u2009°C)");
+    expect(formatTemperature(-500)).toBe("off scale (below -100\u2009°C)");
+    expect(formatTemperature(148.26)).toBe("148\u2009°C");
+    expect(formatTemperature(Number.NaN)).toBe("—");
   });
 });

@@ -46,10 +46,11 @@ export function saneValue(value: number, quantity: SaneQuantity): string | null 
   if (!Number.isFinite(value)) return null;
   const { min, max, unit, noun } = SANITY_LIMITS[quantity];
   const shown = (x: number) => formatQuantity(x, unit);
-  if (value > max)
-    return `${shown(value)} is above ${shown(max)}, the most ${noun} can be here: check the prefix and the unit`;
-  if (value < min && (quantity === "temperature" || value > 0))
-    return `${shown(value)} is below ${shown(min)}, the least ${noun} can be here: check the prefix and the unit`;
+  const size = quantity === "temperature" ? value : Math.abs(value);
+  const hint = "check the prefix and the unit";
+  if (size > max) return `${shown(value)} is above ${shown(max)}, the most ${noun} can be here: ${hint}`;
+  if (size < min && (quantity === "temperature" || size > 0))
+    return `${shown(value)} is below ${shown(min)}, the least ${noun} can be here: ${hint}`;
   return null;
 }
 
@@ -75,4 +76,16 @@ export function beyondRatings(pulse: { v: number; i: number }, part: RatedLimits
     out.push(`I_D ${formatQuantity(pulse.i, "A")} above ${name} ${formatQuantity(iMax, "A")}`);
   }
   return out;
+}
+
+/**
+ * A temperature for display: "148 °C", or "off scale (above 2000 °C)" outside TEMPERATURE_DISPLAY_RANGE, so that a
+ * runaway thermal result reads as what it is rather than as eleven digits. NaN and ±∞ are "—".
+ */
+export function formatTemperature(t: number): string {
+  if (!Number.isFinite(t)) return "—";
+  const { min, max } = TEMPERATURE_DISPLAY_RANGE;
+  if (t > max) return `off scale (above ${formatQuantity(max, "°C")})`;
+  if (t < min) return `off scale (below ${formatQuantity(min, "°C")})`;
+  return formatQuantity(t, "°C");
 }
