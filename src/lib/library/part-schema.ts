@@ -132,14 +132,14 @@ export const partSchema = z
     datasheetRevision: optionalText(80),
     notes: optionalText(2000),
   })
-  .superRefine((part, ctx) => {
-    if (part.unitCost !== undefined && !part.currency) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["currency"],
-        message: "Give the currency of the cost (e.g. EUR)",
-      });
-    }
+  .refine((part) => part.unitCost === undefined || Boolean(part.currency), {
+    path: ["currency"],
+    message: "Give the currency of the cost (e.g. EUR)",
+    // Checked even while other fields are wrong, so that every error shows at once.
+    when: (payload) => {
+      const raw = payload.value as { unitCost?: unknown; currency?: unknown };
+      return raw.unitCost !== undefined && raw.unitCost !== "" && raw.unitCost !== null;
+    },
   });
 
 export type PartInput = z.input<typeof partSchema>;
