@@ -366,7 +366,15 @@ function OffScaleMark({
   return (
     <g data-off-scale-mark>
       <path d={arrow(x, y, dx, dy)} stroke={colour} strokeWidth={1.5} fill="none" />
-      <text x={labelX} y={labelY} fontSize={11} fill={colour}>
+      <text
+        x={labelX}
+        y={labelY}
+        fontSize={11}
+        fill={colour}
+        stroke="var(--color-panel)"
+        strokeWidth={3}
+        paintOrder="stroke"
+      >
         {text}
       </text>
     </g>
