@@ -108,7 +108,10 @@ function within(value: number, [lo, hi]: readonly [number, number], decades: num
  * the data's decades, and a pulse further out is marked at the edge (see `placePulse`) instead of stretching every
  * chart to eight decades. Without curves the pulses set the decades. Derated lines are clipped.
  */
-export function chartDomains(props: Pick<SoaChartProps, "curves" | "pulses">) {
+export function chartDomains(props: {
+  curves: readonly Pick<ChartCurve, "points">[];
+  pulses?: readonly { v: number; i: number }[];
+}) {
   const points = props.curves.flatMap((c) => c.points);
   const pulses = props.pulses ?? [];
   const base = {
