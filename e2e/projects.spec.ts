@@ -77,7 +77,7 @@ test("an engineer builds an inrush fault case; a technician logs bench pulses an
       "pass",
     );
     await projects.results.getByRole("button", { name: /Pre-charge inrush/ }).click();
-    await expect(page.getByTestId("result-details")).toContainText("same energy");
+    await expect(page.getByTestId("result-details")).toContainText("energy divided by its peak power");
     await shell.signOut();
   });
 

@@ -97,7 +97,7 @@ async function seedParts(workspaceId: string, engineerId: string): Promise<void>
       .values({ workspaceId, userId: engineerId, objectKey, fileName, purpose: "curve-set" })
       .returning();
     await store.put(objectKey, csv, { contentType: "text/csv" });
-    await registerCurveSet(store, { part, userId: engineerId, upload });
+    await registerCurveSet(store, { part, userId: engineerId, userName: "seed", upload });
   }
 }
 

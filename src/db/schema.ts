@@ -167,6 +167,13 @@ export interface ThermalSource {
   maxRelativeError?: number;
 }
 
+/** A curve-set finding a lead accepted when verifying the part: the finding's key and message, and why. */
+export interface FindingAcceptance {
+  key: string;
+  message: string;
+  reason: string;
+}
+
 /** A transistor of the workspace's library. Ratings in SI units (V, A, Ω, °C, K/W). */
 export const parts = pgTable(
   "parts",
@@ -194,6 +201,8 @@ export const parts = pgTable(
     status: partStatusEnum().notNull().default("draft"),
     verifiedBy: uuid().references(() => users.id, { onDelete: "set null" }),
     verifiedAt: timestamp({ withTimezone: true }),
+    /** The findings the verifier accepted, each with a reason; cleared when the part returns to draft. */
+    acceptedFindings: jsonb().$type<FindingAcceptance[]>().notNull().default([]),
     archivedAt: timestamp({ withTimezone: true }),
     createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

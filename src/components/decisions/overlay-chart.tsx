@@ -4,11 +4,17 @@ import { scaleLog } from "d3-scale";
 import { type PointerEvent, useId, useMemo, useState } from "react";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { ChartExport } from "@/components/soa-chart/chart-export-buttons";
-import { chartLayout, LEGEND_ROW, textWidth } from "@/components/soa-chart/chart-model";
+import {
+  chartDomains,
+  chartLayout,
+  LEGEND_ROW,
+  placePulse,
+  textWidth,
+} from "@/components/soa-chart/chart-model";
 import { type Readout, ReadoutBox, Sym } from "@/components/soa-chart/chart-readout";
 import { placeLabels } from "@/components/soa-chart/label-layout";
 import { LogGrid, SubscriptLabel } from "@/components/soa-chart/log-grid";
-import { decadeDomain } from "@/components/soa-chart/log-ticks";
+import { OffScaleMark } from "@/components/soa-chart/off-scale-mark";
 import { useWidth } from "@/components/soa-chart/use-width";
 import { VerdictGlyph } from "@/components/verdict-shape";
 import { interpolateCurve } from "@/lib/soa/interpolate-curve";
@@ -76,13 +82,8 @@ function Frame({
   const colours = useChartColours();
   const clipId = `overlay-clip-${useId().replace(/[^a-zA-Z0-9]/g, "")}`;
   const [readout, setReadout] = useState<Readout | null>(null);
-  const domains = useMemo(() => {
-    const points = lines.flatMap((l) => l.points);
-    return {
-      x: decadeDomain([...points.map(([v]) => v), ...markers.map((m) => m.v)], [0.1, 100], 2),
-      y: decadeDomain([...points.map(([, i]) => i), ...markers.map((m) => m.i)], [0.1, 1000], 2),
-    };
-  }, [lines, markers]);
+  // The axes stay on the curves' decades; a pulse far beyond them is held at the edge with its value.
+  const domains = useMemo(() => chartDomains({ curves: lines, pulses: markers }), [lines, markers]);
   const legend: LegendEntry[] = useMemo(() => {
     const verdicts = new Set(markers.map((m) => m.verdict));
     return [
@@ -218,30 +219,53 @@ function Frame({
           onPointerLeave={() => setReadout(null)}
         />
         <g data-layer="pulses">
-          {markers.map((m) => (
-            <g
-              key={m.id}
-              data-pulse={m.id}
-              onPointerEnter={() =>
-                setReadout({
-                  left: x(m.v),
-                  top: y(m.i),
-                  title: m.name,
-                  rows: [
-                    { label: Sym.vds, value: formatQuantity(m.v, "V") },
-                    { label: Sym.id, value: formatQuantity(m.i, "A") },
-                    ...m.byCandidate.map((b) => ({
-                      label: b.partNumber,
-                      value: `${verdictWords[b.verdict]}${b.utilisation !== null ? ` ${Math.round(b.utilisation * 100)}\u2009%` : ""}`,
-                    })),
-                  ],
-                })
-              }
-              onPointerLeave={() => setReadout(null)}
-            >
-              <VerdictGlyph verdict={m.verdict} x={x(m.v)} y={y(m.i)} size={11} />
-            </g>
-          ))}
+          {markers.map((m) => {
+            const at = placePulse(m, domains);
+            const value = [
+              at.off.v ? formatQuantity(m.v, "V") : null,
+              at.off.i ? formatQuantity(m.i, "A") : null,
+            ]
+              .filter(Boolean)
+              .join(", ");
+            return (
+              <g
+                key={m.id}
+                data-pulse={m.id}
+                data-off-scale={value ? "true" : undefined}
+                onPointerEnter={() =>
+                  setReadout({
+                    left: x(at.v),
+                    top: y(at.i),
+                    title: m.name,
+                    rows: [
+                      { label: Sym.vds, value: formatQuantity(m.v, "V") },
+                      { label: Sym.id, value: formatQuantity(m.i, "A") },
+                      ...m.byCandidate.map((b) => ({
+                        label: b.partNumber,
+                        value: `${verdictWords[b.verdict]}${b.utilisation !== null ? ` ${Math.round(b.utilisation * 100)}\u2009%` : ""}`,
+                      })),
+                    ],
+                  })
+                }
+                onPointerLeave={() => setReadout(null)}
+              >
+                <VerdictGlyph verdict={m.verdict} x={x(at.v)} y={y(at.i)} size={11} />
+                {value ? (
+                  <OffScaleMark
+                    x={x(at.v)}
+                    y={y(at.i)}
+                    right={at.off.v && m.v > at.v}
+                    up={at.off.i && m.i > at.i}
+                    horizontal={at.off.v}
+                    vertical={at.off.i}
+                    text={`${value} off scale`}
+                    plot={plot}
+                    colour={colours.ink}
+                  />
+                ) : null}
+              </g>
+            );
+          })}
         </g>
         <g data-layer="legend" fontSize={11} transform={`translate(${layout.legend.x} ${layout.legend.y})`}>
           {legend.map((row, k) => {

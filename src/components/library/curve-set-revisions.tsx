@@ -7,6 +7,7 @@ import { messageOf, sendJson } from "@/components/api-client";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
+import { CURVE_FORMS } from "@/lib/vocabulary";
 import { sizeText } from "./format";
 
 export interface CurveSetRow {
@@ -64,7 +65,9 @@ export function CurveSetRevisions({
                 <Td className="max-w-64 truncate font-medium" title={set.fileName}>
                   {set.fileName}
                 </Td>
-                <Td className="text-ink-muted">{set.shape === "paired" ? "digitiser" : "table"}</Td>
+                <Td className="text-ink-muted">
+                  {set.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long}
+                </Td>
                 <Td numeric>{sizeText(set.size)}</Td>
                 <Td>{set.uploadedBy ?? <span className="text-ink-faint">—</span>}</Td>
                 <Td numeric>

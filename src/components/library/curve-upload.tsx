@@ -120,10 +120,10 @@ export function CurveUpload({ partId }: { partId: string }) {
           </a>
           <a
             href={exampleHref(examplePairedCsv)}
-            download="pulsefence-soa-example-digitiser.csv"
+            download="pulsefence-soa-example-paired.csv"
             className="text-accent underline underline-offset-2"
           >
-            Example: digitiser form (CSV)
+            Example: paired columns (CSV)
           </a>
         </p>
         <details>

@@ -56,11 +56,14 @@ export function LimitsPanel({
   partNumber,
   tjMax,
   curveSet,
+  accepted = [],
 }: {
   partId: string;
   partNumber: string;
   tjMax: number;
   curveSet: ActiveCurveSet;
+  /** The findings the lead accepted on verifying, with reasons. */
+  accepted?: { key: string; reason: string }[];
 }) {
   const id = useId();
   const ref = curveSet.refCaseTemp;
@@ -229,7 +232,7 @@ export function LimitsPanel({
         <h3 id={`${id}-findings`} className="mb-2 text-sm font-semibold">
           Findings in {curveSet.fileName}
         </h3>
-        <FindingsList findings={curveSet.findings} />
+        <FindingsList findings={curveSet.findings} accepted={accepted} />
       </aside>
     </div>
   );

@@ -6,6 +6,7 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Button } from "@/components/form";
+import { type OpenFinding, VerifyPart } from "./verify-part";
 
 /**
  * The part's actions by role: edit and archive with part.write, "Mark verified" with part.verify. Technicians see
@@ -18,6 +19,7 @@ export function PartActions({
   hasCurves,
   canWrite,
   canVerify,
+  findings,
 }: {
   partId: string;
   archived: boolean;
@@ -25,10 +27,13 @@ export function PartActions({
   hasCurves: boolean;
   canWrite: boolean;
   canVerify: boolean;
+  /** The active curve set's findings, each to be accepted with a reason on verifying. */
+  findings: OpenFinding[];
 }) {
   const router = useRouter();
   const [refreshing, startTransition] = useTransition();
   const [confirming, setConfirming] = useState(false);
+  const [verifying, setVerifying] = useState(false);
   const refresh = () => startTransition(() => router.refresh());
   const archive = useMutation({
     mutationFn: (value: boolean) => sendJson("POST", `/api/parts/${partId}/archive`, { archived: value }),
@@ -37,25 +42,20 @@ export function PartActions({
       refresh();
     },
   });
-  const verify = useMutation({
-    mutationFn: () => sendJson("POST", `/api/parts/${partId}/verify`),
-    onSuccess: refresh,
-  });
-  const error = archive.error ?? verify.error;
+  const error = archive.error;
   if (!canWrite && !canVerify) return null;
   return (
     <>
       {canVerify && status === "draft" && !archived ? (
         <Button
           variant="primary"
-          pending={verify.isPending || refreshing}
-          disabled={!hasCurves}
+          disabled={!hasCurves || verifying}
           title={
             hasCurves ? "Confirm the ratings and curves against the datasheet" : "Upload the SOA curves first"
           }
-          onClick={() => verify.mutate()}
+          onClick={() => setVerifying(true)}
         >
-          Mark verified
+          Mark verified{findings.length ? ` (${findings.length} open)` : ""}
         </Button>
       ) : null}
       {canWrite ? (
@@ -88,6 +88,18 @@ export function PartActions({
             <Button onClick={() => setConfirming(true)}>Archive…</Button>
           )}
         </>
+      ) : null}
+      {verifying && canVerify && status === "draft" ? (
+        <VerifyPart
+          partId={partId}
+          findings={findings}
+          pending={refreshing}
+          onVerified={() => {
+            setVerifying(false);
+            refresh();
+          }}
+          onCancel={() => setVerifying(false)}
+        />
       ) : null}
       {error ? (
         <span role="alert" className="basis-full text-right text-sm text-fail">

@@ -10,7 +10,6 @@ import { fosterSchema } from "@/lib/library/part-schema";
 import { formatQuantity } from "@/lib/soa/units";
 import { callJson, RejectedFile, uploadToStorage } from "./api";
 import { CsvDropzone } from "./csv-dropzone";
-import { editable } from "./format";
 import { parsePastedRows } from "./paste-rows";
 import { Sym } from "./symbols";
 import { IssueTable, UploadProgress } from "./upload-progress";
@@ -30,15 +29,26 @@ interface Row {
   key: number;
   r: string;
   tau: string;
+  /** The stored term and how it was shown: saved unchanged, the full-precision value goes back, not the rounding. */
+  stored?: { r: number; tau: number; rText: string; tauText: string };
 }
+
+/** Significant figures a stored or fitted term is shown with; the stored value keeps full precision. */
+const SHOWN_DIGITS = 4;
 
 let nextKey = 1;
 const toRows = (terms: { r: number; tau: number }[] | null): Row[] =>
-  (terms ?? []).map((t) => ({
-    key: nextKey++,
-    r: editable(t.r, "plain"),
-    tau: formatQuantity(t.tau, "s", 6),
-  }));
+  (terms ?? []).map((t) => {
+    const rText = String(Number(t.r.toPrecision(SHOWN_DIGITS)));
+    const tauText = formatQuantity(t.tau, "s", SHOWN_DIGITS);
+    return { key: nextKey++, r: rText, tau: tauText, stored: { ...t, rText, tauText } };
+  });
+
+/** A row's term as sent: the stored number where the text still shows it, else the text as typed. */
+const termOf = ({ r, tau, stored }: Row) => ({
+  r: stored && r === stored.rText ? stored.r : r,
+  tau: stored && tau === stored.tauText ? stored.tau : tau,
+});
 
 type FitPhase =
   | { kind: "idle" }
@@ -71,17 +81,20 @@ export function ThermalEditor({
   const [maxTerms, setMaxTerms] = useState(4);
   const [fit, setFit] = useState<FitPhase>({ kind: "idle" });
 
-  const parsed = useMemo(
-    () => fosterSchema.safeParse({ terms: rows.map(({ r, tau }) => ({ r, tau })) }),
-    [rows],
-  );
+  const parsed = useMemo(() => fosterSchema.safeParse({ terms: rows.map(termOf) }), [rows]);
   const preview = parsed.success && parsed.data.terms.length ? parsed.data.terms : (saved.foster ?? []);
   const dirty =
     JSON.stringify(rows.map(({ r, tau }) => [r, tau])) !==
     JSON.stringify(toRows(saved.foster).map(({ r, tau }) => [r, tau]));
 
   function edit(key: number, field: "r" | "tau", value: string) {
+    const index = rows.findIndex((row) => row.key === key);
     setRows((all) => all.map((row) => (row.key === key ? { ...row, [field]: value } : row)));
+    // The edited cell's error is stale now; the others stay until the next save says otherwise.
+    setCellErrors((errors) => {
+      const { [`terms.${index}.${field}`]: _edited, ...rest } = errors;
+      return rest;
+    });
     setMessage(null);
   }
 
@@ -105,7 +118,7 @@ export function ThermalEditor({
 
   async function save() {
     setMessage(null);
-    const check = fosterSchema.safeParse({ terms: rows.map(({ r, tau }) => ({ r, tau })) });
+    const check = fosterSchema.safeParse({ terms: rows.map(termOf) });
     if (!check.success) {
       const errors: Record<string, string> = {};
       for (const issue of check.error.issues) errors[issue.path.join(".")] ??= issue.message;
@@ -117,7 +130,7 @@ export function ThermalEditor({
     setSaving(true);
     try {
       const result = await callJson<ThermalModel>("PUT", `/api/parts/${partId}/thermal`, {
-        terms: rows.map(({ r, tau }) => ({ r, tau })),
+        terms: rows.map(termOf),
       });
       setSaved(result);
       setRows(toRows(result.foster));
@@ -152,6 +165,7 @@ export function ThermalEditor({
       });
       setSaved(result);
       setRows(toRows(result.foster));
+      setCellErrors({});
       setFit({ kind: "idle" });
       setMessage({
         tone: "done",

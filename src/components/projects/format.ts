@@ -1,11 +1,14 @@
+import { formatTemperature } from "@/lib/soa/sanity";
 import type { Repeat, Verdict } from "@/lib/soa/types";
 import { formatQuantity, type Unit } from "@/lib/soa/units";
 
-/** A quantity for a cell, or a dash where there is none (JSON turns NaN into null). */
+/**
+ * A quantity for a cell, or a dash where there is none (JSON turns NaN into null); a temperature beyond the sane
+ * display range reads "off scale".
+ */
 export function q(value: number | null | undefined, unit: Unit | "", digits = 3): string {
-  return value === null || value === undefined || !Number.isFinite(value)
-    ? "—"
-    : formatQuantity(value, unit, digits);
+  if (value === null || value === undefined || !Number.isFinite(value)) return "—";
+  return unit === "°C" ? formatTemperature(value) : formatQuantity(value, unit, digits);
 }
 
 export const verdictWords: Record<Verdict, string> = {

@@ -95,15 +95,60 @@ export function buildLines(props: SoaChartProps, colours: ChartColours): ChartLi
   return lines;
 }
 
-/** Whole decades around the curves and pulses; derated lines are clipped so the axes stay put. */
-export function chartDomains(props: SoaChartProps) {
+/** How far beyond the curves' decades a pulse may stretch the axes; further out it is drawn off scale. */
+export const PULSE_REACH_DECADES = 1;
+
+function within(value: number, [lo, hi]: readonly [number, number], decades: number): boolean {
+  const margin = 10 ** decades;
+  return value >= lo / margin && value <= hi * margin;
+}
+
+/**
+ * Whole decades around the curves, stretched for pulses up to PULSE_REACH_DECADES beyond them: the axes stay on
+ * the data's decades, and a pulse further out is marked at the edge (see `placePulse`) instead of stretching every
+ * chart to eight decades. Without curves the pulses set the decades. Derated lines are clipped.
+ */
+export function chartDomains(props: {
+  curves: readonly Pick<ChartCurve, "points">[];
+  pulses?: readonly { v: number; i: number }[];
+}) {
   const points = props.curves.flatMap((c) => c.points);
-  const vs = [...points.map(([v]) => v), ...(props.pulses ?? []).map((p) => p.v)];
-  const is = [...points.map(([, i]) => i), ...(props.pulses ?? []).map((p) => p.i)];
-  return {
-    x: decadeDomain(vs, [0.1, 100], 2),
-    y: decadeDomain(is, [0.1, 1000], 2),
+  const pulses = props.pulses ?? [];
+  const base = {
+    x: decadeDomain(
+      points.map(([v]) => v),
+      [0.1, 100],
+      2,
+    ),
+    y: decadeDomain(
+      points.map(([, i]) => i),
+      [0.1, 1000],
+      2,
+    ),
   };
+  const near =
+    points.length === 0
+      ? pulses
+      : pulses.filter(
+          (p) => within(p.v, base.x, PULSE_REACH_DECADES) && within(p.i, base.y, PULSE_REACH_DECADES),
+        );
+  const anchor = points.length === 0 && near.length > 0 ? [] : points;
+  return {
+    x: decadeDomain([...anchor.map(([v]) => v), ...near.map((p) => p.v)], [0.1, 100], 2),
+    y: decadeDomain([...anchor.map(([, i]) => i), ...near.map((p) => p.i)], [0.1, 1000], 2),
+  };
+}
+
+/** Where a pulse is drawn: at its V and I, or held at the edge of the axes it lies beyond (`off` says which). */
+export function placePulse(
+  pulse: { v: number; i: number },
+  domains: { x: [number, number]; y: [number, number] },
+): { v: number; i: number; off: { v: boolean; i: boolean } } {
+  const clamp = (value: number, [lo, hi]: [number, number]) =>
+    Number.isFinite(value) && value > 0 ? Math.min(hi, Math.max(lo, value)) : lo;
+  const v = clamp(pulse.v, domains.x);
+  const i = clamp(pulse.i, domains.y);
+  return { v, i, off: { v: v !== pulse.v, i: i !== pulse.i } };
 }
 
 export interface ChartLayout {

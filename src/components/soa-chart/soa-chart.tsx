@@ -9,10 +9,11 @@ import { formatQuantity } from "@/lib/soa/units";
 import { useChartColours } from "./chart-colours";
 import { ChartExport } from "./chart-export-buttons";
 import { ChartLegend, FindingMark, legendRows } from "./chart-legend";
-import { buildLines, type ChartLine, chartDomains, chartLayout, textWidth } from "./chart-model";
+import { buildLines, type ChartLine, chartDomains, chartLayout, placePulse, textWidth } from "./chart-model";
 import { type Readout, ReadoutBox, Sym } from "./chart-readout";
 import { placeLabels } from "./label-layout";
 import { LogGrid, SubscriptLabel } from "./log-grid";
+import { OffScaleMark } from "./off-scale-mark";
 import { PointsTable } from "./points-table";
 import type { ChartFinding, SoaChartProps } from "./types";
 import { useWidth } from "./use-width";
@@ -23,10 +24,11 @@ const snapDistance = 10;
 
 /** A finding's place on the chart: its curve's current at its voltage (the curve's end beyond its range). */
 export function findingPoint(finding: ChartFinding, lines: ChartLine[]): [number, number] | null {
-  if (!("v" in finding.location)) return null;
-  const line = lines.find((l) => l.kind === "curve" && l.duration === finding.curve.duration);
+  const { location, curve } = finding;
+  if (location === undefined || curve === undefined || !("v" in location)) return null;
+  const line = lines.find((l) => l.kind === "curve" && l.duration === curve.duration);
   if (!line || line.points.length === 0) return null;
-  const v = finding.location.v;
+  const v = location.v;
   const value = interpolateCurve(line.points, v).current;
   return value === null ? line.points[line.points.length - 1] : [v, value];
 }
@@ -65,7 +67,7 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
     () => buildLines({ title, curves, derated, interpolated }, colours),
     [title, curves, derated, interpolated, colours],
   );
-  const domains = useMemo(() => chartDomains({ title, curves, pulses }), [title, curves, pulses]);
+  const domains = useMemo(() => chartDomains({ curves, pulses }), [curves, pulses]);
   const rows = useMemo(
     () => legendRows({ title, curves, derated, findings, pulses, refCaseTemp }, lines, colours),
     [title, curves, derated, findings, pulses, refCaseTemp, lines, colours],
@@ -258,27 +260,53 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
           )}
         </g>
         <g data-layer="pulses">
-          {(pulses ?? []).map((pulse) => (
-            <g
-              key={pulse.id}
-              data-pulse={pulse.id}
-              onPointerEnter={() =>
-                setReadout({
-                  left: x(pulse.v),
-                  top: y(pulse.i),
-                  title: `${pulse.label} (${pulse.verdict === "no-data" ? "no data" : pulse.verdict})`,
-                  rows: [
-                    { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
-                    { label: Sym.id, value: formatQuantity(pulse.i, "A") },
-                    { label: Sym.p, value: formatQuantity(pulse.v * pulse.i, "W") },
-                  ],
-                })
-              }
-              onPointerLeave={() => setReadout(null)}
-            >
-              <VerdictGlyph verdict={pulse.verdict} x={x(pulse.v)} y={y(pulse.i)} size={10} />
-            </g>
-          ))}
+          {(pulses ?? []).map((pulse) => {
+            const at = placePulse(pulse, domains);
+            const off = at.off.v || at.off.i;
+            const px = x(at.v);
+            const py = y(at.i);
+            const value = [
+              at.off.v ? formatQuantity(pulse.v, "V") : null,
+              at.off.i ? formatQuantity(pulse.i, "A") : null,
+            ]
+              .filter(Boolean)
+              .join(", ");
+            return (
+              <g
+                key={pulse.id}
+                data-pulse={pulse.id}
+                data-off-scale={off ? "true" : undefined}
+                onPointerEnter={() =>
+                  setReadout({
+                    left: px,
+                    top: py,
+                    title: `${pulse.label} (${pulse.verdict === "no-data" ? "no data" : pulse.verdict})${off ? ", off scale" : ""}`,
+                    rows: [
+                      { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
+                      { label: Sym.id, value: formatQuantity(pulse.i, "A") },
+                      { label: Sym.p, value: formatQuantity(pulse.v * pulse.i, "W") },
+                    ],
+                  })
+                }
+                onPointerLeave={() => setReadout(null)}
+              >
+                <VerdictGlyph verdict={pulse.verdict} x={px} y={py} size={10} />
+                {off ? (
+                  <OffScaleMark
+                    x={px}
+                    y={py}
+                    right={at.off.v && pulse.v > at.v}
+                    up={at.off.i && pulse.i > at.i}
+                    horizontal={at.off.v}
+                    vertical={at.off.i}
+                    text={`${value} off scale`}
+                    plot={plot}
+                    colour={colours.ink}
+                  />
+                ) : null}
+              </g>
+            );
+          })}
         </g>
         <ChartLegend
           rows={rows}

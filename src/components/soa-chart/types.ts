@@ -12,8 +12,13 @@ export interface ChartCurve {
 /** A quality finding of a curve set (src/lib/soa/findings.ts), marked on its curve at its voltage. */
 export interface ChartFinding {
   kind: string;
-  curve: { index: number; duration: ChartDuration };
-  location: { v: number } | { index: number };
+  /** Stable identity (absent in findings stored before keys existed). */
+  key?: string;
+  /** Absent for a part-level finding (the thermal model against the rated R_th(j-c)). */
+  curve?: { index: number; duration: ChartDuration };
+  location?: { v: number } | { index: number };
+  /** How large the finding is, with its unit. */
+  size?: string;
   message: string;
 }
 

@@ -4,9 +4,10 @@
 //   engine's parseQuantity, and the header's scale is not applied again;
 // - in a file separated by ";" or tab a single decimal comma is a decimal point ("1,5" = 1.5); in a
 //   comma-separated file a comma inside a (quoted) number is ambiguous (decimal or thousands) and rejected;
-// - every value must be finite and greater than 0;
+// - every value must be finite, greater than 0 and within the physical sanity limits (src/lib/soa/sanity.ts);
 // - a pulse width is a number with a time unit, a bare number of seconds (times the header's scale), or "DC"; a
 //   curve label in a digitiser's header may hold other words around it ("tp = 10 µs", "DC operation").
+import { saneValue } from "@/lib/soa/sanity";
 import type { Duration } from "@/lib/soa/types";
 import { parseQuantity } from "@/lib/soa/units";
 import { QUANTITY_UNIT, type Quantity } from "./header";
@@ -24,9 +25,11 @@ export function decimalPoint(cell: string, delimiter: Delimiter): string | null 
   return cell.replace(",", ".");
 }
 
-function positive(cell: string, value: number): CellValue<number> {
+function positive(cell: string, value: number, quantity: Quantity): CellValue<number> {
   if (!Number.isFinite(value)) return { ok: false, reason: `'${cell}' is not a finite number` };
   if (!(value > 0)) return { ok: false, reason: `'${cell}' must be greater than 0` };
+  const insane = saneValue(value, quantity === "width" ? "time" : quantity);
+  if (insane !== null) return { ok: false, reason: `'${cell}': ${insane}` };
   return { ok: true, value };
 }
 
@@ -40,7 +43,7 @@ export function readNumber(
   if (cell === "") return { ok: false, reason: "the cell is empty" };
   const text = decimalPoint(cell, delimiter);
   if (text === null) return { ok: false, reason: `'${cell}' is not a number (use '.' for decimals)` };
-  if (BARE.test(text)) return positive(cell, Number(text) * scale);
+  if (BARE.test(text)) return positive(cell, Number(text) * scale, quantity);
   const parsed = parseQuantity(text, QUANTITY_UNIT[quantity]);
   if (!parsed.ok) {
     return {
@@ -49,7 +52,7 @@ export function readNumber(
         parsed.reason === "expected a number" ? `'${cell}' is not a number` : `'${cell}': ${parsed.reason}`,
     };
   }
-  return positive(cell, parsed.value as number);
+  return positive(cell, parsed.value as number, quantity);
 }
 
 const TIME_UNIT =
@@ -80,14 +83,14 @@ export function readWidth(
         ok: false,
         reason: `curve name '${cell}' has no time unit (write for example '${cell} us' or '${cell} ms')`,
       };
-    return positive(cell, Number(text) * scale);
+    return positive(cell, Number(text) * scale, "width");
   }
   const match = (label ? TIME_UNIT : WHOLE_TIME_UNIT).exec(text);
   if (match !== null) {
     const prefix = match[2].toLowerCase().replace(/sec$/, "s");
     const parsed = parseQuantity(`${match[1]} ${prefix}`, "s");
     if (!parsed.ok) return { ok: false, reason: `'${cell}': ${parsed.reason}` };
-    return positive(cell, parsed.value as number);
+    return positive(cell, parsed.value as number, "width");
   }
   if (label ? DC.test(text) : text.toUpperCase() === "DC") return { ok: true, value: "DC" };
   return { ok: false, reason: widthHint(cell) };

@@ -27,9 +27,9 @@ DC,1.5,100
 DC,100,1.5
 `;
 
-/** A digitiser's export: curve names above X/Y pairs, an axis row, curves of different lengths. */
+/** Paired columns: curve names above V/I column pairs, a row naming the quantities, curves of different lengths. */
 export const examplePairedCsv = `10us,,100 µs,,1ms,,DC,
-X,Y,X,Y,X,Y,X,Y
+V_DS [V],I_D [A],V_DS [V],I_D [A],V_DS [V],I_D [A],V_DS [V],I_D [A]
 0.1,20,0.1,20,0.1,20,0.1,20
 1.5,300,1.5,300,1.5,300,0.5,100
 20,300,6.67,300,2,300,1.5,100
@@ -44,8 +44,9 @@ export const curveCsvHelp: readonly string[] = [
   "Table form: a header row naming a pulse-width column, a voltage column and a current column, then one row per " +
     "point, for example 'pulse width,V_DS [V],I_D [A]' and '100us,12,40'. A unit in the header scales its column " +
     "('I_D [mA]'); a blank pulse width repeats the one above.",
-  "Digitiser form: the first row names each curve ('10us', '100 µs', '1ms', 'DC') above its pair of X and Y " +
-    "columns; a second row 'X,Y,X,Y' is optional. Curves may have different numbers of points.",
+  "Paired columns: the first row names each curve ('10us', '100 µs', '1ms', 'DC') above its pair of columns, " +
+    "voltage then current; a second row naming them ('V_DS [V],I_D [A]', or the axis letters X and Y) is " +
+    "optional and its units scale the pair. Curves may have different numbers of points.",
   "Pulse widths are written with a unit ('100us', '100 µs', '1 ms', '1e-3 s') or as DC; in the table form a bare " +
     "number is in seconds unless the header gives a unit.",
   "Separators: comma, semicolon or tab. Decimal commas ('1,5') work with semicolons or tabs. Blank lines, a " +

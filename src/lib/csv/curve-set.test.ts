@@ -178,6 +178,18 @@ describe("parseCurveSetCsv, paired columns", () => {
   });
 });
 
+describe("parseCurveSetCsv, sanity limits", () => {
+  test("refuses physically absurd points and widths with the limit (src/lib/soa/sanity.ts)", () => {
+    const messages = errorsOf(
+      "pulse width,V_DS [kV],I_D [A]\n10us,0.01,20\n10us,1000,2\n1e7 s,0.01,1\n1e7 s,0.02,1\n",
+    );
+    expect(messages).toContain(
+      "row 3, column V_DS [kV]: '1000': 1\u2009MV is above 100\u2009kV, the most a voltage can be here: check the prefix and the unit",
+    );
+    expect(messages.some((m) => m.includes("above 1\u2009Ms, the most a time can be here"))).toBe(true);
+  });
+});
+
 describe("parseCurveSetCsv, text variants", () => {
   test.each([
     ["semicolons", "width;V;I\n100us;1;100\n100us;10;50\nDC;1;20\nDC;10;2\n"],
@@ -481,7 +493,7 @@ describe("examples and help", () => {
 
   test("the help names both shapes, the separators and the limit", () => {
     const help = curveCsvHelp.join(" ");
-    for (const words of ["5 MB", "Table form", "Digitiser form", "semicolon", "Decimal commas", "DC"]) {
+    for (const words of ["5 MB", "Table form", "Paired columns", "semicolon", "Decimal commas", "DC"]) {
       expect(help).toContain(words);
     }
   });

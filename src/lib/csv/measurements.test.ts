@@ -27,7 +27,15 @@ describe("parseMeasurementPaste: separators and headers", () => {
     const result = parseMeasurementPaste(paste);
     expect(result.errors).toEqual([]);
     expect(result.hasHeader).toBe(true);
-    expect(result.columns).toEqual({ label: 0, voltage: 1, current: 2, width: 3, ignored: [] });
+    expect(result.columns).toEqual({
+      label: 0,
+      voltage: 1,
+      current: 2,
+      width: 3,
+      ignored: [],
+      unread: [],
+      headers: ["Label", "V_DS [V]", "I_D [A]", "t_p [us]"],
+    });
     expect(result.rows.map(pulse)).toEqual([
       { label: "pre-charge A", kind: "rect", v: 48, i: 12.5, duration: 150e-6 },
       { label: "pre-charge B", kind: "rect", v: 47.6, i: 13.1, duration: 142.5e-6 },
@@ -57,6 +65,8 @@ describe("parseMeasurementPaste: separators and headers", () => {
       period: 4,
       count: 5,
       ignored: [],
+      unread: [],
+      headers: ["A", "B", "C", "D", "E", "F"],
     });
     expect(result.rows.map(pulse)).toEqual([
       { label: "P1", kind: "rect", v: 48, i: 12.5, duration: 150e-6 },
@@ -336,24 +346,32 @@ describe("parseMeasurementPaste: real-looking pastes", () => {
     ]);
   });
 
-  test("reads a scope measurement table, ignoring the columns it does not know and listing them", () => {
+  test("reads a scope measurement table, leaving out the columns it does not know only when told to", () => {
     const paste = [
       "Acq #,Source,Vds max,Id max,+Width,Mean,Std dev",
       "1,C1/C3,48.4 V,11.9 A,148.2 us,5.06 A,0.41 A",
       "2,C1/C3,48.1 V,12.2 A,151.0 us,5.11 A,0.39 A",
       "3,C1/C3,48.3 V,12.0 A,149.6 us,5.08 A,0.40 A",
     ].join("\r\n");
-    const result = parseMeasurementPaste(paste);
+    const unmapped = parseMeasurementPaste(paste);
+    expect(unmapped.errors.map((e) => e.message)).toEqual([
+      "column Source: the column is not read; choose what it holds under Columns, or leave it out",
+      "column Mean: the column is not read; choose what it holds under Columns, or leave it out",
+      "column Std dev: the column is not read; choose what it holds under Columns, or leave it out",
+    ]);
+    expect(unmapped.rows).toHaveLength(3);
+    const result = parseMeasurementPaste(paste, { 1: "skip", 5: "skip", 6: "skip" });
     expect(result.errors).toEqual([]);
-    expect(result.columns).toEqual({
+    expect(result.columns).toMatchObject({
       label: 0,
       voltage: 2,
       current: 3,
       width: 4,
+      unread: [],
       ignored: [
-        { index: 1, header: "Source", note: "not a column Pulsefence reads" },
-        { index: 5, header: "Mean", note: "not a column Pulsefence reads" },
-        { index: 6, header: "Std dev", note: "not a column Pulsefence reads" },
+        { index: 1, header: "Source", note: "left out" },
+        { index: 5, header: "Mean", note: "left out" },
+        { index: 6, header: "Std dev", note: "left out" },
       ],
     });
     expect(result.rows.map(pulse)).toEqual([
@@ -366,6 +384,49 @@ describe("parseMeasurementPaste: real-looking pastes", () => {
   test("lists a column without header only when it holds something", () => {
     const result = parseMeasurementPaste("V;I;tp;;\n48;10;1ms;;\n48;10;1ms;;probe 2\n");
     expect(result.columns.ignored).toEqual([{ index: 4, header: "E", note: "no header names this column" }]);
+    expect(result.columns.unread).toEqual(result.columns.ignored);
+  });
+
+  test("reads issue 12's 'repeat period' column as the period: a 50 ms overload train is a train", () => {
+    const result = parseMeasurementPaste(
+      "label\tV_DS [V]\tI_D [A]\twidth\trepeat period\tcount\nO1\t24\t18\t2 ms\t50 ms\t10\n",
+    );
+    expect(result.errors).toEqual([]);
+    expect(result.rows.map(pulse)).toEqual([
+      { label: "O1", kind: "rect", v: 24, i: 18, duration: 2e-3, repeat: { period: 0.05, count: 10 } },
+    ]);
+    for (const [name, field] of [
+      ["Pulse period [ms]", "period"],
+      ["Cycle time", "period"],
+      ["Repeat rate [Hz]", "frequency"],
+      ["PRR", "frequency"],
+      ["Repeats", "count"],
+      ["Cycles", "count"],
+    ] as const) {
+      expect(parseMeasurementPaste(`V;I;tp;${name}\n48;10;1ms;5\n`).columns[field], name).toBe(3);
+    }
+    expect(parseMeasurementPaste("V;I;t_on [us]\n48;10;150\n").columns.width).toBe(2);
+  });
+
+  test("blocks a column that looks like repetition and is not read, with a clear message", () => {
+    const result = parseMeasurementPaste("V;I;tp;rep. spacing time\n48;10;1ms;50\n");
+    expect(result.errors.map((e) => e.message)).toEqual([
+      "column rep. spacing time: the column is not read: it looks like repetition, and reading the pulses " +
+        "without it would check a train as a single pulse; choose what it holds under Columns, or leave it out",
+    ]);
+    expect(result.columns.unread?.map((c) => c.index)).toEqual([3]);
+    const mapped = parseMeasurementPaste("V;I;tp;rep. spacing time [ms]\n48;10;1ms;50\n", { 3: "period" });
+    expect(mapped.errors).toEqual([]);
+    expect(mapped.rows[0].repeat).toEqual({ period: 0.05 });
+  });
+
+  test("a mapping overrides the header and the headerless order", () => {
+    const swapped = parseMeasurementPaste("A;B;C\n1ms;48;10\n", { 0: "width", 1: "voltage", 2: "current" });
+    expect(swapped.errors).toEqual([]);
+    expect(swapped.rows.map(pulse)).toEqual([{ label: "P1", kind: "rect", v: 48, i: 10, duration: 1e-3 }]);
+    const headerless = parseMeasurementPaste("48;10;1ms;x\n", { 3: "label" });
+    expect(headerless.rows.map((r) => r.label)).toEqual(["x"]);
+    expect(parseMeasurementPaste("48;10;1ms;;;;bench 3\n", { 6: "skip" }).errors).toEqual([]);
   });
 });
 
@@ -484,6 +545,33 @@ describe("measurementRowSchema", () => {
   test("accepts a pulse in SI units, trims the label and ignores unknown keys", () => {
     const parsed = measurementRowSchema.parse({ ...valid, label: "  inrush  ", row: 4 });
     expect(parsed).toEqual({ ...valid, label: "inrush" });
+  });
+
+  test("refuses keys that look like repetition beside repeat, so a train is never read as one pulse", () => {
+    const result = measurementRowSchema.safeParse({ ...valid, repeatPeriod: 0.05, count: 10 });
+    expect(result.success).toBe(false);
+    expect(result.error?.issues.map((issue) => [issue.path.join("."), issue.message])).toEqual([
+      [
+        "repeatPeriod",
+        "'repeatPeriod' is not read: give repetition as repeat: { period, count } (seconds; count optional)",
+      ],
+      [
+        "count",
+        "'count' is not read: give repetition as repeat: { period, count } (seconds; count optional)",
+      ],
+    ]);
+  });
+
+  test("refuses physically absurd values with the sanity limit (issue 12: 1 GV × 2.5 kA)", () => {
+    const result = measurementRowSchema.safeParse({ ...valid, v: 1e9, i: 2500 });
+    expect(result.error?.issues.map((issue) => issue.message)).toEqual([
+      "the voltage: 1\u2009GV is above 100\u2009kV, the most a voltage can be here: check the prefix and the unit",
+    ]);
+    const paste = parseMeasurementPaste("V;I;tp\n1 GV;2.5 kA;1 ms\n48;10;1e-15\n");
+    expect(paste.rows.flatMap(messages)).toEqual([
+      "row 2, column V: '1 GV': 1\u2009GV is above 100\u2009kV, the most a voltage can be here: check the prefix and the unit",
+      "row 3, column tp: '1e-15': 1e-15\u2009s is below 1\u2009ps, the least a time can be here: check the prefix and the unit",
+    ]);
   });
 
   test.each([

@@ -9,8 +9,12 @@
 // - "T" is the repetition period, never the pulse width; "Id"/"ID" is the drain current unless another column
 //   already is a current, then it is the label ("I_D" with a separator is always the current); "Pulse" is the
 //   label, "Pulse [us]" (with a unit) the width;
-// - columns whose name is not known are ignored, even with a unit ("Mean [A]", "Std dev"), and listed in
-//   `columns.ignored`; two columns for the same quantity are an error (reading the wrong one would pass a pulse);
+// - a column mapping chosen by the user (column index → field, or "skip") overrides what the header says, as in
+//   the capture's column step; without a header it overrides the V, I, width, shape, period, count order;
+// - no column is dropped silently: a column with content that is read as nothing is listed in `columns.unread`
+//   with a paste-level error (a "repeat period" column read as nothing turned a 50 ms train into a single pulse,
+//   issue 12), until the user maps it or leaves it out ("skip"); skipped columns are listed in `columns.ignored`;
+//   two columns for the same quantity are an error (reading the wrong one would pass a pulse);
 // - a unit in the header scales bare numbers of its column, with one exponent ("80" in "[us]" is exactly 8e-5); a
 //   value with its own unit ("48 V", "150 µs", "2 kHz") is read as written; bare times without a header unit are
 //   seconds, bare frequencies hertz;
@@ -20,6 +24,7 @@
 // - values that cannot be read are NaN in the row, which carries the reason in `errors`;
 // - at most MAX_MEASUREMENT_ROWS pulse rows are read; beyond, a file-level error says which rows were left out.
 import { z } from "zod";
+import { type SaneQuantity, saneValue } from "@/lib/soa/sanity";
 import type { Repeat } from "@/lib/soa/types";
 import { formatQuantity, parseQuantity } from "@/lib/soa/units";
 import { type CellValue, decimalPoint, readNumber, readWidth } from "./cell";
@@ -55,8 +60,33 @@ export interface IgnoredColumn {
 
 /** 0-based column index of each field found, and the columns left aside. */
 export interface MeasurementColumns extends Partial<Record<MeasurementField, number>> {
+  /** Columns not read: left out by the user's mapping, or unread and listed again in `unread`. */
   ignored: IgnoredColumn[];
+  /** Columns with content that nothing reads and the user has not left out: saving waits for a choice. */
+  unread?: IgnoredColumn[];
+  /** Every column's header cell (or letter without a header), for the mapping step. */
+  headers?: string[];
 }
+
+/** The user's choice per column (0-based index as text, as JSON keys are): a field, or "skip" to leave it out. */
+export type ColumnMapping = Readonly<Partial<Record<string, MeasurementField | "skip">>>;
+
+export const MEASUREMENT_FIELDS = [
+  "label",
+  "voltage",
+  "current",
+  "width",
+  "shape",
+  "period",
+  "frequency",
+  "count",
+] as const satisfies readonly MeasurementField[];
+
+/** A column mapping as a request carries it. */
+export const columnMappingSchema = z.record(
+  z.string().regex(/^\d{1,3}$/, { error: "a column is a number from 0" }),
+  z.enum([...MEASUREMENT_FIELDS, "skip"], { error: "a column holds one of the pulse's fields, or skip" }),
+);
 
 /** One pasted pulse in SI units. Unreadable numbers are NaN; `errors` then says why. */
 export interface MeasurementRow {
@@ -83,11 +113,70 @@ const NAMES: Readonly<Record<MeasurementField, readonly string[]>> = {
   label: ["label", "name", "tag", "pulsename", "pulseid", "acq", "acquisition"],
   voltage: ["v", "u", "vds", "uds", "vce", "voltage", "drainsourcevoltage", "collectoremittervoltage"],
   current: ["i", "current", "draincurrent", "ic", "collectorcurrent"],
-  width: ["width", "pulsewidth", "duration", "pulseduration", "pulselength", "tp", "tpulse", "time", "pw"],
+  width: [
+    "width",
+    "pulsewidth",
+    "duration",
+    "pulseduration",
+    "pulselength",
+    "tp",
+    "tpulse",
+    "time",
+    "pw",
+    "ton",
+    "ontime",
+    "pulsetime",
+  ],
   shape: ["shape", "pulseshape", "kind", "type", "form"],
-  period: ["period", "t", "repperiod", "repetitionperiod", "trep", "tperiod"],
-  frequency: ["f", "freq", "frequency", "reprate", "repetitionrate", "repfreq", "repetitionfrequency", "prf"],
-  count: ["count", "n", "pulses", "npulses", "pulsecount", "numberofpulses", "repetitions"],
+  period: [
+    "period",
+    "t",
+    "repperiod",
+    "repetitionperiod",
+    "repeatperiod",
+    "pulseperiod",
+    "trainperiod",
+    "trep",
+    "tperiod",
+    "tcycle",
+    "cycle",
+    "cycletime",
+    "interval",
+    "pulseinterval",
+    "spacing",
+  ],
+  frequency: [
+    "f",
+    "freq",
+    "frequency",
+    "reprate",
+    "repetitionrate",
+    "repeatrate",
+    "pulserate",
+    "repfreq",
+    "repetitionfrequency",
+    "repeatfrequency",
+    "pulsefrequency",
+    "prf",
+    "prr",
+    "frep",
+  ],
+  count: [
+    "count",
+    "n",
+    "pulses",
+    "npulses",
+    "pulsecount",
+    "numberofpulses",
+    "repetitions",
+    "repeats",
+    "repeatcount",
+    "cycles",
+    "ncycles",
+    "trainlength",
+    "burst",
+    "burstcount",
+  ],
 };
 
 const HEADERLESS: readonly MeasurementField[] = ["voltage", "current", "width", "shape", "period", "count"];
@@ -170,7 +259,10 @@ function columnScale(field: MeasurementField, unit: string | null): CellValue<nu
   return { ok: true, value: 1 };
 }
 
-function readHeader(cells: readonly string[], row: number, errors: IssueList) {
+/** Words in a header that suggest a column holds repetition (a period, frequency or count of pulses). */
+const REPETITION_HINT = /rep|period|freq|rate|count|cycle|train|burst|interval|spacing|hz|pulses|number/i;
+
+function readHeader(cells: readonly string[], row: number, errors: IssueList, mapping: ColumnMapping) {
   const layout: Layout = {};
   const ignored: IgnoredColumn[] = [];
   const unnamed: number[] = [];
@@ -187,13 +279,18 @@ function readHeader(cells: readonly string[], row: number, errors: IssueList) {
     } else layout[field] = { index, name: cells[index], scale: 1 };
   };
   cells.forEach((cell, index) => {
-    if (cell === "") {
+    if (cell === "" && mapping[String(index)] === undefined) {
       unnamed.push(index);
       return;
     }
     const { name, unit } = splitHeader(cell);
     units.set(index, unit);
-    const field = fieldOfName(name, unit);
+    const chosen = mapping[String(index)];
+    if (chosen === "skip") {
+      ignored.push({ index, header: cell, note: "left out" });
+      return;
+    }
+    const field = chosen ?? fieldOfName(name, unit);
     if (field === null) ignored.push({ index, header: cell, note: "not a column Pulsefence reads" });
     else if (field === "id" && undecided === null) undecided = index;
     else take(field === "id" ? "current" : field, index);
@@ -293,6 +390,13 @@ function readCount(cell: string): Count {
   return { ok: true, value };
 }
 
+/** A reading within the physical sanity limits (src/lib/soa/sanity.ts), or the reason it is refused. */
+function sane(read: CellValue<number>, cell: string, quantity: SaneQuantity): CellValue<number> {
+  if (!read.ok) return read;
+  const reason = saneValue(read.value, quantity);
+  return reason === null ? read : { ok: false, reason: `'${cell}': ${reason}` };
+}
+
 function readRow(
   cells: readonly string[],
   row: number,
@@ -311,11 +415,15 @@ function readRow(
   const amount = (column: Column | undefined, quantity: "voltage" | "current") => {
     const cell = cellOf(column);
     const scale = column?.scale ?? 1;
-    return value(column, exactly(readNumber(cell, quantity, scale, delimiter), cell, scale, delimiter));
+    const read = exactly(readNumber(cell, quantity, scale, delimiter), cell, scale, delimiter);
+    return value(column, sane(read, cell, quantity));
   };
   const v = amount(voltage, "voltage");
   const i = amount(current, "current");
-  const duration = value(width, readTime(cellOf(width), width?.scale ?? 1, delimiter));
+  const duration = value(
+    width,
+    sane(readTime(cellOf(width), width?.scale ?? 1, delimiter), cellOf(width), "time"),
+  );
 
   const label = cellOf(layout.label) || `P${position}`;
   if (label.length > MAX_LABEL_LENGTH) {
@@ -344,11 +452,14 @@ function readRow(
   let repeatPeriod: number | null = null;
   let source: Column | undefined;
   if (periodCell !== "") {
-    repeatPeriod = value(period, readTime(periodCell, period!.scale, delimiter));
+    repeatPeriod = value(period, sane(readTime(periodCell, period!.scale, delimiter), periodCell, "time"));
     source = period;
   }
   if (frequencyCell !== "") {
-    const f = value(frequency, readFrequency(frequencyCell, frequency!.scale, delimiter));
+    const f = value(
+      frequency,
+      sane(readFrequency(frequencyCell, frequency!.scale, delimiter), frequencyCell, "frequency"),
+    );
     if (repeatPeriod === null) {
       repeatPeriod = 1 / f;
       source = frequency;
@@ -399,7 +510,7 @@ function startsWithNumber(cells: readonly string[]): boolean {
 }
 
 /** Reads pasted pulse rows into a preview (see the rules at the top of this file). Never throws. */
-export function parseMeasurementPaste(text: string): MeasurementPaste {
+export function parseMeasurementPaste(text: string, mapping: ColumnMapping = {}): MeasurementPaste {
   const empty = (errors: CsvIssue[], hasHeader = false): MeasurementPaste => ({
     rows: [],
     errors,
@@ -423,21 +534,25 @@ export function parseMeasurementPaste(text: string): MeasurementPaste {
   let layout: Layout;
   let ignored: IgnoredColumn[];
   let unnamed: number[];
+  const headers = Array.from({ length: widest }, (_, index) =>
+    hasHeader && (table[first][index] ?? "") !== "" ? table[first][index] : columnLetter(index),
+  );
   if (hasHeader) {
-    ({ layout, ignored, unnamed } = readHeader(table[first], first + 1, errors));
+    ({ layout, ignored, unnamed } = readHeader(table[first], first + 1, errors, mapping));
   } else {
-    layout = {};
-    HEADERLESS.forEach((field, index) => {
-      layout[field] = { index, name: HEADERLESS_NAME[field]!, scale: 1 };
-    });
-    ignored = [];
+    ({ layout, ignored } = headerlessLayout(mapping, widest, errors));
     unnamed = [];
   }
-  const known = new Set(Object.values(layout).map((column) => column.index));
-  for (let index = hasHeader ? table[first].length : HEADERLESS.length; index < widest; index++) {
-    if (!known.has(index)) unnamed.push(index);
+  const known = new Set([
+    ...Object.values(layout).map((column) => column.index),
+    ...ignored.map((column) => column.index),
+  ]);
+  for (let index = hasHeader ? table[first].length : 0; index < widest; index++) {
+    if (!known.has(index) && !unnamed.includes(index)) unnamed.push(index);
   }
-  if (errors.count > 0) return { ...empty(errors.list(), hasHeader), columns: columnsOf(layout, ignored) };
+  if (errors.count > 0) {
+    return { ...empty(errors.list(), hasHeader), columns: columnsOf(layout, ignored, [], headers) };
+  }
 
   const rows: MeasurementRow[] = [];
   const filled = new Set<number>();
@@ -458,6 +573,17 @@ export function parseMeasurementPaste(text: string): MeasurementPaste {
       : "without a header only V, I, width, shape, period and count are read";
     ignored.push({ index, header: columnLetter(index), note });
   }
+  const unread = ignored.filter((column) => column.note !== "left out");
+  for (const column of unread) {
+    const repetition = REPETITION_HINT.test(column.header)
+      ? ": it looks like repetition, and reading the pulses without it would check a train as a single pulse"
+      : "";
+    errors.add(
+      null,
+      column.header,
+      `the column is not read${repetition}; choose what it holds under Columns, or leave it out`,
+    );
+  }
   if (rows.length === 0) errors.add(null, null, "no pulse rows below the header");
   if (left > 0) {
     const last = rows[rows.length - 1].row;
@@ -468,35 +594,79 @@ export function parseMeasurementPaste(text: string): MeasurementPaste {
         `at most ${MAX_MEASUREMENT_ROWS.toLocaleString("en-GB")} are read from one paste`,
     );
   }
-  return { rows, errors: errors.list(), hasHeader, columns: columnsOf(layout, ignored) };
+  return { rows, errors: errors.list(), hasHeader, columns: columnsOf(layout, ignored, unread, headers) };
 }
 
-function columnsOf(layout: Layout, ignored: IgnoredColumn[]): MeasurementColumns {
-  const columns: MeasurementColumns = { ignored: [...ignored].sort((a, b) => a.index - b.index) };
+/** Without a header: V, I, width, shape, period, count in that order, with the user's mapping over it. */
+function headerlessLayout(mapping: ColumnMapping, widest: number, errors: IssueList) {
+  const layout: Layout = {};
+  const ignored: IgnoredColumn[] = [];
+  const chosen = new Map<number, MeasurementField | "skip">();
+  for (let index = 0; index < widest; index++) {
+    const choice = mapping[String(index)] ?? HEADERLESS[index];
+    if (choice !== undefined) chosen.set(index, choice);
+  }
+  for (const [index, choice] of chosen) {
+    if (choice === "skip") {
+      ignored.push({ index, header: columnLetter(index), note: "left out" });
+    } else if (layout[choice] !== undefined) {
+      errors.add(null, columnLetter(index), `a second ${choice} column besides ${layout[choice]!.name}`);
+    } else {
+      layout[choice] = { index, name: HEADERLESS_NAME[choice] ?? choice, scale: 1 };
+    }
+  }
+  return { layout, ignored };
+}
+
+function columnsOf(
+  layout: Layout,
+  ignored: IgnoredColumn[],
+  unread: IgnoredColumn[],
+  headers: string[],
+): MeasurementColumns {
+  const columns: MeasurementColumns = {
+    ignored: [...ignored].sort((a, b) => a.index - b.index),
+    unread: [...unread].sort((a, b) => a.index - b.index),
+    headers,
+  };
   for (const [field, column] of Object.entries(layout) as [MeasurementField, Column][]) {
     columns[field] = column.index;
   }
   return columns;
 }
 
-const measuredValue = (what: string) =>
-  z.number({ error: `${what} must be a finite number` }).gt(0, { error: `${what} must be greater than 0` });
+const measuredValue = (what: string, quantity: SaneQuantity) =>
+  z
+    .number({ error: `${what} must be a finite number` })
+    .gt(0, { error: `${what} must be greater than 0` })
+    .check((ctx) => {
+      const reason = saneValue(ctx.value, quantity);
+      if (reason !== null)
+        ctx.issues.push({ code: "custom", input: ctx.value, message: `${what}: ${reason}` });
+    });
 
-/** One measured pulse as the save route accepts it: SI units, a period longer than the pulse. */
+/** Keys a bench script may mean as repetition but which the schema does not read (repetition is `repeat`). */
+const STRAY_REPETITION = /^(?!repeat$).*(rep|period|freq|rate|count|cycle|train|burst|interval)/i;
+
+/**
+ * One measured pulse as the save route accepts it: SI units within the sanity limits, a period longer than the
+ * pulse. Unknown keys are dropped, except ones that look like repetition ("period", "count", "frequency" beside
+ * `repeat`): those are refused, so that a train is never checked as a single pulse because of a key's name.
+ */
 export const measurementRowSchema = z
-  .object({
+  .looseObject({
     label: z
       .string({ error: "the label must be text" })
       .trim()
       .min(1, { error: "the label must not be empty" })
       .max(MAX_LABEL_LENGTH, { error: `the label must be at most ${MAX_LABEL_LENGTH} characters` }),
     kind: z.enum(["rect", "triangle"], { error: 'the shape must be "rect" or "triangle"' }),
-    v: measuredValue("the voltage"),
-    i: measuredValue("the current"),
-    duration: measuredValue("the pulse width"),
+    v: measuredValue("the voltage", "voltage"),
+    i: measuredValue("the current", "current"),
+    duration: measuredValue("the pulse width", "time"),
     repeat: z
       .object({
-        period: measuredValue("the period"),
+        period: measuredValue("the period", "time"),
         count: z
           .int({ error: "the count must be a whole number" })
           .min(1, { error: "the count must be 1 or more" })
@@ -508,6 +678,23 @@ export const measurementRowSchema = z
   .refine((row) => row.repeat === undefined || row.repeat.period > row.duration, {
     path: ["repeat", "period"],
     error: "the period must be longer than the pulse width",
-  });
+  })
+  .superRefine((row, ctx) => {
+    for (const key of Object.keys(row).filter((k) => STRAY_REPETITION.test(k))) {
+      ctx.addIssue({
+        code: "custom",
+        path: [key],
+        message: `'${key}' is not read: give repetition as repeat: { period, count } (seconds; count optional)`,
+      });
+    }
+  })
+  .transform(({ label, kind, v, i, duration, repeat }) => ({
+    label,
+    kind,
+    v,
+    i,
+    duration,
+    ...(repeat === undefined ? {} : { repeat }),
+  }));
 
 export type MeasurementInput = z.infer<typeof measurementRowSchema>;

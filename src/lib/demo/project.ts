@@ -72,18 +72,18 @@ export function demoFaultCases(): DemoFaultCase[] {
       "1.5 mF of controller bulk capacitance charged at 1 V/ms from the 48 V pack, no load during the ramp.",
     ),
     built(
-      "Output short until the over-current timer trips",
+      "Output short until the protection turns off",
       "current-limit",
       { busVoltageMax: 54.6, currentLimitMax: 40, faultTimeMax: 100e-6 },
       currentLimitFault,
-      "Full pack (13 × 4.2 V), current limit at its highest setting, 100 µs fault timer.",
+      "Full pack (13 × 4.2 V), current limit at its highest setting, 100 µs longest hold before turn-off.",
     ),
     built(
-      "Overload retry train",
+      "Overload restart train",
       "current-limit",
       { busVoltageMax: 54.6, currentLimitMax: 8, faultTimeMax: 2e-3, retryPeriod: 0.1, retryCount: 20 },
       currentLimitFault,
-      "Motor stall: 8 A limit for 2 ms, retried every 100 ms, 20 times before the controller latches off.",
+      "Motor stall: 8 A limit for 2 ms, restarted every 100 ms, 20 times before the protection latches off.",
     ),
   ];
 }
@@ -107,7 +107,7 @@ export function demoMeasuredPulses() {
       boardSerial: "TW-03",
     },
     {
-      label: "Stall retries, board TW-03",
+      label: "Stall restarts, board TW-03",
       kind: "rect" as const,
       v: 40,
       i: 9,

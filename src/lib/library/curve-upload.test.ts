@@ -150,9 +150,12 @@ describe("curve-set upload", () => {
       .select()
       .from(pendingUploads)
       .where(eq(pendingUploads.id, ticket.uploadId));
-    const error = await registerCurveSet(down, { part, userId: ws.members.engineer.id, upload }).catch(
-      (e) => e,
-    );
+    const error = await registerCurveSet(down, {
+      part,
+      userId: ws.members.engineer.id,
+      userName: "Engineer",
+      upload,
+    }).catch((e) => e);
     expect(error.status).toBe(503);
     expect(await rowsFor(part.id)).toEqual([]);
     // The pending row stays so that the cleanup step can remove the object once storage is back.

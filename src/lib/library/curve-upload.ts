@@ -9,6 +9,7 @@ import { AppError } from "@/lib/errors";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
+import { draftFields, findingPart, noticeLapsedVerification } from "./part-findings";
 
 /** An upload not registered within this time is removed by the cleanup step. */
 export const staleUploadMs = 60 * 60 * 1000;
@@ -126,6 +127,7 @@ export async function registerCurveSet(
   input: {
     part: Part;
     userId: string;
+    userName: string;
     upload: { id: string; objectKey: string; fileName: string };
     refCaseTemp?: number;
   },
@@ -135,10 +137,30 @@ export async function registerCurveSet(
     const { text, bytes } = await readUploadedText(storage, upload.objectKey);
     const parsed = parseCurveSetCsv(text);
     if (!parsed.ok) throw new CsvRejected(parsed.errors);
-    const findings = findCurveSetIssues(digitisedCurveSet(parsed.curves), {
-      tjMax: input.part.tjMax,
-      foster: input.part.foster ?? undefined,
-    });
+    const sha256 = createHash("sha256").update(bytes).digest("hex");
+    const refCaseTemp = input.refCaseTemp ?? 25;
+    const [same] = await db
+      .select({ id: curveSets.id, fileName: curveSets.fileName, createdAt: curveSets.createdAt })
+      .from(curveSets)
+      .where(
+        and(
+          eq(curveSets.partId, input.part.id),
+          eq(curveSets.sha256, sha256),
+          eq(curveSets.refCaseTemp, refCaseTemp),
+        ),
+      );
+    if (same) {
+      throw new AppError(
+        "conflict:same-curve-set",
+        `This file matches the revision ${same.fileName} uploaded on ${same.createdAt.toISOString().slice(0, 10)}, ` +
+          "byte for byte: nothing was added. Activate that revision under Curve-set revisions if it is not the active one.",
+        { details: { curveSetId: same.id } },
+      );
+    }
+    const findings = findCurveSetIssues(
+      { ...digitisedCurveSet(parsed.curves), refCaseTemp },
+      findingPart(input.part),
+    );
     const set = await db.transaction(async (tx) => {
       await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, input.part.id));
       const [row] = await tx
@@ -149,9 +171,9 @@ export async function registerCurveSet(
           objectKey: upload.objectKey,
           fileName: upload.fileName,
           size: bytes.length,
-          sha256: createHash("sha256").update(bytes).digest("hex"),
+          sha256,
           shape: parsed.shape,
-          refCaseTemp: input.refCaseTemp ?? 25,
+          refCaseTemp,
           active: true,
           findings,
           uploadedBy: input.userId,
@@ -167,7 +189,7 @@ export async function registerCurveSet(
       );
       await tx
         .update(parts)
-        .set({ status: "draft", verifiedBy: null, verifiedAt: null, updatedAt: new Date() })
+        .set({ ...draftFields, updatedAt: new Date() })
         .where(eq(parts.id, input.part.id));
       await recordAudit(
         {
@@ -183,6 +205,7 @@ export async function registerCurveSet(
       await tx.delete(pendingUploads).where(eq(pendingUploads.id, upload.id));
       return row;
     });
+    await noticeLapsedVerification(input.part, `new curve set ${upload.fileName}`, input.userName);
     return { curveSet: set, curves: parsed.curves.length, findings, warnings: parsed.warnings };
   } catch (error) {
     await discardUpload(storage, upload);

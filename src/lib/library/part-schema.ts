@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { type SaneQuantity, saneValue } from "@/lib/soa/sanity";
 import { parseQuantity, type Unit } from "@/lib/soa/units";
 
 // One schema for the part form and the route handlers. Numbers may come typed in engineering notation
@@ -12,8 +13,44 @@ export const technologyLabels: Record<(typeof technologies)[number], string> = {
   igbt: "IGBT",
 };
 
-/** A quantity field: a number, or text in engineering notation with the given unit. */
-export function quantity(unit: Unit, options: { positive?: boolean } = { positive: true }) {
+/** A typical value of each unit, for the examples in messages: the unit and its size as the field expects. */
+export const UNIT_EXAMPLES: Readonly<Partial<Record<Unit, string>>> = {
+  V: "100 V",
+  A: "120 A",
+  Ω: "4.2 mΩ",
+  "°C": "175 °C",
+  "K/W": "0.45 K/W",
+  s: "150 µs",
+  W: "1.2 kW",
+  J: "250 mJ",
+  F: "470 µF",
+  H: "10 µH",
+  Hz: "2 kHz",
+  "%": "10 %",
+};
+
+const SANE: Readonly<Partial<Record<Unit, SaneQuantity>>> = {
+  V: "voltage",
+  A: "current",
+  Ω: "resistance",
+  "K/W": "thermal-resistance",
+  s: "time",
+  "°C": "temperature",
+  Hz: "frequency",
+};
+
+interface QuantityOptions {
+  positive?: boolean;
+  /** A narrower range than the sanity limits, with the message to give outside it. */
+  range?: { min: number; max: number; message: string };
+}
+
+/**
+ * A quantity field: a number, or text in engineering notation with the given unit (decimal comma allowed),
+ * refused outside the physical sanity limits of its unit (src/lib/soa/sanity.ts) with a unit-correct example.
+ */
+export function quantity(unit: Unit, options: QuantityOptions = { positive: true }) {
+  const example = UNIT_EXAMPLES[unit] ?? unit;
   return z.union([z.number(), z.string()]).transform((input, ctx): number => {
     let value: number;
     if (typeof input === "number") {
@@ -21,17 +58,27 @@ export function quantity(unit: Unit, options: { positive?: boolean } = { positiv
     } else {
       const parsed = parseQuantity(input, unit);
       if (!parsed.ok) {
-        ctx.addIssue({ code: "custom", message: `${parsed.reason} (e.g. "4.2 m${unit}")` });
+        ctx.addIssue({ code: "custom", message: `${parsed.reason} (e.g. "${example}")` });
         return z.NEVER;
       }
       value = parsed.value as number;
     }
     if (!Number.isFinite(value)) {
-      ctx.addIssue({ code: "custom", message: "Enter a finite number" });
+      ctx.addIssue({ code: "custom", message: `Enter a finite number (e.g. "${example}")` });
       return z.NEVER;
     }
     if (options.positive && !(value > 0)) {
       ctx.addIssue({ code: "custom", message: "Must be greater than zero" });
+      return z.NEVER;
+    }
+    const sane = SANE[unit];
+    const insane = sane === undefined ? null : saneValue(value, sane);
+    if (insane !== null) {
+      ctx.addIssue({ code: "custom", message: insane.charAt(0).toUpperCase() + insane.slice(1) });
+      return z.NEVER;
+    }
+    if (options.range && !(value >= options.range.min && value <= options.range.max)) {
+      ctx.addIssue({ code: "custom", message: options.range.message });
       return z.NEVER;
     }
     return value;
@@ -63,30 +110,36 @@ export const partSchema = z
     idMax: optionalQuantity("A"),
     idPulseMax: optionalQuantity("A"),
     rdsOn: optionalQuantity("Ω"),
-    tjMax: quantity("°C", { positive: false }),
+    tjMax: quantity("°C", {
+      positive: false,
+      range: { min: 50, max: 400, message: "Tj,max between 50 °C and 400 °C" },
+    }),
     rthJc: optionalQuantity("K/W"),
     unitCost: z.preprocess(
-      (v) => (v === "" || v === null || v === undefined ? undefined : typeof v === "string" ? Number(v) : v),
-      z.number({ message: "Enter a number, e.g. 2.35" }).finite().optional(),
+      (v) =>
+        v === "" || v === null || v === undefined
+          ? undefined
+          : typeof v === "string"
+            ? Number(v.trim().replace(/^(\d+),(\d+)$/, "$1.$2"))
+            : v,
+      z
+        .number({ message: "Enter a number, e.g. 2.35" })
+        .finite()
+        .min(0, { message: "A cost cannot be negative" })
+        .optional(),
     ),
     currency: optionalText(3),
     datasheetRevision: optionalText(80),
     notes: optionalText(2000),
   })
-  .superRefine((part, ctx) => {
-    if (part.tjMax < 50 || part.tjMax > 400) {
-      ctx.addIssue({ code: "custom", path: ["tjMax"], message: "Tj,max between 50 °C and 400 °C" });
-    }
-    if (part.unitCost !== undefined && part.unitCost < 0) {
-      ctx.addIssue({ code: "custom", path: ["unitCost"], message: "A cost cannot be negative" });
-    }
-    if (part.unitCost !== undefined && !part.currency) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["currency"],
-        message: "Give the currency of the cost (e.g. EUR)",
-      });
-    }
+  .refine((part) => part.unitCost === undefined || Boolean(part.currency), {
+    path: ["currency"],
+    message: "Give the currency of the cost (e.g. EUR)",
+    // Checked even while other fields are wrong, so that every error shows at once.
+    when: (payload) => {
+      const raw = payload.value as { unitCost?: unknown; currency?: unknown };
+      return raw.unitCost !== undefined && raw.unitCost !== "" && raw.unitCost !== null;
+    },
   });
 
 export type PartInput = z.input<typeof partSchema>;

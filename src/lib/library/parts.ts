@@ -6,6 +6,7 @@ import { getPart } from "@/db/queries/parts";
 import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
+import { draftFields, noticeLapsedVerification, refreshFindings } from "./part-findings";
 import type { PartValues } from "./part-schema";
 
 /** The caller's workspace's part, or 404 (a part of another workspace does not exist for the caller). */
@@ -70,17 +71,15 @@ export async function createPart(caller: MemberCaller, values: PartValues): Prom
 
 export async function updatePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
   const next = normalised(values);
-  const limitsChanged = limitFields.some((f) => (next[f] ?? null) !== (part[f] ?? null));
-  return db.transaction(async (tx) => {
+  const changed = limitFields.filter((f) => (next[f] ?? null) !== (part[f] ?? null));
+  const limitsChanged = changed.length > 0;
+  const updated = await db.transaction(async (tx) => {
     const [updated] = await tx
       .update(parts)
-      .set({
-        ...next,
-        updatedAt: new Date(),
-        ...(limitsChanged ? { status: "draft" as const, verifiedBy: null, verifiedAt: null } : {}),
-      })
+      .set({ ...next, updatedAt: new Date(), ...(limitsChanged ? draftFields : {}) })
       .where(eq(parts.id, part.id))
       .returning();
+    if (limitsChanged) await refreshFindings(tx, updated);
     await recordAudit(
       {
         workspaceId: caller.workspaceId,
@@ -94,28 +93,34 @@ export async function updatePart(caller: MemberCaller, part: Part, values: PartV
     );
     return updated;
   });
+  if (limitsChanged) {
+    await noticeLapsedVerification(part, `ratings changed: ${changed.join(", ")}`, caller.user.name);
+  }
+  return updated;
 }
 
-/** Replaces the Foster network; the part returns to draft. An empty list removes the thermal model. */
+/**
+ * Replaces the Foster network; the curve sets' findings are found again against it and the part returns to draft
+ * (its verifier is told). An empty list removes the thermal model.
+ */
 export async function setThermalModel(
   caller: MemberCaller,
   part: Part,
   terms: FosterTermRow[],
   source: ThermalSource,
 ): Promise<Part> {
-  return db.transaction(async (tx) => {
+  const updated = await db.transaction(async (tx) => {
     const [updated] = await tx
       .update(parts)
       .set({
         foster: terms.length ? terms : null,
         thermalSource: terms.length ? source : null,
-        status: "draft",
-        verifiedBy: null,
-        verifiedAt: null,
+        ...draftFields,
         updatedAt: new Date(),
       })
       .where(eq(parts.id, part.id))
       .returning();
+    await refreshFindings(tx, updated);
     await recordAudit(
       {
         workspaceId: caller.workspaceId,
@@ -129,4 +134,6 @@ export async function setThermalModel(
     );
     return updated;
   });
+  await noticeLapsedVerification(part, "thermal model changed", caller.user.name);
+  return updated;
 }

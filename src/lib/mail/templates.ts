@@ -63,3 +63,22 @@ export function failingPulseMail(input: {
     ].join("\n"),
   };
 }
+
+export function verificationLapsedMail(input: {
+  to: string;
+  part: string;
+  change: string;
+  actorName: string;
+  link: string;
+}): Mail {
+  return {
+    to: input.to,
+    subject: `${input.part} is back in draft: its data changed`,
+    text: [
+      `You verified ${input.part} in the library. ${input.actorName} changed it since (${input.change}), so the`,
+      "verification lapsed and the part is back in draft.",
+      "",
+      `Check the part and its findings again, and verify it anew: ${input.link}`,
+    ].join("\n"),
+  };
+}

@@ -220,4 +220,37 @@ describe("bench scripts", () => {
     const body = await res.json();
     expect(body.verdicts[0]).toMatchObject({ worst: "pass", byCandidate: { "BN-1": { verdict: "pass" } } });
   });
+
+  it("post their instrument's table with a column mapping; an unread repetition column or key is refused", async () => {
+    const { POST: createToken } = await import("@/app/api/account/tokens/route");
+    const { POST: v1Save } = await import("@/app/api/v1/projects/[id]/measurements/route");
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "rig 2" } })).json();
+    const post = (body: unknown) =>
+      call(h(v1Save), "POST", { bearer: token.secret, params: { id: projectId }, body });
+    const table = "Acq;Vds max;Id max;+Width;rep spacing [ms];Mean\n7;12,5 V;5 A;1 ms;50;2 A\n";
+
+    const unread = await post({ text: table });
+    expect(unread.status).toBe(400);
+    const refused = await unread.json();
+    expect(refused.error.message).toBe(
+      "The table was not saved: column rep spacing [ms]: the column is not read: it looks like repetition, and " +
+        "reading the pulses without it would check a train as a single pulse; choose what it holds under Columns, " +
+        "or leave it out",
+    );
+    expect(refused.error.details.issues).toHaveLength(2);
+
+    const saved = await post({ text: table, mapping: { 4: "period", 5: "skip" }, boardSerial: "TW-9" });
+    expect(saved.status).toBe(201);
+    const [row] = await testDb.db.select().from(measuredPulses).where(eq(measuredPulses.label, "7"));
+    expect(row).toMatchObject({ v: 12.5, i: 5, duration: 1e-3, repeatPeriod: 0.05, repeatCount: null });
+
+    const key = await post({
+      rows: [{ label: "R2", kind: "rect", v: 12, i: 5, duration: 1e-3, repeatPeriod: 0.05 }],
+    });
+    expect(key.status).toBe(400);
+    expect((await key.json()).error.message).toContain(
+      "'repeatPeriod' is not read: give repetition as repeat",
+    );
+  });
 });

@@ -5,6 +5,7 @@ import { notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
 import { mailer } from "@/lib/mail";
 import { failingPulseMail } from "@/lib/mail/templates";
+import { formatTemperature } from "@/lib/soa/sanity";
 import { formatQuantity } from "@/lib/soa/units";
 import type { checkProject } from "./check";
 
@@ -49,7 +50,7 @@ export async function notifyFailingEvidence(
       const detail = r
         ? [
             r.utilisation !== null ? `utilisation ${(r.utilisation * 100).toFixed(0)} %` : null,
-            r.tjPeak !== null ? `Tj peak ${formatQuantity(r.tjPeak, "°C")}` : null,
+            r.tjPeak !== null ? `Tj peak ${formatTemperature(r.tjPeak)}` : null,
           ]
             .filter(Boolean)
             .join(", ")

@@ -4,7 +4,13 @@ import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { measuredPulses, type Project } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
-import { MAX_MEASUREMENT_ROWS, measurementRowSchema } from "@/lib/csv/measurements";
+import {
+  columnMappingSchema,
+  MAX_MEASUREMENT_ROWS,
+  measurementRowSchema,
+  parseMeasurementPaste,
+} from "@/lib/csv/measurements";
+import { AppError } from "@/lib/errors";
 import { checkProject } from "./check";
 import { notifyFailingEvidence } from "./notify";
 
@@ -18,6 +24,43 @@ export const saveMeasurementsSchema = z.object({
   boardSerial: optionalText(80),
   probe: optionalText(120),
 });
+
+/**
+ * What a bench script may send instead of rows: the table as its instrument writes it, read by the same rules as
+ * the paste (header names, units, decimal commas, repetition synonyms), with its own column mapping over the
+ * header. A column nothing reads and the mapping does not leave out ("skip") refuses the whole request.
+ */
+export const saveBenchTextSchema = z.object({
+  text: z.string().min(1, { message: "No table to read" }).max(500_000),
+  mapping: columnMappingSchema.default({}),
+  note: optionalText(2000),
+  boardSerial: optionalText(80),
+  probe: optionalText(120),
+});
+
+/** Reads a bench table into rows to save, or refuses it with every problem of the table and of its rows. */
+export function benchTextRows(input: z.output<typeof saveBenchTextSchema>) {
+  const parsed = parseMeasurementPaste(input.text, input.mapping);
+  const issues = [...parsed.errors, ...parsed.rows.flatMap((row) => row.errors)];
+  if (issues.length > 0) {
+    throw new AppError("invalid:table", `The table was not saved: ${issues[0].message}`, {
+      details: { issues, columns: parsed.columns },
+    });
+  }
+  return saveMeasurementsSchema.parse({
+    rows: parsed.rows.map(({ label, kind, v, i, duration, repeat }) => ({
+      label,
+      kind,
+      v,
+      i,
+      duration,
+      repeat,
+    })),
+    note: input.note,
+    boardSerial: input.boardSerial,
+    probe: input.probe,
+  });
+}
 
 /**
  * Saves measured pulses in one transaction, attributed to the caller; then checks the project and e-mails its

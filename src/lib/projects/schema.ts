@@ -67,14 +67,14 @@ export const faultCaseSchema = z
       .nullable()
       .optional(),
   })
-  .superRefine((c, ctx) => {
-    if (c.repeat && !(c.repeat.period > c.duration)) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["repeat", "period"],
-        message: "The period must be longer than the pulse",
-      });
-    }
+  .refine((c) => !c.repeat || c.repeat.period > c.duration, {
+    path: ["repeat", "period"],
+    message: "The period must be longer than the pulse",
+    // Checked whenever both figures were read, even while another field is wrong: every error at once.
+    when: (payload) => {
+      const value = payload.value as { duration?: unknown; repeat?: { period?: unknown } | null };
+      return typeof value.duration === "number" && typeof value.repeat?.period === "number";
+    },
   });
 
 export type FaultCaseInput = z.input<typeof faultCaseSchema>;

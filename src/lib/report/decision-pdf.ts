@@ -4,6 +4,7 @@ import { computeLimits } from "@/lib/library/limits";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { CAUTION, explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
 import { revisionOf } from "@/lib/soa/revision";
+import { formatTemperature } from "@/lib/soa/sanity";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
 import { formatQuantity } from "@/lib/soa/units";
 
@@ -54,7 +55,7 @@ type Doc = PDFKit.PDFDocument;
 const pct = (u: number | null) => (u === null ? "—" : `${(u * 100).toFixed(0)} %`);
 // The shipped font has no thin space (U+2009): the PDF sets a plain space between number and unit.
 const fq = (v: number, unit: Parameters<typeof formatQuantity>[1]) =>
-  formatQuantity(v, unit).replace(/\u2009/g, " ");
+  (unit === "°C" ? formatTemperature(v) : formatQuantity(v, unit)).replace(/\u2009/g, " ");
 const q = (v: number | null | undefined, unit: Parameters<typeof formatQuantity>[1]) =>
   v === null || v === undefined ? "—" : fq(v, unit);
 const stamp = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;

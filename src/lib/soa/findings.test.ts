@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { findCurveSetIssues, RESISTOR_SLOPE_LIMIT, THERMAL_MISMATCH_LIMIT } from "./findings";
+import {
+  CROSSING_TOLERANCE,
+  findCurveSetIssues,
+  RATING_MISMATCH_LIMIT,
+  RESISTOR_SLOPE_LIMIT,
+  THERMAL_MISMATCH_LIMIT,
+} from "./findings";
 import { zth } from "./foster";
 import type { CurveSet } from "./types";
 
@@ -66,7 +72,7 @@ describe("findCurveSetIssues", () => {
         { duration: 1e-2, points: [] },
       ],
     });
-    expect(findings.map((f) => [f.kind, f.curve.index, f.location])).toEqual([
+    expect(findings.map((f) => [f.kind, f.curve?.index, f.location])).toEqual([
       ["invalid-point", 0, { index: 1 }],
       ["invalid-point", 0, { index: 2 }],
       ["invalid-point", 0, { index: 3 }],
@@ -128,11 +134,66 @@ describe("findCurveSetIssues", () => {
     // the 1 ms curve reads 40·2^(ln 0.25/ln 4) = 20 A and the 10 ms curve 30 A. DC vs 1 ms: below
     // everywhere. DC vs 10 ms, compared at 2, 20, 40 V: above at 40 V only (10 A against
     // 30·2^(ln(1/15)/ln 4) = 7.75 A).
-    expect(crossings.map((f) => [f.curve.index, f.location])).toEqual([
-      [1, { v: 20 }],
-      [2, { v: 40 }],
+    expect(crossings.map((f) => [f.curve?.index, f.location, f.size])).toEqual([
+      [1, { v: 20 }, "+50 %"],
+      [2, { v: 40 }, "+29 %"],
     ]);
     expect(crossings[0].message).toContain("10\u2009ms curve lies above the 1\u2009ms curve at 20\u2009V");
+  });
+
+  it("leaves digitising noise on a shared R_DS(on) line or package limit alone, within 5 %", () => {
+    expect(CROSSING_TOLERANCE).toBe(0.05);
+    // Issue 12's report: a 100 µs curve at 31.7 A against a 10 µs curve at 31.1 A at 187 mV (+1.9 %), where both
+    // were digitised from the same R_DS(on) line; then the same pair with the longer curve 6 % above.
+    const set = (excess: number): CurveSet => ({
+      curves: [
+        {
+          duration: 1e-5,
+          points: [
+            [0.1, 16.6],
+            [0.187, 31.1],
+            [2, 300],
+            [100, 60],
+          ],
+        },
+        {
+          duration: 1e-4,
+          points: [
+            [0.187, 31.1 * excess],
+            [2, 290],
+            [100, 20],
+          ],
+        },
+      ],
+    });
+    expect(findCurveSetIssues(set(31.7 / 31.1))).toEqual([]);
+    expect(findCurveSetIssues(set(1.04))).toEqual([]);
+    const found = findCurveSetIssues(set(1.06));
+    expect(found.map((f) => [f.kind, f.size])).toEqual([["longer-above-shorter", "+6 %"]]);
+  });
+
+  it("keys a finding by what it is, so the same finding found again has the same key", () => {
+    const set: CurveSet = {
+      curves: [
+        {
+          duration: 1e-3,
+          points: [
+            [1, 100],
+            [40, 10],
+          ],
+        },
+        {
+          duration: 1e-2,
+          points: [
+            [1, 100],
+            [40, 30],
+          ],
+        },
+      ],
+    };
+    const [first] = findCurveSetIssues(set);
+    expect(first.key).toBe("longer-above-shorter|0.01000|1\u2009ms");
+    expect(findCurveSetIssues(structuredClone(set))[0].key).toBe(first.key);
   });
 
   it("does not compare curves without a common voltage range, nor report equal curves", () => {
@@ -158,7 +219,7 @@ describe("findCurveSetIssues", () => {
       ],
     };
     const findings = findCurveSetIssues(set, { tjMax: 175, foster });
-    expect(findings.map((f) => [f.kind, f.curve.index, f.location])).toEqual([
+    expect(findings.map((f) => [f.kind, f.curve?.index, f.location])).toEqual([
       ["thermal-mismatch", 1, { v: 10 }],
       ["thermal-mismatch", 2, { v: 10 }],
     ]);
@@ -166,5 +227,22 @@ describe("findCurveSetIssues", () => {
     expect(findings[1].message).toContain("by -30 %");
     expect(findCurveSetIssues(set, { tjMax: 175 })).toEqual([]);
     expect(findCurveSetIssues(set, { tjMax: 20, foster })).toEqual([]);
+  });
+
+  it("finds a thermal model whose ΣR_i disagrees with the rated R_th(j-c) by more than 10 %", () => {
+    expect(RATING_MISMATCH_LIMIT).toBe(0.1);
+    const foster = [
+      { r: 0.3, tau: 1e-3 },
+      { r: 0.3, tau: 1e-2 },
+    ];
+    // Derived: ΣR_i = 0.6 K/W; against 0.5 K/W that is +20 %, against 0.56 K/W +7 %.
+    const found = findCurveSetIssues({ curves: [] }, { tjMax: 175, foster, rthJc: 0.5 });
+    expect(found.map((f) => [f.kind, f.size, f.curve, f.key])).toEqual([
+      ["rating-mismatch", "+20 %", undefined, "rating-mismatch|part|"],
+    ]);
+    expect(found[0].message).toContain("R_th(j-c)");
+    expect(findCurveSetIssues({ curves: [] }, { tjMax: 175, foster, rthJc: 0.56 })).toEqual([]);
+    expect(findCurveSetIssues({ curves: [] }, { tjMax: 175, foster, rthJc: null })).toEqual([]);
+    expect(findCurveSetIssues({ curves: [] }, { tjMax: 175, rthJc: 0.5 })).toEqual([]);
   });
 });

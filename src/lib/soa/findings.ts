@@ -5,11 +5,16 @@
 // - not-increasing: V does not rise strictly from one point to the next, in the order digitised;
 // - steeper-than-resistor: a segment rising faster than a resistor line, log-log slope > +1.05 (an R_DS(on)
 //   line has slope +1; anything steeper is a digitising slip) — common practice, no source;
-// - longer-above-shorter: a longer pulse's curve above a shorter one's (a longer pulse is never allowed more
-//   current), compared log-log at the union of both curves' digitised voltages on their common V range,
-//   reported once per pair at the voltage of the largest excess; DC counts as the longest;
+// - longer-above-shorter: a longer pulse's curve above a shorter one's by more than CROSSING_TOLERANCE (a longer
+//   pulse is never allowed more current), compared log-log at the union of both curves' digitised voltages on
+//   their common V range, reported once per pair at the voltage of the largest excess; DC counts as the longest.
+//   Curves that share the R_DS(on) line or the package limit are digitised twice from one line, so they differ
+//   there by the digitising noise (1–4 % on real figures): only an excess beyond that is a finding;
 // - thermal-mismatch: with a Foster network, the curve's constant-power level P_k = max V·I differs from
-//   (Tj,max − T_ref)/Z_th(t_k) (R_th for DC) by more than 20 % of the latter.
+//   (Tj,max − T_ref)/Z_th(t_k) (R_th for DC) by more than 20 % of the latter;
+// - rating-mismatch: the Foster network's ΣR_i differs from the rated R_th(j-c) by more than 10 % of the rating.
+// Every finding carries its size (how far beyond its tolerance) and a key that stays the same when the same
+// finding is found again, so that an acceptance can be matched to it.
 import { DEFAULT_REF_CASE_TEMP } from "./curve-set";
 import { type FosterTerm, rth, zth } from "./foster";
 import { type CurvePoint, interpolateCurve } from "./interpolate-curve";
@@ -22,29 +27,42 @@ export type FindingKind =
   | "not-increasing"
   | "steeper-than-resistor"
   | "longer-above-shorter"
-  | "thermal-mismatch";
+  | "thermal-mismatch"
+  | "rating-mismatch";
+
+/** Kinds that need the points in the order digitised; the others can be found again from the stored curves. */
+export const ORDER_FINDING_KINDS: readonly FindingKind[] = ["invalid-point", "empty-curve", "not-increasing"];
 
 export interface Finding {
   kind: FindingKind;
-  /** The curve at fault: its position in the input and its pulse width. */
-  curve: { index: number; duration: Duration };
-  /** A voltage on the curve, or the position of a point in the input order. */
-  location: { v: number } | { index: number };
+  /** Stable identity: the same finding found again on the same data has the same key. */
+  key: string;
+  /** The curve at fault: its position in the input and its pulse width; absent for a part-level finding. */
+  curve?: { index: number; duration: Duration };
+  /** A voltage on the curve, or the position of a point in the input order; absent for a part-level finding. */
+  location?: { v: number } | { index: number };
+  /** How large the finding is, in words with its unit ("+64 %", "slope 1.29"). */
+  size: string;
   message: string;
 }
 
-/** The part's data the thermal-mismatch finding needs; without a Foster network it is skipped. */
+/** The part's data the thermal findings need; without a Foster network they are skipped. */
 export interface FindingPart {
   tjMax: number;
   foster?: readonly FosterTerm[];
+  /** The rated junction-to-case thermal resistance, K/W. */
+  rthJc?: number | null;
 }
 
 /** Log-log slope above which a segment is steeper than a resistor line (slope 1) plus digitising slack. */
 export const RESISTOR_SLOPE_LIMIT = 1.05;
 /** Relative disagreement between a curve's power level and the thermal model that makes a finding. */
 export const THERMAL_MISMATCH_LIMIT = 0.2;
-/** A longer curve counts as above a shorter one beyond this relative excess (rounding only). */
-const ABOVE_TOLERANCE = 1e-9;
+/** A longer curve counts as above a shorter one beyond this relative excess: digitising noise on a line two
+ * curves share stays within 1–4 % on real figures (issue 12), a real crossing is tens of percent. */
+export const CROSSING_TOLERANCE = 0.05;
+/** Relative disagreement between the Foster network's ΣR_i and the rated R_th(j-c) that makes a finding. */
+export const RATING_MISMATCH_LIMIT = 0.1;
 
 interface Cleaned {
   index: number;
@@ -56,6 +74,12 @@ interface Cleaned {
 const width = (d: Duration): string => (d === "DC" ? "DC" : formatQuantity(d, "s"));
 const volts = (v: number): string => formatQuantity(v, "V");
 const amps = (i: number): string => formatQuantity(i, "A");
+const percent = (ratio: number): string => `${ratio > 0 ? "+" : ""}${Math.round(ratio * 100)} %`;
+
+function keyOf(kind: FindingKind, curve?: { duration: Duration }, where?: string): string {
+  const width = curve === undefined ? "part" : curve.duration === "DC" ? "DC" : curve.duration.toPrecision(4);
+  return [kind, width, where ?? ""].join("|");
+}
 
 function isValidDuration(d: Duration): boolean {
   return d === "DC" || (Number.isFinite(d) && d > 0);
@@ -67,8 +91,10 @@ function pointFindings(set: CurveSet, findings: Finding[]): Cleaned[] {
     if (points.length === 0) {
       findings.push({
         kind: "empty-curve",
+        key: keyOf("empty-curve", curve),
         curve,
         location: { index: 0 },
+        size: "0 points",
         message: "the curve has no points",
       });
     }
@@ -77,7 +103,14 @@ function pointFindings(set: CurveSet, findings: Finding[]): Cleaned[] {
     points.forEach(([v, i], at) => {
       if (!(Number.isFinite(v) && v > 0 && Number.isFinite(i) && i > 0)) {
         const message = `point ${at} is [${v}, ${i}]: voltage and current must be finite and greater than 0`;
-        findings.push({ kind: "invalid-point", curve, location: { index: at }, message });
+        findings.push({
+          kind: "invalid-point",
+          key: keyOf("invalid-point", curve, `#${at}`),
+          curve,
+          location: { index: at },
+          size: "1 point",
+          message,
+        });
         return;
       }
       if (previous !== null && v <= previous.v) {
@@ -85,7 +118,14 @@ function pointFindings(set: CurveSet, findings: Finding[]): Cleaned[] {
         const message =
           `point ${at} at ${volts(v)} ${how} point ${previous.at} at ${volts(previous.v)}: ` +
           "points must be digitised with rising voltage";
-        findings.push({ kind: "not-increasing", curve, location: { index: at }, message });
+        findings.push({
+          kind: "not-increasing",
+          key: keyOf("not-increasing", curve, `#${at}`),
+          curve,
+          location: { index: at },
+          size: formatQuantity(previous.v - v, "V"),
+          message,
+        });
       }
       previous = { v, at };
       valid.push([v, i]);
@@ -107,8 +147,10 @@ function slopeFindings(curves: Cleaned[], findings: Finding[]): void {
           "steeper than a resistor line (slope 1)";
         findings.push({
           kind: "steeper-than-resistor",
+          key: keyOf("steeper-than-resistor", { duration }, v0.toPrecision(4)),
           curve: { index, duration },
           location: { v: v0 },
+          size: `slope ${slope.toFixed(2)}`,
           message,
         });
       }
@@ -136,19 +178,22 @@ function crossingFindings(curves: Cleaned[], findings: Finding[]): void {
         const iShort = interpolateCurve(shorter.sorted, v).current as number;
         const iLong = interpolateCurve(longer.sorted, v).current as number;
         const ratio = iLong / iShort;
-        if (ratio > 1 + ABOVE_TOLERANCE && (worst === null || ratio > worst.ratio)) {
+        if (ratio > 1 + CROSSING_TOLERANCE && (worst === null || ratio > worst.ratio)) {
           worst = { v, ratio, iShort, iLong };
         }
       }
       if (worst !== null) {
         const message =
           `the ${width(longer.duration)} curve lies above the ${width(shorter.duration)} curve ` +
-          `at ${volts(worst.v)} (${amps(worst.iLong)} against ${amps(worst.iShort)}): ` +
+          `at ${volts(worst.v)} (${amps(worst.iLong)} against ${amps(worst.iShort)}, ${percent(worst.ratio - 1)}, ` +
+          `beyond the ${Math.round(CROSSING_TOLERANCE * 100)} % allowed for digitising): ` +
           "a longer pulse cannot be allowed more current";
         findings.push({
           kind: "longer-above-shorter",
+          key: keyOf("longer-above-shorter", longer, width(shorter.duration)),
           curve: { index: longer.index, duration: longer.duration },
           location: { v: worst.v },
+          size: percent(worst.ratio - 1),
           message,
         });
       }
@@ -182,20 +227,51 @@ function thermalFindings(
       const message =
         `the curve's power level ${formatQuantity(power, "W")} differs from the thermal model's ` +
         `${formatQuantity(model, "W")} by ${Math.round(deviation * 100)} %`;
-      findings.push({ kind: "thermal-mismatch", curve: { index, duration }, location: { v: at }, message });
+      findings.push({
+        kind: "thermal-mismatch",
+        key: keyOf("thermal-mismatch", { duration }),
+        curve: { index, duration },
+        location: { v: at },
+        size: percent(deviation),
+        message,
+      });
     }
   }
 }
 
+/** The thermal model against the rated R_th(j-c): both describe the same junction-to-case path. */
+function ratingFindings(part: FindingPart, findings: Finding[]): void {
+  const network = part.foster;
+  const rated = part.rthJc;
+  if (network === undefined || network.length === 0 || rated === undefined || rated === null || !(rated > 0))
+    return;
+  const sum = rth(network);
+  const deviation = (sum - rated) / rated;
+  if (!(Math.abs(deviation) > RATING_MISMATCH_LIMIT)) return;
+  const kw = (r: number) => formatQuantity(r, "K/W");
+  findings.push({
+    kind: "rating-mismatch",
+    key: keyOf("rating-mismatch"),
+    size: percent(deviation),
+    message:
+      `the thermal model's ΣR_i = ${kw(sum)} differs from the rated R_th(j-c) ${kw(rated)} by ` +
+      `${percent(deviation)} (more than ${Math.round(RATING_MISMATCH_LIMIT * 100)} %): one of them is not this part's`,
+  });
+}
+
 /**
  * Findings on a curve set as digitised (points in input order, not yet validated). With `part` carrying a
- * Foster network, the curves are also compared with the thermal model. An empty set has no findings.
+ * Foster network, the curves are also compared with the thermal model, and the model with the rated R_th(j-c).
+ * An empty set has no findings of its own.
  */
 export function findCurveSetIssues(set: CurveSet, part?: FindingPart): Finding[] {
   const findings: Finding[] = [];
   const curves = pointFindings(set, findings);
   slopeFindings(curves, findings);
   crossingFindings(curves, findings);
-  if (part !== undefined) thermalFindings(curves, set.refCaseTemp ?? DEFAULT_REF_CASE_TEMP, part, findings);
+  if (part !== undefined) {
+    thermalFindings(curves, set.refCaseTemp ?? DEFAULT_REF_CASE_TEMP, part, findings);
+    ratingFindings(part, findings);
+  }
   return findings;
 }

@@ -15,6 +15,7 @@ export * from "./interpolate-curve";
 export * from "./policy";
 export * from "./repetition";
 export * from "./revision";
+export * from "./sanity";
 export * from "./schema";
 export * from "./thermal-impedance";
 export * from "./thermal-rect";

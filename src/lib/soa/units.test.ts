@@ -60,6 +60,13 @@ describe("parseQuantity", () => {
     expect(value("1M")).toBe(1e6);
   });
 
+  it("reads one decimal comma as a decimal point, as typed in many locales (issue 12)", () => {
+    expect(value("1,5")).toBe(1.5);
+    expect(value("4,2 mΩ", "Ω")).toBe(4.2e-3);
+    expect(value("-0,25e-3 s", "s")).toBe(-0.25e-3);
+    expect(value("250,5µs", "s")).toBe(250.5e-6);
+  });
+
   it('returns "DC" only when the option allows it', () => {
     expect(value("DC", "s", true)).toBe("DC");
     expect(value(" dc ", "s", true)).toBe("DC");
@@ -70,8 +77,8 @@ describe("parseQuantity", () => {
     expect(reason("")).toBe("expected a number");
     expect(reason("abc")).toBe("expected a number");
     expect(reason("NaN")).toBe("expected a number");
-    expect(reason("1,5")).toBe("use '.' as the decimal separator");
-    expect(reason("1,5 V")).toBe("use '.' as the decimal separator");
+    expect(reason("1,500.5")).toBe("write one decimal separator and no thousands separator (e.g. 1500.5)");
+    expect(reason("1,5,0 V")).toBe("write one decimal separator and no thousands separator (e.g. 1500.5)");
     expect(reason("5 x")).toBe("unknown unit 'x'");
     expect(reason("5 mx")).toBe("unknown unit 'mx'");
     expect(reason("1.5e")).toBe("unknown unit 'e'");

@@ -1,6 +1,7 @@
 // Engineering quantities in and out of the engine: "150 µs", "4.2 mΩ", "1.2 kW". SI prefixes p n µ m k M G
 // belong to parsing and formatting only; inside, everything is plain SI (METHODS.md, units). Decisions:
-// - the decimal separator is "." only: "1,5" is rejected (decimal commas are the CSV reader's concern);
+// - the decimal separator is "." or a single "," ("1,5 ms" = "1.5 ms", as typed in many locales); a number with
+//   both, or with two commas ("1,500.5", "1,5,0"), is refused: nobody can tell thousands from decimals;
 // - prefixes and units are case-sensitive ("m" milli, "M" mega); µ may be written µ (U+00B5), μ (U+03BC) or
 //   u; Ω may be written Ω (U+03A9), Ω (U+2126) or "ohm";
 // - a prefix alone implies the expected unit ("4.2m" is 4.2e-3); "°C", "K/W" and "%" never take a prefix;
@@ -38,6 +39,8 @@ export interface ParseOptions {
 }
 
 const NUMBER = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+))(?:[eE]([+-]?\d+))?/;
+/** A leading integer part followed by one decimal comma and digits, with no second separator after them. */
+const DECIMAL_COMMA = /^([+-]?\d+),(?=\d+(?![\d.,]))/;
 
 function unitOf(text: string): Unit | null {
   if (text in UNIT_ALIASES) return UNIT_ALIASES[text];
@@ -72,10 +75,14 @@ export function parseQuantity(text: string, expectedUnit?: Unit, options: ParseO
       ? { ok: true, value: "DC", unit: null }
       : { ok: false, reason: "'DC' is not allowed here" };
   }
-  const match = NUMBER.exec(trimmed);
+  const comma = DECIMAL_COMMA.exec(trimmed);
+  const written = comma === null ? trimmed : `${comma[1]}.${trimmed.slice(comma[1].length + 1)}`;
+  const match = NUMBER.exec(written);
   if (match === null) return { ok: false, reason: "expected a number" };
-  const rest = trimmed.slice(match[0].length);
-  if (/^,\d/.test(rest)) return { ok: false, reason: "use '.' as the decimal separator" };
+  const rest = written.slice(match[0].length);
+  if (/^[,.]\d/.test(rest)) {
+    return { ok: false, reason: "write one decimal separator and no thousands separator (e.g. 1500.5)" };
+  }
   const suffix = readSuffix(rest.replace(/^[\s\u2009\u202f\u00a0]+/, ""));
   if ("reason" in suffix) return { ok: false, reason: suffix.reason };
   if (expectedUnit !== undefined && suffix.unit !== null && suffix.unit !== expectedUnit) {

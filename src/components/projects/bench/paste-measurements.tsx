@@ -8,7 +8,9 @@ import { Caution } from "@/components/caution";
 import { Button, FormMessage } from "@/components/form";
 import { UnitField } from "@/components/library/fields";
 import { IssueTable } from "@/components/library/upload-progress";
+import type { ColumnMapping } from "@/lib/csv/measurements";
 import { invalidateProject, type MeasurementPreview } from "../api";
+import { ColumnMappingTable } from "./column-mapping";
 import { PreviewTable } from "./preview-table";
 
 interface SaveFields {
@@ -18,9 +20,9 @@ interface SaveFields {
 }
 
 const example = [
-  "label\tV_DS [V]\tI_D [A]\twidth\tshape",
-  "B1\t48\t1.2\t10 ms\trect",
-  "B2\t36\t2.5\t2 ms\ttriangle",
+  "label\tV_DS [V]\tI_D [A]\twidth\tshape\tperiod\tcount",
+  "B1\t48\t1.2\t10 ms\trect\t\t",
+  "B2\t36\t2,5\t2 ms\ttriangle\t50 ms\t10",
 ].join("\n");
 
 /**
@@ -31,21 +33,26 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
   const id = useId();
   const queryClient = useQueryClient();
   const [text, setText] = useState("");
-  const [previewed, setPreviewed] = useState<{ text: string; preview: MeasurementPreview } | null>(null);
+  const [previewed, setPreviewed] = useState<{
+    text: string;
+    mapping: ColumnMapping;
+    preview: MeasurementPreview;
+  } | null>(null);
   const [saved, setSaved] = useState<{ count: number; notified: number } | null>(null);
   const { register, handleSubmit, reset } = useForm<SaveFields>({
     defaultValues: { note: "", boardSerial: "", probe: "" },
   });
 
   const preview = useMutation({
-    mutationFn: (body: string) =>
-      sendJson<MeasurementPreview>("POST", `/api/projects/${projectId}/measurements/preview`, { text: body }),
+    mutationFn: (body: { text: string; mapping: ColumnMapping }) =>
+      sendJson<MeasurementPreview>("POST", `/api/projects/${projectId}/measurements/preview`, body),
     onSuccess: (data, body) => {
-      setPreviewed({ text: body, preview: data });
+      setPreviewed({ ...body, preview: data });
       setSaved(null);
     },
   });
   const valid = previewed ? previewed.preview.rows.filter((r) => r.errors.length === 0) : [];
+  const blocked = previewed !== null && previewed.preview.errors.length > 0;
   const withProblems = previewed ? previewed.preview.rows.length - valid.length : 0;
   const save = useMutation({
     mutationFn: (fields: SaveFields) =>
@@ -95,7 +102,9 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
               variant={previewed && !stale ? "secondary" : "primary"}
               pending={preview.isPending}
               disabled={text.trim() === ""}
-              onClick={() => preview.mutate(text)}
+              onClick={() =>
+                preview.mutate({ text, mapping: previewed?.text === text ? previewed.mapping : {} })
+              }
             >
               Preview
             </Button>
@@ -133,17 +142,18 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
           {previewed.preview.errors.length ? (
             <>
               <FormMessage tone="error">
-                The paste could not be read as it is. Fix these and preview again.
+                The paste cannot be saved as it is: choose what each column holds, or fix these and preview
+                again.
               </FormMessage>
               <IssueTable issues={previewed.preview.errors} label="Problems with the paste" />
             </>
           ) : null}
+          <ColumnMappingTable
+            columns={previewed.preview.columns}
+            pending={preview.isPending || stale}
+            onChange={(mapping) => preview.mutate({ text: previewed.text, mapping })}
+          />
           {previewed.preview.rows.length ? <PreviewTable preview={previewed.preview} /> : null}
-          {previewed.preview.columns.ignored.length ? (
-            <p className="text-xs text-ink-muted">
-              Not read: {previewed.preview.columns.ignored.map((c) => `${c.header} (${c.note})`).join("; ")}.
-            </p>
-          ) : null}
           <Caution />
           {valid.length ? (
             <form
@@ -170,11 +180,13 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
               {save.isError ? <FormMessage tone="error">{messageOf(save.error)}</FormMessage> : null}
               <div className="mt-4 flex items-center justify-between gap-3">
                 <p className="text-sm text-ink-muted">
-                  {withProblems > 0
-                    ? `${withProblems} ${withProblems === 1 ? "row has" : "rows have"} problems and will be left out.`
-                    : "Every row can be saved."}
+                  {blocked
+                    ? "Saving waits until every column is read or left out and the paste has no problems."
+                    : withProblems > 0
+                      ? `${withProblems} ${withProblems === 1 ? "row has" : "rows have"} problems and will be left out.`
+                      : "Every row can be saved."}
                 </p>
-                <Button type="submit" variant="primary" pending={save.isPending} disabled={stale}>
+                <Button type="submit" variant="primary" pending={save.isPending} disabled={stale || blocked}>
                   Save {valid.length} {valid.length === 1 ? "row" : "rows"}
                 </Button>
               </div>

@@ -4,6 +4,15 @@ import { VerdictBadge } from "@/components/verdict-shape";
 import type { MeasurementPreview } from "../api";
 import { percent, q, repeatText } from "../format";
 
+/** Evidence beyond the part's ratings is kept and checked, and said so beside its verdict. */
+function beyond(flags: readonly string[] | undefined): string | null {
+  const words = [
+    flags?.includes("over-voltage") ? "V above V(BR)DSS" : null,
+    flags?.includes("over-current") ? "I above I_DM" : null,
+  ].filter(Boolean);
+  return words.length ? `beyond rating: ${words.join(", ")}` : null;
+}
+
 /** The pasted rows as read: each row's values, its verdict against every candidate, or what is wrong with it. */
 export function PreviewTable({ preview }: { preview: MeasurementPreview }) {
   const { candidates, rows } = preview;
@@ -69,6 +78,11 @@ export function PreviewTable({ preview }: { preview: MeasurementPreview }) {
                         {result?.utilisation !== undefined && result.utilisation !== null ? (
                           <span className="num font-mono text-xs text-ink-muted">
                             {percent(result.utilisation)}
+                          </span>
+                        ) : null}
+                        {beyond(result?.flags) ? (
+                          <span className="text-xs text-fail" data-beyond-rating>
+                            {beyond(result?.flags)}
                           </span>
                         ) : null}
                       </span>

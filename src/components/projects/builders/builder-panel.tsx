@@ -13,7 +13,7 @@ import { TripWindowBuilder } from "./trip-window-builder";
 
 const builders = [
   { key: "inrush", label: "Inrush" },
-  { key: "current-limit", label: "Current-limit timer" },
+  { key: "current-limit", label: "Short in current limit" },
   { key: "trip-window", label: "Trip window" },
   { key: "clamp", label: "Clamp turn-off" },
 ] as const;

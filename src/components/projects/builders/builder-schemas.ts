@@ -41,19 +41,19 @@ export const inrushForm = z.object({
 export const currentLimitForm = z
   .object({
     name,
-    busVoltageMax: quantity("V"),
-    currentLimitMax: quantity("A"),
-    faultTimeMax: quantity("s"),
-    retry: z.boolean(),
-    retryPeriod: optionalQuantity("s"),
-    retryCount: z.preprocess(
+    supplyMax: quantity("V"),
+    limitCurrentMax: quantity("A"),
+    holdTimeMax: quantity("s"),
+    restarts: z.boolean(),
+    restartPeriod: optionalQuantity("s"),
+    restartCount: z.preprocess(
       (v) => (v === "" ? undefined : v),
       z.coerce.number().int({ message: "A whole number" }).min(1, { message: "1 or more" }).optional(),
     ),
   })
   .superRefine((f, ctx) => {
-    if (f.retry && f.retryPeriod === undefined) {
-      ctx.addIssue({ code: "custom", path: ["retryPeriod"], message: "Give the retry period" });
+    if (f.restarts && f.restartPeriod === undefined) {
+      ctx.addIssue({ code: "custom", path: ["restartPeriod"], message: "Give the restart period" });
     }
   });
 

@@ -15,11 +15,11 @@ type Input = z.output<typeof currentLimitForm>;
 
 function build(input: Input) {
   const circuit = {
-    busVoltageMax: input.busVoltageMax,
-    currentLimitMax: input.currentLimitMax,
-    faultTimeMax: input.faultTimeMax,
-    ...(input.retry && input.retryPeriod !== undefined ? { retryPeriod: input.retryPeriod } : {}),
-    ...(input.retry && input.retryCount !== undefined ? { retryCount: input.retryCount } : {}),
+    busVoltageMax: input.supplyMax,
+    currentLimitMax: input.limitCurrentMax,
+    faultTimeMax: input.holdTimeMax,
+    ...(input.restarts && input.restartPeriod !== undefined ? { retryPeriod: input.restartPeriod } : {}),
+    ...(input.restarts && input.restartCount !== undefined ? { retryCount: input.restartCount } : {}),
   };
   const built = currentLimitFault(circuit);
   if (!built.ok) return built;
@@ -39,7 +39,7 @@ function build(input: Input) {
   };
 }
 
-/** A short held in current limit until the fault timer trips; with auto-retry, a train at the retry period. */
+/** A short held in current limit until the hold timer turns the switch off; with restarts, a train. */
 export function CurrentLimitBuilder({ create, currentLimit }: BuilderProps & { currentLimit?: string }) {
   const {
     register,
@@ -52,12 +52,12 @@ export function CurrentLimitBuilder({ create, currentLimit }: BuilderProps & { c
     mode: "onTouched",
     defaultValues: {
       name: "Output short in current limit",
-      busVoltageMax: "",
-      currentLimitMax: currentLimit ?? "",
-      faultTimeMax: "",
-      retry: false,
-      retryPeriod: "",
-      retryCount: "",
+      supplyMax: "",
+      limitCurrentMax: currentLimit ?? "",
+      holdTimeMax: "",
+      restarts: false,
+      restartPeriod: "",
+      restartCount: "",
     },
   });
   const values = useWatch({ control });
@@ -70,63 +70,75 @@ export function CurrentLimitBuilder({ create, currentLimit }: BuilderProps & { c
 
   return (
     <BuilderLayout
-      title="Current-limit timer"
+      title="Short in current limit"
       description={
         <>
-          The worst case of a short held in current limit: the highest bus voltage times the highest limit
-          setting, for the longest the fault timer can take to trip. With auto-retry the controller tries
-          again every retry period, so the pulse repeats.
+          The worst case of a short held in current limit: the whole supply across the transistor at the
+          highest limit current, for the longest hold before it is turned off. If the protection turns the
+          switch on again after a pause, the pulse repeats at the restart period.
         </>
       }
       fields={
         <div className="grid gap-4 sm:grid-cols-3">
           <UnitField
             id="cl-bus"
-            label={<Sym main="V" sub="bus,max" />}
+            label={
+              <>
+                Highest supply <Sym main="V" sub="DS" />
+              </>
+            }
             unit="V"
             inputMode="decimal"
-            error={errors.busVoltageMax?.message}
-            {...register("busVoltageMax")}
+            placeholder="54.6"
+            hint="The whole supply lies across the transistor"
+            error={errors.supplyMax?.message}
+            {...register("supplyMax")}
           />
           <UnitField
             id="cl-limit"
-            label={<Sym main="I" sub="lim,max" />}
+            label={
+              <>
+                Limit current <Sym main="I" sub="D" />
+              </>
+            }
             unit="A"
             inputMode="decimal"
+            placeholder="8"
             hint="The highest the limit can be set or drift"
-            error={errors.currentLimitMax?.message}
-            {...register("currentLimitMax")}
+            error={errors.limitCurrentMax?.message}
+            {...register("limitCurrentMax")}
           />
           <UnitField
             id="cl-time"
-            label={<Sym main="t" sub="fault,max" />}
+            label="Longest hold"
             unit="s"
             placeholder="2m"
-            hint="The timer's longest delay"
-            error={errors.faultTimeMax?.message}
-            {...register("faultTimeMax")}
+            hint="Until the protection turns the switch off"
+            error={errors.holdTimeMax?.message}
+            {...register("holdTimeMax")}
           />
           <label className="flex items-center gap-2 text-sm sm:col-span-3">
-            <input type="checkbox" {...register("retry")} className="accent-[var(--color-accent)]" />
-            Auto-retry: the controller turns on again after a pause
+            <input type="checkbox" {...register("restarts")} className="accent-[var(--color-accent)]" />
+            Restarts: the protection turns the switch on again after a pause
           </label>
-          {values.retry ? (
+          {values.restarts ? (
             <>
               <UnitField
                 id="cl-period"
-                label="Retry period"
+                label="Restart period"
                 unit="s"
-                placeholder="1"
-                error={errors.retryPeriod?.message}
-                {...register("retryPeriod")}
+                placeholder="100m"
+                hint="From one turn-on to the next"
+                error={errors.restartPeriod?.message}
+                {...register("restartPeriod")}
               />
               <UnitField
                 id="cl-count"
-                label="Retries"
+                label="Restarts"
                 inputMode="numeric"
-                hint="Blank: it retries for as long as the short lasts"
-                error={errors.retryCount?.message}
-                {...register("retryCount")}
+                hint="Blank: it restarts for as long as the short lasts"
+                error={errors.restartCount?.message}
+                {...register("restartCount")}
               />
             </>
           ) : null}

@@ -7,7 +7,7 @@ import { formatQuantity, type Unit } from "@/lib/soa/units";
 
 export const builderNames: Record<string, string> = {
   inrush: "inrush",
-  "current-limit": "current-limit timer",
+  "current-limit": "short in current limit",
   "trip-window": "trip window",
   clamp: "clamp turn-off",
 };
@@ -47,11 +47,11 @@ const known: Record<string, { label: ReactNode; format: Format }> = {
   peakPower: { label: <Sym main="P" sub="peak" />, format: unit("W") },
   peakPowerTime: { label: "Peak power at t =", format: unit("s") },
   energy: { label: "Energy in the transistor", format: unit("J") },
-  busVoltageMax: { label: <Sym main="V" sub="bus,max" />, format: unit("V") },
-  currentLimitMax: { label: <Sym main="I" sub="lim,max" />, format: unit("A") },
-  faultTimeMax: { label: <Sym main="t" sub="fault,max" />, format: unit("s") },
-  retryPeriod: { label: "Retry period", format: unit("s") },
-  retryCount: { label: "Retries", format: plain },
+  busVoltageMax: { label: "Highest supply", format: unit("V") },
+  currentLimitMax: { label: "Limit current", format: unit("A") },
+  faultTimeMax: { label: "Longest hold", format: unit("s") },
+  retryPeriod: { label: "Restart period", format: unit("s") },
+  retryCount: { label: "Restarts", format: plain },
   power: {
     label: (
       <>

@@ -24,12 +24,19 @@ const number = (message: string) =>
     .transform((s) => Number(s.replace(",", ".")))
     .refine((n) => Number.isFinite(n), { message });
 
+/** A column picked in a select: "" until the user chooses one. */
+const columnChoice = (message: string) =>
+  z
+    .union([z.string(), z.number()])
+    .transform((v) => (v === "" ? Number.NaN : Number(v)))
+    .pipe(z.number({ error: message }).int({ error: message }).min(0, { error: message }));
+
 const pickerSchema = z
   .object({
     name: z.string().trim().min(1, { message: "Name the capture" }).max(120),
-    time: z.coerce.number().int().min(0),
-    voltage: z.coerce.number().int().min(0),
-    current: z.coerce.number().int().min(0),
+    time: columnChoice("Choose the time column"),
+    voltage: columnChoice("Choose the voltage column"),
+    current: columnChoice("Choose the current column"),
     timeScale: z.coerce.number().positive(),
     vScale: number("A number, e.g. 10 for a 10:1 probe").refine((n) => n !== 0, { message: "Not 0" }),
     vOffset: number("A number in V, e.g. 0"),
@@ -89,7 +96,8 @@ export function ColumnPicker({
 }) {
   const suggested = preview.mapping;
   const numeric = preview.columns.filter((c) => c.numeric).map((c) => c.index);
-  const fallback = (k: number) => String(numeric[k] ?? k);
+  // Without a suggestion, only numeric columns are offered as defaults; otherwise the user chooses.
+  const fallback = (k: number) => (numeric[k] === undefined ? "" : String(numeric[k]));
   const {
     register,
     handleSubmit,
@@ -116,6 +124,7 @@ export function ColumnPicker({
   const values = useWatch({ control });
   const parsed = pickerSchema.safeParse(values);
   const chosen = parsed.success ? parsed.data : null;
+  const mapped = [values.time, values.voltage, values.current].every((v) => v !== undefined && v !== "");
   const role = (index: number) =>
     chosen?.time === index ? "t" : chosen?.voltage === index ? "V" : chosen?.current === index ? "I" : null;
 
@@ -143,11 +152,16 @@ export function ColumnPicker({
     });
   });
 
-  const options = preview.columns.map((c) => (
-    <option key={c.index} value={c.index}>
-      {columnName(preview, c.index)}
-    </option>
-  ));
+  const options = [
+    <option key="none" value="">
+      choose a column…
+    </option>,
+    ...preview.columns.map((c) => (
+      <option key={c.index} value={c.index}>
+        {columnName(preview, c.index)}
+      </option>
+    )),
+  ];
 
   return (
     <form
@@ -352,7 +366,13 @@ export function ColumnPicker({
           </Button>
         }
       >
-        <Button type="submit" variant="primary" pending={busy}>
+        <Button
+          type="submit"
+          variant="primary"
+          pending={busy}
+          disabled={!mapped}
+          title={mapped ? undefined : "Map the time, voltage and current columns first"}
+        >
           Upload and check
         </Button>
       </FormActions>

@@ -4,6 +4,7 @@ import { scaleLinear } from "d3-scale";
 import { type PointerEvent, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/form";
 import { type Verdict, VerdictGlyph } from "@/components/verdict-shape";
+import { TEMPERATURE_DISPLAY_RANGE } from "@/lib/soa/sanity";
 import { formatQuantity, type Unit } from "@/lib/soa/units";
 
 type Pair = [number | null, number | null];
@@ -154,6 +155,11 @@ export function TraceCharts({
                   if (b !== null && Number.isFinite(b)) hi = Math.max(hi, b);
                 }
               });
+              if (panel.unit === "°C") {
+                // A runaway thermal result stays on a sane scale; the table and the readout say "off scale".
+                lo = Math.max(lo, TEMPERATURE_DISPLAY_RANGE.min);
+                hi = Math.min(hi, TEMPERATURE_DISPLAY_RANGE.max);
+              }
               if (!(lo <= hi)) [lo, hi] = [0, 1];
               if (lo === hi) [lo, hi] = [lo - 1, hi + 1];
               const pad = (hi - lo) * 0.06;

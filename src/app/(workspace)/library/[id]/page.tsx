@@ -58,6 +58,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
             hasCurves={active !== null}
             canWrite={canWrite}
             canVerify={canVerify}
+            findings={(active?.findings ?? []) as ChartFinding[]}
           />
         }
       />
@@ -93,6 +94,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
               curves: active.curves,
               findings: active.findings as ChartFinding[],
             }}
+            accepted={part.status === "verified" ? part.acceptedFindings : []}
           />
         ) : (
           <div className="rounded-md border border-line bg-panel px-4 py-8 text-center text-sm text-ink-muted">
@@ -110,7 +112,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         <Section
           id="upload"
           title="Upload a curve set"
-          description="Digitise the datasheet's SOA figure with any plotting digitiser and upload it as CSV."
+          description="Trace the datasheet's SOA figure into V_DS, I_D points and upload them as CSV: a table or paired columns."
         >
           <CurveUpload partId={part.id} />
         </Section>

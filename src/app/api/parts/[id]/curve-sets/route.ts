@@ -18,6 +18,12 @@ export const POST = route<{ id: string }>({ action: "part.write" }, async (req, 
   const part = await loadPart(caller, id);
   const { uploadId, refCaseTemp } = await parseBody(req, registerSchema);
   const upload = await getPendingUpload({ workspaceId: caller.workspaceId, uploadId, purpose: "curve-set" });
-  const result = await registerCurveSet(storage(), { part, userId: caller.user.id, upload, refCaseTemp });
+  const result = await registerCurveSet(storage(), {
+    part,
+    userId: caller.user.id,
+    userName: caller.user.name,
+    upload,
+    refCaseTemp,
+  });
   return json(result, { status: 201 });
 });

@@ -5,6 +5,7 @@ import { curveSets, parts } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
+import { draftFields, noticeLapsedVerification } from "@/lib/library/part-findings";
 import { loadPart } from "@/lib/library/parts";
 import { isUuid } from "@/lib/uuid";
 
@@ -13,10 +14,10 @@ export const POST = route<{ id: string; setId: string }>(
   { action: "part.write" },
   async (_req, caller, { id, setId }) => {
     const part = await loadPart(caller, id);
-    await db.transaction(async (tx) => {
+    const fileName = await db.transaction(async (tx) => {
       const [set] = isUuid(setId)
         ? await tx
-            .select({ id: curveSets.id })
+            .select({ id: curveSets.id, fileName: curveSets.fileName })
             .from(curveSets)
             .where(and(eq(curveSets.id, setId), eq(curveSets.partId, part.id)))
         : [];
@@ -25,7 +26,7 @@ export const POST = route<{ id: string; setId: string }>(
       await tx.update(curveSets).set({ active: true }).where(eq(curveSets.id, set.id));
       await tx
         .update(parts)
-        .set({ status: "draft", verifiedBy: null, verifiedAt: null, updatedAt: new Date() })
+        .set({ ...draftFields, updatedAt: new Date() })
         .where(eq(parts.id, part.id));
       await recordAudit(
         {
@@ -38,7 +39,9 @@ export const POST = route<{ id: string; setId: string }>(
         },
         tx,
       );
+      return set.fileName;
     });
+    await noticeLapsedVerification(part, `curve set ${fileName} made active`, caller.user.name);
     return json({ status: "ok" });
   },
 );

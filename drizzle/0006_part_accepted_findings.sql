@@ -1,0 +1,1 @@
+ALTER TABLE "parts" ADD COLUMN "accepted_findings" jsonb DEFAULT '[]'::jsonb NOT NULL;
