@@ -176,7 +176,26 @@ describe("validateCheckRequest", () => {
       "a zero width",
       broken((r) => ((r.part.soa as Json).curves[0].duration = 0)),
       "part.soa.curves[0].duration",
-      "must be greater than 0, got 0",
+      'expected a pulse width in seconds (> 0) or "DC", got 0',
+    ],
+    // Issue 12: physically absurd values are slips (a wrong prefix or unit) and are refused (sanity.ts limits).
+    [
+      "a pulse of 1 GV",
+      broken((r) => ((r.pulses as Json)[0].v = 1e9)),
+      "pulses[0].v",
+      "1\u2009GV is above 100\u2009kV, the most a voltage can be here: check the prefix and the unit",
+    ],
+    [
+      "a pulse of 0.1 ps",
+      broken((r) => ((r.pulses as Json)[0].duration = 1e-13)),
+      "pulses[0].duration",
+      "1e-13\u2009s is below 1\u2009ps, the least a time can be here: check the prefix and the unit",
+    ],
+    [
+      "a case at 5000 °C",
+      broken((r) => (r.caseTemp = 5000)),
+      "caseTemp",
+      "5000\u2009°C is above 1000\u2009°C, the most a temperature can be here: check the prefix and the unit",
     ],
     [
       "a width word",

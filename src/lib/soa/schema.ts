@@ -9,6 +9,7 @@
 // - the reference case temperature must lie below Tj,max (else no derating factor exists);
 // - two curve widths within 1e-9 relative are the same width (the tolerance of METHODS.md §3).
 import { z } from "zod";
+import { SANITY_LIMITS, type SaneQuantity, saneValue } from "./sanity";
 import type { CheckRequest } from "./types";
 
 function show(input: unknown): string {
@@ -29,6 +30,30 @@ const expected =
 
 const finite = () => z.number({ error: expected("a finite number") });
 const positive = () => finite().gt(0, { error: (issue) => `must be greater than 0, got ${issue.input}` });
+
+/**
+ * A value refused as physically absurd (sanity.ts: above 100 kV, 1 MA or 10⁶ s, below 1 ps, a temperature outside
+ * −273.15…1000 °C). Only the bounds that catch slips are applied: tiny voltages, currents and resistances harm
+ * nothing, so only durations have a lower bound.
+ */
+const sane = (quantity: SaneQuantity, { lower = false } = {}) =>
+  z.number().check((payload) => {
+    const value = payload.value;
+    const { min, max } = SANITY_LIMITS[quantity];
+    const size = quantity === "temperature" ? value : Math.abs(value);
+    if (size > max || (lower && size < min)) {
+      payload.issues.push({
+        code: "custom",
+        message: saneValue(value, quantity) ?? "out of range",
+        input: value,
+      });
+    }
+  });
+const volts = () => positive().pipe(sane("voltage"));
+const amps = () => positive().pipe(sane("current"));
+const seconds = () => positive().pipe(sane("time", { lower: true }));
+const celsius = () => finite().pipe(sane("temperature"));
+const sample = (quantity: SaneQuantity) => finite().pipe(sane(quantity));
 const object = <T extends z.core.$ZodLooseShape>(shape: T) =>
   z.strictObject(shape, {
     error: (issue) =>
@@ -38,9 +63,9 @@ const object = <T extends z.core.$ZodLooseShape>(shape: T) =>
   });
 const array = <T extends z.core.SomeType>(item: T) => z.array(item, { error: expected("an array") });
 
-const fosterTerm = object({ r: positive(), tau: positive() });
+const fosterTerm = object({ r: positive(), tau: seconds() });
 
-const point = z.tuple([positive(), positive()], {
+const point = z.tuple([volts(), amps()], {
   error: (issue) =>
     issue.code === "invalid_type"
       ? expected("a point [v, i]")(issue)
@@ -48,7 +73,7 @@ const point = z.tuple([positive(), positive()], {
 });
 
 const curve = object({
-  duration: z.union([positive(), z.literal("DC")], {
+  duration: z.union([seconds(), z.literal("DC")], {
     error: (issue) =>
       issue.input === undefined
         ? "is required"
@@ -58,14 +83,14 @@ const curve = object({
 });
 
 const curveSet = object({
-  refCaseTemp: finite().optional(),
+  refCaseTemp: celsius().optional(),
   curves: array(curve).min(1, { error: "at least one curve is required" }),
 });
 
 // Transfer characteristics (METHODS.md §12): exactly two temperatures and two curves of at least two points each;
 // the order of points is checked with the relations below.
 const transfer = object({
-  temps: z.tuple([finite(), finite()], {
+  temps: z.tuple([celsius(), celsius()], {
     error: (issue) =>
       issue.code === "invalid_type"
         ? expected("two temperatures [Ta, Tb]")(issue)
@@ -87,15 +112,15 @@ const transfer = object({
 
 const avalancheRating = object({
   energy: positive(),
-  current: positive().optional(),
-  breakdown: positive().optional(),
+  current: amps().optional(),
+  breakdown: volts().optional(),
 });
 
 const part = object({
-  vdsMax: positive(),
-  tjMax: finite(),
+  vdsMax: volts(),
+  tjMax: celsius(),
   rdsOn: positive().optional(),
-  idPulseMax: positive().optional(),
+  idPulseMax: amps().optional(),
   rthJc: positive().optional(),
   foster: array(fosterTerm).min(1, { error: "a Foster network needs at least one term" }).optional(),
   soa: curveSet,
@@ -125,7 +150,7 @@ const id = z
   .refine((s) => s.trim().length > 0, { error: "must not be empty" });
 
 const repeat = object({
-  period: positive(),
+  period: seconds(),
   count: finite()
     .int({ error: (issue) => `expected a whole number of pulses, got ${show(issue.input)}` })
     .gte(1, { error: "must be 1 or more" })
@@ -135,27 +160,27 @@ const repeat = object({
 const rect = object({
   id,
   kind: z.literal("rect"),
-  v: positive(),
-  i: positive(),
-  duration: positive(),
+  v: volts(),
+  i: amps(),
+  duration: seconds(),
   repeat: repeat.optional(),
 });
 
 const triangle = object({
   id,
   kind: z.literal("triangle"),
-  v: positive(),
-  i: positive(),
-  duration: positive(),
+  v: volts(),
+  i: amps(),
+  duration: seconds(),
   repeat: repeat.optional(),
 });
 
 const waveform = object({
   id,
   kind: z.literal("waveform"),
-  t: array(finite()).min(2, { error: "a capture needs at least two samples" }),
-  v: array(finite()),
-  i: array(finite()),
+  t: array(sample("time")).min(2, { error: "a capture needs at least two samples" }),
+  v: array(sample("voltage")),
+  i: array(sample("current")),
   start: z
     .enum(["rest", "steady"], {
       error: (issue) => `expected "rest" or "steady", got ${show(issue.input)}`,
@@ -170,8 +195,10 @@ const avalanchePulse = object({
   id,
   kind: z.literal("avalanche"),
   inductance: positive(),
-  current: positive(),
-  supply: finite().gte(0, { error: (issue) => `must be 0 V or more, got ${issue.input}` }),
+  current: amps(),
+  supply: sample("voltage").pipe(
+    z.number().gte(0, { error: (issue) => `must be 0 V or more, got ${issue.input}` }),
+  ),
 });
 
 const pulse = z.discriminatedUnion("kind", [rect, triangle, waveform, avalanchePulse], {
@@ -305,7 +332,7 @@ function relations(request: CheckRequest): Issue | null {
 /** The check request: shape, ranges, then the rules relating fields (only once the shape is right). */
 export const checkRequestSchema: z.ZodType<CheckRequest> = object({
   part,
-  caseTemp: finite(),
+  caseTemp: celsius(),
   caseNetwork: array(fosterTerm).min(1, { error: "a Foster network needs at least one term" }).optional(),
   policy: policy.optional(),
   pulses: array(pulse),
