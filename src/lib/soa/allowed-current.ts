@@ -27,9 +27,6 @@ export function allowedCurrent(
   network: readonly FosterTerm[] | null = null,
 ): AllowedCurrent {
   const reader = new CurveReader(set, betweenCurves, network);
-  const ln = reader.readLn(
-    v > 0 ? Math.log(v) : v === 0 || v < 0 ? Number.NEGATIVE_INFINITY : Number.NaN,
-    width,
-  );
+  const ln = reader.read(v, width);
   return { current: Number.isNaN(ln) ? null : Math.exp(ln), flags: flagsOf(reader.flags) };
 }

@@ -132,10 +132,6 @@ function limitFlags(ctx: CheckContext, vMax: number, iMax: number): number {
   return flags;
 }
 
-function lnOf(v: number): number {
-  return v > 0 ? Math.log(v) : Number.NEGATIVE_INFINITY;
-}
-
 /** Peak rise of a rectangle or triangle (single or repeated) of peak power `power` on a network. */
 function shapedRise(network: readonly FosterTerm[], pulse: RectPulse | TrianglePulse, power: number): number {
   const { repeat } = pulse;
@@ -195,7 +191,7 @@ function shapedPulse(ctx: CheckContext, pulse: RectPulse | TrianglePulse): Outco
   const derating =
     ctx.caseNetwork === null ? ctx.derating : deratingAt(ctx, shapedRise(ctx.caseNetwork, pulse, power));
   ctx.reader.flags = 0;
-  const lnAllowed = ctx.reader.readLn(lnOf(pulse.v), width);
+  const lnAllowed = ctx.reader.read(pulse.v, width);
   flags |= ctx.reader.flags;
   const allowed =
     Number.isNaN(lnAllowed) || (repeat !== undefined && scale === null)

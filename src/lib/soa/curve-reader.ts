@@ -43,8 +43,14 @@ class LnCurve {
   /** Where the last read fell: −1 below the first point, 1 above the last, else 0. */
   side = 0;
 
+  /** The first and last digitised voltage (NaN for an empty curve). */
+  readonly vFirst: number;
+  readonly vLast: number;
+
   constructor(curve: Pick<PreparedCurve, "points">) {
     const n = curve.points.length;
+    this.vFirst = n > 0 ? curve.points[0][0] : Number.NaN;
+    this.vLast = n > 0 ? curve.points[n - 1][0] : Number.NaN;
     this.lnV = new Float64Array(n);
     this.lnI = new Float64Array(n);
     this.slope = new Float64Array(Math.max(n - 1, 0));
@@ -94,7 +100,30 @@ class LnCurve {
   }
 }
 
-/** Reads a prepared curve set at (V, t_p) under one policy; `flags` collects the flags of every reading made. */
+/** How a width is read (METHODS.md §3): which curves give the value, and which cap it. */
+enum Plan {
+  /** Curve k exactly; capped by 0..k−1. */
+  Exact,
+  /** The shortest curve, unchanged, uncapped. */
+  Shorter,
+  /** Log-log between curves k and k+1; capped by 0..k. */
+  LogLog,
+  /** Curve k+1; capped by 0..k. */
+  Longer,
+  /** Curve k scaled by Z_th(t_k)/Z_th(t); capped by 0..k. */
+  Scaled,
+  /** The DC curve; capped by every finite curve. */
+  Dc,
+  /** No value. */
+  None,
+}
+
+/**
+ * Reads a prepared curve set at (V, t_p) under one policy; `flags` collects the flags of every reading made. A
+ * reading is two steps: `classify` (which curves, which flags, whether there is a value: comparisons only) and
+ * `evaluate` (the value, in logarithms), so that a caller can classify every sample and evaluate only those that
+ * matter; `readLn` does both.
+ */
 export class CurveReader {
   /** Flags raised by readings so far (a mask of FLAG_BIT); the caller clears it when it wants. */
   flags = 0;
@@ -104,10 +133,12 @@ export class CurveReader {
   private readonly lnZ: Float64Array | null;
   private readonly dc: LnCurve | null;
   private readonly upper: Float64Array;
+  private plan = Plan.None;
+  private k = 0;
 
   constructor(
     set: PreparedCurveSet,
-    private readonly betweenCurves: BetweenCurves = "loglog",
+    readonly betweenCurves: BetweenCurves = "loglog",
     private readonly network: readonly FosterTerm[] | null = null,
   ) {
     this.finite = set.finite.map((curve) => new LnCurve(curve));
@@ -121,46 +152,123 @@ export class CurveReader {
     this.dc = set.dc === null ? null : new LnCurve(set.dc);
   }
 
-  private onCurve(curve: LnCurve): number {
-    const value = curve.read(this.lnV);
-    if (curve.side < 0) this.flags |= FLAG_BIT["below-curve-range"];
-    else if (curve.side > 0) this.flags |= FLAG_BIT["above-curve-range"];
-    return value;
+  /** Flags for reading `curve` at v: below or above its range; false above it (no value there). */
+  private side(curve: LnCurve, v: number): boolean {
+    if (v < curve.vFirst) {
+      this.flags |= FLAG_BIT["below-curve-range"];
+      return true;
+    }
+    if (v > curve.vLast) {
+      this.flags |= FLAG_BIT["above-curve-range"];
+      return false;
+    }
+    return curve.vLast === curve.vLast;
   }
 
-  private lnV = 0;
-
   /**
-   * ln of the allowed current in A (not derated) at voltage e^lnV for a pulse of `width` s (Infinity: unlimited);
-   * NaN where the curves give no value. A width that is NaN or ≤ 0 gives NaN and no flag. `lnWidth` may be given
-   * when known (ln of `width`).
+   * Step one: which curves a reading at voltage v (V) and `width` (s; Infinity: unlimited) uses, with its flags
+   * (all but `capped-by-shorter-curve`, which needs the values). False when the reading has no value; a width
+   * that is NaN or ≤ 0, or a NaN voltage, has none and raises no flag.
    */
-  readLn(lnV: number, width: number, lnWidth = Math.log(width)): number {
-    if (!(width > 0) || Number.isNaN(lnV)) return Number.NaN;
-    this.lnV = lnV;
+  classify(v: number, width: number): boolean {
+    this.plan = Plan.None;
+    if (!(width > 0) || Number.isNaN(v)) return false;
     const m = this.finite.length;
     const widths = this.widths;
-    let raw: number;
-    let capTo: number; // cap by finite curves 0..capTo−1
     let k = 0;
     while (k < m && this.upper[k] < width) k++;
+    const thermal = this.betweenCurves === "thermal";
     if (k < m && Math.abs(width - widths[k]) <= WIDTH_TOLERANCE * widths[k]) {
-      raw = this.onCurve(this.finite[k]);
-      capTo = k;
-    } else if (k === 0 && m > 0) {
-      this.flags |= FLAG_BIT["shorter-than-shortest-curve"];
-      return this.onCurve(this.finite[0]);
-    } else if (k === m) {
-      raw = this.beyondLongest(width);
-      capTo = m;
-    } else {
-      raw = this.between(k - 1, width, lnWidth);
-      capTo = k;
+      this.plan = Plan.Exact;
+      this.k = k;
+      return this.side(this.finite[k], v);
     }
-    if (Number.isNaN(raw)) return raw;
+    if (k === 0 && m > 0) {
+      this.flags |= FLAG_BIT["shorter-than-shortest-curve"];
+      this.plan = Plan.Shorter;
+      this.k = 0;
+      return this.side(this.finite[0], v);
+    }
+    if (k < m) {
+      this.k = k - 1;
+      if (thermal && this.lnZ !== null) {
+        this.flags |= FLAG_BIT["thermal-scaled"];
+        this.plan = Plan.Scaled;
+        return this.side(this.finite[k - 1], v);
+      }
+      if (thermal) this.flags |= FLAG_BIT["thermal-scaling-unavailable"];
+      if (this.betweenCurves !== "loglog") {
+        this.flags |= FLAG_BIT["next-longer-curve"];
+        this.plan = Plan.Longer;
+        return this.side(this.finite[k], v);
+      }
+      this.flags |= FLAG_BIT.interpolated;
+      this.plan = Plan.LogLog;
+      const shorter = this.side(this.finite[k - 1], v);
+      const longer = this.side(this.finite[k], v);
+      return shorter && longer;
+    }
+    // Beyond the longest finite curve (or no finite curve at all).
+    if (thermal && m > 0) {
+      if (this.lnZ !== null) {
+        this.flags |= FLAG_BIT["thermal-scaled"];
+        this.plan = Plan.Scaled;
+        this.k = m - 1;
+        return this.side(this.finite[m - 1], v);
+      }
+      this.flags |= FLAG_BIT["thermal-scaling-unavailable"];
+    }
+    if (this.dc === null) {
+      this.flags |= FLAG_BIT["longer-than-longest-curve"];
+      return false;
+    }
+    this.flags |= FLAG_BIT["dc-curve-used"];
+    this.plan = Plan.Dc;
+    return this.side(this.dc, v);
+  }
+
+  /**
+   * Step two, after a `classify` that answered true with the same voltage and width: ln of the allowed current in
+   * A (not derated), capped by the shorter curves (flag `capped-by-shorter-curve` where that lowers it). lnV and
+   * lnWidth are the logarithms of the voltage and width classified (lnV −∞ for v ≤ 0).
+   */
+  evaluate(lnV: number, width: number, lnWidth: number): number {
+    const k = this.k;
+    const finite = this.finite;
+    let raw: number;
+    let capTo = k + 1;
+    switch (this.plan) {
+      case Plan.Exact:
+        raw = finite[k].read(lnV);
+        capTo = k;
+        break;
+      case Plan.Shorter:
+        return finite[0].read(lnV);
+      case Plan.LogLog: {
+        const lnIk = finite[k].read(lnV);
+        const lnIk1 = finite[k + 1].read(lnV);
+        const lnTk = this.lnWidths[k];
+        raw = lnIk + ((lnWidth - lnTk) / (this.lnWidths[k + 1] - lnTk)) * (lnIk1 - lnIk);
+        break;
+      }
+      case Plan.Longer:
+        raw = finite[k + 1].read(lnV);
+        break;
+      case Plan.Scaled: {
+        const network = this.network as readonly FosterTerm[];
+        raw = finite[k].read(lnV) + (this.lnZ as Float64Array)[k] - Math.log(zth(network, width));
+        break;
+      }
+      case Plan.Dc:
+        raw = (this.dc as LnCurve).read(lnV);
+        capTo = finite.length;
+        break;
+      default:
+        return Number.NaN;
+    }
     let cap = Number.POSITIVE_INFINITY;
     for (let c = 0; c < capTo; c++) {
-      const value = this.finite[c].read(lnV);
+      const value = finite[c].read(lnV);
       if (value < cap) cap = value;
     }
     if (cap < raw + LN_CAP_TOLERANCE) {
@@ -170,45 +278,39 @@ export class CurveReader {
     return Math.min(raw, cap);
   }
 
-  /** t_k < width < t_(k+1). */
-  private between(k: number, width: number, lnWidth: number): number {
-    const shorter = this.finite[k];
-    const longer = this.finite[k + 1];
-    if (this.betweenCurves === "thermal") {
-      if (this.lnZ !== null) return this.scaled(k, width);
-      this.flags |= FLAG_BIT["thermal-scaling-unavailable"];
-    }
-    if (this.betweenCurves !== "loglog") {
-      this.flags |= FLAG_BIT["next-longer-curve"];
-      return this.onCurve(longer);
-    }
-    this.flags |= FLAG_BIT.interpolated;
-    const lnIk = this.onCurve(shorter);
-    const lnIk1 = this.onCurve(longer);
-    const lnTk = this.lnWidths[k];
-    const fraction = (lnWidth - lnTk) / (this.lnWidths[k + 1] - lnTk);
-    return lnIk + fraction * (lnIk1 - lnIk);
+  /**
+   * ln of the allowed current in A (not derated) at voltage v for a pulse of `width` s (Infinity: unlimited); NaN
+   * where the curves give no value. `classify`, then `evaluate`.
+   */
+  read(v: number, width: number): number {
+    if (!this.classify(v, width)) return Number.NaN;
+    return this.evaluate(v > 0 ? Math.log(v) : Number.NEGATIVE_INFINITY, width, Math.log(width));
   }
 
-  /** width beyond the longest finite curve (or no finite curve at all). */
-  private beyondLongest(width: number): number {
-    const m = this.finite.length;
-    if (this.betweenCurves === "thermal" && m > 0) {
-      if (this.lnZ !== null) return this.scaled(m - 1, width);
-      this.flags |= FLAG_BIT["thermal-scaling-unavailable"];
-    }
-    if (this.dc === null) {
-      this.flags |= FLAG_BIT["longer-than-longest-curve"];
-      return Number.NaN;
-    }
-    this.flags |= FLAG_BIT["dc-curve-used"];
-    return this.onCurve(this.dc);
+  /** Every digitised voltage of the set, ascending, without repeats. */
+  voltages(): number[] {
+    const curves = [...this.finite, ...(this.dc === null ? [] : [this.dc])];
+    return [...new Set(curves.flatMap((c) => [...c.lnV].map(Math.exp)))].sort((x, y) => x - y);
   }
 
-  /** I_k·Z_th(t_k)/Z_th(width) in ln form (METHODS.md §3, v2 "thermal"). */
-  private scaled(k: number, width: number): number {
-    this.flags |= FLAG_BIT["thermal-scaled"];
-    const network = this.network as readonly FosterTerm[];
-    return this.onCurve(this.finite[k]) + (this.lnZ as Float64Array)[k] - Math.log(zth(network, width));
+  /**
+   * True when no reading can ever be lowered by the cap: every finite curve lies at or below every shorter one,
+   * and the DC curve below all, wherever both have a value (checked at every digitised voltage, where their
+   * log-log difference, linear in between, is largest). Readings of such a set never rise with width, except under
+   * the thermal policy.
+   */
+  ordered(): boolean {
+    const curves = [...this.finite, ...(this.dc === null ? [] : [this.dc])];
+    const voltages = [...new Set(curves.flatMap((c) => [...c.lnV]))];
+    for (let longer = 1; longer < curves.length; longer++) {
+      for (let shorter = 0; shorter < longer; shorter++) {
+        for (const lnV of voltages) {
+          const a = curves[shorter].read(lnV);
+          const b = curves[longer].read(lnV);
+          if (a < b + LN_CAP_TOLERANCE) return false;
+        }
+      }
+    }
+    return true;
   }
 }

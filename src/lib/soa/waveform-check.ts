@@ -107,41 +107,119 @@ export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating
   const lnDerating = Math.log(derating);
   const threshold = READ_CURRENT_SHARE * iMaxAbs;
   reader.flags = 0;
+  // Long records: a table of lower bounds on the allowed current lets most samples be classified (flags, no value)
+  // without being evaluated, when they cannot beat the largest ratio found so far.
+  const bounds =
+    n >= SKIP_FROM_SAMPLES && derating > 0
+      ? LowerBounds.of(reader, { vMax, peakPower, energy, recordLength })
+      : null;
   let best = Number.NEGATIVE_INFINITY;
+  let bestRatio = 0;
   let binding: WaveformReading["binding"] = null;
   let anyNoValue = false;
-  for (let k = 0; k < n; k++) {
+  // With the table, a few samples spread over the record are visited first to seed the largest ratio, so that
+  // skipping starts early; then every sample in order (a seed visited twice changes nothing).
+  const stride = Math.ceil(n / SEEDS);
+  const seeds = bounds === null ? 0 : Math.ceil(n / stride);
+  for (let s = 0; s < seeds + n; s++) {
+    const k = s < seeds ? s * stride : s - seeds;
     const vk = v[k];
     const ik = i[k];
     if (!(vk > 0 && ik > threshold)) continue;
-    const lnV = Math.log(vk);
-    const lnI = Math.log(ik);
     let width = energy / (vk * ik);
-    let lnWidth = lnEnergy - lnV - lnI;
-    if (!(width < recordLength)) {
-      width = recordLength;
-      lnWidth = lnRecord;
-    }
-    const lnAllowed = reader.readLn(lnV, width, lnWidth);
-    if (Number.isNaN(lnAllowed)) {
+    const capped = !(width < recordLength);
+    if (capped) width = recordLength;
+    if (!reader.classify(vk, width)) {
       anyNoValue = true;
       continue;
     }
+    if (bounds !== null && ik <= bestRatio * derating * bounds.at(vk, vk * ik)) continue;
+    const lnV = Math.log(vk);
+    const lnI = Math.log(ik);
+    const lnAllowed = reader.evaluate(lnV, width, capped ? lnRecord : lnEnergy - lnV - lnI);
     const lnRatio = lnI - lnAllowed - lnDerating;
-    if (lnRatio > best) {
+    // Ratios within TIE of each other are equal: rounding must not decide which sample binds (earliest wins).
+    if (lnRatio > best + TIE || (lnRatio >= best - TIE && binding !== null && k < binding.index)) {
       best = lnRatio;
+      bestRatio = Math.exp(lnRatio);
       binding = { index: k, width, lnAllowed };
     }
   }
   if (reading.start === "steady" && v[0] > 0 && i[0] > threshold) {
     // A settled first sample had flowed for as long as it liked: read it at unlimited width as well.
-    const lnV = Math.log(v[0]);
-    const lnAllowed = reader.readLn(lnV, Number.POSITIVE_INFINITY, Number.POSITIVE_INFINITY);
+    const lnAllowed = reader.read(v[0], Number.POSITIVE_INFINITY);
     if (Number.isNaN(lnAllowed)) anyNoValue = true;
-    else if (Math.log(i[0]) - lnAllowed - lnDerating > best) binding = { index: 0, width: null, lnAllowed };
+    else if (Math.log(i[0]) - lnAllowed - lnDerating > best + TIE)
+      binding = { index: 0, width: null, lnAllowed };
   }
   reading.flags |= reader.flags;
   reading.anyNoValue = anyNoValue;
   reading.binding = binding;
   return reading;
+}
+
+// Two ratios whose logarithms differ by at most this much are a tie (1e-12 relative).
+const TIE = 1e-12;
+// Records at least this long use the table of lower bounds; shorter ones evaluate every sample.
+const SKIP_FROM_SAMPLES = 4096;
+// Samples evaluated first, spread over the record, to seed the largest ratio.
+const SEEDS = 64;
+const VOLTAGE_BINS = 256;
+const POWER_BINS = 64;
+// Lower bounds are lowered by this share so that rounding can never let a sample be skipped wrongly.
+const SAFETY = 1 - 1e-9;
+
+/**
+ * Lower bounds of the allowed current (not derated) over cells of voltage × power of one record (METHODS.md §3, §6).
+ * A sample at (v, p) is read at width min(E/p, T_rec), no longer than its cell's longest width min(E/p_lo, T_rec),
+ * and where no reading can rise with width (every curve at or below every shorter one, and not the thermal
+ * reading) the allowed current at that longest width bounds it from below. Over a cell's voltages the log-log
+ * reading is linear between digitised voltages, so its least value lies at the cell's ends or at a digitised
+ * voltage inside. Cells where a reading has no value bound nothing (0).
+ */
+class LowerBounds {
+  private constructor(
+    private readonly table: Float64Array,
+    private readonly vScale: number,
+    private readonly pScale: number,
+  ) {}
+
+  static of(
+    reader: CurveReader,
+    record: { vMax: number; peakPower: number; energy: number; recordLength: number },
+  ): LowerBounds | null {
+    if (reader.betweenCurves === "thermal" || !reader.ordered()) return null;
+    const { vMax, peakPower, energy, recordLength } = record;
+    const saved = reader.flags;
+    const voltages = reader.voltages();
+    const dv = vMax / VOLTAGE_BINS;
+    const dp = peakPower / POWER_BINS;
+    const table = new Float64Array(VOLTAGE_BINS * POWER_BINS);
+    const lowest = (voltages[0] ?? vMax) / 2;
+    for (let b = 0; b < POWER_BINS; b++) {
+      const width = b === 0 ? recordLength : Math.min((energy / (b * dp)) * (1 + 1e-9), recordLength);
+      for (let a = 0; a < VOLTAGE_BINS; a++) {
+        const lo = a === 0 ? Math.min(lowest, dv) : a * dv;
+        const hi = (a + 1) * dv;
+        let least = Number.POSITIVE_INFINITY;
+        const consider = (x: number) => {
+          const ln = reader.read(x, width);
+          least = Number.isNaN(ln) ? 0 : Math.min(least, Math.exp(ln));
+        };
+        consider(lo);
+        consider(hi);
+        for (const x of voltages) if (x > lo && x < hi) consider(x);
+        table[a * POWER_BINS + b] = least * SAFETY;
+      }
+    }
+    reader.flags = saved;
+    return new LowerBounds(table, VOLTAGE_BINS / vMax, POWER_BINS / peakPower);
+  }
+
+  /** A lower bound of the allowed current for a sample at voltage v and power p (0 when none is known). */
+  at(v: number, p: number): number {
+    const a = Math.min(VOLTAGE_BINS - 1, Math.floor(v * this.vScale));
+    const b = Math.min(POWER_BINS - 1, Math.floor(p * this.pScale));
+    return this.table[a * POWER_BINS + b];
+  }
 }
