@@ -162,7 +162,7 @@ export class CurveReader {
       this.flags |= FLAG_BIT["above-curve-range"];
       return false;
     }
-    return curve.vLast === curve.vLast;
+    return !Number.isNaN(curve.vLast);
   }
 
   /**

@@ -2,7 +2,6 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CurveReader, flagsOf } from "./curve-reader";
 import { prepareCurveSet } from "./curve-set";
-import { recordEnergy } from "./equivalent-rectangle";
 import type { CurveSet, WaveformPulse } from "./types";
 import { readWaveform, recordStart } from "./waveform-check";
 
