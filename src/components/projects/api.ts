@@ -99,6 +99,8 @@ export interface CheckedCandidate {
   hasCurves: boolean;
   hasThermalModel: boolean;
   curveSetId: string | null;
+  /** The widths of the active curve set's curves (absent in records frozen before they were kept). */
+  widths?: (number | "DC")[];
 }
 
 export interface ProjectCheck {

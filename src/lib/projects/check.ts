@@ -64,6 +64,8 @@ export async function checkProject(
       hasCurves: c.limits !== null,
       hasThermalModel: Boolean(c.part.foster?.length),
       curveSetId: c.curveSetId,
+      /** The widths of the active curve set's curves, for saying which curves a reading used. */
+      widths: c.limits?.soa.curves.map((curve) => curve.duration) ?? [],
     })),
     pulses: pulses.map(({ pulse: _pulse, ...rest }) => rest),
     ...evaluation,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   CAUTION,
+  curvesRead,
   decidingViews,
   explainFlag,
   explainFlags,
@@ -46,5 +47,20 @@ describe("explain", () => {
       decidingViews({ ...base, curveVerdict: "fail", verdict: "fail", flags: ["over-voltage"] }),
     ).toEqual(["hard-limit"]);
     expect(decidingViews({ ...base, verdict: "marginal", flags: ["ends-mid-pulse"] })).toEqual(["record"]);
+  });
+});
+
+describe("curvesRead (METHODS.md §3)", () => {
+  const widths = [1e-3, 10e-3, "DC" as const];
+  it("names the curves a width is read from under each policy", () => {
+    expect(curvesRead(widths, 1e-3, "loglog", false)).toBe("the 1\u2009ms curve");
+    expect(curvesRead(widths, 2e-3, "loglog", false)).toBe("the 1\u2009ms and 10\u2009ms curves, log-log");
+    expect(curvesRead(widths, 2e-3, "next-longer", false)).toBe("the 10\u2009ms curve");
+    expect(curvesRead(widths, 2e-3, "thermal", true)).toBe("the 1\u2009ms curve scaled by the thermal model");
+    expect(curvesRead(widths, 2e-3, "thermal", false)).toBe("the 10\u2009ms curve");
+    expect(curvesRead(widths, 1, "loglog", false)).toBe("the DC curve");
+    expect(curvesRead(widths, 1e-6, "loglog", false)).toBe("the 1\u2009ms curve, unchanged");
+    expect(curvesRead([1e-3], 1, "loglog", false)).toBeNull();
+    expect(curvesRead(widths, null, "loglog", false)).toBe("the DC curve");
   });
 });

@@ -2,6 +2,7 @@
 // own; the facts behind it are METHODS.md §2–§8 (revision 2). Each text says what the rule assumes and never
 // promises more than the rule gives.
 import type { Flag, PulseResult, Verdict } from "./types";
+import { formatQuantity } from "./units";
 
 export const FLAG_EXPLANATIONS: Readonly<Record<Flag, string>> = {
   "over-voltage":
@@ -149,4 +150,35 @@ export function decidingViews(
   const capped = result.flags.includes("ends-mid-pulse") || result.flags.includes("starts-mid-pulse");
   if (views.length === 0 && capped && result.verdict === "marginal") views.push("record");
   return views;
+}
+
+/**
+ * Which datasheet curves a reading at `width` used (METHODS.md §3), in words: "the 1 ms curve", "the 1 ms and
+ * 10 ms curves, log-log", "the 1 ms curve scaled by the thermal model", "the DC curve", or null when there is none.
+ * `widths` are the curve set's durations; `thermal` says the part has a Foster network for the thermal reading.
+ */
+export function curvesRead(
+  widths: readonly (number | "DC")[],
+  width: number | null,
+  policy: "loglog" | "next-longer" | "thermal",
+  thermal: boolean,
+): string | null {
+  if (width === null || !(width > 0)) return widths.includes("DC") ? "the DC curve" : null;
+  const finite = widths.filter((w): w is number => w !== "DC").sort((a, b) => a - b);
+  const name = (t: number) => `the ${formatQuantity(t, "s")} curve`;
+  const exact = finite.find((t) => Math.abs(width - t) <= 1e-9 * t);
+  if (exact !== undefined) return name(exact);
+  if (finite.length > 0 && width < finite[0]) return `${name(finite[0])}, unchanged`;
+  const longer = finite.findIndex((t) => t > width);
+  const scaled = policy === "thermal" && thermal;
+  if (longer === -1) {
+    if (scaled && finite.length > 0) return `${name(finite[finite.length - 1])} scaled by the thermal model`;
+    return widths.includes("DC") ? "the DC curve" : null;
+  }
+  const shorter = finite[longer - 1];
+  if (scaled) return `${name(shorter)} scaled by the thermal model`;
+  if (policy === "loglog") {
+    return `the ${formatQuantity(shorter, "s")} and ${formatQuantity(finite[longer], "s")} curves, log-log`;
+  }
+  return name(finite[longer]);
 }

@@ -1,6 +1,6 @@
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
+import { curvesRead, decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
 import type { CheckedPulse, ProjectCheck } from "../api";
 import { percent, q, repeatText, shapeWords, sourceWords } from "../format";
@@ -29,6 +29,16 @@ const viewVerdict = (verdict: Verdict | null, missing: string) =>
 function readingBefore(result: PulseResult): number | null {
   if (result.allowedCurrent === null || !(result.derating > 0)) return null;
   return result.allowedCurrent / result.derating / (result.repetitionScale ?? 1);
+}
+
+/** Which curves the binding reading used, in words. */
+function readFrom(
+  candidate: ProjectCheck["candidates"][number],
+  result: PulseResult,
+  policy: ProjectCheck["policy"]["betweenCurves"],
+): string | null {
+  const width = result.at ? result.at.width : result.equivalentWidth;
+  return curvesRead(candidate.widths ?? [], width, policy, candidate.hasThermalModel);
 }
 
 /** How every candidate's verdict for one pulse was found: the figures, the derating, and each flag in words. */
@@ -87,7 +97,12 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                     <dt className="text-ink-muted">On the curves</dt>
                     <dd className="num font-mono">
                       {q(readingBefore(result), "A")}{" "}
-                      <span className="font-sans text-ink-faint">before derating</span>
+                      <span className="font-sans text-ink-faint">
+                        before derating
+                        {readFrom(c, result, policy.betweenCurves)
+                          ? `, from ${readFrom(c, result, policy.betweenCurves)}`
+                          : ""}
+                      </span>
                     </dd>
                     {result.repetitionScale !== null ? (
                       <>
