@@ -6,6 +6,7 @@ import { recordAudit } from "@/db/queries/audit";
 import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
 import { type CsvIssue, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } from "@/lib/csv/curve-set";
 import { AppError } from "@/lib/errors";
+import { logError } from "@/lib/log";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
@@ -42,7 +43,7 @@ export async function presignUpload(
   if (!/\.(csv|txt|tsv)$/i.test(input.fileName)) {
     throw new AppError("invalid:file-type", "Upload a CSV text file (.csv, .tsv or .txt).");
   }
-  await cleanupStaleUploads(storage).catch((error) => console.error("upload cleanup failed", error));
+  await cleanupStaleUploads(storage).catch((error) => logError("upload cleanup failed", error));
   const objectKey = `${input.workspaceId}/${input.owner}/${input.purpose}/${crypto.randomUUID()}.csv`;
   const url = await storage.presignPut(objectKey, { contentType: "text/csv" });
   const [row] = await db

@@ -78,7 +78,7 @@ export async function notifyFailingEvidence(
       );
       sent++;
     } catch (error) {
-      console.error("failing-pulse notice not sent", error);
+      logError("failing-pulse notice not sent", error);
     }
   }
   return sent;
