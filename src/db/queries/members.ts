@@ -37,8 +37,30 @@ export function listMembers({ workspaceId }: { workspaceId: string }) {
     .orderBy(asc(users.name));
 }
 
-export async function countAdmins({ workspaceId }: { workspaceId: string }): Promise<number> {
-  const [row] = await db
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/**
+ * Locks the workspace's row for the rest of the transaction, so membership changes of one workspace run one at a
+ * time: a count of admins read after it stays true until the transaction ends.
+ */
+export async function lockWorkspace(tx: Tx, workspaceId: string): Promise<void> {
+  await tx.select({ id: workspaces.id }).from(workspaces).where(eq(workspaces.id, workspaceId)).for("update");
+}
+
+/** The member's role read under the workspace lock, or null when they are no longer a member. */
+export async function lockedRole(tx: Tx, workspaceId: string, userId: string): Promise<Role | null> {
+  const [row] = await tx
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  return row?.role ?? null;
+}
+
+export async function countAdmins(
+  { workspaceId }: { workspaceId: string },
+  client: Tx | typeof db = db,
+): Promise<number> {
+  const [row] = await client
     .select({ n: count() })
     .from(memberships)
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "admin" satisfies Role)));

@@ -1,8 +1,9 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { notices, type Project, users } from "@/db/schema";
+import { memberships, notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
+import { logError } from "@/lib/log";
 import { mailer } from "@/lib/mail";
 import { failingPulseMail } from "@/lib/mail/templates";
 import { formatTemperature } from "@/lib/soa/sanity";
@@ -24,10 +25,15 @@ export async function notifyFailingEvidence(
   pulseIds: string[],
 ): Promise<number> {
   if (!project.ownerId) return 0;
-  const owner = await db.query.users.findFirst({
-    where: eq(users.id, project.ownerId),
-    columns: { email: true },
-  });
+  // Only a current member of the project's workspace is told: a removed owner hears nothing more.
+  const [owner] = await db
+    .select({ email: users.email })
+    .from(users)
+    .innerJoin(
+      memberships,
+      and(eq(memberships.userId, users.id), eq(memberships.workspaceId, project.workspaceId)),
+    )
+    .where(eq(users.id, project.ownerId));
   if (!owner) return 0;
   let sent = 0;
   for (const pulse of checked.pulses.filter((p) => pulseIds.includes(p.id))) {

@@ -1,9 +1,10 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { countAdmins, getMembership } from "@/db/queries/members";
-import { memberships } from "@/db/schema";
+import { countAdmins, getMembership, lockedRole, lockWorkspace } from "@/db/queries/members";
+import { memberships, projects } from "@/db/schema";
 import { type MemberCaller, route } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
 import { changeRoleSchema } from "@/lib/auth/schemas";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
@@ -15,19 +16,32 @@ async function loadMember(caller: MemberCaller, userId: string) {
   return membership;
 }
 
+/** The caller's own role, read under the lock: an admin demoted a moment ago may no longer manage members. */
+async function assertStillManager(tx: Parameters<typeof lockWorkspace>[0], caller: MemberCaller) {
+  const role = await lockedRole(tx, caller.workspaceId, caller.user.id);
+  if (!role || !can(role, "member.manage")) {
+    throw new AppError("forbidden:member.manage", "Your role in this workspace does not allow this.");
+  }
+}
+
 /** PATCH /api/team/members/:userId: changes a member's role; the last admin keeps theirs. */
 export const PATCH = route<{ userId: string }>(
   { action: "member.manage" },
   async (req, caller, { userId }) => {
-    const member = await loadMember(caller, userId);
+    await loadMember(caller, userId);
     const { role } = await parseBody(req, changeRoleSchema);
-    if (member.role === "admin" && role !== "admin" && (await countAdmins(caller)) <= 1) {
-      throw new AppError(
-        "conflict:last-admin",
-        "A workspace needs at least one admin. Make someone else admin first.",
-      );
-    }
     await db.transaction(async (tx) => {
+      // The last-admin rule is checked under the workspace lock, so two admins demoting each other cannot both win.
+      await lockWorkspace(tx, caller.workspaceId);
+      const current = await lockedRole(tx, caller.workspaceId, userId);
+      if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
+      if (current === "admin" && role !== "admin" && (await countAdmins(caller, tx)) <= 1) {
+        throw new AppError(
+          "conflict:last-admin",
+          "A workspace needs at least one admin. Make someone else admin first.",
+        );
+      }
+      await assertStillManager(tx, caller);
       await tx
         .update(memberships)
         .set({ role })
@@ -39,7 +53,7 @@ export const PATCH = route<{ userId: string }>(
           action: "membership.role-changed",
           subjectType: "user",
           subjectId: userId,
-          details: { from: member.role, to: role },
+          details: { from: current, to: role },
         },
         tx,
       );
@@ -48,15 +62,26 @@ export const PATCH = route<{ userId: string }>(
   },
 );
 
-/** DELETE /api/team/members/:userId: removes a member from the workspace, never the last admin. */
+/**
+ * DELETE /api/team/members/:userId: removes a member from the workspace, never the last admin. Projects the member
+ * owned pass to the admin who removed them, so their failure notices reach someone who is still a member.
+ */
 export const DELETE = route<{ userId: string }>(
   { action: "member.manage" },
   async (_req, caller, { userId }) => {
-    const member = await loadMember(caller, userId);
-    if (member.role === "admin" && (await countAdmins(caller)) <= 1) {
-      throw new AppError("conflict:last-admin", "The last admin cannot be removed.");
-    }
+    await loadMember(caller, userId);
     await db.transaction(async (tx) => {
+      await lockWorkspace(tx, caller.workspaceId);
+      const current = await lockedRole(tx, caller.workspaceId, userId);
+      if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
+      if (current === "admin" && (await countAdmins(caller, tx)) <= 1) {
+        throw new AppError("conflict:last-admin", "The last admin cannot be removed.");
+      }
+      await assertStillManager(tx, caller);
+      await tx
+        .update(projects)
+        .set({ ownerId: caller.user.id })
+        .where(and(eq(projects.workspaceId, caller.workspaceId), eq(projects.ownerId, userId)));
       await tx
         .delete(memberships)
         .where(and(eq(memberships.workspaceId, caller.workspaceId), eq(memberships.userId, userId)));
@@ -67,7 +92,7 @@ export const DELETE = route<{ userId: string }>(
           action: "membership.removed",
           subjectType: "user",
           subjectId: userId,
-          details: { role: member.role },
+          details: { role: current },
         },
         tx,
       );
