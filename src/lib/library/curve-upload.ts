@@ -78,20 +78,46 @@ export async function getPendingUpload(input: { workspaceId: string; uploadId: s
 }
 
 /**
- * After a failed registration: deletes the object, then its pending row. If storage cannot be reached, the row
+ * After a failed registration: claims the pending row and deletes its object in one transaction. Only the request
+ * that claims the row touches the object, and a registered row is written in the transaction that deletes the
+ * pending one, so an object a committed row points to is never deleted. If storage cannot be reached, the row
  * stays, so the cleanup step removes the object later: nothing is left behind for good.
  */
 export async function discardUpload(
   storage: Storage,
   upload: { id: string; objectKey: string },
 ): Promise<void> {
-  try {
-    await storage.remove(upload.objectKey);
-  } catch {
-    return;
-  }
-  await db.delete(pendingUploads).where(eq(pendingUploads.id, upload.id));
+  await db
+    .transaction(async (tx) => {
+      const [claimed] = await tx
+        .delete(pendingUploads)
+        .where(eq(pendingUploads.id, upload.id))
+        .returning({ id: pendingUploads.id });
+      if (claimed) await storage.remove(upload.objectKey);
+    })
+    .catch(() => {});
 }
+
+/**
+ * Retires a pending upload inside the transaction that registers it. The row lock makes a second registration of
+ * the same upload wait for the first and then find nothing: it answers 409 and leaves the object alone.
+ */
+export async function claimPendingUpload(tx: Tx, uploadId: string): Promise<void> {
+  const [claimed] = await tx
+    .delete(pendingUploads)
+    .where(eq(pendingUploads.id, uploadId))
+    .returning({ id: pendingUploads.id });
+  if (!claimed) throw new UploadAlreadyRegistered();
+}
+
+/** The upload was registered (or discarded) by another request: its object belongs to that request now. */
+export class UploadAlreadyRegistered extends AppError {
+  constructor() {
+    super("conflict:upload", "This upload is already registered.");
+  }
+}
+
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 /** Reads an uploaded text file back from storage, within the size limit. */
 export async function readUploadedText(
@@ -121,7 +147,8 @@ export class CsvRejected extends AppError {
 /**
  * Parses, checks and stores a curve set from an object already in storage: curves, findings, object key, name,
  * size and SHA-256 in one transaction, the new set active and the part back to draft. A rejected file or a failed
- * transaction deletes the object, so a file in storage and its row are always both there or both gone.
+ * transaction deletes the object, so a file in storage and its row are always both there or both gone. The same
+ * upload registered twice at once: one wins, the other answers 409 and deletes nothing.
  */
 export async function registerCurveSet(
   storage: Storage,
@@ -163,6 +190,7 @@ export async function registerCurveSet(
       findingPart(input.part),
     );
     const set = await db.transaction(async (tx) => {
+      await claimPendingUpload(tx, upload.id);
       await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, input.part.id));
       const [row] = await tx
         .insert(curveSets)
@@ -203,13 +231,12 @@ export async function registerCurveSet(
         },
         tx,
       );
-      await tx.delete(pendingUploads).where(eq(pendingUploads.id, upload.id));
       return row;
     });
     await noticeLapsedVerification(input.part, `new curve set ${upload.fileName}`, input.userName);
     return { curveSet: set, curves: parsed.curves.length, findings, warnings: parsed.warnings };
   } catch (error) {
-    await discardUpload(storage, upload);
+    if (!(error instanceof UploadAlreadyRegistered)) await discardUpload(storage, upload);
     throw error;
   }
 }

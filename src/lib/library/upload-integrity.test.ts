@@ -1,0 +1,102 @@
+// Upload integrity against the real storage fake and PostgreSQL: a curve upload registered twice at once, and what
+// a presigned PUT may still do.
+import { createHash } from "node:crypto";
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
+import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
+import { curveSets, type Part, parts } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { createStorage } from "@/lib/storage/storage";
+import {
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { requireEnv } from "@/test/services";
+
+const storage = createStorage({
+  endpoint: requireEnv("S3_ENDPOINT"),
+  region: "us-east-1",
+  bucket: requireEnv("S3_BUCKET"),
+  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
+  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
+});
+const h = (handler: unknown) => handler as GuardedHandler;
+
+// A small valid curve set in the long format the app documents (src/lib/csv/curve-set-examples.ts).
+const csv = ["width,V_DS [V],I_D [A]", "1 ms,1,60", "1 ms,10,40", "1 ms,40,10", "DC,1,30", "DC,40,1.25"].join(
+  "\n",
+);
+const sha256 = (text: string | Buffer) => createHash("sha256").update(text).digest("hex");
+
+let ws: TestWorkspace;
+let cookie: string;
+
+beforeAll(async () => {
+  ws = await createTestWorkspace("Integrity");
+  cookie = await sessionCookie(ws.members.engineer.id, ws.id);
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+async function newPart(): Promise<Part> {
+  const [part] = await testDb.db
+    .insert(parts)
+    .values({
+      workspaceId: ws.id,
+      partNumber: `IN-${crypto.randomUUID().slice(0, 6)}`,
+      maker: "Integrity Test Devices",
+      technology: "si-mosfet",
+      package: "TO-220",
+      vdsMax: 60,
+      tjMax: 175,
+    })
+    .returning();
+  return part;
+}
+
+async function ticketFor(partId: string, size: number) {
+  const res = await call(h(uploadPost), "POST", {
+    cookie,
+    params: { id: partId },
+    body: { fileName: "figure.csv", size, purpose: "curve-set" },
+  });
+  expect(res.status).toBe(201);
+  return (await res.json()) as { uploadId: string; objectKey: string; url: string };
+}
+
+async function put(url: string, body: string) {
+  return fetch(url, { method: "PUT", body, headers: { "content-type": "text/csv" } });
+}
+
+describe("registering one curve upload several times at once", () => {
+  it("answers one 201 and 409s, and the committed set's object stays with its recorded hash (5 trials)", async () => {
+    for (let trial = 0; trial < 5; trial++) {
+      const part = await newPart();
+      const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
+      expect((await put(ticket.url, csv)).status).toBe(200);
+      const statuses = await Promise.all(
+        Array.from({ length: 3 }, () =>
+          call(h(registerPost), "POST", {
+            cookie,
+            params: { id: part.id },
+            body: { uploadId: ticket.uploadId },
+          }),
+        ),
+      ).then((rs) => rs.map((r) => r.status).sort());
+      expect(statuses[0]).toBe(201);
+      for (const s of statuses.slice(1)) expect([404, 409]).toContain(s);
+      const sets = await testDb.db.select().from(curveSets).where(eq(curveSets.partId, part.id));
+      expect(sets).toHaveLength(1);
+      const stored = await storage.get(sets[0].objectKey);
+      expect(stored).not.toBeNull();
+      expect(sha256(stored!)).toBe(sets[0].sha256);
+    }
+  });
+});
