@@ -122,7 +122,7 @@ export const authAttempts = pgTable(
   "auth_attempts",
   {
     id: uuid().primaryKey().defaultRandom(),
-    kind: text({ enum: ["sign-in", "reset"] }).notNull(),
+    kind: text({ enum: ["sign-in", "reset", "reset-use"] }).notNull(),
     key: text().notNull(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

@@ -22,6 +22,8 @@ const schema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default("Pulsefence <no-reply@pulsefence.invalid>"),
   MAIL_INBOX_URL: z.url().optional(),
+  /** How many reverse proxies in front of the app append to X-Forwarded-For; 0 (default) trusts none. */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -2,7 +2,15 @@ import "server-only";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { invitations, memberships, passwordResets, users, workspaces } from "@/db/schema";
+import {
+  apiTokens,
+  authAttempts,
+  invitations,
+  memberships,
+  passwordResets,
+  users,
+  workspaces,
+} from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 import { mailer } from "@/lib/mail";
@@ -11,7 +19,10 @@ import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
 import { endOtherSessions } from "./session";
 import { hashToken, randomToken } from "./tokens";
 
+/** How long an invitation link works. */
 export const linkLifetimeMs = 7 * 24 * 60 * 60 * 1000;
+/** How long a password-reset link works: long enough to read the e-mail, short enough to be useless later. */
+export const resetLinkLifetimeMs = 60 * 60 * 1000;
 
 export function slugify(name: string): string {
   const base = name
@@ -92,33 +103,60 @@ export async function requestPasswordReset(email: string): Promise<void> {
   await db.insert(passwordResets).values({
     userId: user.id,
     tokenHash: hashToken(token),
-    expiresAt: new Date(Date.now() + linkLifetimeMs),
+    expiresAt: new Date(Date.now() + resetLinkLifetimeMs),
   });
   await mailer().send(passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` }));
 }
 
-/** Uses a reset link once: sets the password and ends every session of the user. */
+/**
+ * Uses a reset link once. The link is looked up before any password is hashed, so invalid links cost nothing.
+ * Then, in one transaction: the password is set, every reset link of the user stops working (an older one too),
+ * every API token is revoked and the account's failed sign-ins are forgotten; finally every session ends.
+ */
 export async function resetPassword(token: string, password: string): Promise<{ userId: string }> {
+  const tokenHash = hashToken(token);
+  const open = await db.query.passwordResets.findFirst({
+    where: and(
+      eq(passwordResets.tokenHash, tokenHash),
+      isNull(passwordResets.usedAt),
+      gt(passwordResets.expiresAt, new Date()),
+    ),
+    columns: { id: true },
+  });
+  if (!open) throw resetLinkGone();
   const passwordHash = await hashPassword(password);
-  const userId = await db.transaction(async (tx) => {
+  const now = new Date();
+  const user = await db.transaction(async (tx) => {
     const [reset] = await tx
       .update(passwordResets)
-      .set({ usedAt: new Date() })
-      .where(
-        and(
-          eq(passwordResets.tokenHash, hashToken(token)),
-          isNull(passwordResets.usedAt),
-          gt(passwordResets.expiresAt, new Date()),
-        ),
-      )
+      .set({ usedAt: now })
+      .where(and(eq(passwordResets.id, open.id), isNull(passwordResets.usedAt)))
       .returning({ userId: passwordResets.userId });
-    if (!reset)
-      throw new AppError("not_found:reset-link", "This reset link is not valid any more. Ask for a new one.");
-    await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
-    return reset.userId;
+    if (!reset) throw resetLinkGone();
+    await tx
+      .update(passwordResets)
+      .set({ usedAt: now })
+      .where(and(eq(passwordResets.userId, reset.userId), isNull(passwordResets.usedAt)));
+    const [updated] = await tx
+      .update(users)
+      .set({ passwordHash })
+      .where(eq(users.id, reset.userId))
+      .returning({ id: users.id, email: users.email });
+    await tx
+      .update(apiTokens)
+      .set({ revokedAt: now })
+      .where(and(eq(apiTokens.userId, reset.userId), isNull(apiTokens.revokedAt)));
+    await tx
+      .delete(authAttempts)
+      .where(and(eq(authAttempts.kind, "sign-in"), eq(authAttempts.key, `email:${updated.email}`)));
+    return updated;
   });
-  await endOtherSessions(userId, null);
-  return { userId };
+  await endOtherSessions(user.id, null);
+  return { userId: user.id };
+}
+
+function resetLinkGone(): AppError {
+  return new AppError("not_found:reset-link", "This reset link is not valid any more. Ask for a new one.");
 }
 
 /** The invitation behind a link, if it can still be used. */

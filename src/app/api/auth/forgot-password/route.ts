@@ -1,7 +1,7 @@
 import { requestPasswordReset } from "@/lib/auth/accounts";
 import { publicRoute } from "@/lib/auth/guard";
 import { forgotPasswordSchema } from "@/lib/auth/schemas";
-import { assertNotThrottled, attemptKeys, recordAttempt } from "@/lib/auth/throttle";
+import { attemptKeys, reserveAttempt } from "@/lib/auth/throttle";
 import { json, parseBody } from "@/lib/http";
 
 /**
@@ -11,8 +11,7 @@ import { json, parseBody } from "@/lib/http";
 export const POST = publicRoute(async (req) => {
   const { email } = await parseBody(req, forgotPasswordSchema);
   const keys = attemptKeys(req, email);
-  await assertNotThrottled("reset", keys);
-  await recordAttempt("reset", keys);
+  await reserveAttempt("reset", keys);
   await requestPasswordReset(email);
   return json({ status: "ok" });
 });
