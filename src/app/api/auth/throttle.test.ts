@@ -46,7 +46,7 @@ describe("sign-in throttling", () => {
     const user = await addMember(ws.id, "engineer");
     const statuses = (
       await Promise.all(
-        Array.from({ length: 40 }, (_, k) =>
+        Array.from({ length: 40 }, () =>
           tryPassword(user.email, "wrong guess", viaProxy("", randomAddress())),
         ),
       )
