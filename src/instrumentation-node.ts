@@ -10,3 +10,7 @@ try {
   }
   throw error;
 }
+
+// The mail outbox worker: delivers queued e-mails and retries them while the mail server is down.
+const { startOutboxWorker } = await import("@/lib/mail/outbox");
+startOutboxWorker();

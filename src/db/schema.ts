@@ -417,7 +417,7 @@ export const captures = pgTable(
   (t) => [index().on(t.projectId)],
 );
 
-/** One e-mail per failing measured pulse or capture: a row here means the owner was told. */
+/** One e-mail per failing measured pulse or capture: a row here means the owner's e-mail is in the outbox. */
 export const notices = pgTable(
   "notices",
   {
@@ -431,6 +431,33 @@ export const notices = pgTable(
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex().on(t.subjectType, t.subjectId)],
+);
+
+/**
+ * Every e-mail the app sends, written in the transaction that decides to send it and delivered by the outbox worker
+ * (src/lib/mail/outbox.ts), retried with backoff while the mail server is down. A row is marked sent only after the
+ * server accepted it; its body is then cleared (it may hold a single-use link). Admins see the workspace's rows.
+ */
+export const mailOutbox = pgTable(
+  "mail_outbox",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    workspaceId: uuid().references(() => workspaces.id, { onDelete: "cascade" }),
+    kind: text().notNull(),
+    to: text().notNull(),
+    subject: text().notNull(),
+    text: text().notNull(),
+    html: text(),
+    status: text({ enum: ["pending", "sent"] })
+      .notNull()
+      .default("pending"),
+    attempts: integer().notNull().default(0),
+    nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    lastError: text(),
+    sentAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.status, t.nextAttemptAt), index().on(t.workspaceId, t.createdAt)],
 );
 
 // Decisions ---------------------------------------------------------------------------------------------------
@@ -490,3 +517,4 @@ export type FaultCase = typeof faultCases.$inferSelect;
 export type MeasuredPulse = typeof measuredPulses.$inferSelect;
 export type Capture = typeof captures.$inferSelect;
 export type Decision = typeof decisions.$inferSelect;
+export type OutboxMail = typeof mailOutbox.$inferSelect;

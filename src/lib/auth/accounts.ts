@@ -13,7 +13,7 @@ import {
 } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
-import { mailer } from "@/lib/mail";
+import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
 import { passwordResetMail } from "@/lib/mail/templates";
 import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
 import { endOtherSessions } from "./session";
@@ -100,12 +100,19 @@ export async function requestPasswordReset(email: string): Promise<void> {
   const user = await db.query.users.findFirst({ where: eq(users.email, email), columns: { id: true } });
   if (!user) return;
   const token = randomToken();
-  await db.insert(passwordResets).values({
-    userId: user.id,
-    tokenHash: hashToken(token),
-    expiresAt: new Date(Date.now() + resetLinkLifetimeMs),
+  await db.transaction(async (tx) => {
+    await tx.insert(passwordResets).values({
+      userId: user.id,
+      tokenHash: hashToken(token),
+      expiresAt: new Date(Date.now() + resetLinkLifetimeMs),
+    });
+    await enqueueMail(
+      passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` }),
+      { kind: "password-reset" },
+      tx,
+    );
   });
-  await mailer().send(passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` }));
+  kickOutbox();
 }
 
 /**

@@ -5,7 +5,7 @@ import { recordAudit } from "@/db/queries/audit";
 import { invitations, memberships, type Role, users, workspaces } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
-import { mailer } from "@/lib/mail";
+import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
 import { invitationMail } from "@/lib/mail/templates";
 import { linkLifetimeMs } from "./accounts";
 import type { MemberCaller } from "./guard";
@@ -22,8 +22,8 @@ export function assertMayAssign(caller: MemberCaller, role: Role): void {
 }
 
 /**
- * Creates (or renews) an invitation with a fresh single-use token and e-mails its link. The row is written
- * first; if the e-mail cannot be sent, the invitation is removed again so nothing half-done remains.
+ * Creates (or renews) an invitation with a fresh single-use token and puts its e-mail in the outbox, in one
+ * transaction: the new link and its e-mail exist together, and the outbox delivers it once mail works.
  */
 export async function sendInvitation(
   caller: MemberCaller,
@@ -73,15 +73,11 @@ export async function sendInvitation(
       },
       tx,
     );
-    return row;
-  });
-
-  const [workspace] = await db
-    .select({ name: workspaces.name })
-    .from(workspaces)
-    .where(eq(workspaces.id, caller.workspaceId));
-  try {
-    await mailer().send(
+    const [workspace] = await tx
+      .select({ name: workspaces.name })
+      .from(workspaces)
+      .where(eq(workspaces.id, caller.workspaceId));
+    await enqueueMail(
       invitationMail({
         to: input.email,
         workspaceName: workspace.name,
@@ -89,10 +85,11 @@ export async function sendInvitation(
         role: roleLabels[input.role].toLowerCase(),
         link: `${env().APP_URL}/invite/${token}`,
       }),
+      { kind: "invitation", workspaceId: caller.workspaceId },
+      tx,
     );
-  } catch (error) {
-    await db.delete(invitations).where(eq(invitations.id, invitation.id));
-    throw error;
-  }
+    return row;
+  });
+  kickOutbox();
   return invitation;
 }

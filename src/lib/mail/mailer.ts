@@ -25,6 +25,10 @@ export function createMailer(config: MailConfig) {
     secure: config.secure,
     ignoreTLS: !config.secure && !config.user,
     auth: config.user ? { user: config.user, pass: config.password ?? "" } : undefined,
+    // Bounded waits: a hung mail server delays the outbox worker, never a request.
+    connectionTimeout: 10_000,
+    greetingTimeout: 10_000,
+    socketTimeout: 30_000,
   });
   return {
     async ping(): Promise<void> {

@@ -3,8 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { memberships, notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
-import { logError } from "@/lib/log";
-import { mailer } from "@/lib/mail";
+import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
 import { failingPulseMail } from "@/lib/mail/templates";
 import { formatTemperature } from "@/lib/soa/sanity";
 import { formatQuantity } from "@/lib/soa/units";
@@ -16,8 +15,8 @@ const sourceWords = { measured: "measured pulse", capture: "capture", "fault-cas
 
 /**
  * E-mails the project's owner engineer about each new measured pulse or capture that fails, or has no data, on
- * any candidate: exactly one e-mail per pulse (a row in `notices` records it, so a re-check never sends again).
- * Mail failures are logged, never undo the measurement.
+ * any candidate: exactly one e-mail per pulse. The notice row and the e-mail in the outbox are written together,
+ * so a re-check never queues again and a mail outage only delays the e-mail; it never undoes the measurement.
  */
 export async function notifyFailingEvidence(
   project: Project,
@@ -35,22 +34,11 @@ export async function notifyFailingEvidence(
     )
     .where(eq(users.id, project.ownerId));
   if (!owner) return 0;
-  let sent = 0;
+  let queued = 0;
   for (const pulse of checked.pulses.filter((p) => pulseIds.includes(p.id))) {
     const worst = checked.worstByPulse[pulse.id];
     if (worst !== "fail" && worst !== "no-data") continue;
     if (pulse.source === "fault-case") continue;
-    const [claimed] = await db
-      .insert(notices)
-      .values({
-        workspaceId: project.workspaceId,
-        subjectType: pulse.source,
-        subjectId: pulse.id,
-        recipientId: project.ownerId,
-      })
-      .onConflictDoNothing()
-      .returning({ id: notices.id });
-    if (!claimed) continue;
     const verdicts = checked.candidates.map((c) => {
       const r = checked.results[c.partId]?.[pulse.id];
       const detail = r
@@ -70,22 +58,32 @@ export async function notifyFailingEvidence(
     ]
       .filter(Boolean)
       .join(", ");
-    try {
-      await mailer().send(
-        failingPulseMail({
-          to: owner.email,
-          projectName: project.name,
-          pulseName: pulse.name,
-          source: sourceWords[pulse.source],
-          pulseFigures: figures,
-          verdicts,
-          link: `${env().APP_URL}/projects/${project.id}?pulse=${pulse.id}`,
-        }),
-      );
-      sent++;
-    } catch (error) {
-      logError("failing-pulse notice not sent", error);
-    }
+    const mail = failingPulseMail({
+      to: owner.email,
+      projectName: project.name,
+      pulseName: pulse.name,
+      source: sourceWords[pulse.source],
+      pulseFigures: figures,
+      verdicts,
+      link: `${env().APP_URL}/projects/${project.id}?pulse=${pulse.id}`,
+    });
+    const ownerId = project.ownerId;
+    const claimed = await db.transaction(async (tx) => {
+      const [notice] = await tx
+        .insert(notices)
+        .values({
+          workspaceId: project.workspaceId,
+          subjectType: pulse.source,
+          subjectId: pulse.id,
+          recipientId: ownerId,
+        })
+        .onConflictDoNothing()
+        .returning({ id: notices.id });
+      if (notice) await enqueueMail(mail, { kind: "failing-pulse", workspaceId: project.workspaceId }, tx);
+      return Boolean(notice);
+    });
+    if (claimed) queued++;
   }
-  return sent;
+  if (queued) kickOutbox();
+  return queued;
 }

@@ -9,6 +9,7 @@ import { assignableRoles } from "@/lib/auth/permissions";
 import { InvitationRow } from "./invitation-row";
 import { InviteForm } from "./invite-form";
 import { MemberRow } from "./member-row";
+import { OutboxSection } from "./outbox-section";
 
 export const metadata: Metadata = { title: "Team" };
 
@@ -112,6 +113,8 @@ export default async function TeamPage() {
           </tbody>
         </Table>
       </Section>
+
+      {mayManage ? <OutboxSection workspaceId={workspaceId} /> : null}
     </div>
   );
 }

@@ -1,0 +1,112 @@
+// E-mail through the durable outbox with the mail server down (the app's SMTP port points where nothing listens),
+// then back: nothing is marked sent before it is, and nothing is lost.
+import { and, eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
+import { POST as saveMeasurements } from "@/app/api/projects/[id]/measurements/route";
+import { POST as resend } from "@/app/api/team/invitations/[id]/resend/route";
+import { POST as invite } from "@/app/api/team/invitations/route";
+import { invitations, mailOutbox, notices, projects } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { DEMO_PARTS } from "@/lib/demo/parts";
+import {
+  addDemoCandidate,
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+  testPassword,
+} from "@/test/fixtures";
+import { waitForMail } from "@/test/services";
+import { createMailer } from "./mailer";
+import { deliverOutbox, listOutbox, outboxIdle } from "./outbox";
+
+const realSmtpPort = vi.hoisted(() => {
+  const port = process.env.SMTP_PORT;
+  process.env.SMTP_PORT = "1"; // nothing listens on port 1: the app's mailer is down
+  return Number(port);
+});
+const workingMailer = () =>
+  createMailer({ host: "127.0.0.1", port: realSmtpPort, secure: false, from: "Pulsefence <t@example.test>" });
+const later = () => new Date(Date.now() + 60 * 60 * 1000);
+
+const h = (handler: unknown) => handler as GuardedHandler;
+let ws: TestWorkspace;
+beforeAll(async () => {
+  ws = await createTestWorkspace("Outbox");
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+async function outboxTo(to: string) {
+  return testDb.db.select().from(mailOutbox).where(eq(mailOutbox.to, to));
+}
+
+describe("with the mail server down", () => {
+  it("a failing measurement's notice stays queued, and is sent once mail returns", async () => {
+    const [project] = await testDb.db
+      .insert(projects)
+      .values({ workspaceId: ws.id, name: "Outbox board", caseTemp: 25, ownerId: ws.members.engineer.id })
+      .returning();
+    await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
+    const tech = await sessionCookie(ws.members.technician.id, ws.id);
+    const res = await call(h(saveMeasurements), "POST", {
+      cookie: tech,
+      params: { id: project.id },
+      body: { rows: [{ label: "Overload", kind: "rect", v: 40, i: 900, duration: 10e-3 }] },
+    });
+    expect(res.status).toBe(201);
+    await outboxIdle();
+    const [pulseId] = (await res.json()).saved;
+    expect(await testDb.db.select().from(notices).where(eq(notices.subjectId, pulseId))).toHaveLength(1);
+    const [queued] = await outboxTo(ws.members.engineer.email);
+    expect(queued).toMatchObject({ status: "pending", kind: "failing-pulse" });
+    expect(queued.attempts).toBeGreaterThanOrEqual(1);
+    expect(queued.lastError).toBeTruthy();
+
+    const { sent } = await deliverOutbox(workingMailer(), later());
+    expect(sent).toBeGreaterThanOrEqual(1);
+    const mail = await waitForMail(ws.members.engineer.email);
+    expect(mail.subject).toContain('"Overload" fails');
+    const [after] = await outboxTo(ws.members.engineer.email);
+    expect(after).toMatchObject({ status: "sent", text: "" });
+  });
+
+  it("resending an invitation keeps a working link waiting in the outbox, delivered when mail returns", async () => {
+    const admin = await sessionCookie(ws.members.admin.id, ws.id);
+    const email = `resend-${crypto.randomUUID().slice(0, 8)}@example.test`;
+    expect((await call(h(invite), "POST", { cookie: admin, body: { email, role: "engineer" } })).status).toBe(
+      201,
+    );
+    await outboxIdle();
+    const [first] = await testDb.db.select().from(invitations).where(eq(invitations.email, email));
+    const resent = await call(h(resend), "POST", { cookie: admin, params: { id: first.id } });
+    expect(resent.status).toBe(201);
+    await outboxIdle();
+    const open = await testDb.db
+      .select()
+      .from(invitations)
+      .where(and(eq(invitations.email, email)));
+    expect(open.filter((i) => !i.revokedAt)).toHaveLength(1);
+    expect((await outboxTo(email)).every((m) => m.status === "pending")).toBe(true);
+
+    await deliverOutbox(workingMailer(), later());
+    const mail = await waitForMail(email);
+    const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
+    const accepted = await call(h(acceptInvitation), "POST", {
+      body: { token, name: "Rae Outbox", password: testPassword },
+    });
+    expect(accepted.status).toBe(200);
+  });
+
+  it("lists the workspace's e-mails and their state for admins, without bodies", async () => {
+    const rows = await listOutbox({ workspaceId: ws.id });
+    expect(rows.length).toBeGreaterThanOrEqual(2);
+    expect(rows[0]).not.toHaveProperty("text");
+    expect(rows.map((r) => r.status)).toContain("sent");
+  });
+});
