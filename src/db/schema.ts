@@ -1,4 +1,4 @@
-import { relations } from "drizzle-orm";
+import { relations, sql } from "drizzle-orm";
 import {
   boolean,
   doublePrecision,
@@ -35,7 +35,10 @@ export const users = pgTable("users", {
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 
-/** A signed-in browser. The id is the hash of the cookie's token; the active workspace travels with it. */
+/**
+ * A signed-in browser. The id is the SHA-256 of the cookie's token (a stolen table signs no one in); the active
+ * workspace travels with it. `expiresAt` slides with use; `createdAt` caps the session's life however it is used.
+ */
 export const sessions = pgTable(
   "sessions",
   {
@@ -45,6 +48,7 @@ export const sessions = pgTable(
       .references(() => users.id, { onDelete: "cascade" }),
     workspaceId: uuid().references(() => workspaces.id, { onDelete: "set null" }),
     expiresAt: timestamp({ withTimezone: true, mode: "date" }).notNull(),
+    createdAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
   },
   (t) => [index().on(t.userId)],
 );
@@ -110,6 +114,8 @@ export const apiTokens = pgTable(
     name: text().notNull(),
     tokenHash: text().notNull().unique(),
     prefix: text().notNull(),
+    /** Tokens expire (90 days unless given otherwise); a password reset or sign-out everywhere revokes them. */
+    expiresAt: timestamp({ withTimezone: true }).notNull().default(sql`now() + interval '90 days'`),
     lastUsedAt: timestamp({ withTimezone: true }),
     revokedAt: timestamp({ withTimezone: true }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

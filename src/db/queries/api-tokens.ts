@@ -1,10 +1,10 @@
 import "server-only";
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { apiTokens, users } from "@/db/schema";
 import { hashToken } from "@/lib/auth/tokens";
 
-/** The live token's user and workspace, or null. Marks the token used. */
+/** The live (not revoked, not expired) token's user and workspace, or null. Marks the token used. */
 export async function findActiveApiToken(token: string) {
   const [row] = await db
     .select({
@@ -14,7 +14,13 @@ export async function findActiveApiToken(token: string) {
     })
     .from(apiTokens)
     .innerJoin(users, eq(users.id, apiTokens.userId))
-    .where(and(eq(apiTokens.tokenHash, hashToken(token)), isNull(apiTokens.revokedAt)));
+    .where(
+      and(
+        eq(apiTokens.tokenHash, hashToken(token)),
+        isNull(apiTokens.revokedAt),
+        gt(apiTokens.expiresAt, new Date()),
+      ),
+    );
   if (!row) return null;
   await db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, row.id));
   return row;
@@ -28,6 +34,7 @@ export function listApiTokens({ userId }: { userId: string }) {
       prefix: apiTokens.prefix,
       workspaceId: apiTokens.workspaceId,
       createdAt: apiTokens.createdAt,
+      expiresAt: apiTokens.expiresAt,
       lastUsedAt: apiTokens.lastUsedAt,
       revokedAt: apiTokens.revokedAt,
     })

@@ -2,7 +2,8 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { sessions } from "@/db/schema";
-import { lucia } from "./lucia";
+import { lucia, sessionMaxAgeMs } from "./lucia";
+import { hashToken, randomToken } from "./tokens";
 
 export interface SessionUser {
   id: string;
@@ -20,24 +21,33 @@ export interface ValidSession {
 
 export const sessionCookieName = lucia.sessionCookieName;
 
-/** Reads and validates the session cookie from a Cookie header. Renewal happens here (sliding expiry). */
+/**
+ * Reads and validates the session cookie from a Cookie header. The cookie holds a random token; the database holds
+ * only its SHA-256, as for API tokens. Renewal happens here (sliding expiry), but never past `sessionMaxAgeMs`.
+ */
 export async function validateSessionCookie(cookieHeader: string | null): Promise<ValidSession | null> {
-  const sessionId = lucia.readSessionCookie(cookieHeader ?? "");
-  if (!sessionId) return null;
-  const { session, user } = await lucia.validateSession(sessionId);
+  const token = lucia.readSessionCookie(cookieHeader ?? "");
+  if (!token) return null;
+  const { session, user } = await lucia.validateSession(hashToken(token));
   if (!session || !user) return null;
+  const createdAt = session.createdAt ? new Date(session.createdAt).getTime() : 0;
+  if (Date.now() - createdAt > sessionMaxAgeMs) {
+    await lucia.invalidateSession(session.id);
+    return null;
+  }
   return {
     sessionId: session.id,
     user: { id: user.id, email: user.email, name: user.name },
     workspaceId: session.workspaceId,
-    setCookie: session.fresh ? lucia.createSessionCookie(session.id).serialize() : null,
+    setCookie: session.fresh ? lucia.createSessionCookie(token).serialize() : null,
   };
 }
 
-/** Starts a session in a workspace; returns the Set-Cookie value. */
+/** Starts a session in a workspace; returns the Set-Cookie value (the token; the database keeps its hash). */
 export async function startSession(userId: string, workspaceId: string | null): Promise<string> {
-  const session = await lucia.createSession(userId, { workspaceId });
-  return lucia.createSessionCookie(session.id).serialize();
+  const token = randomToken();
+  await lucia.createSession(userId, { workspaceId, createdAt: new Date() }, { sessionId: hashToken(token) });
+  return lucia.createSessionCookie(token).serialize();
 }
 
 export async function endSession(sessionId: string): Promise<string> {

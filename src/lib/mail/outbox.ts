@@ -90,16 +90,30 @@ function errorCode(error: unknown): string {
   return typeof e?.code === "string" ? e.code : "send-failed";
 }
 
-let running: Promise<unknown> | null = null;
+let running: Promise<void> | null = null;
+let again = false;
 
-/** Starts a delivery pass now, in the background (after a commit that enqueued mail); one pass at a time. */
+/**
+ * Starts a delivery pass now, in the background (after a commit that enqueued mail). One pass runs at a time; a kick
+ * during a pass asks for another after it, so mail queued meanwhile is not left for the timer.
+ */
 export function kickOutbox(): void {
-  if (running) return;
-  running = deliverOutbox()
-    .catch((error) => logError("mail outbox pass failed", error))
-    .finally(() => {
-      running = null;
-    });
+  if (running) {
+    again = true;
+    return;
+  }
+  running = (async () => {
+    do {
+      again = false;
+      const { sent, failed } = await deliverOutbox().catch((error) => {
+        logError("mail outbox pass failed", error);
+        return { sent: 0, failed: 0 };
+      });
+      if (sent + failed >= batchSize) again = true;
+    } while (again);
+  })().finally(() => {
+    running = null;
+  });
 }
 
 /** Resolves when the background delivery pass (if any) has finished. */

@@ -1,0 +1,157 @@
+// Credentials do not outlive the changes that should end them: reset links, API tokens and sessions.
+import { createHash } from "node:crypto";
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { apiTokens, passwordResets, sessions } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import {
+  addMember,
+  call,
+  cookiePair,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { readInbox } from "@/test/services";
+import { POST as createToken, GET as listTokens } from "../account/tokens/route";
+import { POST as checkPost } from "../v1/check/route";
+import { POST as forgotPassword } from "./forgot-password/route";
+import { POST as resetPassword } from "./reset-password/route";
+import { POST as signIn } from "./sign-in/route";
+import { POST as signOutEverywhere } from "./sign-out-everywhere/route";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
+let ws: TestWorkspace;
+beforeAll(async () => {
+  ws = await createTestWorkspace("Credentials");
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+// The smallest valid check contract (METHODS.md §9): one curve, one pulse.
+const checkRequest = {
+  part: {
+    vdsMax: 80,
+    tjMax: 175,
+    soa: {
+      curves: [
+        {
+          duration: 1e-3,
+          points: [
+            [10, 40],
+            [40, 10],
+          ],
+        },
+      ],
+    },
+  },
+  caseTemp: 25,
+  pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
+};
+
+async function resetLinks(email: string, count: number): Promise<string[]> {
+  const tokens: string[] = [];
+  for (let k = 0; k < count; k++) {
+    expect((await call(h(forgotPassword), "POST", { body: { email } })).status).toBe(200);
+    for (let wait = 0; wait < 50; wait++) {
+      const found = (await readInbox())
+        .filter((m) => m.to.some((t) => t.address === email))
+        .map((m) => /\/reset-password\/([A-Za-z0-9_-]+)/.exec(m.text)?.[1] ?? "");
+      if (found.length > k) {
+        tokens.push(found[k]);
+        break;
+      }
+      await new Promise((r) => setTimeout(r, 100));
+    }
+  }
+  return tokens;
+}
+
+async function newToken(userId: string) {
+  const cookie = await sessionCookie(userId, ws.id);
+  const res = await call(h(createToken), "POST", { cookie, body: { name: "bench" } });
+  return (await res.json()).token as { id: string; secret: string };
+}
+
+const check = (secret: string) => call(h(checkPost), "POST", { bearer: secret, body: checkRequest });
+
+describe("reset links", () => {
+  it("an older link stops working once a newer one is used, and a link lives about an hour", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const [older, newer] = await resetLinks(user.email, 2);
+    const rows = await testDb.db.select().from(passwordResets).where(eq(passwordResets.userId, user.id));
+    for (const row of rows) {
+      expect(row.expiresAt.getTime() - row.createdAt.getTime()).toBeLessThanOrEqual(60 * 60 * 1000 + 5000);
+    }
+    const body = (token: string) => ({ body: { token, password: "a newer long passphrase" } });
+    expect((await call(h(resetPassword), "POST", body(newer))).status).toBe(200);
+    expect((await call(h(resetPassword), "POST", body(older))).status).toBe(404);
+  });
+});
+
+describe("API tokens", () => {
+  it("stop working after a password reset", async () => {
+    const user = await addMember(ws.id, "technician");
+    const token = await newToken(user.id);
+    expect((await check(token.secret)).status).toBe(200);
+    const [link] = await resetLinks(user.email, 1);
+    const reset = await call(h(resetPassword), "POST", {
+      body: { token: link, password: "reset long passphrase" },
+    });
+    expect(reset.status).toBe(200);
+    expect((await check(token.secret)).status).toBe(401);
+  });
+
+  it("stop working after sign-out everywhere", async () => {
+    const user = await addMember(ws.id, "technician");
+    const token = await newToken(user.id);
+    const cookie = await sessionCookie(user.id, ws.id);
+    expect((await call(h(signOutEverywhere), "POST", { cookie })).status).toBe(200);
+    expect((await check(token.secret)).status).toBe(401);
+  });
+
+  it("expire", async () => {
+    const user = await addMember(ws.id, "technician");
+    const token = await newToken(user.id);
+    const [row] = await testDb.db.select().from(apiTokens).where(eq(apiTokens.id, token.id));
+    expect(row.expiresAt.getTime()).toBeLessThanOrEqual(Date.now() + 91 * 24 * 3600 * 1000);
+    await testDb.db
+      .update(apiTokens)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(apiTokens.id, token.id));
+    expect((await check(token.secret)).status).toBe(401);
+  });
+});
+
+describe("sessions", () => {
+  it("store only the hash of the cookie's token, and the cookie lives days, not 400", async () => {
+    const user = await addMember(ws.id, "lead");
+    const res = await call(h(signIn), "POST", {
+      body: { email: user.email, password: "correct horse battery" },
+    });
+    expect(res.status).toBe(200);
+    const setCookie = res.headers.get("set-cookie")!;
+    const token = cookiePair(setCookie).split("=")[1];
+    const rows = await testDb.db.select().from(sessions).where(eq(sessions.userId, user.id));
+    expect(rows.map((r) => r.id)).toEqual([sha256(token)]);
+    const maxAge = Number(/Max-Age=(\d+)/i.exec(setCookie)?.[1]);
+    expect(maxAge).toBeGreaterThan(0);
+    expect(maxAge).toBeLessThanOrEqual(30 * 24 * 3600);
+  });
+
+  it("end 30 days after sign-in however often they are used", async () => {
+    const user = await addMember(ws.id, "lead");
+    const cookie = await sessionCookie(user.id, ws.id);
+    expect((await call(h(listTokens), "GET", { cookie })).status).toBe(200);
+    await testDb.db
+      .update(sessions)
+      .set({ createdAt: new Date(Date.now() - 31 * 24 * 3600 * 1000) })
+      .where(eq(sessions.userId, user.id));
+    expect((await call(h(listTokens), "GET", { cookie })).status).toBe(401);
+  });
+});
