@@ -109,8 +109,9 @@ start_postgres() {
 start_storage() {
   mkdir -p "$DATA_DIR/s3"
   log "starting storage fake on 127.0.0.1:$S3_PORT"
-  "$ROOT/node_modules/.bin/s3rver" -d "$DATA_DIR/s3" -a 127.0.0.1 -p "$S3_PORT" --silent \
-    --configure-bucket "$BUCKET" "$ROOT/scripts/s3-cors.xml" >"$DATA_DIR/s3.log" 2>&1 &
+  # s3rver behind a launcher that accepts only signed requests and CORS from the app's origin, as a real store.
+  node "$ROOT/scripts/storage-fake.mjs" "$DATA_DIR/s3" 127.0.0.1 "$S3_PORT" "$BUCKET" "$APP_URL" S3RVER S3RVER \
+    >"$DATA_DIR/s3.log" 2>&1 &
   PIDS+=($!)
   echo $! > "$DATA_DIR/s3.pid"
   wait_for "storage fake" 20 curl -s -o /dev/null "http://127.0.0.1:$S3_PORT/"

@@ -5,7 +5,7 @@ import { recordAudit } from "@/db/queries/audit";
 import { invitations, memberships, type Role, users, workspaces } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
-import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
+import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { invitationMail } from "@/lib/mail/templates";
 import { linkLifetimeMs } from "./accounts";
 import type { MemberCaller } from "./guard";
@@ -90,6 +90,6 @@ export async function sendInvitation(
     );
     return row;
   });
-  kickOutbox();
+  await flushOutbox();
   return invitation;
 }

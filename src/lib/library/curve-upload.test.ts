@@ -102,8 +102,9 @@ describe("curve-set upload", () => {
     });
     expect(res.status).toBe(201);
     const [set] = await rowsFor(part.id);
+    // The set keeps its own copy of the parsed bytes; the presigned object is removed.
+    expect(set.objectKey).not.toBe(ticket.objectKey);
     expect(set).toMatchObject({
-      objectKey: ticket.objectKey,
       fileName: "figure-9.csv",
       size: Buffer.byteLength(csv),
       active: true,
@@ -111,7 +112,8 @@ describe("curve-set upload", () => {
     expect(set.sha256).toMatch(/^[0-9a-f]{64}$/);
     const stored = await testDb.db.select().from(curves).where(eq(curves.curveSetId, set.id));
     expect(stored.map((c) => c.duration).sort()).toEqual([0.001, 0.01, null]);
-    expect((await storage.get(ticket.objectKey))?.toString()).toBe(csv);
+    expect((await storage.get(set.objectKey))?.toString()).toBe(csv);
+    expect(await storage.get(ticket.objectKey)).toBeNull();
     const [after] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
     expect(after.status).toBe("draft");
     expect(

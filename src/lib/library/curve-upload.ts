@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, lt } from "drizzle-orm";
+import { and, eq, lt, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
@@ -45,7 +45,7 @@ export async function presignUpload(
   }
   await cleanupStaleUploads(storage).catch((error) => logError("upload cleanup failed", error));
   const objectKey = `${input.workspaceId}/${input.owner}/${input.purpose}/${crypto.randomUUID()}.csv`;
-  const url = await storage.presignPut(objectKey, { contentType: "text/csv" });
+  const url = await storage.presignPut(objectKey, { contentType: "text/csv", contentLength: input.size });
   const [row] = await db
     .insert(pendingUploads)
     .values({
@@ -99,13 +99,15 @@ export async function discardUpload(
 }
 
 /**
- * Retires a pending upload inside the transaction that registers it. The row lock makes a second registration of
- * the same upload wait for the first and then find nothing: it answers 409 and leaves the object alone.
+ * Marks a pending upload registered inside the transaction that registers it. The row lock makes a second
+ * registration of the same upload wait for the first and then find nothing: it answers 409 and leaves the objects
+ * alone. The row itself stays until the uploaded object is removed (after commit, or by the cleanup step).
  */
 export async function claimPendingUpload(tx: Tx, uploadId: string): Promise<void> {
   const [claimed] = await tx
-    .delete(pendingUploads)
-    .where(eq(pendingUploads.id, uploadId))
+    .update(pendingUploads)
+    .set({ purpose: "registered" })
+    .where(and(eq(pendingUploads.id, uploadId), ne(pendingUploads.purpose, "registered")))
     .returning({ id: pendingUploads.id });
   if (!claimed) throw new UploadAlreadyRegistered();
 }
@@ -147,8 +149,9 @@ export class CsvRejected extends AppError {
 /**
  * Parses, checks and stores a curve set from an object already in storage: curves, findings, object key, name,
  * size and SHA-256 in one transaction, the new set active and the part back to draft. A rejected file or a failed
- * transaction deletes the object, so a file in storage and its row are always both there or both gone. The same
- * upload registered twice at once: one wins, the other answers 409 and deletes nothing.
+ * transaction deletes the object, so a file in storage and its row are always both there or both gone. The set
+ * points to a copy of the parsed bytes that no URL can overwrite. The same upload registered twice at once: one
+ * wins, the other answers 409 and deletes nothing the winner uses.
  */
 export async function registerCurveSet(
   storage: Storage,
@@ -161,6 +164,7 @@ export async function registerCurveSet(
   },
 ) {
   const { upload } = input;
+  let kept: { id: string; objectKey: string } | null = null;
   try {
     const { text, bytes } = await readUploadedText(storage, upload.objectKey);
     const parsed = parseCurveSetCsv(text);
@@ -189,15 +193,22 @@ export async function registerCurveSet(
       { ...digitisedCurveSet(parsed.curves), refCaseTemp },
       findingPart(input.part),
     );
+    kept = await keepCopy(
+      storage,
+      { ...upload, workspaceId: input.part.workspaceId, userId: input.userId },
+      bytes,
+    );
+    const { id: keptId, objectKey: keptKey } = kept;
     const set = await db.transaction(async (tx) => {
       await claimPendingUpload(tx, upload.id);
+      await tx.delete(pendingUploads).where(eq(pendingUploads.id, keptId));
       await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, input.part.id));
       const [row] = await tx
         .insert(curveSets)
         .values({
           workspaceId: input.part.workspaceId,
           partId: input.part.id,
-          objectKey: upload.objectKey,
+          objectKey: keptKey,
           fileName: upload.fileName,
           size: bytes.length,
           sha256,
@@ -234,11 +245,45 @@ export async function registerCurveSet(
       return row;
     });
     await noticeLapsedVerification(input.part, `new curve set ${upload.fileName}`, input.userName);
+    // The presigned object is no longer needed; if storage fails here, the cleanup step removes it later.
+    await discardUpload(storage, upload);
     return { curveSet: set, curves: parsed.curves.length, findings, warnings: parsed.warnings };
   } catch (error) {
+    if (kept) await discardUpload(storage, kept);
     if (!(error instanceof UploadAlreadyRegistered)) await discardUpload(storage, upload);
     throw error;
   }
+}
+
+/**
+ * Stores the bytes that were parsed and hashed under a key of their own, one no presigned URL was ever issued for:
+ * a PUT to the upload's URL after registration changes nothing the curve set points to. A pending row is written
+ * first, so a failure anywhere leaves nothing behind for good.
+ */
+async function keepCopy(
+  storage: Storage,
+  upload: { objectKey: string; fileName: string; workspaceId: string; userId: string },
+  bytes: Buffer,
+): Promise<{ id: string; objectKey: string }> {
+  const objectKey = `${upload.objectKey.replace(/\/[^/]+$/, "")}/kept-${crypto.randomUUID()}.csv`;
+  const [row] = await db
+    .insert(pendingUploads)
+    .values({
+      workspaceId: upload.workspaceId,
+      userId: upload.userId,
+      objectKey,
+      fileName: upload.fileName,
+      purpose: "kept-copy",
+    })
+    .returning({ id: pendingUploads.id });
+  const reserved = { id: row.id, objectKey };
+  try {
+    await storage.put(objectKey, bytes, { contentType: "text/csv", contentLength: bytes.length });
+  } catch (error) {
+    await discardUpload(storage, reserved);
+    throw error;
+  }
+  return reserved;
 }
 
 /** Removes objects whose upload was presigned but never registered (the browser left, or the parse failed). */

@@ -100,3 +100,58 @@ describe("registering one curve upload several times at once", () => {
     }
   });
 });
+
+describe("presigned uploads", () => {
+  it("carry the signed size: a body of another length is refused", async () => {
+    const part = await newPart();
+    const ticket = await ticketFor(part.id, 10);
+    expect(new URL(ticket.url).searchParams.get("X-Amz-SignedHeaders")).toContain("content-length");
+    expect((await put(ticket.url, "x".repeat(20_000))).status).toBe(403);
+    expect((await put(ticket.url, "a,b\n1,2\n3\n")).status).toBe(200);
+  });
+
+  it("after registration, a PUT to the upload's URL changes nothing the curve set points to", async () => {
+    const part = await newPart();
+    const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
+    expect((await put(ticket.url, csv)).status).toBe(200);
+    const res = await call(h(registerPost), "POST", {
+      cookie,
+      params: { id: part.id },
+      body: { uploadId: ticket.uploadId },
+    });
+    expect(res.status).toBe(201);
+    const forged = csv.replace("1 ms,40,10", "1 ms,40,99");
+    await put(ticket.url, forged);
+    const [set] = await testDb.db.select().from(curveSets).where(eq(curveSets.partId, part.id));
+    const stored = await storage.get(set.objectKey);
+    expect(stored?.toString()).toBe(csv);
+    expect(sha256(stored!)).toBe(set.sha256);
+  });
+});
+
+describe("the storage fake, as a real store", () => {
+  const endpoint = requireEnv("S3_ENDPOINT");
+  const bucketUrl = `${endpoint}/${requireEnv("S3_BUCKET")}`;
+
+  it("refuses anonymous reads and writes", async () => {
+    const key = `test/${crypto.randomUUID()}.csv`;
+    await storage.put(key, "a,b\n");
+    expect((await fetch(`${bucketUrl}/${key}`)).status).toBe(403);
+    expect((await fetch(`${bucketUrl}/${key}`, { method: "PUT", body: "evil" })).status).toBe(403);
+    expect((await storage.get(key))?.toString()).toBe("a,b\n");
+    await storage.remove(key);
+  });
+
+  it("allows cross-origin browser uploads only from the app's origin", async () => {
+    const preflight = (origin: string) =>
+      fetch(`${bucketUrl}/test/cors.csv`, {
+        method: "OPTIONS",
+        headers: { origin, "access-control-request-method": "PUT" },
+      });
+    const app = await preflight(new URL(requireEnv("APP_URL")).origin);
+    expect(app.status).toBe(200);
+    expect(app.headers.get("access-control-allow-origin")).not.toBeNull();
+    const evil = await preflight("https://evil.example");
+    expect(evil.headers.get("access-control-allow-origin")).toBeNull();
+  });
+});

@@ -116,6 +116,22 @@ export function kickOutbox(): void {
   });
 }
 
+/**
+ * Kicks a delivery pass and waits for it, at most `maxWaitMs`: a request that queued mail answers after the mail
+ * was handed to the server when that is quick, and never waits long on a slow or dead one.
+ */
+export async function flushOutbox(maxWaitMs = 2000): Promise<void> {
+  kickOutbox();
+  let timer: NodeJS.Timeout | undefined;
+  await Promise.race([
+    outboxIdle(),
+    new Promise<void>((resolve) => {
+      timer = setTimeout(resolve, maxWaitMs);
+    }),
+  ]);
+  clearTimeout(timer);
+}
+
 /** Resolves when the background delivery pass (if any) has finished. */
 export async function outboxIdle(): Promise<void> {
   await running;

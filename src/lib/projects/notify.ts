@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { memberships, notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
-import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
+import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { failingPulseMail } from "@/lib/mail/templates";
 import { formatTemperature } from "@/lib/soa/sanity";
 import { formatQuantity } from "@/lib/soa/units";
@@ -84,6 +84,6 @@ export async function notifyFailingEvidence(
     });
     if (claimed) queued++;
   }
-  if (queued) kickOutbox();
+  if (queued) await flushOutbox();
   return queued;
 }

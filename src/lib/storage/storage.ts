@@ -90,15 +90,27 @@ export function createStorage(config: StorageConfig) {
     async remove(key: string): Promise<void> {
       await guard("delete", () => s3.send(new DeleteObjectCommand({ Bucket, Key: key })));
     },
-    /** A URL the browser can PUT the file to directly, valid for `expiresIn` seconds. */
+    /**
+     * A URL the browser can PUT the file to directly, valid for `expiresIn` seconds. The size and type are signed
+     * into it: the store refuses a body of any other length.
+     */
     async presignPut(
       key: string,
-      options: { contentType?: string; expiresIn?: number } = {},
+      options: { contentType?: string; contentLength?: number; expiresIn?: number } = {},
     ): Promise<string> {
+      const signed = ["host", ...(options.contentType ? ["content-type"] : [])];
+      if (options.contentLength !== undefined) signed.push("content-length");
       return guard("presign", () =>
-        getSignedUrl(s3, new PutObjectCommand({ Bucket, Key: key, ContentType: options.contentType }), {
-          expiresIn: options.expiresIn ?? 600,
-        }),
+        getSignedUrl(
+          s3,
+          new PutObjectCommand({
+            Bucket,
+            Key: key,
+            ContentType: options.contentType,
+            ContentLength: options.contentLength,
+          }),
+          { expiresIn: options.expiresIn ?? 600, signableHeaders: new Set(signed) },
+        ),
       );
     },
     async presignGet(key: string, options: { fileName?: string; expiresIn?: number } = {}): Promise<string> {
