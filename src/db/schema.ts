@@ -492,8 +492,15 @@ export const decisions = pgTable(
     signedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     supersededBy: uuid(),
     supersededAt: timestamp({ withTimezone: true }),
+    /** Sent by the form once per decision it signs: a repeated submission answers 409 instead of a second row. */
+    idempotencyKey: text(),
   },
-  (t) => [index().on(t.projectId, t.signedAt)],
+  (t) => [
+    index().on(t.projectId, t.signedAt),
+    // One standing decision per project, by constraint: parallel signatures cannot leave two.
+    uniqueIndex("decisions_one_standing_per_project").on(t.projectId).where(sql`${t.supersededBy} is null`),
+    uniqueIndex().on(t.projectId, t.idempotencyKey),
+  ],
 );
 
 // Relations -------------------------------------------------------------------------------------------------

@@ -49,6 +49,8 @@ export function DecisionForm({
   const chosen = ranking.find((r) => r.partId === partId);
   const byId = new Map(candidates.map((c) => [c.partId, c]));
   const frame = useRef<HTMLFormElement>(null);
+  // One key per opened form: a double click or a resent request is answered 409, not signed twice.
+  const idempotencyKey = useRef(crypto.randomUUID());
   // Opened from the title bar: bring the form into view and put the caret in the rationale.
   useEffect(() => {
     frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
@@ -60,7 +62,7 @@ export function DecisionForm({
       const { decision } = await sendJson<{ decision: { id: string } }>(
         "POST",
         `/api/projects/${projectId}/decisions`,
-        values,
+        { ...values, idempotencyKey: idempotencyKey.current },
       );
       await client.invalidateQueries({ queryKey: decisionKeys.decisions(projectId) });
       router.push(`/projects/${projectId}/decisions/${decision.id}`);

@@ -33,7 +33,31 @@ function normalised(values: PartValues) {
   };
 }
 
+/** The 409 for a maker and part number already in the workspace's library. */
+function duplicatePart(values: PartValues, cause?: unknown): AppError {
+  return new AppError("conflict:part", `${values.maker} ${values.partNumber} is already in the library.`, {
+    cause,
+    details: { fieldErrors: { partNumber: ["Already in the library for this maker"] } },
+  });
+}
+
+/** PostgreSQL's unique_violation (SQLSTATE 23505), found on the error or its cause. */
+export function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: unknown; cause?: { code?: unknown } };
+  return e?.code === "23505" || e?.cause?.code === "23505";
+}
+
+/**
+ * Adds a part. The unique index on (workspace, maker, part number) decides between parallel identical requests:
+ * the loser answers 409, as does a request that finds the part already there.
+ */
 export async function createPart(caller: MemberCaller, values: PartValues): Promise<Part> {
+  return insertPart(caller, values).catch((error: unknown) => {
+    throw isUniqueViolation(error) ? duplicatePart(values, error) : error;
+  });
+}
+
+function insertPart(caller: MemberCaller, values: PartValues): Promise<Part> {
   return db.transaction(async (tx) => {
     const existing = await tx
       .select({ id: parts.id })
@@ -45,11 +69,7 @@ export async function createPart(caller: MemberCaller, values: PartValues): Prom
           eq(parts.partNumber, values.partNumber),
         ),
       );
-    if (existing.length) {
-      throw new AppError("conflict:part", `${values.maker} ${values.partNumber} is already in the library.`, {
-        details: { fieldErrors: { partNumber: ["Already in the library for this maker"] } },
-      });
-    }
+    if (existing.length) throw duplicatePart(values);
     const [part] = await tx
       .insert(parts)
       .values({ ...normalised(values), workspaceId: caller.workspaceId, createdBy: caller.user.id })
@@ -69,7 +89,14 @@ export async function createPart(caller: MemberCaller, values: PartValues): Prom
   });
 }
 
+/** Changes a part; renaming it to a maker and number already in the library answers 409. */
 export async function updatePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
+  return writePart(caller, part, values).catch((error: unknown) => {
+    throw isUniqueViolation(error) ? duplicatePart(values, error) : error;
+  });
+}
+
+function writePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
   const next = normalised(values);
   const changed = limitFields.filter((f) => (next[f] ?? null) !== (part[f] ?? null));
   const limitsChanged = changed.length > 0;

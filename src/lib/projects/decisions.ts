@@ -1,9 +1,9 @@
 import "server-only";
 import { isDeepStrictEqual } from "node:util";
-import { and, desc, eq, isNull, ne } from "drizzle-orm";
+import { and, desc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { type Decision, decisions, type Project } from "@/db/schema";
+import { type Decision, decisions, type Project, projects } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { DEFAULT_POLICY } from "@/lib/soa/policy";
@@ -88,19 +88,48 @@ export async function snapshotNow(project: Project): Promise<DecisionSnapshot> {
   return buildSnapshot(project, candidates, checked);
 }
 
-/** Records a lead's decision with its frozen snapshot; the previous standing decision is superseded. */
+/**
+ * Records a lead's decision with its frozen snapshot; the previous standing decision is superseded. Signatures of
+ * one project run one at a time (the project row is locked), and a unique index keeps one standing decision per
+ * project. A repeat of the same submission (same idempotency key), or the same choice and rationale as the standing
+ * decision, answers 409 and records nothing.
+ */
 export async function signDecision(
   caller: MemberCaller,
   project: Project,
-  input: { partId: string; rationale: string },
+  input: { partId: string; rationale: string; idempotencyKey?: string },
 ): Promise<Decision> {
   const snapshot = await snapshotNow(project);
   const chosen = snapshot.candidates.find((c) => c.partId === input.partId);
   if (!chosen) throw new AppError("invalid:candidate", "Choose one of the project's candidates.");
+  const decisionId = crypto.randomUUID();
   return db.transaction(async (tx) => {
+    await tx.select({ id: projects.id }).from(projects).where(eq(projects.id, project.id)).for("update");
+    const [standing] = await tx
+      .select({ id: decisions.id, chosenPartId: decisions.chosenPartId, rationale: decisions.rationale })
+      .from(decisions)
+      .where(and(eq(decisions.projectId, project.id), isNull(decisions.supersededBy)));
+    if (input.idempotencyKey) {
+      const [repeat] = await tx
+        .select({ id: decisions.id })
+        .from(decisions)
+        .where(and(eq(decisions.projectId, project.id), eq(decisions.idempotencyKey, input.idempotencyKey)));
+      if (repeat) throw duplicateDecision(repeat.id);
+    }
+    if (standing && standing.chosenPartId === chosen.partId && standing.rationale === input.rationale) {
+      throw duplicateDecision(standing.id);
+    }
+    const signedAt = new Date();
+    if (standing) {
+      await tx
+        .update(decisions)
+        .set({ supersededBy: decisionId, supersededAt: signedAt })
+        .where(eq(decisions.id, standing.id));
+    }
     const [decision] = await tx
       .insert(decisions)
       .values({
+        id: decisionId,
         workspaceId: caller.workspaceId,
         projectId: project.id,
         chosenPartId: chosen.partId,
@@ -109,18 +138,10 @@ export async function signDecision(
         snapshot: snapshot as unknown as Record<string, unknown>,
         signedBy: caller.user.id,
         signedByName: caller.user.name,
+        signedAt,
+        idempotencyKey: input.idempotencyKey ?? null,
       })
       .returning();
-    await tx
-      .update(decisions)
-      .set({ supersededBy: decision.id, supersededAt: decision.signedAt })
-      .where(
-        and(
-          eq(decisions.projectId, project.id),
-          isNull(decisions.supersededBy),
-          ne(decisions.id, decision.id),
-        ),
-      );
     await recordAudit(
       {
         workspaceId: caller.workspaceId,
@@ -133,6 +154,12 @@ export async function signDecision(
       tx,
     );
     return decision;
+  });
+}
+
+function duplicateDecision(existingId: string): AppError {
+  return new AppError("conflict:decision", "This decision is already recorded.", {
+    details: { decisionId: existingId },
   });
 }
 

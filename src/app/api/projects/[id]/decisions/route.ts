@@ -7,6 +7,8 @@ import { loadProject } from "@/lib/projects/projects";
 const signSchema = z.object({
   partId: z.string().min(1, { message: "Choose a candidate" }),
   rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
+  /** One per signing form: a double submission is answered 409. */
+  idempotencyKey: z.string().min(8).max(100).optional(),
 });
 
 /** GET /api/projects/:id/decisions: the project's decision history, newest first. */
