@@ -1,5 +1,6 @@
 import { route } from "@/lib/auth/guard";
-import { json } from "@/lib/http";
+import { AppError } from "@/lib/errors";
+import { json, readJson } from "@/lib/http";
 import { handleCheckRequest } from "@/lib/soa/contract";
 
 /**
@@ -9,9 +10,13 @@ import { handleCheckRequest } from "@/lib/soa/contract";
 export const POST = route({ action: "check.run", bearer: true }, async (req) => {
   let body: unknown;
   try {
-    body = await req.json();
-  } catch {
-    return json({ error: { path: "", message: "The request body is not valid JSON." } }, { status: 400 });
+    // Bounded at the edge like every body (size, depth, NUL); the contract itself is the engine's to validate.
+    body = await readJson(req, { maxBytes: 4 * 1024 * 1024 });
+  } catch (error) {
+    if (error instanceof AppError && error.code === "invalid:json") {
+      return json({ error: { path: "", message: error.message } }, { status: 400 });
+    }
+    throw error;
   }
   const outcome = handleCheckRequest(body);
   return json(outcome.body, { status: outcome.status });

@@ -15,6 +15,7 @@ export const POST = route<{ id: string }>({ action: "measurement.write" }, async
   const { text, mapping } = await parseBody(
     req,
     z.object({ text: z.string().max(500_000), mapping: columnMappingSchema.default({}) }),
+    { maxBytes: 4 * 1024 * 1024 },
   );
   const parsed = parseMeasurementPaste(text, mapping);
   const preview = await previewVerdicts(project, parsed.rows);
