@@ -8,6 +8,21 @@ const nextConfig: NextConfig = {
   typescript: { ignoreBuildErrors: true },
   reactStrictMode: true,
   serverExternalPackages: ["@node-rs/argon2", "s3rver", "maildev", "pdfkit"],
+  // Headers for every response; each page's content security policy (with its nonce) is set in src/proxy.ts.
+  async headers() {
+    return [
+      {
+        source: "/:path*",
+        headers: [
+          { key: "X-Content-Type-Options", value: "nosniff" },
+          // Reset and invitation links carry their token in the path: never send it to another site.
+          { key: "Referrer-Policy", value: "same-origin" },
+          { key: "X-Frame-Options", value: "DENY" },
+          { key: "Permissions-Policy", value: "camera=(), microphone=(), geolocation=(), payment=()" },
+        ],
+      },
+    ];
+  },
 };
 
 export default nextConfig;

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { headers } from "next/headers";
 import type { ReactNode } from "react";
 import "./globals.css";
 
@@ -19,7 +20,9 @@ export const metadata: Metadata = {
   description: "Check every stress pulse of a power transistor against its safe operating area.",
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page is rendered per request, so Next.js can put this request's CSP nonce (src/proxy.ts) on its scripts.
+  await headers();
   return (
     <html lang="en" className={`${sans.variable} ${mono.variable}`}>
       <body className="min-h-screen bg-surface font-sans text-ink antialiased">{children}</body>

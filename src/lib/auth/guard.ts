@@ -38,12 +38,18 @@ export type GuardedHandler<P = Params> = ((req: Request, context: RouteContext<P
 
 const unsafeMethods = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
-/** A public handler: errors still come back as AppError JSON. */
+/**
+ * A public handler: errors still come back as AppError JSON. A change (sign-in, sign-up, reset…) sent by a browser
+ * from another site is refused, so no page elsewhere can sign a visitor into an account of its choosing.
+ */
 export function publicRoute<P = Params>(
   handler: (req: Request, params: P) => Promise<Response>,
 ): GuardedHandler<P> {
   const wrapped = async (req: Request, context: RouteContext<P>) => {
     try {
+      if (unsafeMethods.has(req.method) && fromAnotherSite(req)) {
+        throw new AppError("forbidden:origin", "The request did not come from this site.");
+      }
       return await handler(req, await context.params);
     } catch (error) {
       return errorResponse(error);
@@ -130,6 +136,12 @@ function sameOrigin(req: Request): boolean {
     allowed.add(`https://${host}`);
   }
   return allowed.has(origin);
+}
+
+/** A browser request from another site: its Origin is not ours, or the browser says so. Scripts send neither. */
+function fromAnotherSite(req: Request): boolean {
+  if (req.headers.get("sec-fetch-site") === "cross-site") return true;
+  return req.headers.has("origin") && !sameOrigin(req);
 }
 
 function withCookie(response: Response, setCookie: string | null): Response {

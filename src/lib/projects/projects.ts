@@ -19,6 +19,18 @@ export async function loadProject(caller: Pick<MemberCaller, "workspaceId">, pro
   return project;
 }
 
+/**
+ * The project, for a change: an archived project is kept read-only for history, so any change to it (its settings,
+ * candidates, pulses, evidence or decisions) answers 409 until it is restored.
+ */
+export async function loadWritableProject(caller: Pick<MemberCaller, "workspaceId">, projectId: string) {
+  const project = await loadProject(caller, projectId);
+  if (project.archivedAt) {
+    throw new AppError("conflict:archived", "This project is archived. Restore it before changing it.");
+  }
+  return project;
+}
+
 export interface Candidate {
   part: Part;
   /** The part as the engine takes it, with its active curve set; null when it has no curves yet. */

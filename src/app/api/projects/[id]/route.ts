@@ -1,6 +1,6 @@
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
-import { loadCandidates, loadProject } from "@/lib/projects/projects";
+import { loadCandidates, loadProject, loadWritableProject } from "@/lib/projects/projects";
 import { listFaultCases, listMeasuredPulses } from "@/lib/projects/pulses";
 import { projectSchema } from "@/lib/projects/schema";
 import { updateProject } from "@/lib/projects/write";
@@ -23,7 +23,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
 
 /** PATCH /api/projects/:id: name, description, case temperature, margin policy, owner. */
 export const PATCH = route<{ id: string }>({ action: "project.write" }, async (req, caller, { id }) => {
-  const project = await loadProject(caller, id);
+  const project = await loadWritableProject(caller, id);
   const values = await parseBody(req, projectSchema);
   return json({ project: await updateProject(caller, project.id, values) });
 });

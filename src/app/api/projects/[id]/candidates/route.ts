@@ -6,11 +6,11 @@ import { projectCandidates } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 
 /** POST /api/projects/:id/candidates { partId }: adds a library part of the workspace as a candidate. */
 export const POST = route<{ id: string }>({ action: "project.write" }, async (req, caller, { id }) => {
-  const project = await loadProject(caller, id);
+  const project = await loadWritableProject(caller, id);
   const { partId } = await parseBody(req, z.object({ partId: z.string() }));
   const part = await getPart({ workspaceId: caller.workspaceId, partId });
   if (!part) throw new AppError("not_found:part", "No such part in this workspace's library.");

@@ -6,7 +6,7 @@ import { json, parseBody } from "@/lib/http";
 import { getPendingUpload } from "@/lib/library/curve-upload";
 import { checkProject } from "@/lib/projects/check";
 import { notifyFailingEvidence } from "@/lib/projects/notify";
-import { loadProject } from "@/lib/projects/projects";
+import { loadProject, loadWritableProject } from "@/lib/projects/projects";
 import { storage } from "@/lib/storage";
 
 const optionalText = (max: number) =>
@@ -38,7 +38,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
  * if it fails or has no data on any of them. 201 with the capture's summary and its verdict per candidate.
  */
 export const POST = route<{ id: string }>({ action: "measurement.write" }, async (req, caller, { id }) => {
-  const project = await loadProject(caller, id);
+  const project = await loadWritableProject(caller, id);
   const input = await parseBody(req, registerSchema);
   const upload = await getPendingUpload({
     workspaceId: caller.workspaceId,

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
 import { listDecisions, signDecision } from "@/lib/projects/decisions";
-import { loadProject } from "@/lib/projects/projects";
+import { loadProject, loadWritableProject } from "@/lib/projects/projects";
 
 const signSchema = z.object({
   partId: z.string().min(1, { message: "Choose a candidate" }),
@@ -19,7 +19,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
 
 /** POST /api/projects/:id/decisions { partId, rationale }: a lead signs the choice; the evaluation is frozen with it. */
 export const POST = route<{ id: string }>({ action: "decision.sign" }, async (req, caller, { id }) => {
-  const project = await loadProject(caller, id);
+  const project = await loadWritableProject(caller, id);
   const input = await parseBody(req, signSchema);
   const decision = await signDecision(caller, project, input);
   return json(

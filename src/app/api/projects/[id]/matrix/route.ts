@@ -3,7 +3,7 @@ import { route } from "@/lib/auth/guard";
 import { checkProject } from "@/lib/projects/check";
 import { rankCandidates } from "@/lib/projects/matrix";
 import { loadProject } from "@/lib/projects/projects";
-import { downloadName } from "@/lib/report/file-name";
+import { attachmentDisposition } from "@/lib/report/file-name";
 
 /**
  * GET /api/projects/:id/matrix: the comparison matrix as CSV (one row per candidate × pulse, plain symbols and SI
@@ -44,11 +44,12 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
       };
     });
   });
-  const csv = Papa.unparse(rows, { newline: "\r\n" });
+  // Cells a spreadsheet would run as a formula (=, +, -, @ at the start of text) are prefixed with a quote.
+  const csv = Papa.unparse(rows, { newline: "\r\n", escapeFormulae: true });
   return new Response(csv, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
-      "content-disposition": `attachment; filename="${downloadName(project.name, new Date(), "csv")}"`,
+      "content-disposition": attachmentDisposition(project.name, new Date(), "csv"),
       "cache-control": "no-store",
     },
   });

@@ -3,7 +3,7 @@ import { route } from "@/lib/auth/guard";
 import { MAX_CAPTURE_BYTES } from "@/lib/capture/parse";
 import { json, parseBody } from "@/lib/http";
 import { presignUpload } from "@/lib/library/curve-upload";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 import { storage } from "@/lib/storage";
 
 const ticketSchema = z.object({
@@ -14,7 +14,7 @@ const ticketSchema = z.object({
 
 /** POST /api/projects/:id/uploads { fileName, size, purpose }: a presigned PUT URL for a scope capture CSV. */
 export const POST = route<{ id: string }>({ action: "measurement.write" }, async (req, caller, { id }) => {
-  const project = await loadProject(caller, id);
+  const project = await loadWritableProject(caller, id);
   const input = await parseBody(req, ticketSchema);
   const ticket = await presignUpload(storage(), {
     ...input,

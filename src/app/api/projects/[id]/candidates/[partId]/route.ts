@@ -5,14 +5,14 @@ import { projectCandidates } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 import { isUuid } from "@/lib/uuid";
 
 /** DELETE /api/projects/:id/candidates/:partId: removes a candidate (the part stays in the library). */
 export const DELETE = route<{ id: string; partId: string }>(
   { action: "project.write" },
   async (_req, caller, { id, partId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     await db.transaction(async (tx) => {
       const removed = isUuid(partId)
         ? await tx

@@ -3,7 +3,7 @@ import { junctionTrace } from "@/lib/capture/process";
 import { deleteCapture, getCapture, loadCaptureSamples } from "@/lib/capture/store";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
-import { loadCandidates, loadProject } from "@/lib/projects/projects";
+import { loadCandidates, loadProject, loadWritableProject } from "@/lib/projects/projects";
 import { powerFromVI } from "@/lib/soa/thermal-waveform";
 import { storage } from "@/lib/storage";
 
@@ -43,7 +43,7 @@ export const GET = route<Params>({ action: "workspace.read" }, async (_req, call
 export const DELETE = route<Params>(
   { action: "measurement.write" },
   async (_req, caller, { id, captureId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const capture = await getCapture({ projectId: project.id, captureId });
     if (capture.createdBy !== caller.user.id && caller.role !== "lead" && caller.role !== "admin") {
       throw new AppError(

@@ -5,7 +5,7 @@ import { faultCases } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 import { faultCaseSchema } from "@/lib/projects/schema";
 import { faultCaseColumns } from "@/lib/projects/write";
 import { isUuid } from "@/lib/uuid";
@@ -25,7 +25,7 @@ async function loadCase(projectId: string, caseId: string) {
 export const PATCH = route<{ id: string; caseId: string }>(
   { action: "project.write" },
   async (req, caller, { id, caseId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const existing = await loadCase(project.id, caseId);
     const values = await parseBody(req, faultCaseSchema);
     const faultCase = await db.transaction(async (tx) => {
@@ -55,7 +55,7 @@ export const PATCH = route<{ id: string; caseId: string }>(
 export const DELETE = route<{ id: string; caseId: string }>(
   { action: "project.write" },
   async (_req, caller, { id, caseId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const existing = await loadCase(project.id, caseId);
     await db.transaction(async (tx) => {
       await tx.delete(faultCases).where(eq(faultCases.id, existing.id));

@@ -6,7 +6,7 @@ import { type MemberCaller, route } from "@/lib/auth/guard";
 import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 import { isUuid } from "@/lib/uuid";
 
 /** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
@@ -29,7 +29,7 @@ async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measu
 export const PATCH = route<{ id: string; measurementId: string }>(
   { action: "measurement.write" },
   async (req, caller, { id, measurementId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const existing = await loadOwnMeasurement(caller, project.id, measurementId);
     const values = await parseBody(req, measurementRowSchema);
     const row = await db.transaction(async (tx) => {
@@ -67,7 +67,7 @@ export const PATCH = route<{ id: string; measurementId: string }>(
 export const DELETE = route<{ id: string; measurementId: string }>(
   { action: "measurement.write" },
   async (_req, caller, { id, measurementId }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const existing = await loadOwnMeasurement(caller, project.id, measurementId);
     await db.transaction(async (tx) => {
       await tx.delete(measuredPulses).where(eq(measuredPulses.id, existing.id));

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
-import { loadProject } from "@/lib/projects/projects";
+import { loadWritableProject } from "@/lib/projects/projects";
 import {
   benchTextRows,
   saveBenchTextSchema,
@@ -31,7 +31,7 @@ const bodySchema = z.unknown().transform((raw, ctx): Body => {
 export const POST = route<{ id: string }>(
   { action: "measurement.write", bearer: true },
   async (req, caller, { id }) => {
-    const project = await loadProject(caller, id);
+    const project = await loadWritableProject(caller, id);
     const input = await parseBody(req, bodySchema);
     const rows = "text" in input ? benchTextRows(input) : input;
     return json(await saveMeasurements(caller, project, rows), { status: 201 });

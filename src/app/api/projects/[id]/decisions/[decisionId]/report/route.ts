@@ -2,7 +2,7 @@ import { route } from "@/lib/auth/guard";
 import { type DecisionSnapshot, loadDecision } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 import { renderDecisionPdf } from "@/lib/report/decision-pdf";
-import { downloadName } from "@/lib/report/file-name";
+import { attachmentDisposition } from "@/lib/report/file-name";
 
 /** GET /api/projects/:id/decisions/:decisionId/report: the decision record as a PDF, from its frozen snapshot. */
 export const GET = route<{ id: string; decisionId: string }>(
@@ -14,7 +14,7 @@ export const GET = route<{ id: string; decisionId: string }>(
       decision,
       snapshot: decision.snapshot as unknown as DecisionSnapshot,
     });
-    const name = downloadName(
+    const disposition = attachmentDisposition(
       (decision.snapshot as unknown as DecisionSnapshot).project.name,
       decision.signedAt,
       "pdf",
@@ -22,7 +22,7 @@ export const GET = route<{ id: string; decisionId: string }>(
     return new Response(new Uint8Array(pdf), {
       headers: {
         "content-type": "application/pdf",
-        "content-disposition": `attachment; filename="${name}"`,
+        "content-disposition": disposition,
         "cache-control": "no-store",
       },
     });
