@@ -224,7 +224,6 @@ describe("capture upload", () => {
     expect(body.capture).toEqual({ id: row.id, name: "Pre-charge, run 3", summary: row.summary });
     expect(row).toMatchObject({
       projectId,
-      objectKey: ticket.objectKey,
       samplesKey: samplesKeyOf(ticket.objectKey),
       fileName: "precharge-run-3.csv",
       size: Buffer.byteLength(text),
@@ -238,7 +237,10 @@ describe("capture upload", () => {
     expect(row.summary).toEqual(summary);
     expect(row.summary.samples).toBe(2000);
     expect(row.trace).toEqual(trace);
-    expect((await storage.get(ticket.objectKey))?.toString()).toBe(text);
+    // The capture keeps its own copy of the CSV; the presigned object is removed.
+    expect(row.objectKey).not.toBe(ticket.objectKey);
+    expect((await storage.get(row.objectKey))?.toString()).toBe(text);
+    expect(await storage.head(ticket.objectKey)).toBeNull();
     expect((await storage.head(row.samplesKey))?.size).toBe(16 + 24 * 2000);
     expect(await pendingFor([row.objectKey, row.samplesKey])).toEqual([]);
     const samples = await loadCaptureSamples(storage, row);
@@ -281,16 +283,16 @@ describe("capture upload", () => {
   it("removes the stored samples again when the row cannot be written", async () => {
     const [project] = await db.select().from(projects).where(eq(projects.id, projectId));
     const gone = { ...project, id: crypto.randomUUID() };
+    const text = inrushCsv(50);
     const ticket = await presignUpload(storage, {
       workspaceId: ws.id,
       userId: ws.members.technician.id,
       owner: `projects/${gone.id}`,
       fileName: "late-failure.csv",
-      size: 100,
+      size: Buffer.byteLength(text),
       purpose: "capture",
       maxBytes: 200e6,
     });
-    const text = inrushCsv(50);
     await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
     const caller = { workspaceId: ws.id, user: { id: ws.members.technician.id } } as Parameters<
       typeof registerCapture

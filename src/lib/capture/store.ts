@@ -43,10 +43,12 @@ const listed = {
 };
 
 /**
- * Streams an uploaded capture CSV from storage, parses and summarises it, stores the samples as a binary object
- * beside it and, in one transaction, inserts the capture row and retires the pending upload. Any failure removes
- * both objects and the pending rows (the cleanup step finishes the job if storage cannot be reached). Returns the
- * row and the parsed samples (to check them without reading them back).
+ * Copies an uploaded capture CSV to a key of its own (one no presigned URL was issued for, so a later PUT to the
+ * upload's URL changes nothing the capture points to), streams that copy, parses and summarises it, stores the
+ * samples as a binary object beside it and, in one transaction, inserts the capture row and retires the pending
+ * rows; the presigned object is removed after commit. Any failure removes the objects and the pending rows (the
+ * cleanup step finishes the job if storage cannot be reached). Returns the row and the parsed samples (to check
+ * them without reading them back).
  */
 export async function registerCapture(
   storage: Storage,
@@ -80,9 +82,22 @@ export async function registerCapture(
     .onConflictDoNothing()
     .returning({ id: pendingUploads.id });
   if (!reserved) throw new AppError("conflict:capture", "This upload is already being registered.");
+  const keptKey = `${upload.objectKey.replace(/\/[^/]+$/, "")}/kept-${crypto.randomUUID()}.csv`;
+  const [kept] = await db
+    .insert(pendingUploads)
+    .values({
+      workspaceId: project.workspaceId,
+      userId: caller.user.id,
+      objectKey: keptKey,
+      fileName: upload.fileName,
+      purpose: "kept-copy",
+    })
+    .returning({ id: pendingUploads.id });
   try {
-    const head = await storage.head(upload.objectKey);
-    const stream = head ? await storage.stream(upload.objectKey) : null;
+    const original = await storage.head(upload.objectKey);
+    if (original) await storage.copy(upload.objectKey, keptKey);
+    const head = original ? await storage.head(keptKey) : null;
+    const stream = head ? await storage.stream(keptKey) : null;
     if (!head || !stream) {
       throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
     }
@@ -112,7 +127,7 @@ export async function registerCapture(
         .values({
           projectId: project.id,
           name: input.name,
-          objectKey: upload.objectKey,
+          objectKey: keptKey,
           samplesKey,
           fileName: upload.fileName,
           size: parsed.bytes,
@@ -138,12 +153,14 @@ export async function registerCapture(
         },
         tx,
       );
-      await tx.delete(pendingUploads).where(inArray(pendingUploads.id, [upload.id, reserved.id]));
+      await tx.delete(pendingUploads).where(inArray(pendingUploads.id, [kept.id, reserved.id]));
       return row;
     });
+    await discardUpload(storage, upload);
     return { capture, samples: parsed };
   } catch (error) {
     await discardUpload(storage, { id: reserved.id, objectKey: samplesKey });
+    await discardUpload(storage, { id: kept.id, objectKey: keptKey });
     await discardUpload(storage, upload);
     throw error;
   }

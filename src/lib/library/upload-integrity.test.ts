@@ -5,7 +5,9 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
-import { curveSets, type Part, parts } from "@/db/schema";
+import { POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
+import { POST as projectUploadPost } from "@/app/api/projects/[id]/uploads/route";
+import { captures, curveSets, type Part, parts, projects } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { createStorage } from "@/lib/storage/storage";
 import {
@@ -126,6 +128,41 @@ describe("presigned uploads", () => {
     const stored = await storage.get(set.objectKey);
     expect(stored?.toString()).toBe(csv);
     expect(sha256(stored!)).toBe(set.sha256);
+  });
+});
+
+describe("capture uploads", () => {
+  it("after registration, a PUT to the upload's URL changes nothing the capture points to", async () => {
+    const [project] = await testDb.db
+      .insert(projects)
+      .values({ workspaceId: ws.id, name: "Integrity board", caseTemp: 25 })
+      .returning();
+    // A small falling-current waveform: time (s), V_DS (V), I_D (A).
+    const rows = Array.from(
+      { length: 200 },
+      (_, k) => `${(k * 1e-6).toExponential(3)},${24 - k * 0.1},${10 - k * 0.04}`,
+    );
+    const text = ["t,v,i", ...rows].join("\n");
+    const tech = await sessionCookie(ws.members.technician.id, ws.id);
+    const ticketRes = await call(h(projectUploadPost), "POST", {
+      cookie: tech,
+      params: { id: project.id },
+      body: { fileName: "run.csv", size: Buffer.byteLength(text), purpose: "capture" },
+    });
+    expect(ticketRes.status).toBe(201);
+    const ticket = (await ticketRes.json()) as { uploadId: string; url: string };
+    expect((await put(ticket.url, text)).status).toBe(200);
+    const res = await call(h(capturesPost), "POST", {
+      cookie: tech,
+      params: { id: project.id },
+      body: { uploadId: ticket.uploadId, name: "run", mapping: { time: 0, voltage: 1, current: 2 } },
+    });
+    expect(res.status).toBe(201);
+    await put(ticket.url, text.replace("t,v,i", "t,v,9"));
+    const [row] = await testDb.db.select().from(captures).where(eq(captures.projectId, project.id));
+    const stored = await storage.get(row.objectKey);
+    expect(stored?.toString()).toBe(text);
+    expect(sha256(stored!)).toBe(row.sha256);
   });
 });
 

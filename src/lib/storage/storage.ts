@@ -1,5 +1,6 @@
 import type { Readable } from "node:stream";
 import {
+  CopyObjectCommand,
   DeleteObjectCommand,
   GetObjectCommand,
   HeadBucketCommand,
@@ -86,6 +87,18 @@ export function createStorage(config: StorageConfig) {
           throw error;
         }
       });
+    },
+    /** Copies an object inside the bucket (server-side; the bytes do not pass through the app). */
+    async copy(fromKey: string, toKey: string): Promise<void> {
+      await guard("copy", () =>
+        s3.send(
+          new CopyObjectCommand({
+            Bucket,
+            Key: toKey,
+            CopySource: `${Bucket}/${fromKey.split("/").map(encodeURIComponent).join("/")}`,
+          }),
+        ),
+      );
     },
     async remove(key: string): Promise<void> {
       await guard("delete", () => s3.send(new DeleteObjectCommand({ Bucket, Key: key })));
