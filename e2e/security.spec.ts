@@ -27,6 +27,18 @@ test("pages carry a nonce-based content security policy and still work under it"
   expect(violations).toEqual([]);
 });
 
+test("a record that is not in the workspace answers HTTP 404, not a 200 with the not-found screen", async ({
+  page,
+}) => {
+  await signIn(page, engineer);
+  // An id of no record of this workspace (another workspace's record is the same to this member).
+  const elsewhere = "00000000-0000-4000-8000-000000000000";
+  for (const path of [`/projects/${elsewhere}`, `/library/${elsewhere}`, `/projects/${elsewhere}/compare`]) {
+    const res = await page.goto(path);
+    expect(res?.status()).toBe(404);
+  }
+});
+
 test("a cross-origin sign-in is refused without a session", async ({ request }) => {
   const res = await request.post("/api/auth/sign-in", {
     headers: { origin: "https://evil.example", "content-type": "text/plain" },

@@ -1,5 +1,5 @@
 /** What a workspace page shows while its data loads: the shape of a title, stat blocks and a table. */
-export default function Loading() {
+export function PageSkeleton() {
   return (
     <div role="status" aria-busy="true" aria-label="Loading" className="animate-pulse">
       <div className="h-7 w-40 rounded bg-sunken" />

@@ -1,0 +1,3 @@
+// Only pages without an id in their path show a skeleton: a page that finds no such record must answer 404
+// before anything is streamed, which a loading boundary above it would prevent.
+export { PageSkeleton as default } from "../_components/page-skeleton";
