@@ -3,7 +3,7 @@ import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { curveSets, curves, type Part, users } from "@/db/schema";
 import { env } from "@/lib/env";
-import { mailer } from "@/lib/mail";
+import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { verificationLapsedMail } from "@/lib/mail/templates";
 import { type Finding, findCurveSetIssues, ORDER_FINDING_KINDS } from "@/lib/soa/findings";
 
@@ -62,11 +62,11 @@ export const draftFields = {
 };
 
 /**
- * E-mails the lead who verified the part that the verification lapsed, and why. Sent after the change is
- * committed; a mail failure is logged and never undoes the change.
+ * E-mails the lead who verified the part that the verification lapsed, and why, through the outbox: queued after
+ * the change is committed and sent (or retried while mail is down); it never undoes the change.
  */
 export async function noticeLapsedVerification(
-  part: Pick<Part, "id" | "partNumber" | "maker" | "status" | "verifiedBy">,
+  part: Pick<Part, "id" | "workspaceId" | "partNumber" | "maker" | "status" | "verifiedBy">,
   change: string,
   actorName: string,
 ): Promise<boolean> {
@@ -76,19 +76,16 @@ export async function noticeLapsedVerification(
     columns: { email: true },
   });
   if (!verifier) return false;
-  try {
-    await mailer().send(
-      verificationLapsedMail({
-        to: verifier.email,
-        part: `${part.maker} ${part.partNumber}`,
-        change,
-        actorName,
-        link: `${env().APP_URL}/library/${part.id}`,
-      }),
-    );
-    return true;
-  } catch (error) {
-    console.error("verification-lapsed notice not sent", error);
-    return false;
-  }
+  await enqueueMail(
+    verificationLapsedMail({
+      to: verifier.email,
+      part: `${part.maker} ${part.partNumber}`,
+      change,
+      actorName,
+      link: `${env().APP_URL}/library/${part.id}`,
+    }),
+    { kind: "verification-lapsed", workspaceId: part.workspaceId },
+  );
+  await flushOutbox();
+  return true;
 }

@@ -96,7 +96,7 @@ export async function updatePart(caller: MemberCaller, part: Part, values: PartV
   });
 }
 
-function writePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
+async function writePart(caller: MemberCaller, part: Part, values: PartValues): Promise<Part> {
   const next = normalised(values);
   const changed = limitFields.filter((f) => (next[f] ?? null) !== (part[f] ?? null));
   const limitsChanged = changed.length > 0;

@@ -7,6 +7,7 @@ const kindWords: Record<string, string> = {
   invitation: "Invitation",
   "failing-pulse": "Failing pulse",
   "password-reset": "Password reset",
+  "verification-lapsed": "Verification lapsed",
 };
 
 /** The workspace's recent e-mails and whether each has gone out, for admins: a mail outage is visible here. */
