@@ -173,6 +173,13 @@ export interface ThermalSource {
   maxRelativeError?: number;
 }
 
+/** A part's transfer characteristics as stored: the engine's two curves and the file or paste they came from. */
+export interface TransferRow {
+  temps: [number, number];
+  curves: [[number, number][], [number, number][]];
+  source: { kind: "typed" | "uploaded"; fileName?: string };
+}
+
 /** A curve-set finding a lead accepted when verifying the part: the finding's key and message, and why. */
 export interface FindingAcceptance {
   key: string;
@@ -200,6 +207,12 @@ export const parts = pgTable(
     rthJc: doublePrecision(),
     foster: jsonb().$type<FosterTermRow[]>(),
     thermalSource: jsonb().$type<ThermalSource>(),
+    /** Typical transfer characteristics at two junction temperatures (METHODS.md §12), with where they came from. */
+    transfer: jsonb().$type<TransferRow>(),
+    /** Single-pulse avalanche energy E_AS at 25 °C start (J), its current I_AS (A) and breakdown V_BR (V): §13. */
+    avalancheEnergy: doublePrecision(),
+    avalancheCurrent: doublePrecision(),
+    avalancheBreakdown: doublePrecision(),
     unitCost: doublePrecision(),
     currency: text(),
     datasheetRevision: text(),
@@ -292,6 +305,9 @@ export const projects = pgTable(
     tjGuard: doublePrecision().notNull().default(25),
     voltageLimit: doublePrecision().notNull().default(0.8),
     betweenCurves: betweenCurvesEnum().notNull().default("loglog"),
+    /** Case-to-ambient Foster network (METHODS.md §14), and whether checks heat the case through it. */
+    caseNetwork: jsonb().$type<FosterTermRow[]>(),
+    applyCaseNetwork: boolean().notNull().default(false),
     ownerId: uuid().references(() => users.id, { onDelete: "set null" }),
     archivedAt: timestamp({ withTimezone: true }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

@@ -69,6 +69,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/parts/[id]/archive": async () => ({ id: await part() }),
   "/api/parts/[id]/verify": async () => ({ id: await part() }),
   "/api/parts/[id]/thermal": async () => ({ id: await part() }),
+  "/api/parts/[id]/transfer": async () => ({ id: await part() }),
   "/api/parts/[id]/thermal/fit": async () => ({ id: await part() }),
   "/api/parts/[id]/uploads": async () => ({ id: await part() }),
   "/api/parts/[id]/curve-sets": async () => ({ id: await part() }),

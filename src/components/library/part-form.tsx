@@ -23,6 +23,9 @@ export type PartFormValues = {
   rdsOn: string;
   tjMax: string;
   rthJc: string;
+  avalancheEnergy: string;
+  avalancheCurrent: string;
+  avalancheBreakdown: string;
   unitCost: string;
   currency: string;
   datasheetRevision: string;
@@ -40,6 +43,9 @@ export const emptyPart: PartFormValues = {
   rdsOn: "",
   tjMax: "175",
   rthJc: "",
+  avalancheEnergy: "",
+  avalancheCurrent: "",
+  avalancheBreakdown: "",
   unitCost: "",
   currency: "EUR",
   datasheetRevision: "",
@@ -197,6 +203,43 @@ export function PartForm({
           hint="Optional"
           error={err("rthJc")}
           {...register("rthJc")}
+        />
+      </fieldset>
+
+      <fieldset className="grid gap-4 sm:grid-cols-3 lg:grid-cols-6">
+        <legend className="mb-1 text-sm font-semibold">Avalanche</legend>
+        <p className="col-span-full -mt-1 mb-1 text-xs text-ink-muted">
+          Single-pulse avalanche ratings, for turn-offs of an inductive current without a clamp. E
+          <sub>AS</sub> is rated from 25&nbsp;°C; the check derates it linearly to zero at{" "}
+          <Sym main="T" sub="j,max" />. Without <Sym main="V" sub="BR" /> the check takes{" "}
+          <Sym main="V" sub="DSS" />, which overstates the energy (conservative).
+        </p>
+        <UnitField
+          id="part-eas"
+          label={<Sym main="E" sub="AS" />}
+          unit="J"
+          placeholder="250m"
+          hint="Optional"
+          error={err("avalancheEnergy")}
+          {...register("avalancheEnergy")}
+        />
+        <UnitField
+          id="part-ias"
+          label={<Sym main="I" sub="AS" />}
+          unit="A"
+          inputMode="decimal"
+          hint="Optional"
+          error={err("avalancheCurrent")}
+          {...register("avalancheCurrent")}
+        />
+        <UnitField
+          id="part-vbr"
+          label={<Sym main="V" sub="BR" />}
+          unit="V"
+          inputMode="decimal"
+          hint="Optional"
+          error={err("avalancheBreakdown")}
+          {...register("avalancheBreakdown")}
         />
       </fieldset>
 

@@ -10,6 +10,8 @@ export interface PartFigures {
   rdsOn: number | null;
   tjMax: number;
   rthJc: number | null;
+  avalancheEnergy?: number | null;
+  avalancheBreakdown?: number | null;
   status: "draft" | "verified";
   verifiedByName: string | null;
   verifiedAt: Date | string | null;
@@ -34,6 +36,13 @@ export function PartStats({ part }: { part: PartFigures }) {
       <Stat label={<Sym main="R" sub="DS(on)" />} value={quantityText(part.rdsOn, "Ω")} note="at 25 °C" />
       <Stat label={<Sym main="T" sub="j,max" />} value={quantityText(part.tjMax, "°C")} />
       <Stat label={<Sym main="R" sub="th(j-c)" />} value={quantityText(part.rthJc, "K/W")} />
+      {part.avalancheEnergy ? (
+        <Stat
+          label={<Sym main="E" sub="AS" />}
+          value={quantityText(part.avalancheEnergy, "J")}
+          note={part.avalancheBreakdown ? `V_BR ${quantityText(part.avalancheBreakdown, "V")}` : "from 25 °C"}
+        />
+      ) : null}
       <div className="rounded-md border border-line bg-panel px-4 py-3" data-testid="part-status">
         <dt className="text-xs text-ink-muted">Status</dt>
         <dd className="mt-1 leading-7">

@@ -1,5 +1,6 @@
 export { durationName } from "./chart-model";
 export { SoaChart } from "./soa-chart";
+export { TransferChart, type TransferChartCurve } from "./transfer-chart";
 export type {
   ChartCurve,
   ChartDerated,

@@ -115,6 +115,9 @@ export const partSchema = z
       range: { min: 50, max: 400, message: "Tj,max between 50 °C and 400 °C" },
     }),
     rthJc: optionalQuantity("K/W"),
+    avalancheEnergy: optionalQuantity("J"),
+    avalancheCurrent: optionalQuantity("A"),
+    avalancheBreakdown: optionalQuantity("V"),
     unitCost: z.preprocess(
       (v) =>
         v === "" || v === null || v === undefined
@@ -131,6 +134,21 @@ export const partSchema = z
     currency: optionalText(3),
     datasheetRevision: optionalText(80),
     notes: optionalText(2000),
+  })
+  .refine(
+    (part) => part.avalancheEnergy !== undefined || (!part.avalancheCurrent && !part.avalancheBreakdown),
+    {
+      path: ["avalancheEnergy"],
+      message: "Give E_AS: I_AS and V_BR only qualify the avalanche energy rating",
+    },
+  )
+  .refine((part) => part.avalancheBreakdown === undefined || part.avalancheBreakdown >= part.vdsMax, {
+    path: ["avalancheBreakdown"],
+    message: "V_BR is at least V_DSS (leave it empty to use V_DSS)",
+    when: (payload) => {
+      const raw = payload.value as { vdsMax?: unknown; avalancheBreakdown?: unknown };
+      return typeof raw.vdsMax === "number" && typeof raw.avalancheBreakdown === "number";
+    },
   })
   .refine((part) => part.unitCost === undefined || Boolean(part.currency), {
     path: ["currency"],

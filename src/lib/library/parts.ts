@@ -17,7 +17,16 @@ export async function loadPart(caller: MemberCaller, partId: string) {
 }
 
 // Ratings a check depends on: changing one returns a verified part to draft, like new curves or a new model.
-const limitFields = ["vdsMax", "idPulseMax", "rdsOn", "tjMax", "rthJc"] as const;
+const limitFields = [
+  "vdsMax",
+  "idPulseMax",
+  "rdsOn",
+  "tjMax",
+  "rthJc",
+  "avalancheEnergy",
+  "avalancheCurrent",
+  "avalancheBreakdown",
+] as const;
 
 function normalised(values: PartValues) {
   return {
@@ -26,6 +35,9 @@ function normalised(values: PartValues) {
     idPulseMax: values.idPulseMax ?? null,
     rdsOn: values.rdsOn ?? null,
     rthJc: values.rthJc ?? null,
+    avalancheEnergy: values.avalancheEnergy ?? null,
+    avalancheCurrent: values.avalancheCurrent ?? null,
+    avalancheBreakdown: values.avalancheBreakdown ?? null,
     unitCost: values.unitCost ?? null,
     currency: values.currency?.toUpperCase() ?? null,
     datasheetRevision: values.datasheetRevision ?? null,

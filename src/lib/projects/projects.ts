@@ -51,6 +51,16 @@ export function partLimits(
     ...(part.rthJc !== null ? { rthJc: part.rthJc } : {}),
     ...(part.foster?.length ? { foster: part.foster } : {}),
     soa: { refCaseTemp: set.refCaseTemp, curves: set.curves },
+    ...(part.transfer ? { transfer: { temps: part.transfer.temps, curves: part.transfer.curves } } : {}),
+    ...(part.avalancheEnergy !== null
+      ? {
+          avalanche: {
+            energy: part.avalancheEnergy,
+            ...(part.avalancheCurrent !== null ? { current: part.avalancheCurrent } : {}),
+            ...(part.avalancheBreakdown !== null ? { breakdown: part.avalancheBreakdown } : {}),
+          },
+        }
+      : {}),
   };
 }
 

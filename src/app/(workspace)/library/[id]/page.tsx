@@ -9,6 +9,7 @@ import { PartActions } from "@/components/library/part-actions";
 import { PartStats } from "@/components/library/part-stats";
 import { ThermalEditor } from "@/components/library/thermal-editor";
 import { TitleBar } from "@/components/library/title-bar";
+import { TransferEditor } from "@/components/library/transfer-editor";
 import { Section } from "@/components/page-header";
 import type { ChartFinding } from "@/components/soa-chart";
 import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
@@ -144,6 +145,19 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           canWrite={canWrite}
           model={{ foster: part.foster, thermalSource: part.thermalSource }}
         />
+      </Section>
+
+      <Section
+        id="transfer"
+        title="Transfer characteristics"
+        description={
+          <>
+            Typical I<sub>D</sub>(V<sub>GS</sub>) at two junction temperatures, for the thermal-instability
+            check of pulses in linear mode (METHODS.md §12).
+          </>
+        }
+      >
+        <TransferEditor partId={part.id} canWrite={canWrite} transfer={part.transfer} />
       </Section>
 
       <Caution className="border-t border-line pt-4" />
