@@ -11,9 +11,12 @@ import { sendJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { TextAreaField, UnitField } from "@/components/library/fields";
+import { parsePastedRows } from "@/components/library/paste-rows";
 import { Sym } from "@/components/library/symbols";
+import { quantity } from "@/lib/library/part-schema";
 import { projectSchema } from "@/lib/projects/schema";
 import { invalidateProject } from "./api";
+import { CasePathPreview } from "./case-path-preview";
 
 export interface ProjectFormValues {
   name: string;
@@ -26,6 +29,9 @@ export interface ProjectFormValues {
   voltageLimit: string;
   betweenCurves: "loglog" | "next-longer" | "thermal";
   ownerId: string;
+  /** The case path's Foster terms as typed or pasted: one "R τ" per line. */
+  caseNetwork: string;
+  applyCaseNetwork: boolean;
 }
 
 export const emptyProject: ProjectFormValues = {
@@ -37,7 +43,23 @@ export const emptyProject: ProjectFormValues = {
   voltageLimit: "80",
   betweenCurves: "loglog",
   ownerId: "",
+  caseNetwork: "",
+  applyCaseNetwork: false,
 };
+
+const termsSchema = z
+  .array(z.object({ r: quantity("K/W"), tau: quantity("s") }))
+  .max(8, { message: "At most 8 terms" });
+
+/** The case path's terms as typed, or the first problem with them. */
+function caseTerms(text: string) {
+  const rows = parsePastedRows(text);
+  const parsed = termsSchema.safeParse(rows);
+  if (parsed.success) return { terms: parsed.data, error: null };
+  const issue = parsed.error.issues[0];
+  const line = typeof issue.path[0] === "number" ? `Term ${issue.path[0] + 1}` : "Terms";
+  return { terms: null, error: `${line}: ${issue.message}` };
+}
 
 const formSchema = z
   .object({
@@ -49,8 +71,19 @@ const formSchema = z
     voltageLimit: z.string(),
     betweenCurves: z.enum(["loglog", "next-longer", "thermal"]),
     ownerId: z.string(),
+    caseNetwork: z.string(),
+    applyCaseNetwork: z.boolean(),
   })
   .superRefine((f, ctx) => {
+    const network = caseTerms(f.caseNetwork);
+    if (network.error) ctx.addIssue({ code: "custom", path: ["caseNetwork"], message: network.error });
+    else if (f.applyCaseNetwork && !network.terms?.length) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["caseNetwork"],
+        message: "Give the terms, or do not apply the path",
+      });
+    }
     for (const key of ["utilisationLimit", "voltageLimit"] as const) {
       const percent = percentOf(f[key]);
       if (!(percent > 0 && percent <= 100)) {
@@ -69,6 +102,8 @@ const formSchema = z
       voltageLimit: percentOf(f.voltageLimit) / 100,
       tjGuard: f.tjGuard.trim() === "" ? Number.NaN : Number(f.tjGuard),
       ownerId: f.ownerId === "" ? null : f.ownerId,
+      caseNetwork: caseTerms(f.caseNetwork).terms?.length ? parsePastedRows(f.caseNetwork) : null,
+      applyCaseNetwork: f.applyCaseNetwork,
     };
   })
   .pipe(projectSchema);
@@ -107,6 +142,7 @@ export function ProjectForm({
     register,
     handleSubmit,
     setError,
+    watch,
     formState: { errors, isSubmitting },
   } = useForm<ProjectFormValues, unknown, z.output<typeof formSchema>>({
     resolver: zodResolver(formSchema),
@@ -245,6 +281,31 @@ export function ProjectForm({
             voltage.
           </p>
         </div>
+      </fieldset>
+
+      <fieldset className="grid gap-4 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]" data-testid="case-path">
+        <legend className="mb-1 text-sm font-semibold">Case path</legend>
+        <div className="space-y-3">
+          <TextAreaField
+            id="project-case-network"
+            label="Case to ambient, Foster terms"
+            hint={
+              <>
+                One term per line, <Sym main="R" sub="i" /> in K/W then <Sym main="τ" sub="i" /> with a unit
+                (&ldquo;0.8, 2 s&rdquo;); paste rows from a spreadsheet. Heatsink and board, measured or
+                estimated. Optional.
+              </>
+            }
+            rows={4}
+            error={err("caseNetwork")}
+            {...register("caseNetwork")}
+          />
+          <label className="flex items-start gap-2 text-sm">
+            <input type="checkbox" className="mt-1" {...register("applyCaseNetwork")} />
+            <span>Heat the case through this path in every check of the project</span>
+          </label>
+        </div>
+        <CasePathPreview text={watch("caseNetwork")} parse={(t) => caseTerms(t).terms} />
       </fieldset>
 
       <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>

@@ -16,6 +16,14 @@ export function projectPolicy(project: Project) {
   } as const;
 }
 
+/**
+ * The case path the checks heat the case through (METHODS.md §14): the project's case-to-ambient network when it
+ * is to be applied, else none (the case held at its temperature).
+ */
+export function projectCaseNetwork(project: Project) {
+  return project.applyCaseNetwork && project.caseNetwork?.length ? project.caseNetwork : undefined;
+}
+
 /** Every pulse of the project: fault cases first, then measured pulses, then captures. */
 export async function loadProjectPulses(
   project: Project,
@@ -51,9 +59,14 @@ export async function checkProject(
     candidates.map((c) => ({ partId: c.part.id, limits: c.limits })),
     pulses,
     projectPolicy(project),
+    projectCaseNetwork(project),
   );
   return {
-    policy: { caseTemp: project.caseTemp, ...projectPolicy(project) },
+    policy: {
+      caseTemp: project.caseTemp,
+      ...projectPolicy(project),
+      caseNetwork: projectCaseNetwork(project) ?? null,
+    },
     candidates: candidates.map((c) => ({
       partId: c.part.id,
       partNumber: c.part.partNumber,

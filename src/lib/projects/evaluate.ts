@@ -1,4 +1,5 @@
 import { type CheckContext, checkPulse, prepareCheck } from "@/lib/soa/check";
+import type { FosterTerm } from "@/lib/soa/foster";
 import type { Policy, Pulse, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
 import { worseVerdict } from "@/lib/soa/verdict";
 
@@ -38,12 +39,14 @@ export interface Evaluation {
 
 /**
  * Checks every pulse against every candidate through the engine, at each pulse's case temperature and the project's
- * policy. One engine context per (candidate, case temperature); captures are loaded once and shared.
+ * policy. One engine context per (candidate, case temperature); captures are loaded once and shared. With a case
+ * path (METHODS.md §14) the case heats with each pulse's power through it.
  */
 export async function evaluate(
   candidates: EvaluatedCandidate[],
   pulses: ProjectPulse[],
   policy: Policy,
+  caseNetwork?: FosterTerm[],
 ): Promise<Evaluation> {
   const loaded = new Map<string, Pulse>();
   for (const p of pulses) loaded.set(p.id, typeof p.pulse === "function" ? await p.pulse() : p.pulse);
@@ -59,7 +62,7 @@ export async function evaluate(
       }
       let ctx = contexts.get(p.caseTemp);
       if (!ctx) {
-        ctx = prepareCheck(candidate.limits, p.caseTemp, policy);
+        ctx = prepareCheck(candidate.limits, p.caseTemp, policy, caseNetwork);
         contexts.set(p.caseTemp, ctx);
       }
       const result = checkPulse(ctx, loaded.get(p.id)!);

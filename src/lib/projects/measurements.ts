@@ -2,7 +2,7 @@ import "server-only";
 import type { Project } from "@/db/schema";
 import type { MeasurementRow } from "@/lib/csv/measurements";
 import type { PulseResult } from "@/lib/soa/types";
-import { projectPolicy } from "./check";
+import { projectCaseNetwork, projectPolicy } from "./check";
 import { evaluate } from "./evaluate";
 import { loadCandidates } from "./projects";
 
@@ -32,6 +32,7 @@ export async function previewVerdicts(project: Project, rows: MeasurementRow[]) 
       };
     }),
     projectPolicy(project),
+    projectCaseNetwork(project),
   );
   return {
     candidates: candidates.map((c) => ({

@@ -3,26 +3,38 @@ import { optionalQuantity, quantity } from "@/lib/library/part-schema";
 
 // Shared by the project forms and the route handlers. Quantities accept engineering notation ("48 V", "2 ms").
 
-export const projectSchema = z.object({
-  name: z.string().trim().min(1, { message: "Name the project" }).max(120),
-  description: z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(4000).optional()),
-  caseTemp: quantity("°C", { positive: false }).refine((t) => t >= -55 && t <= 200, {
-    message: "Case temperature between −55 °C and 200 °C",
-  }),
-  utilisationLimit: z.coerce
-    .number()
-    .gt(0, { message: "Above 0" })
-    .max(1, { message: "At most 1 (100 %)" })
-    .default(0.8),
-  tjGuard: z.coerce.number().min(0, { message: "0 K or more" }).max(200).default(25),
-  voltageLimit: z.coerce
-    .number()
-    .gt(0, { message: "Above 0" })
-    .max(1, { message: "At most 1 (100 % of V_DSS)" })
-    .default(0.8),
-  betweenCurves: z.enum(["loglog", "next-longer", "thermal"]).default("loglog"),
-  ownerId: z.uuid().nullable().optional(),
-});
+export const projectSchema = z
+  .object({
+    name: z.string().trim().min(1, { message: "Name the project" }).max(120),
+    description: z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(4000).optional()),
+    caseTemp: quantity("°C", { positive: false }).refine((t) => t >= -55 && t <= 200, {
+      message: "Case temperature between −55 °C and 200 °C",
+    }),
+    utilisationLimit: z.coerce
+      .number()
+      .gt(0, { message: "Above 0" })
+      .max(1, { message: "At most 1 (100 %)" })
+      .default(0.8),
+    tjGuard: z.coerce.number().min(0, { message: "0 K or more" }).max(200).default(25),
+    voltageLimit: z.coerce
+      .number()
+      .gt(0, { message: "Above 0" })
+      .max(1, { message: "At most 1 (100 % of V_DSS)" })
+      .default(0.8),
+    betweenCurves: z.enum(["loglog", "next-longer", "thermal"]).default("loglog"),
+    ownerId: z.uuid().nullable().optional(),
+    /** Case-to-ambient Foster network (METHODS.md §14); null removes it, absent leaves it as it is. */
+    caseNetwork: z
+      .array(z.object({ r: quantity("K/W"), tau: quantity("s") }))
+      .max(8, { message: "At most 8 terms" })
+      .nullable()
+      .optional(),
+    applyCaseNetwork: z.boolean().optional(),
+  })
+  .refine((p) => !p.applyCaseNetwork || p.caseNetwork === undefined || Boolean(p.caseNetwork?.length), {
+    path: ["caseNetwork"],
+    message: "Give the case path's terms, or do not apply it",
+  });
 
 export type ProjectInput = z.input<typeof projectSchema>;
 

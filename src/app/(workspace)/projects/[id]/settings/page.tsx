@@ -10,6 +10,7 @@ import { requireAction } from "@/lib/auth/page";
 import { roleLabels } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { loadProject } from "@/lib/projects/projects";
+import { formatQuantity } from "@/lib/soa/units";
 
 export const metadata: Metadata = { title: "Project settings" };
 
@@ -52,6 +53,12 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
           voltageLimit: String(Number((project.voltageLimit * 100).toPrecision(6))),
           betweenCurves: project.betweenCurves,
           ownerId: project.ownerId ?? "",
+          caseNetwork: (project.caseNetwork ?? [])
+            .map(
+              (t) => `${Number(t.r.toPrecision(6))}, ${formatQuantity(t.tau, "s", 6).replace("\u2009", " ")}`,
+            )
+            .join("\n"),
+          applyCaseNetwork: project.applyCaseNetwork,
         }}
       />
       <Section
