@@ -40,6 +40,12 @@ export function CellDetails({
     ["Utilisation", percent(result?.utilisation)],
     ["Peak junction temperature", result?.tjPeak != null ? q(result.tjPeak, "°C") : "— (no thermal model)"],
     ["Derating factor", result ? `×${result.derating.toFixed(3)}` : "—"],
+    [
+      "Stability factor",
+      result?.stability != null
+        ? `S = ${result.stability.toFixed(3)}, ${result.stabilityVerdict === "fail" ? "runs away (S ≥ 1)" : (result.stabilityVerdict ?? "")}`
+        : "— (no transfer characteristics or thermal model)",
+    ],
   ];
   return (
     <section

@@ -71,6 +71,9 @@ export function resultLine(result: PulseResult | undefined): string {
     `${verdictWords[result.verdict]}, utilisation ${percent(result.utilisation)}`,
     `allowed ${q(result.allowedCurrent, "A")}`,
     result.tjPeak !== null ? `Tj peak ${q(result.tjPeak, "°C")}` : null,
+    result.stability != null
+      ? `stability S ${result.stability.toFixed(2)} (${verdictWords[result.stabilityVerdict ?? "no-data"]})`
+      : null,
     `derating ×${result.derating.toFixed(2)}`,
     result.flags.length ? `flags: ${result.flags.join(", ")}` : null,
   ];

@@ -16,7 +16,7 @@ const rankCol = "sticky left-0 w-12 min-w-12";
 const partCol = "sticky left-12 w-68 min-w-68 max-w-68 border-r border-line";
 const body = "h-9 border-b border-line bg-panel group-hover/row:bg-surface";
 const cellButton =
-  "grid h-9 w-full grid-cols-[1fr_4.75rem] items-center gap-2 px-3 text-right whitespace-nowrap hover:bg-sunken " +
+  "grid min-h-9 w-full grid-cols-[1fr_4.75rem] items-center gap-x-2 px-3 text-right whitespace-nowrap hover:bg-sunken " +
   "focus-visible:outline-offset-[-2px] data-selected:bg-accent-soft";
 
 /**
@@ -100,6 +100,15 @@ export function MatrixTable({
                     >
                       <span className="font-mono num">{percent(result?.utilisation)}</span>
                       <span className={verdictClass(verdict)}>{verdictWords[verdict]}</span>
+                      {result?.stabilityVerdict === "fail" || result?.stabilityVerdict === "marginal" ? (
+                        <span
+                          className="col-span-2 -mt-1 pb-1 text-[10px] text-ink-muted"
+                          data-testid="matrix-stability"
+                        >
+                          S {result.stability?.toFixed(2)}
+                          {result.stabilityVerdict === "fail" ? " unstable" : ""}
+                        </span>
+                      ) : null}
                     </button>
                   </td>
                 );

@@ -3,7 +3,13 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useEffect, useId, useState } from "react";
 import { messageOf } from "@/components/api-client";
-import { type ChartCurve, type ChartFinding, type ChartInterpolated, SoaChart } from "@/components/soa-chart";
+import {
+  type ChartCurve,
+  type ChartFinding,
+  type ChartInterpolated,
+  InstabilityNote,
+  SoaChart,
+} from "@/components/soa-chart";
 import { FLAG_EXPLANATIONS } from "@/lib/soa/explain";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
 import { formatQuantity, parseQuantity } from "@/lib/soa/units";
@@ -18,6 +24,7 @@ interface Limits {
   curves: ChartCurve[];
   derated: ChartCurve[];
   interpolated: { width: number; policy: string; flags: Flag[]; points: [number, number][] } | null;
+  instability: { width: number; zth: number; points: [number, number][] } | null;
   findings: ChartFinding[];
 }
 
@@ -57,6 +64,8 @@ export function LimitsPanel({
   tjMax,
   curveSet,
   accepted = [],
+  hasTransfer = false,
+  hasThermal = false,
 }: {
   partId: string;
   partNumber: string;
@@ -64,6 +73,8 @@ export function LimitsPanel({
   curveSet: ActiveCurveSet;
   /** The findings the lead accepted on verifying, with reasons. */
   accepted?: { key: string; reason: string }[];
+  hasTransfer?: boolean;
+  hasThermal?: boolean;
 }) {
   const id = useId();
   const ref = curveSet.refCaseTemp;
@@ -195,7 +206,14 @@ export function LimitsPanel({
               : null
           }
           interpolated={interpolated}
+          instability={width && data?.instability ? data.instability : null}
           findings={curveSet.findings}
+        />
+        <InstabilityNote
+          width={width && data?.instability ? data.instability.width : null}
+          zth={data?.instability?.zth}
+          hasTransfer={hasTransfer}
+          hasThermal={hasThermal}
         />
         {limits.isError ? (
           <p role="alert" className="text-sm text-fail">

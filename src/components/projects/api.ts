@@ -124,6 +124,7 @@ export interface CandidateLimits {
   curves: ChartCurve[];
   derated: ChartCurve[];
   findings: ChartFinding[];
+  instability: { width: number; zth: number; points: [number, number][] } | null;
 }
 
 export interface PreviewRow {

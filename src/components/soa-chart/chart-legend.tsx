@@ -47,6 +47,19 @@ export function legendRows(props: SoaChartProps, lines: ChartLine[], colours: Ch
       },
     });
   }
+  const instability = lines.find((l) => l.kind === "instability");
+  if (instability) {
+    rows.push({
+      key: "instability",
+      text: `${instability.name}: S = 1`,
+      swatch: {
+        kind: "line",
+        stroke: instability.stroke,
+        dash: instability.dash,
+        width: instability.strokeWidth,
+      },
+    });
+  }
   if (props.findings?.length) {
     rows.push({ key: "finding", text: "Finding (numbered as listed)", swatch: { kind: "finding" } });
   }

@@ -6,7 +6,7 @@ import type { ChartCurve, ChartDuration, SoaChartProps } from "./types";
 // What the SOA chart draws, worked out from its props before any pixel: the lines with their styles, the
 // whole-decade domains, and the layout that gives a decade the same length on both axes.
 
-export type LineKind = "curve" | "derated" | "interpolated";
+export type LineKind = "curve" | "derated" | "interpolated" | "instability";
 
 export interface ChartLine {
   key: string;
@@ -25,6 +25,8 @@ export interface ChartLine {
 
 export const DERATED_DASH = "5 3";
 export const INTERPOLATED_DASH = "9 3 2 3";
+/** The instability boundary: dots, heavier than any limit line, so it never reads as a curve of the figure. */
+export const INSTABILITY_DASH = "1 4";
 
 /** "10 µs", "1 ms" or "DC". */
 export function durationName(duration: ChartDuration): string {
@@ -90,6 +92,20 @@ export function buildLines(props: SoaChartProps, colours: ChartColours): ChartLi
       text: colours.ink,
       dash: INTERPOLATED_DASH,
       strokeWidth: 1.75,
+    });
+  }
+  if (props.instability && props.instability.points.length > 1) {
+    lines.push({
+      key: "instability",
+      kind: "instability",
+      duration: props.instability.width,
+      name: `Instability boundary, ${durationName(props.instability.width)}`,
+      label: "unstable",
+      points: props.instability.points,
+      stroke: colours.ink,
+      text: colours.ink,
+      dash: INSTABILITY_DASH,
+      strokeWidth: 2.5,
     });
   }
   return lines;

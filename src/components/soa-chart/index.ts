@@ -1,4 +1,5 @@
 export { durationName } from "./chart-model";
+export { InstabilityNote } from "./instability-note";
 export { SoaChart } from "./soa-chart";
 export { TransferChart, type TransferChartCurve } from "./transfer-chart";
 export type {
@@ -6,6 +7,7 @@ export type {
   ChartDerated,
   ChartDuration,
   ChartFinding,
+  ChartInstability,
   ChartInterpolated,
   ChartPulse,
   SoaChartProps,

@@ -62,17 +62,20 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
   const colours = useChartColours();
   const clipId = `soa-clip-${useId().replace(/[^a-zA-Z0-9]/g, "")}`;
   const [readout, setReadout] = useState<Readout | null>(null);
-  const { curves, derated, interpolated, findings, pulses, refCaseTemp, title } = props;
+  const { curves, derated, interpolated, instability, findings, pulses, refCaseTemp, title } = props;
   const lines = useMemo(
-    () => buildLines({ title, curves, derated, interpolated }, colours),
-    [title, curves, derated, interpolated, colours],
+    () => buildLines({ title, curves, derated, interpolated, instability }, colours),
+    [title, curves, derated, interpolated, instability, colours],
   );
   const domains = useMemo(() => chartDomains({ curves, pulses }), [curves, pulses]);
   const rows = useMemo(
     () => legendRows({ title, curves, derated, findings, pulses, refCaseTemp }, lines, colours),
     [title, curves, derated, findings, pulses, refCaseTemp, lines, colours],
   );
-  const labelled = lines.filter((l) => l.kind !== "derated" && (l.points[l.points.length - 1]?.[1] ?? 0) > 0);
+  // The instability boundary is named in the legend: its far end runs off the plot toward the zero-TC point.
+  const labelled = lines.filter(
+    (l) => l.kind !== "derated" && l.kind !== "instability" && (l.points[l.points.length - 1]?.[1] ?? 0) > 0,
+  );
   const gutter = Math.max(48, ...labelled.map((l) => textWidth(l.label) + 10));
   const legendWidth = Math.max(160, ...rows.map((r) => textWidth(r.text) + 34));
   const layout = chartLayout(props.available, domains, gutter, rows.length, legendWidth, true);
@@ -121,6 +124,7 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
     const i = y.invert(py);
     let nearest: { line: ChartLine; current: number; distance: number } | null = null;
     for (const line of lines) {
+      if (line.kind === "instability") continue;
       const current = interpolateCurve(line.points, v);
       if (current.current === null || current.flag !== null) continue;
       const distance = Math.abs(y(current.current) - py);

@@ -47,6 +47,13 @@ export interface ChartInterpolated {
   note?: string;
 }
 
+/** The instability boundary for one pulse width (METHODS.md §12): where S = V·α(I)·Z_th(t) reaches 1. */
+export interface ChartInstability {
+  width: number;
+  /** Points [V_max, I], ascending in I. */
+  points: [number, number][];
+}
+
 export interface SoaChartProps {
   /** What the chart shows, for its accessible name and the export file names (e.g. the part number). */
   title: string;
@@ -55,6 +62,7 @@ export interface SoaChartProps {
   refCaseTemp?: number;
   derated?: ChartDerated | null;
   interpolated?: ChartInterpolated | null;
+  instability?: ChartInstability | null;
   findings?: ChartFinding[];
   pulses?: ChartPulse[];
 }

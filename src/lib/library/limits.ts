@@ -1,8 +1,10 @@
 import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
-import type { FosterTerm } from "@/lib/soa/foster";
-import type { BetweenCurves, CurveSet, Duration, Flag } from "@/lib/soa/types";
+import { type FosterTerm, zth } from "@/lib/soa/foster";
+import { instabilityBoundary } from "@/lib/soa/instability-boundary";
+import { prepareTransfer } from "@/lib/soa/stability";
+import type { BetweenCurves, CurveSet, Duration, Flag, TransferData } from "@/lib/soa/types";
 
 export interface LimitLine {
   duration: Duration;
@@ -18,6 +20,11 @@ export interface Limits {
   derated: LimitLine[];
   /** The limit line for a typed pulse width, read between the curves by the policy, derated; null if none asked. */
   interpolated: { width: number; policy: BetweenCurves; flags: Flag[]; points: [number, number][] } | null;
+  /**
+   * The instability boundary for the typed width (METHODS.md §12): V_max(I) = 1/(α(I)·Z_th(t)), points [V, I];
+   * null without a width, transfer characteristics or a thermal model.
+   */
+  instability: { width: number; zth: number; points: [number, number][] } | null;
 }
 
 const samplesPerDecade = 24;
@@ -28,7 +35,7 @@ const samplesPerDecade = 24;
  */
 export function computeLimits(
   set: CurveSet,
-  part: { tjMax: number; foster?: readonly FosterTerm[] | null },
+  part: { tjMax: number; foster?: readonly FosterTerm[] | null; transfer?: TransferData | null },
   options: { caseTemp: number; width?: number; policy?: BetweenCurves },
 ): Limits {
   const prepared = prepareCurveSet(set);
@@ -55,6 +62,14 @@ export function computeLimits(
     }
     interpolated = { width: options.width, policy, flags: [...flags], points };
   }
+  let instability: Limits["instability"] = null;
+  if (options.width !== undefined && options.width > 0 && part.transfer && part.foster?.length) {
+    const z = zth(part.foster as FosterTerm[], options.width);
+    // Beyond 100 × the highest digitised voltage the boundary is off every chart and says nothing.
+    const vTop = 100 * Math.max(...curves.flatMap((c) => c.points.map(([v]) => v)));
+    const points = instabilityBoundary(prepareTransfer(part.transfer), z).filter(([v]) => v <= vTop);
+    instability = { width: options.width, zth: z, points };
+  }
   return {
     refCaseTemp: prepared.refCaseTemp,
     caseTemp: options.caseTemp,
@@ -62,6 +77,7 @@ export function computeLimits(
     curves,
     derated,
     interpolated,
+    instability,
   };
 }
 

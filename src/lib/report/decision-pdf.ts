@@ -432,7 +432,11 @@ function pulseDetails(
           continued: true,
         });
       const figures = r
-        ? ` — utilisation ${pct(r.utilisation)}, allowed ${q(r.allowedCurrent, "A")}, Tj peak ${q(r.tjPeak, "°C")}, derating ${r.derating.toFixed(3)}`
+        ? ` — utilisation ${pct(r.utilisation)}, allowed ${q(r.allowedCurrent, "A")}, Tj peak ${q(r.tjPeak, "°C")}, derating ${r.derating.toFixed(3)}${
+            r.stability != null
+              ? `, stability factor S ${r.stability.toFixed(3)} (${verdictWord[r.stabilityVerdict ?? "no-data"]})`
+              : ""
+          }`
         : " — the part had no SOA curves";
       doc.fillColor(ink).text(figures);
       const why = r ? [VERDICT_EXPLANATIONS[verdict], ...r.flags.map(explainFlag)] : [];

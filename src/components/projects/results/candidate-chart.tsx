@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
-import { type ChartPulse, SoaChart } from "@/components/soa-chart";
+import { type ChartPulse, InstabilityNote, SoaChart } from "@/components/soa-chart";
 import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
 import { percent, q, repeatText, shapeWords } from "../format";
 
@@ -42,16 +42,34 @@ export function chartPulses(check: ProjectCheck, partId: string): ChartPulse[] {
   });
 }
 
+/**
+ * The pulse whose stability factor is highest on this candidate, and the width it was read at: the chart draws the
+ * instability boundary for that width (METHODS.md §12), the one that matters most for this part.
+ */
+export function stabilityFocus(check: ProjectCheck, partId: string) {
+  let best: { name: string; width: number; stability: number } | null = null;
+  for (const p of check.pulses) {
+    const result = check.results[partId]?.[p.id];
+    const width = result?.at?.width ?? result?.equivalentWidth ?? p.duration;
+    if (result?.stability == null || width === null || !(width > 0)) continue;
+    if (!best || result.stability > best.stability)
+      best = { name: p.name, width, stability: result.stability };
+  }
+  return best;
+}
+
 /** One candidate's SOA chart at the project's case temperature, with every pulse of the project on it. */
 export function CandidateChart({ candidate, check }: { candidate: CheckedCandidate; check: ProjectCheck }) {
   const { caseTemp, betweenCurves } = check.policy;
+  const focus = stabilityFocus(check, candidate.partId);
+  const search = new URLSearchParams({ caseTemp: String(caseTemp), policy: betweenCurves });
+  if (focus) search.set("width", `${focus.width}s`);
   const limits = useQuery({
-    queryKey: projectKeys.limits(candidate.partId, candidate.curveSetId, caseTemp, betweenCurves),
-    queryFn: () =>
-      callJson<CandidateLimits>(
-        "GET",
-        `/api/parts/${candidate.partId}/limits?${new URLSearchParams({ caseTemp: String(caseTemp), policy: betweenCurves })}`,
-      ),
+    queryKey: [
+      ...projectKeys.limits(candidate.partId, candidate.curveSetId, caseTemp, betweenCurves),
+      focus?.width ?? null,
+    ],
+    queryFn: () => callJson<CandidateLimits>("GET", `/api/parts/${candidate.partId}/limits?${search}`),
     enabled: candidate.hasCurves,
   });
   const data = limits.data;
@@ -89,8 +107,18 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
               : null
           }
           pulses={chartPulses(check, candidate.partId)}
+          instability={data.instability}
         />
       )}
+      {focus && data?.instability ? (
+        <div className="mt-2 space-y-1">
+          <p className="text-xs text-ink-muted">
+            Boundary drawn for {focus.name}, the pulse with the highest stability factor on this part (S ={" "}
+            {focus.stability.toFixed(2)}).
+          </p>
+          <InstabilityNote width={focus.width} zth={data.instability.zth} hasTransfer hasThermal />
+        </div>
+      ) : null}
     </section>
   );
 }

@@ -78,6 +78,17 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                     <dd>{viewVerdict(result.thermalVerdict, "no thermal model")}</dd>
                     <dt className="text-ink-muted">Stability</dt>
                     <dd>{viewVerdict(result.stabilityVerdict, "not checked (needs transfer data)")}</dd>
+                    {result.stability !== null ? (
+                      <>
+                        <dt className="text-ink-muted">Stability factor</dt>
+                        <dd className="num font-mono" data-testid="stability-factor">
+                          S = {result.stability.toFixed(3)}{" "}
+                          <span className="font-sans text-ink-faint">
+                            (runs away at 1; limit {percent(policy.utilisationLimit)})
+                          </span>
+                        </dd>
+                      </>
+                    ) : null}
                     <dt className="text-ink-muted">Width read</dt>
                     <dd className="num font-mono">
                       {q(result.equivalentWidth, "s")}

@@ -96,6 +96,8 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
               findings: active.findings as ChartFinding[],
             }}
             accepted={part.status === "verified" ? part.acceptedFindings : []}
+            hasTransfer={part.transfer !== null}
+            hasThermal={Boolean(part.foster?.length)}
           />
         ) : (
           <div className="rounded-md border border-line bg-panel px-4 py-8 text-center text-sm text-ink-muted">

@@ -40,7 +40,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (re
   if (!set) throw new AppError("not_found:curve-set", "This part has no SOA curves yet.");
   const limits = computeLimits(
     { refCaseTemp: set.refCaseTemp, curves: set.curves },
-    { tjMax: part.tjMax, foster: part.foster },
+    { tjMax: part.tjMax, foster: part.foster, transfer: part.transfer },
     parsed.data,
   );
   return json({ ...limits, findings: set.findings });
