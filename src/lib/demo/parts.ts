@@ -8,12 +8,18 @@
 //   48 ms), although its Foster network alone would let it pass;
 // - BFL-100L55, rated for linear mode (no instability, higher R_DS(on), a larger die and lower Z_th at long
 //   widths), PASSES it with a wide margin;
-// - QM-100G28, a general-purpose trench part with milder instability, sits between them.
+// - QM-100G28, a general-purpose trench part, PASSES the inrush on its curves and its thermal model but FAILS the
+//   stability check (METHODS.md §12): its invented transfer characteristics put the zero-temperature-coefficient
+//   point near 23 A, far above the 1.5 A of the pre-charge, where the 150 °C curve carries about five times the
+//   25 °C current at the same gate voltage (α ≈ 0.05 A/K); at 48 V with Z_th(24 ms) ≈ 0.5 K/W the loop gain
+//   S = V·α·Z_th is above 1. Its SOA figure, like many, is drawn from Z_th alone and does not show this.
+// Transfer characteristics span 10 mA to 1–2 kA so that every demo pulse reads α inside the data; avalanche
+// ratings are invented too.
 // R_DS(on) at Tj,max is R_DS(on) at 25 °C times 1.9 for the trench parts and 2.2 for the planar linear-mode part
 // (typical temperature coefficients: common practice, no source).
 import { curvesToLongCsv } from "@/lib/csv/curve-set-export";
 import type { FosterTerm } from "@/lib/soa/foster";
-import type { Curve } from "@/lib/soa/types";
+import type { AvalancheRating, Curve, TransferData } from "@/lib/soa/types";
 import { type InstabilityKnee, modelCurveSet } from "./soa-model";
 
 export interface DemoPart {
@@ -38,6 +44,9 @@ export interface DemoPart {
   currency: string;
   datasheetRevision: string;
   notes: string;
+  /** Typical transfer characteristics at 25 °C and 150 °C junction, [V_GS, I_D] points. */
+  transfer: TransferData;
+  avalanche: AvalancheRating;
   /** Model inputs that are not ratings: R_DS(on) at Tj,max over R_DS(on) at 25 °C, and the instability knees. */
   model: { rdsOnHotFactor: number; instability?: { exponent: number; knees: InstabilityKnee[] } };
 }
@@ -66,6 +75,28 @@ export const DEMO_PARTS: readonly DemoPart[] = [
     currency: "EUR",
     datasheetRevision: "Rev. 1.2, 2024-03",
     notes: `Lowest R_DS(on) of the three; switching-optimised trench, not rated for linear mode. ${INVENTED}`,
+    transfer: {
+      temps: [25, 150],
+      curves: [
+        [
+          [1.6, 0.01],
+          [2.6, 1],
+          [3.1, 15],
+          [3.8, 100],
+          [5, 500],
+          [7, 2000],
+        ],
+        [
+          [1.6, 0.3],
+          [2.6, 9],
+          [3.1, 30],
+          [3.8, 110],
+          [5, 400],
+          [7, 1500],
+        ],
+      ],
+    },
+    avalanche: { energy: 0.35, current: 60 },
     model: {
       rdsOnHotFactor: 1.9,
       instability: {
@@ -98,17 +129,31 @@ export const DEMO_PARTS: readonly DemoPart[] = [
     unitCost: 1.45,
     currency: "EUR",
     datasheetRevision: "Rev. 2.0, 2023-11",
-    notes: `General-purpose trench part. ${INVENTED}`,
-    model: {
-      rdsOnHotFactor: 1.9,
-      instability: {
-        exponent: 2,
-        knees: [
-          { duration: 10e-3, voltage: 50 },
-          { duration: "DC", voltage: 30 },
+    notes: `General-purpose trench part. Its SOA figure is calculated from the thermal model alone; its transfer characteristics show the hot curve carrying several times the cold current below the zero-temperature-coefficient point (about 23 A), so a slow linear-mode pulse such as a pre-charge can run away while lying under the curves. ${INVENTED}`,
+    transfer: {
+      temps: [25, 150],
+      curves: [
+        [
+          [1.8, 0.01],
+          [2.8, 1],
+          [3.3, 10],
+          [4, 60],
+          [5, 250],
+          [7, 1000],
         ],
-      },
+        [
+          [1.8, 0.2],
+          [2.8, 7],
+          [3.3, 13],
+          [4, 45],
+          [5, 180],
+          [7, 700],
+        ],
+      ],
     },
+    avalanche: { energy: 0.6, current: 80 },
+    // Its SOA figure is calculated from Z_th alone: no instability segment, although the part has one.
+    model: { rdsOnHotFactor: 1.9 },
   },
   {
     partNumber: "BFL-100L55",
@@ -131,6 +176,28 @@ export const DEMO_PARTS: readonly DemoPart[] = [
     currency: "EUR",
     datasheetRevision: "Rev. 1.0, 2024-06",
     notes: `Planar cell, rated for linear mode: SOA without a thermal-instability region. ${INVENTED}`,
+    transfer: {
+      temps: [25, 150],
+      curves: [
+        [
+          [1.5, 0.01],
+          [2.5, 0.5],
+          [3.2, 3],
+          [4, 20],
+          [5.5, 150],
+          [8, 1000],
+        ],
+        [
+          [1.5, 0.05],
+          [2.5, 0.9],
+          [3.2, 3.1],
+          [4, 16],
+          [5.5, 110],
+          [8, 800],
+        ],
+      ],
+    },
+    avalanche: { energy: 1.2, current: 100, breakdown: 110 },
     model: { rdsOnHotFactor: 2.2 },
   },
 ];
