@@ -1,0 +1,118 @@
+// Transfer characteristics through their route, against the real database (issue 11): the same parser as the
+// editor, unreadable cells and blocking findings refused by row, the part back in draft, the curves in the check.
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DELETE as transferDelete, PUT as transferPut } from "@/app/api/parts/[id]/transfer/route";
+import { type Part, parts } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { partLimits } from "@/lib/projects/projects";
+import {
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+let ws: TestWorkspace;
+let engineer: string;
+
+async function newPart(): Promise<Part> {
+  const [part] = await testDb.db
+    .insert(parts)
+    .values({
+      workspaceId: ws.id,
+      partNumber: `TR-${crypto.randomUUID().slice(0, 6)}`,
+      maker: "Transfer Test Devices",
+      technology: "si-mosfet",
+      package: "TO-220",
+      vdsMax: 60,
+      tjMax: 175,
+      status: "verified",
+      avalancheEnergy: 0.2,
+    })
+    .returning();
+  return part;
+}
+
+beforeAll(async () => {
+  ws = await createTestWorkspace("Transfer");
+  engineer = await sessionCookie(ws.members.engineer.id, ws.id);
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+describe("PUT /api/parts/:id/transfer", () => {
+  it("stores two curves, cooler first, returns the part to draft and carries them into the engine's limits", async () => {
+    const part = await newPart();
+    const res = await call(h(transferPut), "PUT", {
+      cookie: engineer,
+      params: { id: part.id },
+      body: { text: "T_j;V_GS [V];I_D [A]\n125;3;3\n125;4;25\n25;3;1\n25;4;20\n", fileName: "fig-7.csv" },
+    });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    // METHODS.md §10 "v2 instability" data: the curves do not cross inside the data, a warning, not a refusal.
+    expect(body.findings.map((f: { key: string }) => f.key)).toEqual(["no-crossing-hot-above"]);
+    const [stored] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
+    expect(stored.status).toBe("draft");
+    expect(stored.transfer).toEqual({
+      temps: [25, 125],
+      curves: [
+        [
+          [3, 1],
+          [4, 20],
+        ],
+        [
+          [3, 3],
+          [4, 25],
+        ],
+      ],
+      source: { kind: "uploaded", fileName: "fig-7.csv" },
+    });
+    const limits = partLimits(stored, { refCaseTemp: 25, curves: [] });
+    expect(limits.transfer?.temps).toEqual([25, 125]);
+    expect(limits.avalanche).toEqual({ energy: 0.2 });
+  });
+
+  it("refuses unreadable cells and V_GS out of order, naming the row, and keeps what was stored", async () => {
+    const part = await newPart();
+    const bad = await call(h(transferPut), "PUT", {
+      cookie: engineer,
+      params: { id: part.id },
+      body: { text: "25,3,1\n25,x,20\n150,3,3\n150,4,25\n" },
+    });
+    expect(bad.status).toBe(400);
+    expect((await bad.json()).error.details.issues[0].message).toBe(
+      "row 2, column V_GS: 'x' is not a number",
+    );
+    const order = await call(h(transferPut), "PUT", {
+      cookie: engineer,
+      params: { id: part.id },
+      body: { text: "25,4,1\n25,3,20\n150,3,3\n150,4,25\n" },
+    });
+    expect(order.status).toBe(400);
+    expect((await order.json()).error.details.issues[0].row).toBe(2);
+    const [stored] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
+    expect(stored.transfer).toBeNull();
+    expect(stored.status).toBe("verified");
+  });
+
+  it("DELETE removes them", async () => {
+    const part = await newPart();
+    await call(h(transferPut), "PUT", {
+      cookie: engineer,
+      params: { id: part.id },
+      body: { text: "25,3,1\n25,4,20\n150,3,3\n150,4,25\n" },
+    });
+    expect(
+      (await call(h(transferDelete), "DELETE", { cookie: engineer, params: { id: part.id } })).status,
+    ).toBe(200);
+    const [stored] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
+    expect(stored.transfer).toBeNull();
+  });
+});
