@@ -42,7 +42,9 @@ test("a failing capture shows the sample that decided it", async ({ page }) => {
     await row.getByRole("button").first().click();
     const details = page.getByTestId("result-details");
     await expect(details.getByTestId("binding-sample").first()).toContainText("read at");
-    await expect(details.getByTestId("decided-by").first()).toContainText("SOA curves");
+    // The demo parts carry transfer characteristics (issue 11): the pre-charge capture fails the trench part on its
+    // stability factor, whatever its curves say.
+    await expect(details.getByTestId("decided-by").first()).toContainText("stability factor");
     await saveScreenshot(page, "capture-result-details");
   });
 });

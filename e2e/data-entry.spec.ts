@@ -28,6 +28,8 @@ const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 10
 test("curve files upload without false findings; a thermal model added later updates them; verifying needs reasons", async ({
   page,
 }) => {
+  // Many full-page screenshots of a part page that now holds the transfer section too, on a shared machine.
+  test.setTimeout(120_000);
   const part = new PartPage(page);
   const findings = page.getByRole("list", { name: "Findings" }).getByTestId("finding");
 
