@@ -15,12 +15,17 @@ async function loadMember(caller: MemberCaller, userId: string) {
   return membership;
 }
 
-/** PATCH /api/team/members/:userId: changes a member's role; the last admin keeps theirs. */
+/**
+ * PATCH /api/team/members/:userId: changes a member's role and/or lead rights (an admin may grant lead rights
+ * to any member, themself included); the last admin keeps theirs. Answers the previous values, for undo.
+ */
 export const PATCH = route<{ userId: string }>(
   { action: "member.manage" },
   async (req, caller, { userId }) => {
     const member = await loadMember(caller, userId);
-    const { role } = await parseBody(req, changeRoleSchema);
+    const body = await parseBody(req, changeRoleSchema);
+    const role = body.role ?? member.role;
+    const leadRights = body.leadRights ?? member.leadRights;
     if (member.role === "admin" && role !== "admin" && (await countAdmins(caller)) <= 1) {
       throw new AppError(
         "conflict:last-admin",
@@ -30,7 +35,7 @@ export const PATCH = route<{ userId: string }>(
     await db.transaction(async (tx) => {
       await tx
         .update(memberships)
-        .set({ role })
+        .set({ role, leadRights })
         .where(and(eq(memberships.workspaceId, caller.workspaceId), eq(memberships.userId, userId)));
       await recordAudit(
         {
@@ -39,12 +44,22 @@ export const PATCH = route<{ userId: string }>(
           action: "membership.role-changed",
           subjectType: "user",
           subjectId: userId,
-          details: { from: member.role, to: role },
+          details: {
+            from: member.role,
+            to: role,
+            leadRightsFrom: member.leadRights,
+            leadRightsTo: leadRights,
+          },
         },
         tx,
       );
     });
-    return json({ status: "ok", role });
+    return json({
+      status: "ok",
+      role,
+      leadRights,
+      previous: { role: member.role, leadRights: member.leadRights },
+    });
   },
 );
 
