@@ -55,7 +55,7 @@ export function MemberRow({
       sendJson("PATCH", url, { role: next.role, leadRights: next.leadRights }),
     onSuccess: (_data, next) => {
       setProposed(null);
-      setSaved(next.undo ? null : { message: describe(member.name, current, next), previous: current });
+      setSaved(next.undo ? null : { message: describeChange(member.name, current, next), previous: current });
       startTransition(() => {
         // Giving up your own admin role takes the Team page away with it.
         if (isSelf && next.role !== "admin") router.replace("/app");
@@ -225,7 +225,7 @@ export function MemberRow({
 }
 
 /** What a saved change did, in words. */
-function describe(name: string, before: Access, after: Access): string {
+function describeChange(name: string, before: Access, after: Access): string {
   const parts: string[] = [];
   if (before.role !== after.role) parts.push(`${name} is now ${roleLabels[after.role].toLowerCase()}`);
   if (before.leadRights !== after.leadRights)

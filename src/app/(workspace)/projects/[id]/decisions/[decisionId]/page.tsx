@@ -9,6 +9,7 @@ import { percent, q } from "@/components/decisions/format";
 import { FrozenCandidates } from "@/components/decisions/frozen-candidates";
 import { FrozenMatrix } from "@/components/decisions/frozen-matrix";
 import { TitleBar } from "@/components/library/title-bar";
+import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
 import type { Project } from "@/db/schema";
@@ -142,11 +143,7 @@ export default async function DecisionPage({
       >
         <Suspense
           fallback={
-            <div
-              role="status"
-              aria-label="Checking the project again"
-              className="h-16 animate-pulse rounded-md border border-line bg-panel"
-            />
+            <LoadingBox className="h-16">Checking the project again to compare with the record…</LoadingBox>
           }
         >
           <Drift project={project} frozen={snapshot} />
