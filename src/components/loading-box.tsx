@@ -8,7 +8,11 @@ export function LoadingBox({ className = "", children }: { className?: string; c
       aria-busy="true"
       className={`flex items-center justify-center rounded-md border border-line bg-panel px-4 text-sm text-ink-muted ${className}`}
     >
-      <span className="motion-safe:animate-pulse">{children}</span>
+      <span
+        aria-hidden="true"
+        className="mr-2 size-2 shrink-0 rounded-full bg-accent motion-safe:animate-pulse"
+      />
+      <span>{children}</span>
     </div>
   );
 }

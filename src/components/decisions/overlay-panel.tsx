@@ -154,7 +154,7 @@ function OverlayTable({
   markers: ReturnType<typeof overlayMarkers>;
 }) {
   return (
-    <details className="mt-2 text-sm">
+    <details className="mt-2 overflow-x-auto text-sm">
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the chart as a table ({markers.length} {markers.length === 1 ? "pulse" : "pulses"} ×{" "}
         {check.candidates.length} candidates)

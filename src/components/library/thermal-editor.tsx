@@ -186,7 +186,7 @@ export function ThermalEditor({
 
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
-      <div className="min-w-0 space-y-3">
+      <div className="min-w-0 space-y-3 overflow-x-auto">
         <table
           aria-label="Foster terms"
           className="w-full border-separate border-spacing-0 rounded-md border border-line bg-panel text-sm"
