@@ -84,6 +84,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/projects/[id]/audit": async () => ({ id: await project() }),
   "/api/projects/[id]/decisions/[decisionId]": async () => projectWithDecision(),
   "/api/projects/[id]/decisions/[decisionId]/report": async () => projectWithDecision(),
+  "/api/projects/[id]/decisions/[decisionId]/csv": async () => projectWithDecision(),
   "/api/projects/[id]/candidates": async () => ({ id: await project() }),
   "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements": async () => ({ id: await project() }),

@@ -37,6 +37,7 @@ export default async function DecisionPage({
   const chosen = snapshot.ranking.find((r) => r.partId === decision.chosenPartId);
   const chosenPart = snapshot.candidates.find((c) => c.partId === decision.chosenPartId);
   const base = `/projects/${project.id}`;
+  const drafts = snapshot.candidates.filter((c) => c.status !== "verified");
 
   return (
     <div className="space-y-8">
@@ -62,6 +63,9 @@ export default async function DecisionPage({
             <Link href={`${base}/compare`} className={button}>
               Compare now
             </Link>
+            <a href={`/api/projects/${project.id}/decisions/${decision.id}/csv`} download className={button}>
+              Download CSV (frozen)
+            </a>
             <a
               href={`/api/projects/${project.id}/decisions/${decision.id}/report`}
               download
@@ -89,6 +93,18 @@ export default async function DecisionPage({
           The standing decision for this project.
         </p>
       )}
+
+      {drafts.length > 0 ? (
+        <p
+          data-testid="unverified-warning"
+          className="rounded-md border border-line border-l-2 border-l-marginal bg-panel px-3 py-2 text-sm"
+        >
+          {drafts.length === snapshot.candidates.length
+            ? "Every candidate was an unverified library draft when this was signed"
+            : `${drafts.map((c) => c.partNumber).join(", ")} ${drafts.length === 1 ? "was an unverified library draft" : "were unverified library drafts"} when this was signed`}
+          : {drafts.length === 1 ? "its" : "their"} curves had no second check against the datasheet.
+        </p>
+      ) : null}
 
       <StatBlocks
         items={[
