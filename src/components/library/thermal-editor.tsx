@@ -186,7 +186,7 @@ export function ThermalEditor({
   const rth = preview.reduce((sum, t) => sum + t.r, 0);
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
       <div className="min-w-0 space-y-3">
         <ScrollRegion className="overflow-x-auto">
           <table
