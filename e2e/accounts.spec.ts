@@ -33,7 +33,7 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
   await test.step("the admin signs up and lands on the overview", async () => {
     await signUp(page, admin);
     await expect(page.getByRole("heading", { level: 1, name: "Overview" })).toBeVisible();
-    await expect(page.getByText(admin.workspaceName).first()).toBeVisible();
+    await expect(page.getByText(admin.workspaceName).filter({ visible: true }).first()).toBeVisible();
     expect(await shell.itemNames()).toEqual(["Overview", "Library", "Projects", "Team", "Account"]);
   });
 
@@ -82,7 +82,10 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     await signIn(page, technician);
     expect(await shell.itemNames()).toEqual(["Overview", "Library", "Projects", "Account"]);
     await page.goto("/team");
-    await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
+    // A page the role may not open says which role may and whom to ask (not a false "not found").
+    await expect(page.getByRole("heading", { level: 1, name: "Not for your role" })).toBeVisible();
+    await expect(page.getByTestId("not-allowed")).toContainText("It opens for the roles: admin, lead.");
+    await expect(page.getByTestId("not-allowed")).toContainText(admin.email);
   });
 
   await test.step("the used link does not work a second time", async () => {

@@ -1,4 +1,5 @@
 import { execFileSync } from "node:child_process";
+import { readFileSync } from "node:fs";
 import path from "node:path";
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
@@ -80,6 +81,13 @@ test.describe
         "Rated for linear mode: passes the pre-charge inrush with margin where the trench part fails it.",
       );
       await expect(form.getByLabel("Chosen candidate")).toHaveAccessibleDescription(/Passes every pulse/);
+      // The demo parts are library drafts: the form says so for each, and warns before signing.
+      await expect(form.getByTestId("candidate-library-status")).toContainText(
+        "BFL-100L55 draft, unverified",
+      );
+      await expect(form.getByRole("note")).toContainText(
+        "Every candidate is still an unverified library draft",
+      );
       await saveScreenshot(page, "decision-form");
       await compare.sign(form);
       decisionUrl = page.url();
@@ -87,7 +95,21 @@ test.describe
       await expect(page.getByText("The standing decision for this project.")).toBeVisible();
       await expect(page.getByTestId("drift")).toContainText("Nothing has changed since the decision");
       await expect(page.getByRole("table", { name: "Frozen matrix" })).toContainText("fail");
+      await expect(page.getByTestId("unverified-warning")).toContainText(
+        "Every candidate was an unverified library draft",
+      );
       await saveScreenshot(page, "decision");
+
+      const [csvDownload] = await Promise.all([
+        page.waitForEvent("download"),
+        page.getByRole("link", { name: "Download CSV (frozen)" }).click(),
+      ]);
+      const csvPath = path.join(screenshotDir, "decision.csv");
+      await csvDownload.saveAs(csvPath);
+      const csvLines = readFileSync(csvPath, "utf8").split("\r\n");
+      expect(csvLines[0]).toContain("rank,part,maker,library_status,verified_by");
+      expect(csvLines[1]).toMatch(/^1,BFL-100L55,/);
+      expect(csvLines.join("\n")).not.toMatch(/\d\.\d{6,}/);
 
       const [download] = await Promise.all([
         page.waitForEvent("download"),
@@ -113,6 +135,9 @@ test.describe
       const text = execFileSync("pdftotext", ["-layout", pdf, "-"], { encoding: "utf8" });
       expect(text).toContain(projectName);
       expect(text).toContain("BFL-100L55");
+      const firstPage = text.split("\f")[0];
+      expect(firstPage).toMatch(/Caution/);
+      expect(firstPage).toMatch(/unverified\s+library\s+draft/);
 
       await page.getByRole("link", { name: "Decisions", exact: true }).click();
       await expect(page.getByRole("list", { name: "Decision history" })).toContainText("Standing");

@@ -147,5 +147,6 @@ test("a technician reads the library but sees no controls to change it", async (
   await expect(page.getByRole("link", { name: "Edit part" })).toHaveCount(0);
   await expect(page.getByRole("table", { name: "Foster terms" }).locator("input")).toHaveCount(0);
   await page.goto("/library/new");
-  await expect(page.getByRole("heading", { name: "Nothing here" })).toBeVisible();
+  await expect(page.getByRole("heading", { level: 1, name: "Not for your role" })).toBeVisible();
+  await expect(page.getByTestId("not-allowed")).toContainText("admin, lead, engineer");
 });

@@ -17,10 +17,10 @@ import {
 import { hashPassword } from "../src/lib/auth/password";
 import { registerCapture } from "../src/lib/capture/store";
 import { demoCaptureCsv, demoCaptureFileName, demoCaptureName } from "../src/lib/demo/capture";
-import { DEMO_PARTS, DEMO_SCENARIO, demoCurveSetCsv, demoCurveSetFileName } from "../src/lib/demo/parts";
+import { DEMO_SCENARIO } from "../src/lib/demo/parts";
 import { demoFaultCases, demoMeasuredPulses, demoProjectName } from "../src/lib/demo/project";
+import { ensureDemoParts } from "../src/lib/demo/sample-project";
 import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
-import { registerCurveSet } from "../src/lib/library/curve-upload";
 import { storage } from "../src/lib/storage";
 
 if (process.argv.includes("--print-sign-in")) {
@@ -53,56 +53,7 @@ async function seedUsers(workspaceId: string): Promise<Record<string, string>> {
 }
 
 async function seedParts(workspaceId: string, engineerId: string): Promise<void> {
-  const store = storage();
-  for (const demo of DEMO_PARTS) {
-    const existing = await db
-      .select({ id: parts.id })
-      .from(parts)
-      .where(
-        and(
-          eq(parts.workspaceId, workspaceId),
-          eq(parts.maker, demo.maker),
-          eq(parts.partNumber, demo.partNumber),
-        ),
-      );
-    if (existing.length) continue;
-    const [part] = await db
-      .insert(parts)
-      .values({
-        workspaceId,
-        partNumber: demo.partNumber,
-        maker: demo.maker,
-        technology: "si-mosfet",
-        package: demo.package,
-        vdsMax: demo.vdsMax,
-        idMax: demo.idContinuous,
-        idPulseMax: demo.idPulseMax,
-        rdsOn: demo.rdsOn,
-        tjMax: demo.tjMax,
-        rthJc: demo.rthJc,
-        foster: demo.foster,
-        thermalSource: { kind: "typed" },
-        transfer: { ...demo.transfer, source: { kind: "typed" } },
-        avalancheEnergy: demo.avalanche.energy,
-        avalancheCurrent: demo.avalanche.current ?? null,
-        avalancheBreakdown: demo.avalanche.breakdown ?? null,
-        unitCost: demo.unitCost,
-        currency: demo.currency,
-        datasheetRevision: demo.datasheetRevision,
-        notes: demo.notes,
-        createdBy: engineerId,
-      })
-      .returning();
-    const csv = demoCurveSetCsv(demo);
-    const fileName = demoCurveSetFileName(demo);
-    const objectKey = `${workspaceId}/parts/${part.id}/curve-set/${crypto.randomUUID()}.csv`;
-    const [upload] = await db
-      .insert(pendingUploads)
-      .values({ workspaceId, userId: engineerId, objectKey, fileName, purpose: "curve-set" })
-      .returning();
-    await store.put(objectKey, csv, { contentType: "text/csv" });
-    await registerCurveSet(store, { part, userId: engineerId, userName: "seed", upload });
-  }
+  await ensureDemoParts(storage(), { workspaceId, userId: engineerId, userName: "seed" });
 }
 
 /** The scenario's project: candidates, fault cases from the pulse builders, and a few measured pulses. */

@@ -72,7 +72,13 @@ export class ComparePage {
     return form;
   }
 
+  /** Signs; on an unverified draft the lead first says they sign knowingly. */
   async sign(form: Locator): Promise<void> {
+    const knowingly = form.getByLabel("I sign on an unverified part knowingly");
+    if (await knowingly.count()) {
+      await expect(form.getByRole("button", { name: "Sign decision" })).toBeDisabled();
+      await knowingly.check();
+    }
     await form.getByRole("button", { name: "Sign decision" }).click();
     await expect(this.page).toHaveURL(/\/decisions\/[0-9a-f-]{36}$/);
   }

@@ -125,7 +125,8 @@ export function Button({
   disabled,
   ...rest
 }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; size?: "sm" | "md"; pending?: boolean }) {
-  const sizing = size === "sm" ? "h-7 px-2.5 text-xs" : "h-9 px-4 text-sm";
+  // At least 44 px tall on touch screens and narrow windows (a thumb at the bench), compact on a desktop.
+  const sizing = `${size === "sm" ? "h-7 px-2.5 text-xs" : "h-9 px-4 text-sm"} max-md:min-h-11 pointer-coarse:min-h-11`;
   return (
     <button
       type={type}

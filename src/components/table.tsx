@@ -1,14 +1,15 @@
 import type { ReactNode, TdHTMLAttributes, ThHTMLAttributes } from "react";
+import { ScrollRegion } from "./scroll-region";
 
 // Dense tables (DESIGN.md): 36 px rows, a sticky header, numeric columns right-aligned.
 
 export function Table({ label, children }: { label: string; children: ReactNode }) {
   return (
-    <div className="max-h-[min(34rem,70vh)] overflow-auto rounded-md border border-line bg-panel">
+    <ScrollRegion className="max-h-[min(34rem,70vh)] overflow-auto rounded-md border border-line bg-panel">
       <table aria-label={label} className="w-full border-separate border-spacing-0 text-sm">
         {children}
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
 

@@ -63,6 +63,8 @@ export const memberships = pgTable(
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
     role: roleEnum().notNull(),
+    /** Lead rights beside the role (src/lib/auth/permissions.ts), granted by an admin: one-person teams. */
+    leadRights: boolean().notNull().default(false),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [primaryKey({ columns: [t.workspaceId, t.userId] }), index().on(t.userId)],

@@ -57,6 +57,8 @@ const publicRoutes = new Set([
 ]);
 
 let a: TestWorkspace; // the workspace whose resources are addressed
+// Members of a who hold lead rights beside their role (one-person teams): an admin and a technician.
+const withLeadRights: { role: (typeof roles)[number]; id: string }[] = [];
 let b: TestWorkspace; // another team: must never reach a's resources
 
 // Fresh resources of workspace a for each call of a route with parameters (a call may consume them).
@@ -83,6 +85,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/projects/[id]/audit": async () => ({ id: await project() }),
   "/api/projects/[id]/decisions/[decisionId]": async () => projectWithDecision(),
   "/api/projects/[id]/decisions/[decisionId]/report": async () => projectWithDecision(),
+  "/api/projects/[id]/decisions/[decisionId]/csv": async () => projectWithDecision(),
   "/api/projects/[id]/candidates": async () => ({ id: await project() }),
   "/api/projects/[id]/fault-cases": async () => ({ id: await project() }),
   "/api/projects/[id]/measurements": async () => ({ id: await project() }),
@@ -270,6 +273,15 @@ async function load(file: string): Promise<Partial<Record<(typeof methods)[numbe
 beforeAll(async () => {
   a = await createTestWorkspace("Routes A");
   b = await createTestWorkspace("Routes B");
+  const { memberships } = await import("@/db/schema");
+  for (const role of ["admin", "technician"] as const) {
+    const user = await addMember(a.id, role);
+    await testDb.db
+      .update(memberships)
+      .set({ leadRights: true })
+      .where(and(eq(memberships.userId, user.id), eq(memberships.workspaceId, a.id)));
+    withLeadRights.push({ role, id: user.id });
+  }
 });
 afterAll(async () => {
   await deleteWorkspace(a.id);
@@ -308,18 +320,22 @@ describe("route guards", () => {
           const params = () => paramFixtures[route]?.() ?? Promise.resolve({});
           const anonymous = await call(handler, method, { body: {}, params: await params() });
           expect(anonymous.status, `${method} ${route} without a session`).toBe(401);
-          for (const role of roles) {
-            const user = a.members[role];
-            tokenOwner = user.id;
+          const callers = [
+            ...roles.map((role) => ({ role, id: a.members[role].id, leadRights: false })),
+            ...withLeadRights.map((m) => ({ ...m, leadRights: true })),
+          ];
+          for (const { role, id, leadRights } of callers) {
+            const who = leadRights ? `${role} with lead rights` : role;
+            tokenOwner = id;
             const res = await call(handler, method, {
-              cookie: await sessionCookie(user.id, a.id),
+              cookie: await sessionCookie(id, a.id),
               body: {},
               params: await params(),
             });
-            const allowed = "signedIn" in access || can(role, access.action);
+            const allowed = "signedIn" in access || can(role, access.action, leadRights);
             if (allowed)
-              expect([401, 403], `${role} ${method} ${route} → ${res.status}`).not.toContain(res.status);
-            else expect(res.status, `${role} ${method} ${route}`).toBe(403);
+              expect([401, 403], `${who} ${method} ${route} → ${res.status}`).not.toContain(res.status);
+            else expect(res.status, `${who} ${method} ${route}`).toBe(403);
           }
         }
       });

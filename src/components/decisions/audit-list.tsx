@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { messageOf } from "@/components/api-client";
 import { DateText } from "@/components/date-text";
+import { LoadingBox } from "@/components/loading-box";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { auditWords } from "./audit-words";
 import { useAudit } from "./queries";
@@ -10,7 +11,7 @@ import { useAudit } from "./queries";
 /** The project's history for leads and admins: who did what, and when, newest first. */
 export function AuditList({ projectId }: { projectId: string }) {
   const audit = useAudit(projectId);
-  if (audit.isPending) return <div className="h-40 animate-pulse rounded-md border border-line bg-panel" />;
+  if (audit.isPending) return <LoadingBox className="h-40">Loading the record of changes…</LoadingBox>;
   if (audit.isError) {
     return (
       <p role="alert" className="text-sm text-fail">

@@ -19,7 +19,7 @@ export function CompareActions({ projectId, canSign }: { projectId: string; canS
         <Button
           variant="primary"
           aria-expanded={open}
-          aria-controls="record-decision"
+          aria-controls={open ? "record-decision" : undefined}
           onClick={() => set({ decide: open ? null : "1" })}
         >
           Record decision

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useDeferredValue, useMemo, useState } from "react";
 import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
+import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
 import { CellDetails } from "./cell-details";
@@ -40,11 +41,7 @@ export function CompareView({
   const check = useCheck(projectId);
   if (check.isPending) {
     return (
-      <div
-        className="h-96 animate-pulse rounded-md border border-line bg-panel"
-        role="status"
-        aria-label="Checking the project"
-      />
+      <LoadingBox className="h-96">Checking the project: every pulse against every candidate…</LoadingBox>
     );
   }
   if (check.isError) {

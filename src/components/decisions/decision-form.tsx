@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useEffect, useRef } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { z } from "zod";
 import { sendJson } from "@/components/api-client";
@@ -51,6 +51,10 @@ export function DecisionForm({
   const frame = useRef<HTMLFormElement>(null);
   // One key per opened form: a double click or a resent request is answered 409, not signed twice.
   const idempotencyKey = useRef(crypto.randomUUID());
+  // Signing on an unverified draft is allowed, but only after the lead has read the warning and said so.
+  const [acknowledged, setAcknowledged] = useState(false);
+  const chosenDraft = chosen ? byId.get(chosen.partId)?.status !== "verified" : false;
+  const drafts = candidates.filter((c) => c.status !== "verified");
   // Opened from the title bar: bring the form into view and put the caret in the rationale.
   useEffect(() => {
     frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
@@ -126,12 +130,60 @@ export function DecisionForm({
           {...form.register("rationale")}
         />
       </div>
+      <div className="mt-4 text-sm">
+        <h3 className="text-xs font-medium text-ink-muted">Library status of the candidates</h3>
+        <ul className="mt-1 flex flex-wrap gap-x-4 gap-y-1" data-testid="candidate-library-status">
+          {candidates.map((c) => (
+            <li key={c.partId}>
+              <span className="font-medium">{c.partNumber}</span>{" "}
+              {c.status === "verified" ? (
+                <span className="text-ink-muted">
+                  verified{c.verifiedByName ? ` by ${c.verifiedByName}` : ""}
+                </span>
+              ) : (
+                <span className="text-marginal">draft, unverified</span>
+              )}
+            </li>
+          ))}
+        </ul>
+        {drafts.length > 0 ? (
+          <div
+            role="note"
+            className="mt-3 rounded-md border border-line border-l-2 border-l-marginal bg-sunken px-3 py-2"
+          >
+            <p>
+              {drafts.length === candidates.length
+                ? "Every candidate is still an unverified library draft"
+                : `${drafts.map((c) => c.partNumber).join(", ")} ${drafts.length === 1 ? "is" : "are"} still unverified library ${drafts.length === 1 ? "draft" : "drafts"}`}
+              : no one has checked {drafts.length === 1 ? "its" : "their"} curves against the datasheet a
+              second time. The record and the PDF will say so. Verify the parts in the library first, or sign
+              knowingly.
+            </p>
+            {chosenDraft ? (
+              <label className="mt-2 flex items-center gap-2 max-md:min-h-11">
+                <input
+                  type="checkbox"
+                  checked={acknowledged}
+                  onChange={(e) => setAcknowledged(e.target.checked)}
+                  className="size-4 accent-[var(--color-accent)]"
+                />
+                I sign on an unverified part knowingly
+              </label>
+            ) : null}
+          </div>
+        ) : null}
+      </div>
       <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
       <FormActions aside="Signing is final: a later decision supersedes this one, nothing edits it.">
         <Button variant="quiet" onClick={onCancel} disabled={isSubmitting}>
           Cancel
         </Button>
-        <Button type="submit" variant="primary" pending={isSubmitting || isSubmitSuccessful}>
+        <Button
+          type="submit"
+          variant="primary"
+          pending={isSubmitting || isSubmitSuccessful}
+          disabled={chosenDraft && !acknowledged}
+        >
           Sign decision
         </Button>
       </FormActions>

@@ -1,3 +1,4 @@
+import { ScrollRegion } from "@/components/scroll-region";
 import type { Verdict } from "@/lib/soa/types";
 import { percent, q } from "./format";
 import type { DecisionSnapshot, Drift } from "./types";
@@ -112,7 +113,7 @@ export function DriftPanel({ drift, frozen, now }: { drift: Drift; frozen: Polic
         </dl>
       ) : null}
       {drift.results.length ? (
-        <div className="max-h-80 overflow-auto rounded-md border border-line">
+        <ScrollRegion className="max-h-80 overflow-auto rounded-md border border-line">
           <table
             aria-label="Results that changed"
             className="w-full border-separate border-spacing-0 text-sm"
@@ -146,7 +147,7 @@ export function DriftPanel({ drift, frozen, now }: { drift: Drift; frozen: Polic
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       ) : null}
     </div>
   );

@@ -43,7 +43,11 @@ export function FrozenCandidates({ snapshot }: { snapshot: DecisionSnapshot }) {
             <Td numeric>{q(c.part.tjMax, "°C")}</Td>
             <Td numeric>{money(c.unitCost, c.currency)}</Td>
             <Td>{c.part.datasheetRevision ?? <span className="text-ink-faint">—</span>}</Td>
-            <Td>{c.status === "verified" ? "verified" : "draft"}</Td>
+            <Td>
+              {c.status === "verified"
+                ? `verified${c.verifiedByName ? ` by ${c.verifiedByName}` : ""}`
+                : "draft (unverified)"}
+            </Td>
             <Td>
               {c.curveSetId ? (
                 <span className="font-mono text-xs" title={c.curveSetId}>

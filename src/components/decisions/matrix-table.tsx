@@ -1,6 +1,7 @@
 "use client";
 
 import { type MouseEvent, useCallback, useEffect, useMemo, useRef } from "react";
+import { ScrollRegion } from "@/components/scroll-region";
 import type { MatrixRow } from "@/lib/projects/matrix";
 import { money, percent, pulseLine, resultLine, verdictWords } from "./format";
 import type { CheckedPulse, MatrixData } from "./types";
@@ -135,7 +136,7 @@ export function MatrixTable({
   }, [selected, tbody]);
 
   return (
-    <div
+    <ScrollRegion
       aria-busy={stale || undefined}
       className={`max-h-[min(40rem,75vh)] overflow-auto rounded-md border border-line bg-panel transition-opacity ${stale ? "opacity-60" : ""}`}
     >
@@ -167,6 +168,6 @@ export function MatrixTable({
         </thead>
         {tbody}
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

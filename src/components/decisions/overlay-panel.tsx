@@ -4,6 +4,7 @@ import { useQueries } from "@tanstack/react-query";
 import { type ReactNode, useMemo, useState } from "react";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
+import { LoadingBox } from "@/components/loading-box";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { percent, pulseLine, q, readWidth, verdictWords } from "./format";
 import { OverlayChart } from "./overlay-chart";
@@ -115,11 +116,7 @@ export function OverlayPanel({ check, title }: { check: ProjectCheck; title: str
             {messageOf(failed.error)}
           </p>
         ) : pending ? (
-          <div
-            className="h-[28rem] animate-pulse rounded-md bg-sunken"
-            role="status"
-            aria-label="Drawing the limit lines"
-          />
+          <LoadingBox className="h-[28rem]">Drawing the limit lines…</LoadingBox>
         ) : (
           <>
             <p className="mb-3 text-xs text-ink-muted">
@@ -157,7 +154,7 @@ function OverlayTable({
   markers: ReturnType<typeof overlayMarkers>;
 }) {
   return (
-    <details className="mt-2 text-sm">
+    <details className="mt-2 overflow-x-auto text-sm">
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the chart as a table ({markers.length} {markers.length === 1 ? "pulse" : "pulses"} ×{" "}
         {check.candidates.length} candidates)

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { type ClipboardEvent, useId, useMemo, useState, useTransition } from "react";
 import { ApiError, messageOf } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
+import { ScrollRegion } from "@/components/scroll-region";
 import { ZthChart } from "@/components/soa-chart";
 import type { CsvIssue } from "@/lib/csv/issues";
 import { fosterSchema } from "@/lib/library/part-schema";
@@ -185,102 +186,104 @@ export function ThermalEditor({
   const rth = preview.reduce((sum, t) => sum + t.r, 0);
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
       <div className="min-w-0 space-y-3">
-        <table
-          aria-label="Foster terms"
-          className="w-full border-separate border-spacing-0 rounded-md border border-line bg-panel text-sm"
-        >
-          <thead>
-            <tr>
-              <th
-                scope="col"
-                className="h-8 w-10 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
-              >
-                i
-              </th>
-              <th
-                scope="col"
-                className="h-8 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
-              >
-                <Sym main="R" sub="i" /> (K/W)
-              </th>
-              <th
-                scope="col"
-                className="h-8 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
-              >
-                <Sym main="τ" sub="i" /> (s)
-              </th>
-              {canWrite ? (
-                <th scope="col" className="h-8 w-20 border-b border-line bg-sunken">
-                  <span className="sr-only">Remove</span>
-                </th>
-              ) : null}
-            </tr>
-          </thead>
-          <tbody>
-            {rows.length === 0 ? (
+        <ScrollRegion className="overflow-x-auto">
+          <table
+            aria-label="Foster terms"
+            className="w-full border-separate border-spacing-0 rounded-md border border-line bg-panel text-sm"
+          >
+            <thead>
               <tr>
-                <td colSpan={4} className="px-3 py-4 text-center text-ink-muted">
-                  No thermal model.{" "}
-                  {canWrite
-                    ? "Add rows, paste them from a spreadsheet, or fit a Z_th CSV."
-                    : "An engineer adds it."}
-                </td>
+                <th
+                  scope="col"
+                  className="h-8 w-10 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
+                >
+                  i
+                </th>
+                <th
+                  scope="col"
+                  className="h-8 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
+                >
+                  <Sym main="R" sub="i" /> (K/W)
+                </th>
+                <th
+                  scope="col"
+                  className="h-8 border-b border-line bg-sunken px-2 text-right text-xs font-medium text-ink-muted"
+                >
+                  <Sym main="τ" sub="i" /> (s)
+                </th>
+                {canWrite ? (
+                  <th scope="col" className="h-8 w-20 border-b border-line bg-sunken">
+                    <span className="sr-only">Remove</span>
+                  </th>
+                ) : null}
               </tr>
-            ) : (
-              rows.map((row, k) => (
-                <tr key={row.key}>
-                  <td className="num h-9 border-b border-line px-2 text-right font-mono text-xs text-ink-muted">
-                    {k + 1}
+            </thead>
+            <tbody>
+              {rows.length === 0 ? (
+                <tr>
+                  <td colSpan={4} className="px-3 py-4 text-center text-ink-muted">
+                    No thermal model.{" "}
+                    {canWrite
+                      ? "Add rows, paste them from a spreadsheet, or fit a Z_th CSV."
+                      : "An engineer adds it."}
                   </td>
-                  {(["r", "tau"] as const).map((field) => {
-                    const error = cellErrors[`terms.${k}.${field}`];
-                    return (
-                      <td key={field} className="h-9 border-b border-line px-1.5 text-right">
-                        {canWrite ? (
-                          <>
-                            <input
-                              value={row[field]}
-                              aria-label={`${field === "r" ? "R" : "τ"} of term ${k + 1}`}
-                              aria-invalid={error ? true : undefined}
-                              aria-describedby={error ? `${id}-${row.key}-${field}` : undefined}
-                              onChange={(e) => edit(row.key, field, e.target.value)}
-                              onPaste={(e) => onPaste(e, row.key)}
-                              className="h-7 w-full rounded border border-line-strong bg-panel px-2 text-right font-mono text-xs aria-invalid:border-fail"
-                            />
-                            {error ? (
-                              <span
-                                id={`${id}-${row.key}-${field}`}
-                                className="block text-left text-xs text-fail"
-                              >
-                                {error}
-                              </span>
-                            ) : null}
-                          </>
-                        ) : (
-                          <span className="num font-mono text-xs">{row[field]}</span>
-                        )}
-                      </td>
-                    );
-                  })}
-                  {canWrite ? (
-                    <td className="h-9 border-b border-line px-1 text-right">
-                      <Button
-                        size="sm"
-                        variant="quiet"
-                        aria-label={`Remove term ${k + 1}`}
-                        onClick={() => setRows((all) => all.filter((r) => r.key !== row.key))}
-                      >
-                        Remove
-                      </Button>
-                    </td>
-                  ) : null}
                 </tr>
-              ))
-            )}
-          </tbody>
-        </table>
+              ) : (
+                rows.map((row, k) => (
+                  <tr key={row.key}>
+                    <td className="num h-9 border-b border-line px-2 text-right font-mono text-xs text-ink-muted">
+                      {k + 1}
+                    </td>
+                    {(["r", "tau"] as const).map((field) => {
+                      const error = cellErrors[`terms.${k}.${field}`];
+                      return (
+                        <td key={field} className="h-9 border-b border-line px-1.5 text-right">
+                          {canWrite ? (
+                            <>
+                              <input
+                                value={row[field]}
+                                aria-label={`${field === "r" ? "R" : "τ"} of term ${k + 1}`}
+                                aria-invalid={error ? true : undefined}
+                                aria-describedby={error ? `${id}-${row.key}-${field}` : undefined}
+                                onChange={(e) => edit(row.key, field, e.target.value)}
+                                onPaste={(e) => onPaste(e, row.key)}
+                                className="h-7 w-full rounded border border-line-strong bg-panel px-2 text-right font-mono text-xs aria-invalid:border-fail"
+                              />
+                              {error ? (
+                                <span
+                                  id={`${id}-${row.key}-${field}`}
+                                  className="block text-left text-xs text-fail"
+                                >
+                                  {error}
+                                </span>
+                              ) : null}
+                            </>
+                          ) : (
+                            <span className="num font-mono text-xs">{row[field]}</span>
+                          )}
+                        </td>
+                      );
+                    })}
+                    {canWrite ? (
+                      <td className="h-9 border-b border-line px-1 text-right">
+                        <Button
+                          size="sm"
+                          variant="quiet"
+                          aria-label={`Remove term ${k + 1}`}
+                          onClick={() => setRows((all) => all.filter((r) => r.key !== row.key))}
+                        >
+                          Remove
+                        </Button>
+                      </td>
+                    ) : null}
+                  </tr>
+                ))
+              )}
+            </tbody>
+          </table>
+        </ScrollRegion>
         {canWrite ? (
           <>
             <div className="flex flex-wrap items-center justify-between gap-2">

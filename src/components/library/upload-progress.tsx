@@ -1,3 +1,4 @@
+import { ScrollRegion } from "@/components/scroll-region";
 import type { CsvIssue } from "@/lib/csv/issues";
 
 /** Long work in words with a bar: "Uploading… 45 %", then "Checking the curves…". */
@@ -29,7 +30,7 @@ export function UploadProgress({ label, fraction }: { label: string; fraction: n
 /** The rows a CSV was rejected for: row, column and reason, as a spreadsheet would point at them. */
 export function IssueTable({ issues, label }: { issues: CsvIssue[]; label: string }) {
   return (
-    <div className="max-h-72 overflow-auto rounded-md border border-line bg-panel">
+    <ScrollRegion className="max-h-72 overflow-auto rounded-md border border-line bg-panel">
       <table aria-label={label} className="w-full border-separate border-spacing-0 text-sm">
         <thead>
           <tr>
@@ -57,6 +58,6 @@ export function IssueTable({ issues, label }: { issues: CsvIssue[]; label: strin
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -1,4 +1,5 @@
 import { Sym } from "@/components/library/symbols";
+import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
 import type { ProjectCheck, ProjectDetail } from "./api";
 import { q } from "./format";
@@ -14,13 +15,7 @@ function plural(n: number, one: string, many: string): string {
 /** The project's key figures: temperature, margin policy, and how many candidates and pulses it holds. */
 export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?: ProjectCheck }) {
   if (!detail) {
-    return (
-      <div className="grid grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-3">
-        {[0, 1, 2, 3, 4].map((k) => (
-          <div key={k} className="h-[4.75rem] animate-pulse rounded-md border border-line bg-panel" />
-        ))}
-      </div>
-    );
+    return <LoadingBox className="h-[4.75rem]">Loading the figures of the project…</LoadingBox>;
   }
   const { project, candidates, faultCases, measuredPulses } = detail;
   const captures = check?.pulses.filter((p) => p.source === "capture").length ?? 0;

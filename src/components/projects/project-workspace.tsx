@@ -3,6 +3,7 @@
 import { usePathname, useSearchParams } from "next/navigation";
 import { type KeyboardEvent, type ReactNode, useRef } from "react";
 import { messageOf } from "@/components/api-client";
+import { LoadingBox } from "@/components/loading-box";
 import { type ProjectCheck, type ProjectDetail, useProject, useProjectCheck } from "./api";
 import { BenchPanel } from "./bench/bench-panel";
 import { CapturesPanel } from "./captures/captures-panel";
@@ -72,7 +73,11 @@ export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
 
   let body: ReactNode;
   if (detail.isPending) {
-    body = <div className="h-64 animate-pulse rounded-md border border-line bg-panel" />;
+    body = (
+      <LoadingBox className="h-64">
+        Loading the project: candidates, fault cases and measured pulses…
+      </LoadingBox>
+    );
   } else if (detail.isError) {
     body = (
       <p role="alert" className="text-sm text-fail">
@@ -100,7 +105,7 @@ export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
         <div
           role="tablist"
           aria-label="Project views"
-          className="flex gap-1 border-b border-line"
+          className="flex gap-1 overflow-x-auto border-b border-line"
           onKeyDown={onKeyDown}
         >
           {tabs.map((t) => (
@@ -116,7 +121,7 @@ export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
               aria-controls={`panel-${t.key}`}
               tabIndex={tab === t.key ? 0 : -1}
               onClick={() => select(t.key)}
-              className={`-mb-px h-9 border-b-2 px-3 text-sm ${
+              className={`-mb-px h-11 shrink-0 border-b-2 px-3 text-sm whitespace-nowrap lg:h-9 ${
                 tab === t.key
                   ? "border-accent font-medium text-ink"
                   : "border-transparent text-ink-muted hover:border-line-strong hover:text-ink"

@@ -1,3 +1,4 @@
+import { ScrollRegion } from "@/components/scroll-region";
 import { formatQuantity } from "@/lib/soa/units";
 import { durationName, sortByDuration } from "./chart-model";
 import type { ChartCurve, SoaChartProps } from "./types";
@@ -32,7 +33,7 @@ export function PointsTable({ title, curves, derated, interpolated, pulses }: So
         Show the chart as a table ({groups.length} lines
         {pulses?.length ? `, ${pulses.length} pulses` : ""})
       </summary>
-      <div className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
+      <ScrollRegion className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
         <table
           className="w-full border-separate border-spacing-0 text-xs"
           aria-label={`SOA points of ${title}`}
@@ -75,7 +76,7 @@ export function PointsTable({ title, curves, derated, interpolated, pulses }: So
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </details>
   );
 }

@@ -5,7 +5,12 @@ import { memberships, type Role, users, workspaces } from "@/db/schema";
 
 export async function getMembership({ workspaceId, userId }: { workspaceId: string; userId: string }) {
   const [row] = await db
-    .select({ role: memberships.role, workspaceName: workspaces.name, workspaceId: workspaces.id })
+    .select({
+      role: memberships.role,
+      leadRights: memberships.leadRights,
+      workspaceName: workspaces.name,
+      workspaceId: workspaces.id,
+    })
     .from(memberships)
     .innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
@@ -29,6 +34,7 @@ export function listMembers({ workspaceId }: { workspaceId: string }) {
       name: users.name,
       email: users.email,
       role: memberships.role,
+      leadRights: memberships.leadRights,
       joinedAt: memberships.createdAt,
     })
     .from(memberships)

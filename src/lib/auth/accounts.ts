@@ -60,7 +60,10 @@ export async function createAccount(input: {
       .insert(workspaces)
       .values({ name: input.workspaceName, slug: slugify(input.workspaceName) })
       .returning({ id: workspaces.id });
-    await tx.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: "admin" });
+    // The founder of a workspace is its only member: they hold lead rights too, so they can verify and sign alone.
+    await tx
+      .insert(memberships)
+      .values({ workspaceId: workspace.id, userId: user.id, role: "admin", leadRights: true });
     await recordAudit(
       {
         workspaceId: workspace.id,
@@ -68,7 +71,7 @@ export async function createAccount(input: {
         action: "membership.created",
         subjectType: "user",
         subjectId: user.id,
-        details: { role: "admin", via: "sign-up" },
+        details: { role: "admin", leadRights: true, via: "sign-up" },
       },
       tx,
     );

@@ -25,6 +25,7 @@ export interface Caller {
 export interface MemberCaller extends Caller {
   workspaceId: string;
   role: Role;
+  leadRights: boolean;
 }
 
 type Params = Record<string, string | string[]>;
@@ -83,13 +84,18 @@ export function route<P = Params>(
         const membership = await getMembership({ workspaceId: auth.workspaceId, userId: caller.user.id });
         if (!membership)
           throw new AppError("forbidden:not-a-member", "You are not a member of this workspace.");
-        if (!can(membership.role, access.action)) {
+        if (!can(membership.role, access.action, membership.leadRights)) {
           throw new AppError(
             `forbidden:${access.action}`,
             "Your role in this workspace does not allow this.",
           );
         }
-        member = { ...caller, workspaceId: auth.workspaceId, role: membership.role };
+        member = {
+          ...caller,
+          workspaceId: auth.workspaceId,
+          role: membership.role,
+          leadRights: membership.leadRights,
+        };
       }
       const response = await handler(req, (member ?? caller) as MemberCaller & Caller, await context.params);
       return withCookie(response, setCookie);

@@ -1,6 +1,6 @@
 import "server-only";
 import { cookies, headers } from "next/headers";
-import { notFound, redirect } from "next/navigation";
+import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getMembership, listUserWorkspaces } from "@/db/queries/members";
 import type { Role } from "@/db/schema";
@@ -22,6 +22,7 @@ export interface PageMember {
   user: { id: string; email: string; name: string };
   workspace: { id: string; name: string };
   role: Role;
+  leadRights: boolean;
   workspaces: { id: string; name: string; role: Role }[];
   can: (action: Action) => boolean;
 }
@@ -38,15 +39,23 @@ export const requireMember = cache(async (): Promise<PageMember> => {
     user: session.user,
     workspace: { id: membership.workspaceId, name: membership.workspaceName },
     role: membership.role,
+    leadRights: membership.leadRights,
     workspaces,
-    can: (action) => can(membership.role, action),
+    can: (action) => can(membership.role, action, membership.leadRights),
   };
 });
 
-/** A page for a role's action: others get the not-found page (nothing is revealed). */
+/**
+ * A page for a role's action. A member whose role may not open it is sent to a page that says which role may and
+ * whom to ask; the page reveals nothing of the workspace's data (another workspace's resources stay a 404).
+ */
 export async function requireAction(action: Action): Promise<PageMember> {
   const member = await requireMember();
-  if (!member.can(action)) notFound();
+  if (!member.can(action)) {
+    redirect(
+      `/not-allowed?action=${encodeURIComponent(action)}&from=${encodeURIComponent(await currentPath())}`,
+    );
+  }
   return member;
 }
 

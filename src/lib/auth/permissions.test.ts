@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { actions, assignableRoles, can, roles } from "./permissions";
+import { actions, assignableRoles, can, leadRightsActions, roles, rolesAllowed } from "./permissions";
 
 // The product's division of work (PRODUCT.md, roles table), pinned so that a change to the table is deliberate.
 describe("permission table", () => {
@@ -20,6 +20,22 @@ describe("permission table", () => {
   it("keeps signing decisions and verifying parts with leads only", () => {
     expect(roles.filter((r) => can(r, "decision.sign"))).toEqual(["lead"]);
     expect(roles.filter((r) => can(r, "part.verify"))).toEqual(["lead"]);
+  });
+
+  it("lets lead rights add exactly verifying and signing to any role, and nothing else", () => {
+    expect([...leadRightsActions].sort()).toEqual(["decision.sign", "part.verify"]);
+    for (const role of roles) {
+      expect(can(role, "decision.sign", true), role).toBe(true);
+      expect(can(role, "part.verify", true), role).toBe(true);
+      for (const action of actions.filter((x) => !leadRightsActions.includes(x as never)))
+        expect(can(role, action, true), `${role} ${action}`).toBe(can(role, action));
+    }
+  });
+
+  it("names the roles an action is open to, for the page that tells a member whom to ask", () => {
+    expect(rolesAllowed("decision.sign")).toEqual(["lead"]);
+    expect(rolesAllowed("member.invite")).toEqual(["admin", "lead"]);
+    expect(rolesAllowed("workspace.read")).toEqual(["admin", "lead", "engineer", "technician"]);
   });
 
   it("lets only admins manage members; admins and leads invite", () => {

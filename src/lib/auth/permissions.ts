@@ -51,8 +51,26 @@ const table: Record<Role, readonly Action[]> = {
   technician: ["workspace.read", "measurement.write", "check.run"],
 };
 
-export function can(role: Role, action: Action): boolean {
-  return table[role].includes(action);
+/**
+ * Lead rights: the lead's own actions, which an admin may grant to any member beside their role, themself
+ * included, so that a one-person or small team can verify parts and sign decisions without a second person.
+ */
+export const leadRightsActions = ["part.verify", "decision.sign"] as const satisfies readonly Action[];
+
+/** May a member of `role` (holding lead rights or not) do `action`? */
+export function can(role: Role, action: Action, leadRights = false): boolean {
+  if (table[role].includes(action)) return true;
+  return leadRights && (leadRightsActions as readonly Action[]).includes(action);
+}
+
+/** The roles whose members may do `action` by their role alone, for a page that tells a caller whom to ask. */
+export function rolesAllowed(action: Action): Role[] {
+  return roles.filter((role) => table[role].includes(action));
+}
+
+/** Whether lead rights would allow `action` to a member whose role does not. */
+export function grantedByLeadRights(action: Action): boolean {
+  return (leadRightsActions as readonly Action[]).includes(action);
 }
 
 /** Roles a member of `role` may hand out in an invitation or a role change. */

@@ -38,7 +38,11 @@ export const acceptInvitationSchema = z.object({
 
 export const inviteSchema = z.object({ email, role: z.enum(roles) });
 
-export const changeRoleSchema = z.object({ role: z.enum(roles) });
+export const changeRoleSchema = z
+  .object({ role: z.enum(roles).optional(), leadRights: z.boolean().optional() })
+  .refine((v) => v.role !== undefined || v.leadRights !== undefined, {
+    message: "Send a role, lead rights, or both.",
+  });
 
 export const switchWorkspaceSchema = z.object({ workspaceId: z.uuid() });
 

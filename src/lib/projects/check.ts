@@ -72,6 +72,7 @@ export async function checkProject(
       partNumber: c.part.partNumber,
       maker: c.part.maker,
       status: c.part.status,
+      verifiedByName: c.verifiedByName,
       unitCost: c.part.unitCost,
       currency: c.part.currency,
       hasCurves: c.limits !== null,

@@ -133,6 +133,11 @@ describe("decisions", () => {
     for (const word of ["pass", "fail"]) expect(text).toContain(word);
     expect(text).toMatch(/check\s+is\s+an\s+aid/);
     expect(text).toContain("Rated for linear mode");
+    // The caution and the candidates' library status stand on the first page (pdftotext ends pages with \f).
+    const firstPage = text.split("\f")[0];
+    expect(firstPage).toMatch(/check\s+is\s+an\s+aid/);
+    expect(firstPage).toMatch(/Library status|unverified\s+library\s+draft/);
+    for (const n of ["QM-80T16", "QM-100G28", "BFL-100L55"]) expect(firstPage).toContain(`${n}:`);
   });
 
   it("supersedes, never edits: a second decision leaves the first in the history", async () => {

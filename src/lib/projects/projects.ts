@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { curveSets, curves, type Part, parts, projectCandidates, projects } from "@/db/schema";
+import { curveSets, curves, type Part, parts, projectCandidates, projects, users } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import type { PartLimits } from "@/lib/soa/types";
@@ -33,6 +33,8 @@ export async function loadWritableProject(caller: Pick<MemberCaller, "workspaceI
 
 export interface Candidate {
   part: Part;
+  /** Who verified the part in the library, while it is verified. */
+  verifiedByName: string | null;
   /** The part as the engine takes it, with its active curve set; null when it has no curves yet. */
   limits: PartLimits | null;
   curveSetId: string | null;
@@ -67,9 +69,10 @@ export function partLimits(
 /** The project's candidate parts with their active curves, in the order they were added. */
 export async function loadCandidates(projectId: string): Promise<Candidate[]> {
   const rows = await db
-    .select({ part: parts })
+    .select({ part: parts, verifiedByName: users.name })
     .from(projectCandidates)
     .innerJoin(parts, eq(parts.id, projectCandidates.partId))
+    .leftJoin(users, eq(users.id, parts.verifiedBy))
     .where(eq(projectCandidates.projectId, projectId))
     .orderBy(projectCandidates.addedAt);
   if (rows.length === 0) return [];
@@ -97,14 +100,16 @@ export async function loadCandidates(projectId: string): Promise<Candidate[]> {
         )
         .orderBy(curves.position)
     : [];
-  return rows.map(({ part }) => {
+  return rows.map(({ part, verifiedByName: verifier }) => {
+    const verifiedByName = part.status === "verified" ? verifier : null;
     const set = sets.find((s) => s.partId === part.id);
-    if (!set) return { part, limits: null, curveSetId: null };
+    if (!set) return { part, verifiedByName, limits: null, curveSetId: null };
     const setCurves = curveRows
       .filter((c) => c.curveSetId === set.id)
       .map((c) => ({ duration: c.duration ?? ("DC" as const), points: c.points }));
     return {
       part,
+      verifiedByName,
       limits: partLimits(part, { refCaseTemp: set.refCaseTemp, curves: setCurves }),
       curveSetId: set.id,
     };

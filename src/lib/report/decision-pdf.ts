@@ -102,6 +102,16 @@ export function renderDecisionPdf(input: {
     .text(`Signed by ${decision.signedByName} on ${stamp(decision.signedAt)}.`)
     .text(decision.supersededAt ? `Superseded on ${stamp(decision.supersededAt)}.` : "Standing decision.");
 
+  libraryStatus(doc, snapshot);
+
+  // The caution stands on the first page, where a reader of the decision sees it.
+  section(doc, "Caution");
+  doc
+    .font("regular")
+    .fontSize(9)
+    .fillColor(ink)
+    .text(CAUTION, { width: contentWidth(doc) });
+
   section(doc, "Assumptions");
   keyValues(doc, [
     ["Case temperature", q(snapshot.policy.caseTemp, "°C")],
@@ -144,15 +154,28 @@ export function renderDecisionPdf(input: {
   pulseDetails(doc, snapshot, "measured");
   pulseDetails(doc, snapshot, "capture");
 
-  section(doc, "Caution");
-  doc
-    .font("regular")
-    .fontSize(9)
-    .fillColor(ink)
-    .text(CAUTION, { width: contentWidth(doc) });
   footer(doc, snapshot);
   doc.end();
   return done;
+}
+
+/** Each candidate's library status as frozen; a warning when any was an unverified draft. */
+function libraryStatus(doc: Doc, snapshot: DecisionSnapshot): void {
+  const drafts = snapshot.candidates.filter((c) => c.status !== "verified");
+  doc.moveDown(0.4).font("bold").fontSize(9.5).fillColor(ink);
+  if (drafts.length === 0) doc.text("Library status: every candidate was verified when signed.");
+  else
+    doc.text(
+      drafts.length === snapshot.candidates.length
+        ? "Warning: every candidate was an unverified library draft when signed (no second check against the datasheet)."
+        : `Warning: ${drafts.map((c) => c.partNumber).join(", ")} ${drafts.length === 1 ? "was an unverified library draft" : "were unverified library drafts"} when signed (no second check against the datasheet).`,
+      { width: contentWidth(doc) },
+    );
+  doc.font("regular").fontSize(8.5).fillColor(muted);
+  for (const c of snapshot.candidates)
+    doc.text(
+      `${c.partNumber}: ${c.status === "verified" ? `verified${c.verifiedByName ? ` by ${c.verifiedByName}` : ""}` : "draft, unverified"}`,
+    );
 }
 
 function contentWidth(doc: Doc): number {

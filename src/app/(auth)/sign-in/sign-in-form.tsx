@@ -47,11 +47,6 @@ export function SignInForm({ next }: { next: string | null }) {
         label="Password"
         type="password"
         autoComplete="current-password"
-        labelAside={
-          <Link href="/forgot-password" className={`text-xs ${linkClass}`}>
-            Forgot password?
-          </Link>
-        }
         error={errors.password?.message}
         {...register("password")}
       />
@@ -61,6 +56,12 @@ export function SignInForm({ next }: { next: string | null }) {
           {isSubmitting || leaving ? "Signing in…" : "Sign in"}
         </Button>
       </FormActions>
+      {/* After the button in the page's order: Tab goes e-mail → password → Sign in. */}
+      <p className="text-right">
+        <Link href="/forgot-password" className={`text-sm ${linkClass}`}>
+          Forgot password?
+        </Link>
+      </p>
     </form>
   );
 }

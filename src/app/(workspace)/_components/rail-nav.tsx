@@ -44,17 +44,16 @@ const icons: Record<NavIcon, ReactNode> = {
 
 export function RailNav({
   items,
-  orientation = "vertical",
+  touch = false,
 }: {
   items: NavItem[];
-  /** Horizontal in the phone's top bar, vertical in the rail. */
-  orientation?: "vertical" | "horizontal";
+  /** In the narrow-screen menu: rows a thumb can hit (44 px). */
+  touch?: boolean;
 }) {
   const pathname = usePathname();
-  const horizontal = orientation === "horizontal";
   return (
-    <nav aria-label="Main" className={horizontal ? "min-w-0" : "px-2"}>
-      <ul className={horizontal ? "flex gap-0.5" : "space-y-0.5"}>
+    <nav aria-label="Main" className="px-2">
+      <ul className="space-y-0.5">
         {items.map((item) => {
           const current = pathname === item.href || pathname.startsWith(`${item.href}/`);
           return (
@@ -62,7 +61,7 @@ export function RailNav({
               <Link
                 href={item.href}
                 aria-current={current ? "page" : undefined}
-                className={`flex h-8 items-center gap-2.5 rounded-md px-2.5 text-sm ${horizontal ? "whitespace-nowrap" : ""} ${
+                className={`flex items-center gap-2.5 rounded-md px-2.5 text-sm ${touch ? "h-11" : "h-8"} ${
                   current
                     ? "bg-accent-soft font-medium text-accent-strong"
                     : "text-ink-muted hover:bg-sunken hover:text-ink"

@@ -3,10 +3,10 @@ import type { Role } from "@/db/schema";
 import { type Action, can, roleLabels, roles } from "@/lib/auth/permissions";
 
 /** The permission table read for one role: what it may do, and who does the rest. */
-export function RoleAbilities({ role }: { role: Role }) {
+export function RoleAbilities({ role, leadRights = false }: { role: Role; leadRights?: boolean }) {
   const all = Object.keys(actionDescriptions) as Action[];
-  const allowed = all.filter((action) => can(role, action));
-  const elsewhere = all.filter((action) => !can(role, action));
+  const allowed = all.filter((action) => can(role, action, leadRights));
+  const elsewhere = all.filter((action) => !can(role, action, leadRights));
   return (
     <div className="grid items-start gap-4 md:grid-cols-2">
       <div className="rounded-md border border-line bg-panel">

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { Suspense } from "react";
 import { NewPartLink, PartTable } from "@/components/library/part-table";
 import { TitleBar } from "@/components/library/title-bar";
+import { LoadingBox } from "@/components/loading-box";
 import { requireMember } from "@/lib/auth/page";
 
 export const metadata: Metadata = { title: "Library" };
@@ -16,7 +17,7 @@ export default async function LibraryPage() {
         The workspace&apos;s transistors with their ratings, SOA curve sets and thermal models. A lead marks a
         part verified after checking it against its datasheet; new curves or ratings return it to draft.
       </p>
-      <Suspense fallback={<div className="h-64 animate-pulse rounded-md border border-line bg-panel" />}>
+      <Suspense fallback={<LoadingBox className="h-64">Loading the part library…</LoadingBox>}>
         <PartTable canWrite={canWrite} />
       </Suspense>
     </div>

@@ -40,7 +40,7 @@ export default async function TeamPage() {
         title="Members"
         description={
           mayManage
-            ? "Change a role in its column; a workspace always keeps at least one admin."
+            ? "Change a role in its column (you confirm, and can undo); lead rights let any member, you included, verify parts and sign decisions. A workspace always keeps at least one admin."
             : "Only an admin changes roles or removes members."
         }
       >

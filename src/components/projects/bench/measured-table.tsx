@@ -124,7 +124,6 @@ export function MeasuredTable({
                         onAsk={() => setConfirming(row.id)}
                         onConfirm={() => remove.mutate(row.id)}
                         onKeep={() => setConfirming(null)}
-                        className="opacity-70 group-hover/row:opacity-100 focus-within:opacity-100"
                       />
                     ) : null}
                   </Td>

@@ -115,7 +115,6 @@ export function CandidatesPanel({
                     <Button
                       size="sm"
                       variant="quiet"
-                      className="opacity-70 group-hover/row:opacity-100 focus-visible:opacity-100"
                       pending={remove.isPending && remove.variables?.id === part.id}
                       onClick={() => {
                         setDone(null);

@@ -87,7 +87,7 @@ export function PartPicker({
       <input
         id={id}
         type="search"
-        aria-controls={listId}
+        aria-controls={open ? listId : undefined}
         aria-describedby={`${id}-hint`}
         autoComplete="off"
         placeholder="Search the library: part number, maker, package"

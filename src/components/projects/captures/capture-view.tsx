@@ -4,6 +4,7 @@ import type { ReactNode } from "react";
 import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { Sym } from "@/components/library/symbols";
+import { LoadingBox } from "@/components/loading-box";
 import { Table, Td, Th, Tr } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { explainFlag } from "@/lib/soa/explain";
@@ -53,7 +54,8 @@ export function CaptureView({
   fresh: Record<string, PulseResult | null> | null;
 }) {
   const detail = useCapture(projectId, captureId);
-  if (detail.isPending) return <div className="h-96 animate-pulse rounded-md border border-line bg-panel" />;
+  if (detail.isPending)
+    return <LoadingBox className="h-96">Loading the waveforms of the capture…</LoadingBox>;
   if (detail.isError) {
     return (
       <p role="alert" className="text-sm text-fail">

@@ -3,6 +3,7 @@
 import { scaleLinear } from "d3-scale";
 import { type PointerEvent, useEffect, useRef, useState } from "react";
 import { Button } from "@/components/form";
+import { ScrollRegion } from "@/components/scroll-region";
 import { type Verdict, VerdictGlyph } from "@/components/verdict-shape";
 import { TEMPERATURE_DISPLAY_RANGE } from "@/lib/soa/sanity";
 import { formatQuantity, type Unit } from "@/lib/soa/units";
@@ -383,7 +384,7 @@ function TraceTable({ panels, domain }: { panels: TracePanel[]; domain: [number,
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the traces as a table ({rows.length} steps)
       </summary>
-      <div className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
+      <ScrollRegion className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
         <table className="w-full border-separate border-spacing-0 text-xs" aria-label="Capture traces">
           <thead>
             <tr>
@@ -419,7 +420,7 @@ function TraceTable({ panels, domain }: { panels: TracePanel[]; domain: [number,
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </details>
   );
 }

@@ -120,7 +120,6 @@ export function FaultCaseTable({
                       onAsk={() => setConfirming(row.id)}
                       onConfirm={() => remove.mutate(row.id)}
                       onKeep={() => setConfirming(null)}
-                      className="opacity-70 group-hover/row:opacity-100 focus-within:opacity-100"
                       before={
                         <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
                           Edit

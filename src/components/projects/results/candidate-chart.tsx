@@ -3,6 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
+import { LoadingBox } from "@/components/loading-box";
 import { type ChartPulse, InstabilityNote, SoaChart } from "@/components/soa-chart";
 import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
 import { percent, q, repeatText, shapeWords } from "../format";
@@ -95,7 +96,7 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
           {messageOf(limits.error)}
         </p>
       ) : !data ? (
-        <div className="h-[26rem] animate-pulse rounded-md bg-sunken" />
+        <LoadingBox className="h-[26rem]">Drawing the limit lines…</LoadingBox>
       ) : (
         <SoaChart
           title={candidate.partNumber}

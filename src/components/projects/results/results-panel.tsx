@@ -2,6 +2,7 @@
 
 import { useSearchParams } from "next/navigation";
 import { Caution } from "@/components/caution";
+import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { CandidatesPanel } from "../candidates/candidates-panel";
@@ -36,7 +37,7 @@ export function ResultsPanel(props: PanelProps & { checkError: string | null }) 
             {checkError}
           </p>
         ) : !check ? (
-          <div className="h-48 animate-pulse rounded-md border border-line bg-panel" />
+          <LoadingBox className="h-48">Checking every pulse against every candidate…</LoadingBox>
         ) : (
           <ResultsTable check={check} highlight={highlight} />
         )}

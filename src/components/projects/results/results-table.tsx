@@ -2,6 +2,7 @@
 
 import { Fragment, useEffect, useRef, useState } from "react";
 import { Sym } from "@/components/library/symbols";
+import { ScrollRegion } from "@/components/scroll-region";
 import { VerdictBadge } from "@/components/verdict-shape";
 import type { CheckedPulse, ProjectCheck } from "../api";
 import { q, repeatText, shapeWords } from "../format";
@@ -49,7 +50,7 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
   }
 
   return (
-    <div className="max-h-[min(40rem,75vh)] overflow-auto rounded-md border border-line bg-panel">
+    <ScrollRegion className="max-h-[min(40rem,75vh)] overflow-auto rounded-md border border-line bg-panel">
       <table
         aria-label="Results: every pulse against every candidate"
         className="w-full border-separate border-spacing-0 text-sm"
@@ -201,6 +202,6 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

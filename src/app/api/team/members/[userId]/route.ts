@@ -24,12 +24,17 @@ async function assertStillManager(tx: Parameters<typeof lockWorkspace>[0], calle
   }
 }
 
-/** PATCH /api/team/members/:userId: changes a member's role; the last admin keeps theirs. */
+/**
+ * PATCH /api/team/members/:userId: changes a member's role and/or lead rights (an admin may grant lead rights
+ * to any member, themself included); the last admin keeps theirs. Answers the previous values, for undo.
+ */
 export const PATCH = route<{ userId: string }>(
   { action: "member.manage" },
   async (req, caller, { userId }) => {
-    await loadMember(caller, userId);
-    const { role } = await parseBody(req, changeRoleSchema);
+    const member = await loadMember(caller, userId);
+    const body = await parseBody(req, changeRoleSchema);
+    const role = body.role ?? member.role;
+    const leadRights = body.leadRights ?? member.leadRights;
     await db.transaction(async (tx) => {
       // The last-admin rule is checked under the workspace lock, so two admins demoting each other cannot both win.
       await lockWorkspace(tx, caller.workspaceId);
@@ -44,7 +49,7 @@ export const PATCH = route<{ userId: string }>(
       await assertStillManager(tx, caller);
       await tx
         .update(memberships)
-        .set({ role })
+        .set({ role, leadRights })
         .where(and(eq(memberships.workspaceId, caller.workspaceId), eq(memberships.userId, userId)));
       await recordAudit(
         {
@@ -53,12 +58,22 @@ export const PATCH = route<{ userId: string }>(
           action: "membership.role-changed",
           subjectType: "user",
           subjectId: userId,
-          details: { from: current, to: role },
+          details: {
+            from: current,
+            to: role,
+            leadRightsFrom: member.leadRights,
+            leadRightsTo: leadRights,
+          },
         },
         tx,
       );
     });
-    return json({ status: "ok", role });
+    return json({
+      status: "ok",
+      role,
+      leadRights,
+      previous: { role: member.role, leadRights: member.leadRights },
+    });
   },
 );
 

@@ -9,6 +9,7 @@ import { percent, q } from "@/components/decisions/format";
 import { FrozenCandidates } from "@/components/decisions/frozen-candidates";
 import { FrozenMatrix } from "@/components/decisions/frozen-matrix";
 import { TitleBar } from "@/components/library/title-bar";
+import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
 import type { Project } from "@/db/schema";
@@ -36,6 +37,7 @@ export default async function DecisionPage({
   const chosen = snapshot.ranking.find((r) => r.partId === decision.chosenPartId);
   const chosenPart = snapshot.candidates.find((c) => c.partId === decision.chosenPartId);
   const base = `/projects/${project.id}`;
+  const drafts = snapshot.candidates.filter((c) => c.status !== "verified");
 
   return (
     <div className="space-y-8">
@@ -61,6 +63,9 @@ export default async function DecisionPage({
             <Link href={`${base}/compare`} className={button}>
               Compare now
             </Link>
+            <a href={`/api/projects/${project.id}/decisions/${decision.id}/csv`} download className={button}>
+              Download CSV (frozen)
+            </a>
             <a
               href={`/api/projects/${project.id}/decisions/${decision.id}/report`}
               download
@@ -88,6 +93,18 @@ export default async function DecisionPage({
           The standing decision for this project.
         </p>
       )}
+
+      {drafts.length > 0 ? (
+        <p
+          data-testid="unverified-warning"
+          className="rounded-md border border-line border-l-2 border-l-marginal bg-panel px-3 py-2 text-sm"
+        >
+          {drafts.length === snapshot.candidates.length
+            ? "Every candidate was an unverified library draft when this was signed"
+            : `${drafts.map((c) => c.partNumber).join(", ")} ${drafts.length === 1 ? "was an unverified library draft" : "were unverified library drafts"} when this was signed`}
+          : {drafts.length === 1 ? "its" : "their"} curves had no second check against the datasheet.
+        </p>
+      ) : null}
 
       <StatBlocks
         items={[
@@ -142,11 +159,7 @@ export default async function DecisionPage({
       >
         <Suspense
           fallback={
-            <div
-              role="status"
-              aria-label="Checking the project again"
-              className="h-16 animate-pulse rounded-md border border-line bg-panel"
-            />
+            <LoadingBox className="h-16">Checking the project again to compare with the record…</LoadingBox>
           }
         >
           <Drift project={project} frozen={snapshot} />

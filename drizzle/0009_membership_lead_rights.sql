@@ -1,0 +1,1 @@
+ALTER TABLE "memberships" ADD COLUMN "lead_rights" boolean DEFAULT false NOT NULL;

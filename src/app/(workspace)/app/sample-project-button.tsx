@@ -1,0 +1,29 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useTransition } from "react";
+import { messageOf, sendJson } from "@/components/api-client";
+import { Button } from "@/components/form";
+
+/** Adds the invented sample project in one click and opens it. */
+export function SampleProjectButton({ variant = "primary" }: { variant?: "primary" | "secondary" }) {
+  const router = useRouter();
+  const [navigating, startTransition] = useTransition();
+  const add = useMutation({
+    mutationFn: () => sendJson<{ project: { id: string } }>("POST", "/api/projects/sample"),
+    onSuccess: ({ project }) => startTransition(() => router.push(`/projects/${project.id}`)),
+  });
+  return (
+    <span className="inline-flex flex-col items-start gap-1">
+      <Button variant={variant} pending={add.isPending || navigating} onClick={() => add.mutate()}>
+        {add.isPending ? "Adding the sample…" : "Add a sample project"}
+      </Button>
+      {add.isError ? (
+        <span role="alert" className="text-xs text-fail">
+          {messageOf(add.error)}
+        </span>
+      ) : null}
+    </span>
+  );
+}
