@@ -14,6 +14,24 @@ import { WorkspaceSwitcher } from "./_components/workspace-switcher";
  * phone or tablet the rail gives way to a bar across the top with a menu (navigation, workspace, account), so that
  * the page keeps the whole width. A skip link leads past the navigation to the page.
  */
+/** The workspace switcher, the account link and sign-out: at the rail's foot and in the narrow screens' menu. */
+function AccountFooter({ member }: { member: Awaited<ReturnType<typeof requireMember>> }) {
+  return (
+    <>
+      <WorkspaceSwitcher current={member.workspace.id} workspaces={member.workspaces} />
+      <div className="flex items-center justify-between gap-2 border-t border-line px-1 pt-3">
+        <Link href="/account" className="group min-w-0" title="Your account">
+          <span className="block truncate text-sm font-medium group-hover:text-accent">
+            {member.user.name}
+          </span>
+          <span className="block truncate text-xs text-ink-faint">{member.user.email}</span>
+        </Link>
+        <SignOutButton variant="quiet" size="sm" />
+      </div>
+    </>
+  );
+}
+
 export default async function WorkspaceLayout({ children }: { children: ReactNode }) {
   const member = await requireMember();
   return (
@@ -35,16 +53,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
               <RailNav items={navItemsFor(member.can)} touch />
             </div>
             <div className="mt-3 space-y-3 border-t border-line px-3 pt-3">
-              <WorkspaceSwitcher current={member.workspace.id} workspaces={member.workspaces} />
-              <div className="flex items-center justify-between gap-2 border-t border-line px-1 pt-3">
-                <Link href="/account" className="group min-w-0" title="Your account">
-                  <span className="block truncate text-sm font-medium group-hover:text-accent">
-                    {member.user.name}
-                  </span>
-                  <span className="block truncate text-xs text-ink-faint">{member.user.email}</span>
-                </Link>
-                <SignOutButton variant="quiet" size="sm" />
-              </div>
+              <AccountFooter member={member} />
             </div>
           </TopBarMenu>
         </header>
@@ -57,16 +66,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
             </div>
             <RailNav items={navItemsFor(member.can)} />
             <div className="mt-auto space-y-3 border-t border-line px-3 py-3">
-              <WorkspaceSwitcher current={member.workspace.id} workspaces={member.workspaces} />
-              <div className="flex items-center justify-between gap-2 border-t border-line px-1 pt-3">
-                <Link href="/account" className="group min-w-0" title="Your account">
-                  <span className="block truncate text-sm font-medium group-hover:text-accent">
-                    {member.user.name}
-                  </span>
-                  <span className="block truncate text-xs text-ink-faint">{member.user.email}</span>
-                </Link>
-                <SignOutButton variant="quiet" size="sm" />
-              </div>
+              <AccountFooter member={member} />
             </div>
           </aside>
         </div>
