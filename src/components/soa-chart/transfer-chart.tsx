@@ -61,6 +61,8 @@ export function TransferChart({
       <svg
         width={width}
         height={height}
+        viewBox={`0 0 ${width} ${height}`}
+        className="h-auto max-w-full"
         role="img"
         aria-label="Transfer characteristics: I_D against V_GS at two junction temperatures"
         data-testid="transfer-chart"

@@ -65,6 +65,8 @@ export function ZthChart({
     <svg
       width={width}
       height={height}
+      viewBox={`0 0 ${width} ${height}`}
+      className="h-auto max-w-full"
       role="img"
       aria-label="Thermal impedance Z_th against time, log-log"
       data-testid="zth-chart"
