@@ -221,12 +221,7 @@ function Frame({
         <g data-layer="pulses">
           {markers.map((m) => {
             const at = placePulse(m, domains);
-            const value = [
-              at.off.v ? formatQuantity(m.v, "V") : null,
-              at.off.i ? formatQuantity(m.i, "A") : null,
-            ]
-              .filter(Boolean)
-              .join(", ");
+            const value = at.offScale;
             return (
               <g
                 key={m.id}

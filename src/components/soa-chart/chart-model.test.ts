@@ -41,8 +41,23 @@ describe("chartDomains", () => {
 describe("placePulse", () => {
   it("holds an off-scale pulse at the edge and says on which axis", () => {
     const domains = { x: [0.1, 100] as [number, number], y: [10, 1000] as [number, number] };
-    expect(placePulse({ v: 1e9, i: 2500 }, domains)).toEqual({ v: 100, i: 1000, off: { v: true, i: true } });
-    expect(placePulse({ v: 48, i: 12 }, domains)).toEqual({ v: 48, i: 12, off: { v: false, i: false } });
-    expect(placePulse({ v: 48, i: 1 }, domains)).toEqual({ v: 48, i: 10, off: { v: false, i: true } });
+    expect(placePulse({ v: 1e9, i: 2500 }, domains)).toEqual({
+      v: 100,
+      i: 1000,
+      off: { v: true, i: true },
+      offScale: "1\u2009GV, 2.5\u2009kA",
+    });
+    expect(placePulse({ v: 48, i: 12 }, domains)).toEqual({
+      v: 48,
+      i: 12,
+      off: { v: false, i: false },
+      offScale: "",
+    });
+    expect(placePulse({ v: 48, i: 1 }, domains)).toEqual({
+      v: 48,
+      i: 10,
+      off: { v: false, i: true },
+      offScale: "1\u2009A",
+    });
   });
 });

@@ -155,16 +155,23 @@ export function chartDomains(props: {
   };
 }
 
-/** Where a pulse is drawn: at its V and I, or held at the edge of the axes it lies beyond (`off` says which). */
+/**
+ * Where a pulse is drawn: at its V and I, or held at the edge of the axes it lies beyond (`off` says which, and
+ * `offScale` gives the values beyond them in words, "" when the pulse is on scale).
+ */
 export function placePulse(
   pulse: { v: number; i: number },
   domains: { x: [number, number]; y: [number, number] },
-): { v: number; i: number; off: { v: boolean; i: boolean } } {
+): { v: number; i: number; off: { v: boolean; i: boolean }; offScale: string } {
   const clamp = (value: number, [lo, hi]: [number, number]) =>
     Number.isFinite(value) && value > 0 ? Math.min(hi, Math.max(lo, value)) : lo;
   const v = clamp(pulse.v, domains.x);
   const i = clamp(pulse.i, domains.y);
-  return { v, i, off: { v: v !== pulse.v, i: i !== pulse.i } };
+  const off = { v: v !== pulse.v, i: i !== pulse.i };
+  const offScale = [off.v ? formatQuantity(pulse.v, "V") : null, off.i ? formatQuantity(pulse.i, "A") : null]
+    .filter(Boolean)
+    .join(", ");
+  return { v, i, off, offScale };
 }
 
 export interface ChartLayout {

@@ -269,12 +269,7 @@ function ChartFrame(props: SoaChartProps & { available: number }) {
             const off = at.off.v || at.off.i;
             const px = x(at.v);
             const py = y(at.i);
-            const value = [
-              at.off.v ? formatQuantity(pulse.v, "V") : null,
-              at.off.i ? formatQuantity(pulse.i, "A") : null,
-            ]
-              .filter(Boolean)
-              .join(", ");
+            const value = at.offScale;
             return (
               <g
                 key={pulse.id}
