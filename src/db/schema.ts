@@ -1,6 +1,7 @@
 import { relations, sql } from "drizzle-orm";
 import {
   boolean,
+  check,
   doublePrecision,
   index,
   integer,
@@ -288,6 +289,8 @@ export const pendingUploads = pgTable("pending_uploads", {
 // Projects ----------------------------------------------------------------------------------------------------
 
 export const pulseKindEnum = pgEnum("pulse_kind", ["rect", "triangle"]);
+/** A fault case's shape: a measured pulse's, or an unclamped turn-off (METHODS.md §13), or a fault sequence. */
+export const faultCaseKindEnum = pgEnum("fault_case_kind", ["rect", "triangle", "avalanche", "waveform"]);
 export const betweenCurvesEnum = pgEnum("between_curves", ["loglog", "next-longer", "thermal"]);
 /** What came before a capture's record (METHODS.md §6); null: the engine decides from the data. */
 export const recordStartEnum = pgEnum("record_start", ["rest", "steady"]);
@@ -339,9 +342,18 @@ export interface PulseOrigin {
   figures: Record<string, unknown>;
 }
 
+/** A fault sequence's samples, built from its pieces (a waveform pulse, METHODS.md §6): time (s), V and A. */
+export interface FaultCaseSamples {
+  t: number[];
+  v: number[];
+  i: number[];
+}
+
 /**
- * A pulse the design must survive, from a calculation. Rectangle or triangle (falling), SI units; optional
- * repetition (period, count; no count = continuous) and case-temperature override.
+ * A pulse the design must survive, from a calculation, SI units. Rectangle or triangle (falling): V, I (peak) and
+ * duration, optional repetition (period, count; no count = continuous). Avalanche (an unclamped turn-off,
+ * METHODS.md §13): V is the supply, I the current cut, and the inductance; no duration. Waveform (a fault
+ * sequence): the samples, with V and I of the peak-power sample for display; no duration. Optional case temperature.
  */
 export const faultCases = pgTable(
   "fault_cases",
@@ -351,10 +363,12 @@ export const faultCases = pgTable(
       .notNull()
       .references(() => projects.id, { onDelete: "cascade" }),
     name: text().notNull(),
-    kind: pulseKindEnum().notNull(),
+    kind: faultCaseKindEnum().notNull(),
     v: doublePrecision().notNull(),
     i: doublePrecision().notNull(),
-    duration: doublePrecision().notNull(),
+    duration: doublePrecision(),
+    inductance: doublePrecision(),
+    samples: jsonb().$type<FaultCaseSamples>(),
     repeatPeriod: doublePrecision(),
     repeatCount: integer(),
     caseTemp: doublePrecision(),
@@ -364,7 +378,15 @@ export const faultCases = pgTable(
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index().on(t.projectId)],
+  (t) => [
+    index().on(t.projectId),
+    check(
+      "fault_cases_shape",
+      sql`(${t.kind} in ('rect', 'triangle') and ${t.duration} is not null and ${t.inductance} is null and ${t.samples} is null)
+        or (${t.kind} = 'avalanche' and ${t.inductance} is not null and ${t.duration} is null and ${t.samples} is null and ${t.repeatPeriod} is null)
+        or (${t.kind} = 'waveform' and ${t.samples} is not null and ${t.duration} is null and ${t.inductance} is null and ${t.repeatPeriod} is null)`,
+    ),
+  ],
 );
 
 /** A pulse the bench measured, logged by a technician (or anyone allowed to), with its bench setup. */

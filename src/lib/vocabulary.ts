@@ -53,7 +53,8 @@ export const BUILDER_NAMES = {
   inrush: "Inrush",
   "current-limit": "Short in current limit",
   "trip-window": "Trip window",
-  clamp: "Clamp turn-off",
+  clamp: "Turn-off",
+  sequence: "Fault sequence",
 } as const;
 
 /**

@@ -17,6 +17,9 @@ export interface ProjectRecord {
   tjGuard: number;
   voltageLimit: number;
   betweenCurves: BetweenCurves;
+  /** Case-to-ambient Foster network (METHODS.md §14) and whether checks heat the case through it. */
+  caseNetwork?: { r: number; tau: number }[] | null;
+  applyCaseNetwork?: boolean;
   ownerId: string | null;
   archivedAt: string | null;
   createdAt: string;
@@ -29,6 +32,9 @@ export interface CandidatePart {
   maker: string;
   package: string;
   vdsMax: number;
+  tjMax: number;
+  /** Avalanche breakdown voltage V_BR, when the part gives it. */
+  avalancheBreakdown: number | null;
   status: "draft" | "verified";
   foster: unknown[] | null;
   unitCost: number | null;
@@ -39,10 +45,16 @@ export interface CandidatePart {
 export interface FaultCaseRecord {
   id: string;
   name: string;
-  kind: "rect" | "triangle";
+  /** A rectangle or triangle; an unclamped turn-off (V the supply, I the current cut); a fault sequence. */
+  kind: "rect" | "triangle" | "avalanche" | "waveform";
   v: number;
   i: number;
-  duration: number;
+  /** Null for an unclamped turn-off and a fault sequence. */
+  duration: number | null;
+  /** An unclamped turn-off's loop inductance, H. */
+  inductance: number | null;
+  /** A fault sequence's samples (SI). */
+  samples: { t: number[]; v: number[]; i: number[] } | null;
   repeatPeriod: number | null;
   repeatCount: number | null;
   caseTemp: number | null;
@@ -85,7 +97,7 @@ export interface CheckedPulse {
   v: number | null;
   i: number | null;
   duration: number | null;
-  kind: "rect" | "triangle" | "waveform";
+  kind: "rect" | "triangle" | "waveform" | "avalanche";
   repeat?: Repeat;
 }
 

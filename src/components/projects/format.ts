@@ -25,6 +25,12 @@ export const shapeWords = {
   avalanche: "unclamped turn-off (avalanche)",
 } as const;
 
+/** A checked pulse's shape in words: a fault case's waveform is a fault sequence, a capture's a recorded waveform. */
+export function pulseShape(pulse: { kind: keyof typeof shapeWords; source: string }): string {
+  if (pulse.kind !== "waveform") return shapeWords[pulse.kind];
+  return pulse.source === "fault-case" ? "fault sequence" : "recorded waveform";
+}
+
 export const sourceWords = { "fault-case": "fault case", measured: "measured", capture: "capture" } as const;
 
 /** A repetition in words: "every 100 ms, 10 pulses", "every 1 s, continuous"; null for a single pulse. */

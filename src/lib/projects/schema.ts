@@ -57,27 +57,33 @@ const repeatSchema = z
     return { period, ...(r.count !== undefined ? { count: r.count } : {}) };
   });
 
+const caseName = z.string().trim().min(1, { message: "Name the fault case" }).max(120);
+const caseTemp = z.preprocess(
+  (v) => (v === "" ? null : v),
+  quantity("°C", { positive: false }).nullable().optional(),
+);
+const caseNotes = z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(2000).optional());
+const caseOrigin = z
+  .object({
+    builder: z.string().max(40),
+    input: z.record(z.string(), z.unknown()),
+    figures: z.record(z.string(), z.unknown()),
+  })
+  .nullable()
+  .optional();
+
+/** A rectangle or falling triangle: typed in the fault-case form, or from a pulse builder. */
 export const faultCaseSchema = z
   .object({
-    name: z.string().trim().min(1, { message: "Name the fault case" }).max(120),
+    name: caseName,
     kind: z.enum(["rect", "triangle"]),
     v: quantity("V"),
     i: quantity("A"),
     duration: quantity("s"),
     repeat: repeatSchema.nullable().optional(),
-    caseTemp: z.preprocess(
-      (v) => (v === "" ? null : v),
-      quantity("°C", { positive: false }).nullable().optional(),
-    ),
-    notes: z.preprocess((v) => (v === "" ? undefined : v), z.string().trim().max(2000).optional()),
-    origin: z
-      .object({
-        builder: z.string().max(40),
-        input: z.record(z.string(), z.unknown()),
-        figures: z.record(z.string(), z.unknown()),
-      })
-      .nullable()
-      .optional(),
+    caseTemp,
+    notes: caseNotes,
+    origin: caseOrigin,
   })
   .refine((c) => !c.repeat || c.repeat.period > c.duration, {
     path: ["repeat", "period"],
@@ -88,5 +94,64 @@ export const faultCaseSchema = z
       return typeof value.duration === "number" && typeof value.repeat?.period === "number";
     },
   });
+
+/** An unclamped turn-off (METHODS.md §13): the current cut, the loop inductance and the supply. */
+export const avalancheCaseSchema = z.object({
+  name: caseName,
+  kind: z.literal("avalanche"),
+  supply: quantity("V"),
+  current: quantity("A"),
+  inductance: quantity("H"),
+  caseTemp,
+  notes: caseNotes,
+  origin: caseOrigin,
+});
+
+/** The most samples a fault sequence may hold: 100 restarts of the builder's pieces fit well within it. */
+export const SEQUENCE_MAX_SAMPLES = 5000;
+const sampleValue = z.number().refine(Number.isFinite, { message: "Must be a finite number" });
+const sampleArray = z.array(sampleValue).min(2).max(SEQUENCE_MAX_SAMPLES);
+
+/** A fault sequence built as one waveform (hold, turn-off, pause, restart): its samples in SI units. */
+export const sequenceCaseSchema = z.object({
+  name: caseName,
+  kind: z.literal("waveform"),
+  samples: z.object({ t: sampleArray, v: sampleArray, i: sampleArray }).superRefine((s, ctx) => {
+    for (const key of ["v", "i"] as const) {
+      if (s[key].length !== s.t.length) {
+        ctx.addIssue({
+          code: "custom",
+          path: [key],
+          message: `Has ${s[key].length} samples but t has ${s.t.length}`,
+        });
+        return;
+      }
+    }
+    for (let n = 1; n < s.t.length; n++) {
+      if (!(s.t[n] > s.t[n - 1])) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["t", n],
+          message: `Time must increase strictly at sample ${n}`,
+        });
+        return;
+      }
+    }
+    const negative = s.v.findIndex((v) => v < 0);
+    if (negative >= 0) {
+      ctx.addIssue({ code: "custom", path: ["v", negative], message: "A sequence's voltage is 0 V or more" });
+    }
+  }),
+  caseTemp,
+  notes: caseNotes,
+  origin: caseOrigin,
+});
+
+/** Any fault case the routes accept, told apart by its kind. */
+export const anyFaultCaseSchema = z.discriminatedUnion("kind", [
+  faultCaseSchema,
+  avalancheCaseSchema,
+  sequenceCaseSchema,
+]);
 
 export type FaultCaseInput = z.input<typeof faultCaseSchema>;

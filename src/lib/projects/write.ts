@@ -7,7 +7,7 @@ import { getMembership } from "@/db/queries/members";
 import { projects } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
-import type { faultCaseSchema, projectSchema } from "./schema";
+import type { anyFaultCaseSchema, projectSchema } from "./schema";
 
 type ProjectValues = z.output<typeof projectSchema>;
 
@@ -73,20 +73,47 @@ export async function updateProject(caller: MemberCaller, projectId: string, val
   });
 }
 
-type FaultCaseValues = z.output<typeof faultCaseSchema>;
+type FaultCaseValues = z.output<typeof anyFaultCaseSchema>;
 
-/** Database columns of a fault case from the form's values. */
+/** The peak-power sample of a sequence: the (V, I) shown for it. */
+function peakSample(samples: { v: number[]; i: number[] }): { v: number; i: number } {
+  let best = 0;
+  for (let n = 1; n < samples.v.length; n++) {
+    if (samples.v[n] * samples.i[n] > samples.v[best] * samples.i[best]) best = n;
+  }
+  return { v: samples.v[best], i: samples.i[best] };
+}
+
+/** Database columns of a fault case from the form's or a builder's values (see the table's shape rule). */
 export function faultCaseColumns(values: FaultCaseValues) {
-  return {
+  const common = {
     name: values.name,
+    caseTemp: values.caseTemp ?? null,
+    notes: values.notes ?? null,
+    origin: values.origin ?? null,
+  };
+  const none = { duration: null, inductance: null, samples: null, repeatPeriod: null, repeatCount: null };
+  if (values.kind === "avalanche") {
+    return {
+      ...common,
+      ...none,
+      kind: values.kind,
+      v: values.supply,
+      i: values.current,
+      inductance: values.inductance,
+    };
+  }
+  if (values.kind === "waveform") {
+    return { ...common, ...none, kind: values.kind, ...peakSample(values.samples), samples: values.samples };
+  }
+  return {
+    ...common,
+    ...none,
     kind: values.kind,
     v: values.v,
     i: values.i,
     duration: values.duration,
     repeatPeriod: values.repeat?.period ?? null,
     repeatCount: values.repeat?.count ?? null,
-    caseTemp: values.caseTemp ?? null,
-    notes: values.notes ?? null,
-    origin: values.origin ?? null,
   };
 }

@@ -274,3 +274,42 @@ export function clampTurnOff(input: ClampInput): BuilderResult<ClampFigures> {
     figures: { peakCurrent, clampTime, peakPower: clampVoltage * peakCurrent, energy },
   };
 }
+
+export interface UnclampedInput {
+  id?: string;
+  /** Loop inductance L in H. */
+  inductance: number;
+  /** Current at the trip decision, I_trip,max in A. */
+  tripCurrent: number;
+  /** Supply V_DD in V (the bus the inductor discharges against). */
+  busVoltage: number;
+  /** Delay from trip to turn-off in s (default 0). */
+  delay?: number;
+}
+
+export interface UnclampedFigures {
+  /** I_pk = I_trip,max + (V_bus/L)·t_delay in A. */
+  peakCurrent: number;
+  /** ½·L·I_pk² in J: the inductor's energy; the transistor takes more, by V_BR/(V_BR − V_DD) (METHODS.md §13). */
+  inductorEnergy: number;
+}
+
+/**
+ * A short turned off with no clamp below breakdown: the current keeps rising for the delay, then the drain rises to
+ * each candidate's V_BR and the inductor dumps its energy in the transistor. The pulse is METHODS.md §13's
+ * `avalanche` pulse; time in avalanche and energy depend on each candidate's V_BR, so the check works them out.
+ */
+export function unclampedTurnOff(input: UnclampedInput): BuilderResult<UnclampedFigures> {
+  const { inductance: l, tripCurrent, busVoltage, delay = 0, id = "unclamped-turn-off" } = input;
+  const invalid = firstInvalid({ inductance: l, tripCurrent, busVoltage });
+  if (invalid !== null) return { ok: false, reason: invalid };
+  if (!(Number.isFinite(delay) && delay >= 0)) {
+    return { ok: false, reason: `delay must be 0 s or more, got ${delay}` };
+  }
+  const peakCurrent = tripCurrent + (busVoltage / l) * delay;
+  return {
+    ok: true,
+    pulses: [{ id, kind: "avalanche", inductance: l, current: peakCurrent, supply: busVoltage }],
+    figures: { peakCurrent, inductorEnergy: (l * peakCurrent * peakCurrent) / 2 },
+  };
+}

@@ -737,6 +737,25 @@ describe("stability, avalanche and case heating", () => {
     expect(hot.tjPeak).toBeCloseTo(100 + trianglePeakRise(twoTerms, 2000, (10e-6 * 20) / 52), 9);
   });
 
+  // Our choice (the contract refuses such a request; a project may still pair the case with a candidate): a supply at
+  // or above V_BR cannot be blocked, so t_av = L·I/(V_BR − V_DD) has no meaning and the pulse fails outright.
+  it("fails a turn-off whose supply is at or above the breakdown voltage, never a negative energy", () => {
+    const part: PartLimits = {
+      ...utilisationPart,
+      avalanche: { energy: 0.05, breakdown: 100 },
+      foster: twoTerms,
+    };
+    for (const supply of [100, 120]) {
+      const result = one(part, { kind: "avalanche", inductance: 10e-6, current: 20, supply }, 25);
+      expect(result).toMatchObject({
+        verdict: "fail",
+        curveVerdict: "fail",
+        tjPeak: null,
+        flags: ["over-voltage", "avalanche"],
+      });
+    }
+  });
+
   // METHODS.md §14 (derived by hand): 20 V × 12 A for 2 ms heats a one-term case path R = 0.05 K/W, τ = 1 ms by
   // 240·0.05·(1 − e^(−2)) K; the curves are derated at the heated case and Tj adds the case rise.
   it("derates at the heated case and adds the case rise to Tj with a case network", () => {

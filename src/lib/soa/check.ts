@@ -320,13 +320,20 @@ function avalanche(
   const { part } = ctx;
   const rating = part.avalanche;
   const breakdown = rating?.breakdown ?? part.vdsMax;
-  const event = avalancheEvent(pulse.inductance, pulse.current, pulse.supply, breakdown);
   const derating = avalancheDerating(part.tjMax, ctx.caseTemp);
   let flags = FLAG_BIT.avalanche;
+  // The contract refuses a supply at or above breakdown (schema.ts); a project can still pair such a fault case with
+  // a candidate. The transistor then cannot block the supply at all: a hard fail, never a negative energy.
+  const blocked = pulse.supply < breakdown;
+  if (!blocked) flags |= FLAG_BIT["over-voltage"];
+  const event = blocked
+    ? avalancheEvent(pulse.inductance, pulse.current, pulse.supply, breakdown)
+    : { energy: Number.POSITIVE_INFINITY, peakPower: Number.NaN, time: Number.NaN };
   if (part.idPulseMax !== undefined && pulse.current > part.idPulseMax) flags |= FLAG_BIT["over-current"];
   if (rating?.current !== undefined && pulse.current > rating.current)
     flags |= FLAG_BIT["over-avalanche-current"];
-  const rise = ctx.junction === null ? null : trianglePeakRise(ctx.junction, event.peakPower, event.time);
+  const rise =
+    ctx.junction === null || !blocked ? null : trianglePeakRise(ctx.junction, event.peakPower, event.time);
   return {
     allowed: null,
     current: 0,
@@ -364,7 +371,10 @@ export function checkPulse(ctx: CheckContext, pulse: Pulse): PulseResult {
       current: event.energy,
       allowed: event.allowedEnergy,
       utilisationLimit: ctx.policy.utilisationLimit,
-      hardFail: (event.flags & (FLAG_BIT["over-current"] | FLAG_BIT["over-avalanche-current"])) !== 0,
+      hardFail:
+        (event.flags &
+          (FLAG_BIT["over-current"] | FLAG_BIT["over-avalanche-current"] | FLAG_BIT["over-voltage"])) !==
+        0,
     });
   } else {
     outcome = pulse.kind === "waveform" ? capture(ctx, pulse) : shapedPulse(ctx, pulse);

@@ -17,6 +17,7 @@ export * from "./repetition";
 export * from "./revision";
 export * from "./sanity";
 export * from "./schema";
+export * from "./sequence";
 export * from "./thermal-impedance";
 export * from "./thermal-rect";
 export * from "./thermal-triangle";

@@ -6,16 +6,17 @@ import type { Repeat } from "@/lib/soa/types";
 import { q, repeatText, shapeWords } from "../format";
 import { FigureList } from "./figures";
 
+/** The pulse a builder makes: a rectangle or triangle, an unclamped turn-off, or a fault sequence's samples. */
+export type BuiltPulse =
+  | { kind: "rect" | "triangle"; v: number; i: number; duration: number; repeat: Repeat | null }
+  | { kind: "avalanche"; supply: number; current: number; inductance: number }
+  | { kind: "waveform"; samples: { t: number[]; v: number[]; i: number[] } };
+
 /** A fault case as a builder makes it, with where it came from. */
-export interface BuiltCase {
+export type BuiltCase = BuiltPulse & {
   name: string;
-  kind: "rect" | "triangle";
-  v: number;
-  i: number;
-  duration: number;
-  repeat: Repeat | null;
   origin: { builder: string; input: object; figures: object };
-}
+};
 
 export interface BuilderProps {
   /** Saves the built case as a fault case of the project; throws an ApiError when the server refuses it. */
@@ -24,7 +25,7 @@ export interface BuilderProps {
 
 /** What a builder's `build` gives: the pulse to save and where it came from, or why there is none. */
 export type BuildResult =
-  | { ok: true; pulse: Omit<BuiltCase, "name" | "origin">; origin: { input: object; figures: object } }
+  | { ok: true; pulse: BuiltPulse; origin: { input: object; figures: object } }
   | { ok: false; reason: string };
 
 /**
@@ -50,7 +51,30 @@ export async function saveBuilt<T extends FieldValues & { name: string }>(
 }
 
 /** The pulse a builder will save, in words and figures. */
-export function PulseSummary({ pulse }: { pulse: Omit<BuiltCase, "name" | "origin"> }) {
+export function PulseSummary({ pulse }: { pulse: BuiltPulse }) {
+  if (pulse.kind === "avalanche") {
+    return (
+      <p className="text-sm" data-testid="built-pulse">
+        <span className="font-medium">{shapeWords.avalanche}</span>{" "}
+        <span className="num">
+          {q(pulse.current, "A")} cut through {q(pulse.inductance, "H")} from {q(pulse.supply, "V")}
+        </span>
+        ; each candidate is checked at its own breakdown voltage against its avalanche energy rating
+      </p>
+    );
+  }
+  if (pulse.kind === "waveform") {
+    const { t } = pulse.samples;
+    return (
+      <p className="text-sm" data-testid="built-pulse">
+        <span className="font-medium">fault sequence</span>{" "}
+        <span className="num">
+          {t.length} samples over {q(t[t.length - 1] - t[0], "s")}
+        </span>
+        , checked as one pulse
+      </p>
+    );
+  }
   return (
     <p className="text-sm" data-testid="built-pulse">
       <span className="font-medium">{shapeWords[pulse.kind]}</span>{" "}
@@ -74,6 +98,7 @@ export function BuilderLayout({
   figures,
   reason,
   result,
+  below,
   footer,
   error,
   pending,
@@ -86,6 +111,8 @@ export function BuilderLayout({
   figures: object | null;
   reason: string | null;
   result: ReactNode;
+  /** Drawn across the builder's width under its fields and figures (a chart, say). */
+  below?: ReactNode;
   footer?: ReactNode;
   error?: string;
   pending: boolean;
@@ -117,6 +144,7 @@ export function BuilderLayout({
           {result ? <div className="mt-3 border-t border-line pt-3">{result}</div> : null}
         </aside>
       </div>
+      {below}
       <FormMessage tone="error">{error}</FormMessage>
       {footer || action ? (
         <div className="mt-4 flex flex-wrap items-end justify-between gap-3 border-t border-line pt-4">

@@ -4,26 +4,26 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { sendJson } from "@/components/api-client";
 import { FormMessage } from "@/components/form";
-import { invalidateProject } from "../api";
+import { BUILDER_NAMES } from "@/lib/vocabulary";
+import { invalidateProject, type ProjectDetail } from "../api";
 import type { BuiltCase } from "./builder-layout";
 import { ClampBuilder } from "./clamp-builder";
 import { CurrentLimitBuilder } from "./current-limit-builder";
 import { InrushBuilder } from "./inrush-builder";
+import { SequenceBuilder } from "./sequence-builder";
 import { TripWindowBuilder } from "./trip-window-builder";
 
-const builders = [
-  { key: "inrush", label: "Inrush" },
-  { key: "current-limit", label: "Short in current limit" },
-  { key: "trip-window", label: "Trip window" },
-  { key: "clamp", label: "Clamp turn-off" },
-] as const;
-type BuilderKey = (typeof builders)[number]["key"];
+const builders = (Object.keys(BUILDER_NAMES) as (keyof typeof BUILDER_NAMES)[]).map((key) => ({
+  key,
+  label: BUILDER_NAMES[key],
+}));
+type BuilderKey = keyof typeof BUILDER_NAMES;
 
 /**
  * The pulse builders: fault cases derived from the circuit by the engine's formulas (METHODS.md §11), each showing
  * its intermediate figures as it is filled in. The trip window hands its maximum to the builders that need it.
  */
-export function BuilderPanel({ projectId }: { projectId: string }) {
+export function BuilderPanel({ projectId, detail }: { projectId: string; detail: ProjectDetail }) {
   const queryClient = useQueryClient();
   const [current, setCurrent] = useState<BuilderKey>("inrush");
   const [carried, setCarried] = useState<{ target: BuilderKey; amps: string; stamp: number } | null>(null);
@@ -31,15 +31,7 @@ export function BuilderPanel({ projectId }: { projectId: string }) {
 
   async function create(built: BuiltCase) {
     setCreated(null);
-    await sendJson("POST", `/api/projects/${projectId}/fault-cases`, {
-      name: built.name,
-      kind: built.kind,
-      v: built.v,
-      i: built.i,
-      duration: built.duration,
-      repeat: built.repeat,
-      origin: built.origin,
-    });
+    await sendJson("POST", `/api/projects/${projectId}/fault-cases`, built);
     await invalidateProject(queryClient, projectId);
     setCreated(built.name);
   }
@@ -91,6 +83,7 @@ export function BuilderPanel({ projectId }: { projectId: string }) {
           tripCurrent={carried?.target === "clamp" ? carried.amps : undefined}
         />
       ) : null}
+      {current === "sequence" ? <SequenceBuilder create={create} detail={detail} /> : null}
       {created ? (
         <FormMessage tone="done">
           Fault case &ldquo;{created}&rdquo; created; the results include it.

@@ -75,11 +75,49 @@ export const tripWindowForm = z
     if (f.r2 === undefined) ctx.addIssue({ code: "custom", path: ["r2"], message: "Give R2" });
   });
 
-export const clampForm = z.object({
-  name,
-  inductance: quantity("H"),
-  tripCurrent: quantity("A"),
-  busVoltage: quantity("V"),
-  clampVoltage: quantity("V"),
-  delay: optionalQuantity("s", { positive: false }),
-});
+export const clampForm = z
+  .object({
+    name,
+    /** "clamp": the current falls through a clamp; "none": no clamp below breakdown (an avalanche pulse). */
+    clamp: z.enum(["clamp", "none"]),
+    inductance: quantity("H"),
+    tripCurrent: quantity("A"),
+    busVoltage: quantity("V"),
+    clampVoltage: optionalQuantity("V"),
+    delay: optionalQuantity("s", { positive: false }),
+  })
+  .superRefine((f, ctx) => {
+    if (f.clamp === "clamp" && f.clampVoltage === undefined) {
+      ctx.addIssue({ code: "custom", path: ["clampVoltage"], message: "Give the clamp voltage" });
+    }
+  });
+
+export const sequenceForm = z
+  .object({
+    name,
+    supply: quantity("V"),
+    limitCurrent: quantity("A"),
+    holdTime: quantity("s"),
+    inductance: quantity("H"),
+    clamp: z.enum(["clamp", "none"]),
+    clampVoltage: optionalQuantity("V"),
+    breakdown: optionalQuantity("V"),
+    restarts: z.preprocess(
+      (v) => (v === "" ? 0 : v),
+      z.coerce.number().int({ message: "A whole number" }).min(0, { message: "0 or more" }).max(100, {
+        message: "At most 100",
+      }),
+    ),
+    pause: optionalQuantity("s"),
+  })
+  .superRefine((f, ctx) => {
+    if (f.clamp === "clamp" && f.clampVoltage === undefined) {
+      ctx.addIssue({ code: "custom", path: ["clampVoltage"], message: "Give the clamp voltage" });
+    }
+    if (f.clamp === "none" && f.breakdown === undefined) {
+      ctx.addIssue({ code: "custom", path: ["breakdown"], message: "Give the breakdown voltage" });
+    }
+    if (f.restarts > 0 && f.pause === undefined) {
+      ctx.addIssue({ code: "custom", path: ["pause"], message: "Give the pause before each restart" });
+    }
+  });

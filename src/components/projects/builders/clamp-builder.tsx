@@ -5,35 +5,68 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
-import { clampTurnOff } from "@/lib/soa/builders";
-import { BuilderLayout, type BuilderProps, PulseSummary, saveBuilt } from "./builder-layout";
+import { clampTurnOff, unclampedTurnOff } from "@/lib/soa/builders";
+import {
+  BuilderLayout,
+  type BuilderProps,
+  type BuildResult,
+  PulseSummary,
+  saveBuilt,
+} from "./builder-layout";
 import { clampForm } from "./builder-schemas";
 
 type Values = z.input<typeof clampForm>;
 
 type Input = z.output<typeof clampForm>;
 
-function build(input: Input) {
+function build(input: Input): (BuildResult & { figures: object }) | { ok: false; reason: string } {
+  const delay = input.delay !== undefined ? { delay: input.delay } : {};
+  if (input.clamp === "none") {
+    const circuit = {
+      inductance: input.inductance,
+      tripCurrent: input.tripCurrent,
+      busVoltage: input.busVoltage,
+      ...delay,
+    };
+    const built = unclampedTurnOff(circuit);
+    if (!built.ok) return built;
+    const pulse = built.pulses[0];
+    if (pulse.kind !== "avalanche") return { ok: false, reason: "the builder made no avalanche pulse" };
+    return {
+      ok: true,
+      figures: built.figures,
+      pulse: {
+        kind: "avalanche",
+        supply: pulse.supply,
+        current: pulse.current,
+        inductance: pulse.inductance,
+      },
+      origin: { input: circuit, figures: built.figures },
+    };
+  }
   const circuit = {
     inductance: input.inductance,
     tripCurrent: input.tripCurrent,
     busVoltage: input.busVoltage,
-    clampVoltage: input.clampVoltage,
-    ...(input.delay !== undefined ? { delay: input.delay } : {}),
+    clampVoltage: input.clampVoltage ?? Number.NaN,
+    ...delay,
   };
   const built = clampTurnOff(circuit);
   if (!built.ok) return built;
   const pulse = built.pulses[0];
-  if (pulse.kind !== "triangle") return { ok: false as const, reason: "the builder made no triangle" };
+  if (pulse.kind !== "triangle") return { ok: false, reason: "the builder made no triangle" };
   return {
-    ok: true as const,
+    ok: true,
     figures: built.figures,
-    pulse: { kind: "triangle" as const, v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
+    pulse: { kind: "triangle", v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
     origin: { input: circuit, figures: built.figures },
   };
 }
 
-/** A short turned off into a clamp: the loop inductance drives the current down through the clamp voltage. */
+/**
+ * A short turned off: into a clamp (the loop inductance drives the current down through the clamp voltage, a falling
+ * triangle) or with no clamp below breakdown (an avalanche pulse, METHODS.md §13, checked per candidate at its V_BR).
+ */
 export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurrent?: string }) {
   const {
     register,
@@ -46,6 +79,7 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
     mode: "onTouched",
     defaultValues: {
       name: "Short at turn-off, clamped",
+      clamp: "clamp",
       inductance: "",
       tripCurrent: tripCurrent ?? "",
       busVoltage: "",
@@ -57,20 +91,46 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
   const parsed = clampForm.safeParse(values);
   const built = parsed.success ? build(parsed.data) : null;
 
-  const onSubmit = handleSubmit((input) => saveBuilt("clamp", input.name, build(input), create, setError));
+  const onSubmit = handleSubmit((input) =>
+    saveBuilt(input.clamp === "none" ? "unclamped" : "clamp", input.name, build(input), create, setError),
+  );
+  const unclamped = values.clamp === "none";
 
   return (
     <BuilderLayout
-      title="Clamp turn-off"
+      title="Turn-off"
       description={
-        <>
-          A short is detected at I<sub>trip,max</sub> and, after the turn-off delay, the transistor opens into
-          a clamp. The current keeps rising by V<sub>bus</sub>/L during the delay, then falls through the
-          clamp voltage: a falling triangle at V<sub>cl</sub>.
-        </>
+        unclamped ? (
+          <>
+            A short is detected at I<sub>trip,max</sub> and, after the turn-off delay, the transistor opens
+            with no clamp below its breakdown: the drain rises to V<sub>BR</sub> and the loop inductance dumps
+            its energy in the transistor (avalanche). Each candidate is checked at its own V<sub>BR</sub>{" "}
+            against its avalanche energy rating, derated for the starting temperature. Rely on a rated
+            avalanche only where the manufacturer allows repeated or single avalanche for this use.
+          </>
+        ) : (
+          <>
+            A short is detected at I<sub>trip,max</sub> and, after the turn-off delay, the transistor opens
+            into a clamp. The current keeps rising by V<sub>bus</sub>/L during the delay, then falls through
+            the clamp voltage: a falling triangle at V<sub>cl</sub>.
+          </>
+        )
       }
       fields={
         <div className="grid gap-4 sm:grid-cols-3">
+          <fieldset className="sm:col-span-3">
+            <legend className="mb-1 text-sm font-medium">At turn-off the current falls</legend>
+            <div className="flex flex-wrap gap-x-5 gap-y-1 text-sm">
+              <label className="inline-flex min-h-11 items-center gap-2">
+                <input type="radio" value="clamp" {...register("clamp")} />
+                through a clamp
+              </label>
+              <label className="inline-flex min-h-11 items-center gap-2">
+                <input type="radio" value="none" {...register("clamp")} />
+                with no clamp (avalanche)
+              </label>
+            </div>
+          </fieldset>
           <UnitField
             id="clamp-l"
             label="Loop inductance L"
@@ -109,19 +169,21 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
             error={errors.busVoltage?.message}
             {...register("busVoltage")}
           />
-          <UnitField
-            id="clamp-vcl"
-            label={
-              <>
-                Clamp <Sym main="V" sub="cl" />
-              </>
-            }
-            unit="V"
-            inputMode="decimal"
-            hint="Above the bus voltage"
-            error={errors.clampVoltage?.message}
-            {...register("clampVoltage")}
-          />
+          {unclamped ? null : (
+            <UnitField
+              id="clamp-vcl"
+              label={
+                <>
+                  Clamp <Sym main="V" sub="cl" />
+                </>
+              }
+              unit="V"
+              inputMode="decimal"
+              hint="Above the bus voltage"
+              error={errors.clampVoltage?.message}
+              {...register("clampVoltage")}
+            />
+          )}
         </div>
       }
       figures={built?.ok ? built.figures : null}

@@ -10,6 +10,8 @@ export const builderNames: Record<string, string> = {
   "current-limit": "short in current limit",
   "trip-window": "trip window",
   clamp: "clamp turn-off",
+  unclamped: "unclamped turn-off",
+  sequence: "fault sequence",
 };
 
 type Format = (value: number) => string;
@@ -82,6 +84,23 @@ const known: Record<string, { label: ReactNode; format: Format }> = {
     ),
     format: unit("s"),
   },
+  breakdown: { label: <Sym main="V" sub="BR" />, format: unit("V") },
+  pause: { label: "Pause before each restart", format: unit("s") },
+  turnOffVoltage: { label: "Voltage while the current falls", format: unit("V") },
+  turnOffTime: {
+    label: (
+      <>
+        Turn-off time L·I<sub>lim</sub>/(V − V<sub>bus</sub>)
+      </>
+    ),
+    format: unit("s"),
+  },
+  holdEnergy: { label: "Energy per hold", format: unit("J") },
+  turnOffEnergy: { label: "Energy per turn-off", format: unit("J") },
+  attempts: { label: "Attempts", format: plain },
+  totalEnergy: { label: "Energy over the sequence", format: unit("J") },
+  length: { label: "Sequence length", format: unit("s") },
+  inductorEnergy: { label: "Inductor energy ½·L·I²", format: unit("J") },
   nominal: { label: <Sym main="I" sub="trip,nom" />, format: unit("A") },
   min: { label: <Sym main="I" sub="trip,min" />, format: unit("A") },
   max: { label: <Sym main="I" sub="trip,max" />, format: unit("A") },

@@ -83,7 +83,8 @@ const formSchema = z
 function valuesOf(row: FaultCaseRecord): FaultCaseFormValues {
   return {
     name: row.name,
-    kind: row.kind,
+    // Only rectangles and triangles are edited here; the table offers no edit for the builders' other shapes.
+    kind: row.kind === "triangle" ? "triangle" : "rect",
     v: editableValue(row.v),
     i: editableValue(row.i),
     duration: editableValue(row.duration),

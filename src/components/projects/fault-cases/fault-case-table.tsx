@@ -97,10 +97,20 @@ export function FaultCaseTable({
                     </span>
                   ) : null}
                 </Td>
-                <Td className="text-ink-muted">{shapeWords[row.kind]}</Td>
-                <Td numeric>{q(row.v, "V")}</Td>
+                <Td className="text-ink-muted">
+                  {row.kind === "waveform" ? "fault sequence" : shapeWords[row.kind]}
+                </Td>
+                <Td numeric>
+                  {row.kind === "avalanche" ? (
+                    <span title="The supply; the drain rises to each candidate's breakdown voltage">
+                      {q(row.v, "V")} supply
+                    </span>
+                  ) : (
+                    q(row.v, "V")
+                  )}
+                </Td>
                 <Td numeric>{q(row.i, "A")}</Td>
-                <Td numeric>{q(row.duration, "s")}</Td>
+                <Td numeric>{widthText(row)}</Td>
                 <Td className="text-ink-muted">{repeatText(repeatOf(row)) ?? "single pulse"}</Td>
                 <Td numeric>
                   {row.caseTemp === null ? (
@@ -121,9 +131,11 @@ export function FaultCaseTable({
                       onConfirm={() => remove.mutate(row.id)}
                       onKeep={() => setConfirming(null)}
                       before={
-                        <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
-                          Edit
-                        </Button>
+                        row.kind === "rect" || row.kind === "triangle" ? (
+                          <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
+                            Edit
+                          </Button>
+                        ) : null
                       }
                     />
                   </Td>
@@ -156,6 +168,16 @@ export function FaultCaseTable({
       ) : null}
     </>
   );
+}
+
+/** The width column: a pulse's width, an unclamped turn-off's inductance, a sequence's length. */
+function widthText(row: FaultCaseRecord): string {
+  if (row.kind === "avalanche") return `L ${q(row.inductance, "H")}`;
+  if (row.kind === "waveform" && row.samples) {
+    const { t } = row.samples;
+    return `${q(t[t.length - 1] - t[0], "s")} in all`;
+  }
+  return q(row.duration, "s");
 }
 
 function FaultCaseOrigin({ row }: { row: FaultCaseRecord }) {

@@ -32,7 +32,7 @@ export function FaultCasesPanel({ projectId, detail, canWrite }: PanelProps) {
             title="Pulse builders"
             description="Derive a fault case from the circuit; the figures follow as you type, with their units."
           >
-            <BuilderPanel projectId={projectId} />
+            <BuilderPanel projectId={projectId} detail={detail} />
           </Section>
           <Section
             id="typed"

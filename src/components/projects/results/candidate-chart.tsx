@@ -15,6 +15,8 @@ import { percent, q, repeatText, shapeWords } from "../format";
 export function chartPulses(check: ProjectCheck, partId: string): ChartPulse[] {
   const results = check.results[partId] ?? {};
   return check.pulses.flatMap((p) => {
+    // An unclamped turn-off is no point on the curves: its energy is read against the avalanche rating.
+    if (p.kind === "avalanche") return [];
     const result = results[p.id];
     // A capture is drawn at its binding sample for this candidate (METHODS.md §6), else at its peak-power sample.
     const at = result?.at ?? null;

@@ -3,16 +3,18 @@ import { VerdictBadge } from "@/components/verdict-shape";
 import { curvesRead, decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
 import type { CheckedPulse, ProjectCheck } from "../api";
-import { percent, q, repeatText, shapeWords, sourceWords } from "../format";
+import { percent, pulseShape, q, repeatText, sourceWords } from "../format";
 
 /** The pulse as the check read it, in one sentence. */
 function pulseSentence(pulse: CheckedPulse, projectCaseTemp: number): string {
   const parts = [
-    `${sourceWords[pulse.source]}, ${shapeWords[pulse.kind]}`,
+    `${sourceWords[pulse.source]}, ${pulseShape(pulse)}`,
     pulse.kind === "waveform"
       ? `every sample read at its own width; peak power at ${q(pulse.v, "V")} × ${q(pulse.i, "A")}, equal-energy width ${q(pulse.duration, "s")}`
-      : `${q(pulse.v, "V")}, ${q(pulse.i, "A")}${pulse.kind === "triangle" ? " peak" : ""} for ${q(pulse.duration, "s")}`,
-    repeatText(pulse.repeat) ?? "single pulse",
+      : pulse.kind === "avalanche"
+        ? "the drain rises to each candidate's breakdown voltage and the energy is read against its avalanche rating, derated for the starting temperature"
+        : `${q(pulse.v, "V")}, ${q(pulse.i, "A")}${pulse.kind === "triangle" ? " peak" : ""} for ${q(pulse.duration, "s")}`,
+    pulse.kind === "avalanche" ? "single event" : (repeatText(pulse.repeat) ?? "single pulse"),
     `checked at ${q(pulse.caseTemp, "°C")} case${pulse.caseTemp !== projectCaseTemp ? " (the fault case's own temperature)" : ""}`,
   ];
   return `${parts.join("; ")}.`;

@@ -5,7 +5,7 @@ import { Sym } from "@/components/library/symbols";
 import { ScrollRegion } from "@/components/scroll-region";
 import { VerdictBadge } from "@/components/verdict-shape";
 import type { CheckedPulse, ProjectCheck } from "../api";
-import { q, repeatText, shapeWords } from "../format";
+import { pulseShape, q, repeatText, shapeWords } from "../format";
 import { ResultDetails } from "./result-details";
 import { UtilisationBar } from "./utilisation-bar";
 
@@ -21,9 +21,9 @@ const cell = "h-11 border-b border-line px-3 align-middle whitespace-nowrap";
 const num = "num text-right font-mono text-xs";
 
 function shapeNote(pulse: CheckedPulse): string {
-  const shape =
-    pulse.kind === "waveform" ? "capture, read as its equal-energy rectangle" : shapeWords[pulse.kind];
-  return `${shape}, ${repeatText(pulse.repeat) ?? "single pulse"}`;
+  if (pulse.kind === "waveform") return `${pulseShape(pulse)}, every sample read at its own width`;
+  if (pulse.kind === "avalanche") return `${shapeWords.avalanche}, energy against the avalanche rating`;
+  return `${shapeWords[pulse.kind]}, ${repeatText(pulse.repeat) ?? "single pulse"}`;
 }
 
 /**

@@ -4,13 +4,13 @@ import { faultCases } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
 import { loadWritableProject } from "@/lib/projects/projects";
-import { faultCaseSchema } from "@/lib/projects/schema";
+import { anyFaultCaseSchema } from "@/lib/projects/schema";
 import { faultCaseColumns } from "@/lib/projects/write";
 
 /** POST /api/projects/:id/fault-cases: a named pulse the design must survive (typed, or from a pulse builder). */
 export const POST = route<{ id: string }>({ action: "project.write" }, async (req, caller, { id }) => {
   const project = await loadWritableProject(caller, id);
-  const values = await parseBody(req, faultCaseSchema);
+  const values = await parseBody(req, anyFaultCaseSchema);
   const faultCase = await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(faultCases)

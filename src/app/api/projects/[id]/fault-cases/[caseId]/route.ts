@@ -6,7 +6,7 @@ import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { loadWritableProject } from "@/lib/projects/projects";
-import { faultCaseSchema } from "@/lib/projects/schema";
+import { anyFaultCaseSchema } from "@/lib/projects/schema";
 import { faultCaseColumns } from "@/lib/projects/write";
 import { isUuid } from "@/lib/uuid";
 
@@ -27,7 +27,7 @@ export const PATCH = route<{ id: string; caseId: string }>(
   async (req, caller, { id, caseId }) => {
     const project = await loadWritableProject(caller, id);
     const existing = await loadCase(project.id, caseId);
-    const values = await parseBody(req, faultCaseSchema);
+    const values = await parseBody(req, anyFaultCaseSchema);
     const faultCase = await db.transaction(async (tx) => {
       const [row] = await tx
         .update(faultCases)

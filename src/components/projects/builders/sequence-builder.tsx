@@ -1,0 +1,330 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMemo } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { UnitField } from "@/components/library/fields";
+import { Sym } from "@/components/library/symbols";
+import type { FosterTerm } from "@/lib/soa/foster";
+import { faultSequence } from "@/lib/soa/sequence";
+import { waveformRiseVI } from "@/lib/soa/thermal-waveform";
+import type { ProjectDetail } from "../api";
+import { TraceCharts, type TracePanel, type TraceSeries } from "../captures/trace-charts";
+import { q } from "../format";
+import {
+  BuilderLayout,
+  type BuilderProps,
+  type BuildResult,
+  PulseSummary,
+  saveBuilt,
+} from "./builder-layout";
+import { sequenceForm } from "./builder-schemas";
+
+type Values = z.input<typeof sequenceForm>;
+type Input = z.output<typeof sequenceForm>;
+type Samples = { t: number[]; v: number[]; i: number[] };
+
+const STYLES = [
+  { stroke: "var(--color-accent)", dash: undefined },
+  { stroke: "var(--color-ink)", dash: "6 3" },
+  { stroke: "var(--color-ink-muted)", dash: "2 2" },
+  { stroke: "var(--color-accent-strong)", dash: "9 3 2 3" },
+];
+/** Points drawn in all; each step between samples gets its share, at least 2. */
+const DRAWN_POINTS = 6000;
+
+function build(input: Input): (BuildResult & { figures: object }) | { ok: false; reason: string } {
+  const circuit = {
+    busVoltageMax: input.supply,
+    currentLimitMax: input.limitCurrent,
+    faultTimeMax: input.holdTime,
+    inductance: input.inductance,
+    ...(input.clamp === "clamp" ? { clampVoltage: input.clampVoltage } : { breakdown: input.breakdown }),
+    retryCount: input.restarts,
+    ...(input.restarts > 0 ? { pause: input.pause } : {}),
+  };
+  const built = faultSequence({
+    supply: input.supply,
+    limitCurrent: input.limitCurrent,
+    holdTime: input.holdTime,
+    inductance: input.inductance,
+    turnOff:
+      input.clamp === "clamp"
+        ? { kind: "clamped", clampVoltage: input.clampVoltage ?? Number.NaN }
+        : { kind: "avalanche", breakdown: input.breakdown ?? Number.NaN },
+    restarts: input.restarts,
+    ...(input.pause !== undefined ? { pause: input.pause } : {}),
+  });
+  if (!built.ok) return built;
+  const pulse = built.pulses[0];
+  if (pulse.kind !== "waveform") return { ok: false, reason: "the builder made no waveform" };
+  return {
+    ok: true,
+    figures: built.figures,
+    pulse: { kind: "waveform", samples: { t: pulse.t, v: pulse.v, i: pulse.i } },
+    origin: { input: circuit, figures: built.figures },
+  };
+}
+
+/**
+ * The samples with points added inside every step, for drawing. Between two samples either V or I is constant in a
+ * built sequence, so V and I interpolated linearly keep the power linear: the rise at the added points is exact.
+ */
+function drawnSamples(samples: Samples): Samples {
+  const steps = samples.t.length - 1;
+  const inside = Math.max(1, Math.floor(DRAWN_POINTS / steps));
+  const out: Samples = { t: [samples.t[0]], v: [samples.v[0]], i: [samples.i[0]] };
+  for (let n = 1; n <= steps; n++) {
+    for (let k = 1; k <= inside; k++) {
+      const w = k / inside;
+      out.t.push(samples.t[n - 1] + w * (samples.t[n] - samples.t[n - 1]));
+      out.v.push(samples.v[n - 1] + w * (samples.v[n] - samples.v[n - 1]));
+      out.i.push(samples.i[n - 1] + w * (samples.i[n] - samples.i[n - 1]));
+    }
+  }
+  return out;
+}
+
+/** P and T_j over the whole sequence: T_j per candidate with a thermal model, from the project's case. */
+function sequencePanels(samples: Samples, detail: ProjectDetail): TracePanel[] {
+  const drawn = drawnSamples(samples);
+  const pairs = (values: ArrayLike<number>): [number, number][] =>
+    Array.from(values, (y) => [y, y] as [number, number]);
+  const power = drawn.v.map((v, n) => v * drawn.i[n]);
+  const { project } = detail;
+  const caseNetwork =
+    project.applyCaseNetwork && project.caseNetwork?.length ? (project.caseNetwork as FosterTerm[]) : null;
+  const caseRise = caseNetwork
+    ? waveformRiseVI(drawn.t, drawn.v, drawn.i, caseNetwork, { trace: true }).trace
+    : null;
+  const junction: TraceSeries[] = [];
+  for (const { part } of detail.candidates) {
+    if (!part.foster?.length) continue;
+    const style = STYLES[junction.length % STYLES.length];
+    const rise = waveformRiseVI(drawn.t, drawn.v, drawn.i, part.foster as FosterTerm[], { trace: true });
+    const trace = rise.trace ?? new Float64Array(0);
+    junction.push({
+      key: part.id,
+      label: `${part.partNumber} (T_j,max ${q(part.tjMax, "°C")})`,
+      t: drawn.t,
+      y: pairs(Array.from(trace, (r, n) => project.caseTemp + r + (caseRise?.[n] ?? 0))),
+      ...style,
+    });
+  }
+  const panels: TracePanel[] = [
+    {
+      key: "p",
+      symbol: { main: "P" },
+      name: "Power P (W)",
+      unit: "W",
+      series: [{ key: "p", label: "P = V·I", t: drawn.t, y: pairs(power), stroke: "var(--color-ink)" }],
+    },
+  ];
+  if (junction.length > 0) {
+    panels.push({
+      key: "tj",
+      symbol: { main: "T", sub: "j" },
+      name: "T_j (°C)",
+      unit: "°C",
+      series: junction,
+    });
+  }
+  return panels;
+}
+
+/**
+ * A fault as one pulse: hold in current limit until the timer, turn-off into a clamp or in avalanche, pause,
+ * restart. The check sees the whole sequence, so pieces that pass alone cannot hide a whole that does not.
+ */
+export function SequenceBuilder({ create, detail }: BuilderProps & { detail: ProjectDetail }) {
+  const lowestBreakdown = useMemo(() => {
+    const values = detail.candidates.map((c) => c.part.avalancheBreakdown ?? c.part.vdsMax);
+    return values.length ? Math.min(...values) : null;
+  }, [detail.candidates]);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<Values, unknown, Input>({
+    resolver: zodResolver(sequenceForm),
+    mode: "onTouched",
+    defaultValues: {
+      name: "Short, turn-off and restart as one sequence",
+      supply: "",
+      limitCurrent: "",
+      holdTime: "",
+      inductance: "",
+      clamp: "clamp",
+      clampVoltage: "",
+      breakdown: lowestBreakdown === null ? "" : String(lowestBreakdown),
+      restarts: "1",
+      pause: "",
+    },
+  });
+  const values = useWatch({ control });
+  const parsed = sequenceForm.safeParse(values);
+  const built = parsed.success ? build(parsed.data) : null;
+  const samples = built?.ok && built.pulse.kind === "waveform" ? built.pulse.samples : null;
+  const panels = useMemo(() => (samples ? sequencePanels(samples, detail) : null), [samples, detail]);
+  const onSubmit = handleSubmit((input) => saveBuilt("sequence", input.name, build(input), create, setError));
+  const unclamped = values.clamp === "none";
+
+  return (
+    <BuilderLayout
+      title="Fault sequence"
+      description={
+        <>
+          A short held in current limit until the fault timer, then turned off (into a clamp, or with no clamp
+          in avalanche at V<sub>BR</sub>), a pause, and each restart doing the same again: built as one pulse,
+          so the check sees the heat of every piece together. Each piece can pass alone while the whole does
+          not, because the junction has not cooled when the next piece comes. The turn-off&apos;s current
+          falls linearly; the power and each candidate&apos;s T<sub>j</sub> below cover the whole sequence.
+          {unclamped ? (
+            <>
+              {" "}
+              In avalanche the drain sits above V<sub>DSS</sub>, which the SOA curves do not cover: such a
+              sequence fails the curve reading with an over-voltage; check the avalanche energy as an
+              unclamped turn-off too.
+            </>
+          ) : null}
+        </>
+      }
+      fields={
+        <div className="grid gap-4 sm:grid-cols-3">
+          <UnitField
+            id="seq-supply"
+            label={
+              <>
+                Highest supply <Sym main="V" sub="bus" />
+              </>
+            }
+            unit="V"
+            inputMode="decimal"
+            placeholder="54.6"
+            hint="Across the transistor while it holds the short"
+            error={errors.supply?.message}
+            {...register("supply")}
+          />
+          <UnitField
+            id="seq-limit"
+            label={
+              <>
+                Limit current <Sym main="I" sub="lim" />
+              </>
+            }
+            unit="A"
+            inputMode="decimal"
+            placeholder="8"
+            error={errors.limitCurrent?.message}
+            {...register("limitCurrent")}
+          />
+          <UnitField
+            id="seq-hold"
+            label="Fault timer"
+            unit="s"
+            placeholder="2m"
+            hint="How long each attempt holds the limit"
+            error={errors.holdTime?.message}
+            {...register("holdTime")}
+          />
+          <UnitField
+            id="seq-l"
+            label="Loop inductance L"
+            unit="H"
+            placeholder="1µ"
+            error={errors.inductance?.message}
+            {...register("inductance")}
+          />
+          <fieldset className="sm:col-span-2">
+            <legend className="mb-1 text-sm font-medium">At turn-off the current falls</legend>
+            <div className="flex flex-wrap gap-x-5 gap-y-1 text-sm">
+              <label className="inline-flex min-h-11 items-center gap-2">
+                <input type="radio" value="clamp" {...register("clamp")} />
+                through a clamp
+              </label>
+              <label className="inline-flex min-h-11 items-center gap-2">
+                <input type="radio" value="none" {...register("clamp")} />
+                with no clamp (avalanche)
+              </label>
+            </div>
+          </fieldset>
+          {unclamped ? (
+            <UnitField
+              id="seq-vbr"
+              label={<Sym main="V" sub="BR" />}
+              unit="V"
+              inputMode="decimal"
+              hint="Lowest of the candidates by default: the longest, most energetic avalanche"
+              error={errors.breakdown?.message}
+              {...register("breakdown")}
+            />
+          ) : (
+            <UnitField
+              id="seq-vcl"
+              label={
+                <>
+                  Clamp <Sym main="V" sub="cl" />
+                </>
+              }
+              unit="V"
+              inputMode="decimal"
+              hint="Above the supply"
+              error={errors.clampVoltage?.message}
+              {...register("clampVoltage")}
+            />
+          )}
+          <UnitField
+            id="seq-restarts"
+            label="Restarts"
+            inputMode="numeric"
+            hint="0 to 100; each holds and turns off again"
+            error={errors.restarts?.message}
+            {...register("restarts")}
+          />
+          <UnitField
+            id="seq-pause"
+            label="Pause before each restart"
+            unit="s"
+            placeholder="100m"
+            error={errors.pause?.message}
+            {...register("pause")}
+          />
+        </div>
+      }
+      figures={built?.ok ? built.figures : null}
+      reason={built && !built.ok ? built.reason : null}
+      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
+      below={
+        panels && samples ? (
+          <div className="mt-4" data-testid="sequence-traces">
+            <TraceCharts
+              key={samples.t.length}
+              panels={panels}
+              span={[samples.t[0], samples.t[samples.t.length - 1]]}
+            />
+            <p className="mt-1 text-xs text-ink-muted">
+              {panels.length > 1
+                ? `T_j from the project's case temperature, ${q(detail.project.caseTemp, "°C")}, through each candidate's thermal model${detail.project.applyCaseNetwork ? ", plus the case path's rise" : ""}; the results give each candidate's verdict once the fault case is created.`
+                : "No candidate has a thermal model yet: only the power is drawn."}
+            </p>
+          </div>
+        ) : null
+      }
+      footer={
+        <UnitField
+          id="seq-name"
+          label="Fault case name"
+          className="max-w-sm"
+          error={errors.name?.message}
+          {...register("name")}
+        />
+      }
+      error={errors.root?.server?.message}
+      pending={isSubmitting}
+      onSubmit={onSubmit}
+    />
+  );
+}
