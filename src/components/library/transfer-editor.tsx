@@ -210,7 +210,7 @@ export function TransferEditor({
       </div>
 
       <div className="min-w-0 space-y-3">
-        {chartCurves && chartCurves.length ? (
+        {chartCurves?.length ? (
           <>
             <TransferChart curves={chartCurves} zeroTc={review?.zeroTc ?? null} />
             <p className="text-xs text-ink-muted">

@@ -106,10 +106,27 @@ function sequencePanels(samples: Samples, detail: ProjectDetail): TracePanel[] {
     const trace = rise.trace ?? new Float64Array(0);
     junction.push({
       key: part.id,
-      label: `${part.partNumber} (T_j,max ${q(part.tjMax, "°C")})`,
+      label: part.partNumber,
       t: drawn.t,
       y: pairs(Array.from(trace, (r, n) => project.caseTemp + r + (caseRise?.[n] ?? 0))),
       ...style,
+    });
+  }
+  // Each distinct T_j,max as a thin line in the fail colour, so a trace that crosses it stands out.
+  const span = [drawn.t[0], drawn.t[drawn.t.length - 1]];
+  for (const tjMax of new Set(
+    detail.candidates.filter((c) => c.part.foster?.length).map((c) => c.part.tjMax),
+  )) {
+    junction.push({
+      key: `tj-max-${tjMax}`,
+      label: `T_j,max ${q(tjMax, "°C")}`,
+      t: span,
+      y: [
+        [tjMax, tjMax],
+        [tjMax, tjMax],
+      ],
+      stroke: "var(--color-fail)",
+      dash: "1 3",
     });
   }
   const panels: TracePanel[] = [
