@@ -113,7 +113,7 @@ test("on a phone the menu opens the navigation, the workspace and sign-out; tabs
   await expect(tabs.first()).toBeVisible();
   for (const tab of await tabs.all()) {
     const b = await tab.boundingBox();
-    expect(b!.height, await tab.textContent()).toBeGreaterThanOrEqual(44);
+    expect(b!.height, (await tab.textContent()) ?? "").toBeGreaterThanOrEqual(44);
   }
   await page.getByRole("tab", { name: "Bench" }).click();
   await expect(page.getByRole("tab", { name: "Bench" })).toHaveAttribute("aria-selected", "true");

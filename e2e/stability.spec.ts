@@ -135,6 +135,9 @@ test("transfer data draw the instability boundary; a pulse under the curves fail
     const projects = new ProjectsPage(page);
     await page.goto(`/projects/${projectId}`);
     await projects.openTab("Results");
+    await expect(
+      projects.verdictCell("Slow pre-charge", partNumber).getByTestId("result-stability"),
+    ).toContainText(/S 1\.1\d runs away/);
     await projects.results.getByRole("button", { name: /Slow pre-charge/ }).click();
     const details = page.getByTestId("result-details");
     await expect(details).toContainText("Stability factor");

@@ -183,6 +183,19 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
                                   <span>{c.hasCurves ? "not checked" : "no SOA curves yet"}</span>
                                 )}
                               </span>
+                              {result &&
+                              result.stability !== null &&
+                              (result.stabilityVerdict === "fail" ||
+                                result.stabilityVerdict === "marginal") ? (
+                                <span
+                                  className="num block text-[11px] leading-4 text-ink-muted"
+                                  data-testid="result-stability"
+                                  title="Electro-thermal stability factor: a hot spot runs away at 1"
+                                >
+                                  S <span className="font-mono">{result.stability.toFixed(2)}</span>
+                                  {result.stabilityVerdict === "fail" ? " runs away" : " near runaway"}
+                                </span>
+                              ) : null}
                             </td>
                           );
                         })}
