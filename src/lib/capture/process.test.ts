@@ -3,6 +3,7 @@ import { waveformEquivalent } from "@/lib/soa/equivalent-rectangle";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
 import {
   captureTrace,
+  caseTrace,
   decimateMinMax,
   decodeSamples,
   decodeSamplesStream,
@@ -178,6 +179,22 @@ describe("junctionTrace", () => {
     expect(junction.trace.y[0]).toEqual([60, expect.any(Number)]);
     // The drawn trace holds the samples; the peak between them is at least as high.
     expect(Math.max(...junction.trace.y.map(([, max]) => max))).toBeLessThanOrEqual(junction.tjPeak);
+  });
+
+  it("heats the case through a case path: T_C is the Foster step response, T_j adds it", () => {
+    // 100 W for 50 ms on a one-term case path R = 0.5 K/W, τ = 20 ms: T_C(50 ms) = 25 + 100·0.5·(1 − e^(−2.5))
+    // = 70.895 °C (Foster step response, JEDEC JESD24-3's single-pulse Z_θ of one RC term; by hand).
+    const n = 5001;
+    const t = Float64Array.from({ length: n }, (_, k) => (k / (n - 1)) * 0.05);
+    const p = new Float64Array(n).fill(100);
+    const casePath = [{ r: 0.5, tau: 0.02 }];
+    const heated = caseTrace(t, p, casePath, 25, { start: "rest" });
+    expect(heated.tjPeak).toBeCloseTo(25 + 50 * (1 - Math.exp(-2.5)), 9);
+    const network = [{ r: 0.2, tau: 1e-3 }];
+    const junction = junctionTrace(t, p, network, 25, { start: "rest", caseNetwork: casePath });
+    // Both networks driven by the same power (METHODS.md §14): the rises add, 100·0.2·(1 − e^(−50)) = 20 K more.
+    expect(junction.tjPeak).toBeCloseTo(heated.tjPeak + 20, 9);
+    expect(junctionTrace(t, p, network, 25, { start: "rest" }).tjPeak).toBeCloseTo(45, 9);
   });
 });
 

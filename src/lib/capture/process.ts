@@ -153,26 +153,64 @@ export interface JunctionTrace {
 /**
  * Junction temperature through a capture on a Foster network at `caseTemp` (METHODS.md §4, the engine's exact
  * update), from the start the check uses (METHODS.md §6: as stated at upload, else decided from the data), with
- * its decimated trace. Power below zero counts as zero, as in the check.
+ * its decimated trace. Power below zero counts as zero, as in the check. With a case path (METHODS.md §14) the case
+ * heats through it from the same power: the junction's trace is the response of both networks' terms together, as
+ * in the check, so its peak is the check's T_j,peak.
  */
 export function junctionTrace(
   t: ArrayLike<number>,
   p: ArrayLike<number>,
   network: readonly FosterTerm[],
   caseTemp: number,
+  {
+    start: given = null,
+    buckets = TRACE_BUCKETS,
+    caseNetwork = null,
+  }: { start?: RecordStart | null; buckets?: number; caseNetwork?: readonly FosterTerm[] | null } = {},
+): JunctionTrace {
+  return riseTrace(
+    t,
+    p,
+    caseNetwork?.length ? [...network, ...caseNetwork] : network,
+    caseTemp,
+    given,
+    buckets,
+  );
+}
+
+/**
+ * The case temperature through a capture on the case path (METHODS.md §14): T_C + ΔT_ca from the same power and the
+ * same start as the junction's trace, for drawing beside it.
+ */
+export function caseTrace(
+  t: ArrayLike<number>,
+  p: ArrayLike<number>,
+  caseNetwork: readonly FosterTerm[],
+  caseTemp: number,
   { start: given = null, buckets = TRACE_BUCKETS }: { start?: RecordStart | null; buckets?: number } = {},
+): JunctionTrace {
+  return riseTrace(t, p, caseNetwork, caseTemp, given, buckets);
+}
+
+function riseTrace(
+  t: ArrayLike<number>,
+  p: ArrayLike<number>,
+  network: readonly FosterTerm[],
+  base: number,
+  given: RecordStart | null,
+  buckets: number,
 ): JunctionTrace {
   let peakPower = 0;
   for (let k = 0; k < p.length; k++) if (p[k] > peakPower) peakPower = p[k];
   const { start } = recordStart(Math.max(p[0] ?? 0, 0), peakPower, given ?? undefined);
   const rise = waveformRise(t, p, network, { trace: true, steady: start === "steady" });
-  const tj = rise.trace ?? new Float64Array(0);
-  for (let k = 0; k < tj.length; k++) tj[k] += caseTemp;
+  const temperature = rise.trace ?? new Float64Array(0);
+  for (let k = 0; k < temperature.length; k++) temperature[k] += base;
   return {
-    tjPeak: caseTemp + rise.maxRise,
+    tjPeak: base + rise.maxRise,
     tPeak: rise.maxTime,
     start,
-    trace: decimateMinMax(t, tj, buckets),
+    trace: decimateMinMax(t, temperature, buckets),
   };
 }
 

@@ -367,6 +367,34 @@ describe("capture routes", () => {
     ).json();
     expect(list.captures.map((c: { id: string }) => c.id)).toContain(captureId);
     expect(list.captures[0]).not.toHaveProperty("trace");
+    expect(body.case).toBeNull();
+  });
+
+  it("GET heats the case through the project's case path when it applies one, as the check does", async () => {
+    const casePath = [{ r: 0.3, tau: 0.05 }];
+    await db
+      .update(projects)
+      .set({ caseNetwork: casePath, applyCaseNetwork: true })
+      .where(eq(projects.id, projectId));
+    try {
+      const res = await call(h(captureGet), "GET", {
+        cookie: cookies.technician,
+        params: { id: projectId, captureId },
+      });
+      const body = await res.json();
+      const [row] = await db.select().from(captures).where(eq(captures.id, captureId));
+      const samples = await loadCaptureSamples(storage, row);
+      const p = powerFromVI(samples.v, samples.i);
+      // METHODS.md §14: both networks driven by the same power, so T_j rides on the heated case.
+      expect(body.case.tjPeak).toBe(40 + waveformRise(samples.t, p, casePath).maxRise);
+      const bySmall = body.candidates.find((c: { partId: string }) => c.partId === small.id);
+      expect(bySmall.junction.tjPeak).toBe(
+        40 + waveformRise(samples.t, p, [...network, ...casePath]).maxRise,
+      );
+      expect(bySmall.junction.tjPeak).toBeGreaterThan(40 + waveformRise(samples.t, p, network).maxRise);
+    } finally {
+      await db.update(projects).set({ applyCaseNetwork: false }).where(eq(projects.id, projectId));
+    }
   });
 
   it("is a 404 from another workspace, from another project and for a malformed id", async () => {

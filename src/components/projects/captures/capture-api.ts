@@ -25,6 +25,8 @@ export interface CaptureListItem {
 export interface CaptureDetail {
   capture: CaptureListItem & { trace: { t: number[]; v: Pair[]; i: Pair[]; p: Pair[] } };
   caseTemp: number;
+  /** The case temperature through the capture when the project's case path applies (METHODS.md §14). */
+  case?: { tjPeak: number; tPeak: number | null; trace: { t: number[]; y: Pair[] } } | null;
   candidates: {
     partId: string;
     partNumber: string;

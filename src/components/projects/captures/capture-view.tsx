@@ -93,19 +93,35 @@ export function CaptureView({
     },
   ];
   const junctions = candidates.filter((c) => c.junction !== null);
+  const heatedCase = detail.data.case ?? null;
   if (junctions.length) {
     panels.push({
       key: "tj",
       symbol: { main: "T", sub: "j" },
-      name: "T_j",
+      name: heatedCase ? "T_j and the case T_C" : "T_j",
       unit: "°C",
-      series: junctions.map((c, k) => ({
-        key: `tj-${c.partId}`,
-        label: c.partNumber,
-        t: c.junction!.trace.t,
-        y: c.junction!.trace.y,
-        ...junctionStyles[k % junctionStyles.length],
-      })),
+      series: [
+        ...junctions.map((c, k) => ({
+          key: `tj-${c.partId}`,
+          label: c.partNumber,
+          t: c.junction!.trace.t,
+          y: c.junction!.trace.y,
+          ...junctionStyles[k % junctionStyles.length],
+        })),
+        // The case heated through the project's case path: the junction traces above include its rise.
+        ...(heatedCase
+          ? [
+              {
+                key: "case",
+                label: "T_C, case path",
+                t: heatedCase.trace.t,
+                y: heatedCase.trace.y,
+                stroke: "var(--color-marginal)",
+                dash: "4 2",
+              },
+            ]
+          : []),
+      ],
     });
   }
 
@@ -230,6 +246,9 @@ export function CaptureView({
           the curve verdict. The junction temperature runs from {startWords(capture.start)} at{" "}
           {q(caseTemp, "°C")} case through every sample, between samples included, where the part has a
           thermal model.
+          {heatedCase
+            ? ` The project's case path heats the case from the same power (dashed T_C, up to ${q(heatedCase.tjPeak, "°C")}); each junction trace includes that rise. Driving the case path with the full power overstates the case rise, so this is conservative.`
+            : null}
         </p>
         <Caution className="mt-2" />
       </div>

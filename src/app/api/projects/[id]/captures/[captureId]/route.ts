@@ -1,5 +1,5 @@
 import { route } from "@/lib/auth/guard";
-import { junctionTrace } from "@/lib/capture/process";
+import { caseTrace, junctionTrace } from "@/lib/capture/process";
 import { deleteCapture, getCapture, loadCaptureSamples } from "@/lib/capture/store";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
@@ -11,7 +11,8 @@ type Params = { id: string; captureId: string };
 
 /**
  * GET /api/projects/:id/captures/:captureId: the capture's summary and drawn trace, and for each candidate with a
- * Foster network its junction temperature through the capture (at the project's case temperature, from the start the
+ * Foster network its junction temperature through the capture (at the project's case temperature, heated through the
+ * project's case path when it applies one, whose case temperature comes too; from the start the
  * check uses): peak, when, and a trace decimated on the same buckets as the capture's.
  */
 export const GET = route<Params>({ action: "workspace.read" }, async (_req, caller, { id, captureId }) => {
@@ -23,9 +24,15 @@ export const GET = route<Params>({ action: "workspace.read" }, async (_req, call
   const thermal = candidates.some((c) => c.part.foster?.length);
   const samples = thermal ? await loadCaptureSamples(storage(), row) : null;
   const p = samples ? powerFromVI(samples.v, samples.i) : null;
+  // The case path heats the case from the same power when the project applies it (METHODS.md §14).
+  const caseNetwork = project.applyCaseNetwork && project.caseNetwork?.length ? project.caseNetwork : null;
   return json({
     capture,
     caseTemp: project.caseTemp,
+    case:
+      samples && p && caseNetwork
+        ? caseTrace(samples.t, p, caseNetwork, project.caseTemp, { start: row.start })
+        : null,
     candidates: candidates.map(({ part }) => ({
       partId: part.id,
       partNumber: part.partNumber,
@@ -33,7 +40,7 @@ export const GET = route<Params>({ action: "workspace.read" }, async (_req, call
       tjMax: part.tjMax,
       junction:
         samples && p && part.foster?.length
-          ? junctionTrace(samples.t, p, part.foster, project.caseTemp, { start: row.start })
+          ? junctionTrace(samples.t, p, part.foster, project.caseTemp, { start: row.start, caseNetwork })
           : null,
     })),
   });
