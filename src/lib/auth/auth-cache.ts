@@ -57,7 +57,13 @@ export class AuthCache {
     const ttl = options.ttlMs ?? AUTH_CACHE_TTL_MS;
     this.enabled = options.enabled ?? true;
     this.tokens = new LRUCache({ max: MAX_ENTRIES, ttl, ttlResolution: 0, perf: clock, ttlAutopurge: false });
-    this.memberships = new LRUCache({ max: MAX_ENTRIES, ttl, ttlResolution: 0, perf: clock, ttlAutopurge: false });
+    this.memberships = new LRUCache({
+      max: MAX_ENTRIES,
+      ttl,
+      ttlResolution: 0,
+      perf: clock,
+      ttlAutopurge: false,
+    });
     this.lastUsed = new LRUCache({ max: MAX_ENTRIES });
   }
 
