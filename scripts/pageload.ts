@@ -59,6 +59,8 @@ const lcpObserver = () => {
 
 interface Visit {
   lcp: number;
+  /** The path the visit ended on, when a redirect moved it. */
+  ended: string;
   jsGzip: number;
   jsFiles: number;
   status: number;
@@ -88,11 +90,18 @@ async function visit(
   loaded = true;
   // LCP is final once the page is idle; a short settle lets a late render report its paint.
   await page.waitForLoadState("networkidle", { timeout: 10_000 }).catch(() => {});
-  const lcp = await page.evaluate(() => (window as unknown as { __lcp: number }).__lcp);
+  // A page that sends the visitor on (a role without access) navigates again: read the page it ends on.
+  const readLcp = () => page.evaluate(() => (window as unknown as { __lcp: number }).__lcp);
+  const lcp = await readLcp().catch(async () => {
+    await page.waitForLoadState("load").catch(() => {});
+    return readLcp().catch(() => Number.NaN);
+  });
+  const ended = new URL(page.url()).pathname;
   const sizes = await Promise.all(scripts);
   await context.close();
   return {
     lcp,
+    ended,
     jsGzip: sizes.reduce((a, b) => a + b, 0),
     jsFiles: sizes.length,
     status: response?.status() ?? 0,
@@ -130,7 +139,8 @@ try {
     const label = path.replace(ids.project, ":id").replace(ids.part, ":id");
     console.log(
       `${label.padEnd(26)} LCP ${Number.isNaN(lcp) ? "–" : `${lcp.toFixed(0)} ms`}`.padEnd(42) +
-        `first-load JS ${(last.jsGzip / 1024).toFixed(0)} kB gzip in ${last.jsFiles} files  (HTTP ${last.status})`,
+        `first-load JS ${(last.jsGzip / 1024).toFixed(0)} kB gzip in ${last.jsFiles} files  (HTTP ${last.status}` +
+        `${last.ended === path ? "" : `, ended on ${last.ended.replace(ids.project, ":id").replace(ids.part, ":id")}`})`,
     );
   }
 } finally {
