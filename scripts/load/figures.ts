@@ -8,7 +8,8 @@ export interface Figures {
   p95: number;
   p99: number;
   max: number;
-  statuses: Record<number, number>;
+  /** Answers by HTTP status ("none": the connection ended without a status line). */
+  statuses: Record<string, number>;
   timeouts: number;
   errors: number;
 }
@@ -22,11 +23,12 @@ export function quantile(sorted: readonly number[], q: number): number {
 
 export class Recorder {
   private readonly times: number[] = [];
-  private readonly statuses: Record<number, number> = {};
+  private readonly statuses: Record<string, number> = {};
 
-  response(status: number, ms: number): void {
+  response(status: number | undefined, ms: number): void {
     this.times.push(ms);
-    this.statuses[status] = (this.statuses[status] ?? 0) + 1;
+    const key = status === undefined ? "none" : String(status);
+    this.statuses[key] = (this.statuses[key] ?? 0) + 1;
   }
 
   figures(title: string, seconds: number, timeouts: number, otherErrors: number): Figures {
