@@ -4,9 +4,11 @@
 import { runCaptureBench } from "./bench/capture";
 import { runCaptureCheckBench } from "./bench/capture-check";
 import { runMatrixBench } from "./bench/matrix";
+import { runProjectMatrixBench } from "./bench/project-matrix";
 import { runThermalBench } from "./bench/thermal";
 
 runThermalBench();
 runCaptureCheckBench();
 runMatrixBench();
+await runProjectMatrixBench();
 await runCaptureBench();

@@ -7,15 +7,16 @@ ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 PG_BIN=/usr/lib/postgresql/15/bin
 BUCKET=pulsefence
 
+# APP_PORT is nginx's; the app processes behind it listen on APP_BACKEND_PORT + 1, + 2, … (see start_app).
 case "${PROFILE:?PROFILE must be dev or test}" in
-  dev) PG_PORT=54329 S3_PORT=9569 SMTP_PORT=1025 MAIL_WEB_PORT=1080 APP_PORT=3000 ;;
-  test) PG_PORT=54339 S3_PORT=9579 SMTP_PORT=1035 MAIL_WEB_PORT=1090 APP_PORT=3100 ;;
+  dev) PG_PORT=54329 S3_PORT=9569 SMTP_PORT=1025 MAIL_WEB_PORT=1080 APP_PORT=3000 APP_BACKEND_PORT=3040 ;;
+  test) PG_PORT=54339 S3_PORT=9579 SMTP_PORT=1035 MAIL_WEB_PORT=1090 APP_PORT=3100 APP_BACKEND_PORT=3160 ;;
   *) echo "unknown PROFILE $PROFILE" >&2; exit 2 ;;
 esac
 # PF_PORT_OFFSET shifts every port, so two checkouts can run their services side by side.
 off=${PF_PORT_OFFSET:-0}
 PG_PORT=$((PG_PORT + off)) S3_PORT=$((S3_PORT + off)) SMTP_PORT=$((SMTP_PORT + off))
-MAIL_WEB_PORT=$((MAIL_WEB_PORT + off)) APP_PORT=$((APP_PORT + off))
+MAIL_WEB_PORT=$((MAIL_WEB_PORT + off)) APP_PORT=$((APP_PORT + off)) APP_BACKEND_PORT=$((APP_BACKEND_PORT + off))
 
 DATA_DIR="${PF_DATA_DIR:-$ROOT/.data/$PROFILE}"
 PIDS=()
@@ -37,6 +38,8 @@ apt_install() {
 ensure_system_packages() {
   [ -x "$PG_BIN/initdb" ] || apt_install postgresql-15
   command -v curl >/dev/null || apt_install curl
+  # nginx spreads requests over the app processes and sheds overload (start_app); Debian's, not started as a service.
+  [ -x /usr/sbin/nginx ] || apt_install nginx
   if [ "${NEED_CHROMIUM:-0}" = 1 ] && [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
   # The report tests read PDFs back with poppler's pdftotext and render pages with pdftoppm.
   if [ "${NEED_CHROMIUM:-0}" = 1 ] && ! command -v pdftotext >/dev/null; then apt_install poppler-utils; fi
@@ -136,6 +139,86 @@ start_services() {
   start_postgres
   start_storage
   start_mail
+}
+
+# Serves the built app as PF_APP_PROCESSES `next start` processes (default: one per core) on loopback ports behind
+# Debian's nginx on APP_PORT, which balances them (least connections, kept-alive upstream connections) and sheds
+# overload: more than PF_APP_INFLIGHT requests in flight per process (default 24) answer 503 with Retry-After at
+# once instead of queueing into timeouts; /api/health is exempt, so it stays answerable under load. Logs go to
+# $DATA_DIR/app-N.log and $DATA_DIR/nginx/. NEXT_DIST_DIR, if set, names the build every process serves.
+start_app() {
+  local processes=${PF_APP_PROCESSES:-$(nproc)} inflight=${PF_APP_INFLIGHT:-24} k port servers=""
+  local conf_dir="$DATA_DIR/nginx"
+  mkdir -p "$conf_dir/tmp"
+  for k in $(seq 1 "$processes"); do
+    port=$((APP_BACKEND_PORT + k))
+    # Kept-alive connections outlive nginx's (60 s), so nginx never reuses one the app has just closed.
+    "$ROOT/node_modules/.bin/next" start --hostname 127.0.0.1 --port "$port" --keepAliveTimeout 75000 \
+      >"$DATA_DIR/app-$k.log" 2>&1 &
+    PIDS+=($!)
+    echo $! > "$DATA_DIR/app-$k.pid"
+    servers+="    server 127.0.0.1:$port max_fails=0;"$'\n'
+  done
+  cat >"$conf_dir/nginx.conf" <<NGINX
+# Written by scripts/services.sh (start_app); edits are overwritten at the next start.
+worker_processes 1;
+pid $conf_dir/nginx.pid;
+error_log $conf_dir/error.log warn;
+events { worker_connections 4096; }
+http {
+  access_log off;
+  client_body_temp_path $conf_dir/tmp/body;
+  proxy_temp_path $conf_dir/tmp/proxy;
+  fastcgi_temp_path $conf_dir/tmp/fastcgi;
+  uwsgi_temp_path $conf_dir/tmp/uwsgi;
+  scgi_temp_path $conf_dir/tmp/scgi;
+  server_tokens off;
+  # The app bounds every body itself (413 before reading it all); bodies stream through unbuffered.
+  client_max_body_size 0;
+  proxy_request_buffering off;
+  upstream app {
+    least_conn;
+$servers    keepalive 128;
+    keepalive_timeout 60s;
+  }
+  # One zone for the whole server (a constant key: requests with an empty key would not be counted).
+  limit_conn_zone \$server_port zone=inflight:1m;
+  limit_conn_status 503;
+  limit_conn_log_level warn;
+  server {
+    listen 127.0.0.1:$APP_PORT;
+    proxy_http_version 1.1;
+    proxy_set_header Connection "";
+    proxy_set_header Host \$http_host;
+    proxy_set_header X-Forwarded-For \$proxy_add_x_forwarded_for;
+    proxy_set_header X-Forwarded-Proto \$scheme;
+    proxy_connect_timeout 3s;
+    proxy_read_timeout 60s;
+    error_page 503 @overloaded;
+    location / {
+      limit_conn inflight $((processes * inflight));
+      proxy_pass http://app;
+    }
+    location = /api/health {
+      proxy_pass http://app;
+    }
+    location @overloaded {
+      default_type application/json;
+      add_header Retry-After 1 always;
+      add_header Cache-Control no-store always;
+      return 503 '{"error":{"code":"unavailable:overloaded","message":"The service is busy. Try again in a moment."}}';
+    }
+  }
+}
+NGINX
+  /usr/sbin/nginx -t -q -c "$conf_dir/nginx.conf" -p "$conf_dir" -g 'daemon off;' || die "nginx configuration invalid"
+  /usr/sbin/nginx -c "$conf_dir/nginx.conf" -p "$conf_dir" -g 'daemon off;' &
+  PIDS+=($!)
+  echo $! > "$DATA_DIR/nginx.pid"
+  for k in $(seq 1 "$processes"); do
+    wait_for "app process $k" 90 curl -sf "http://127.0.0.1:$((APP_BACKEND_PORT + k))/api/health"
+  done
+  wait_for "the app" 30 curl -sf "$APP_URL/api/health"
 }
 
 # Stops a process left by an earlier run of this profile that was killed without cleaning up.

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # The start command: installs what is missing, starts PostgreSQL, the storage fake and the mail fake on loopback,
-# migrates, seeds the demo workspace, builds and serves the app at http://127.0.0.1:3000. Ctrl-C stops it all.
+# migrates, seeds the demo workspace, builds and serves the app at http://127.0.0.1:3000 (nginx in front of one app
+# process per core, see start_app in services.sh). Ctrl-C stops it all.
 PROFILE=dev
 source "$(dirname "$0")/services.sh"
 
@@ -20,17 +21,13 @@ node_modules/.bin/tsx --conditions=react-server scripts/seed.ts || die "seed fai
 log "building"
 node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; die "build failed"; }
 
-log "serving"
-node_modules/.bin/next start --hostname 127.0.0.1 --port "$APP_PORT" &
-APP_PID=$!
-PIDS+=("$APP_PID")
-echo "$APP_PID" > "$DATA_DIR/app.pid"
-wait_for "the app" 60 curl -sf "$APP_URL/api/health"
+log "serving: ${PF_APP_PROCESSES:-$(nproc)} app processes behind nginx"
+start_app
 
 cat <<MSG
 
   Pulsefence is running.
-    app       $APP_URL
+    app       $APP_URL   (nginx in front of ${PF_APP_PROCESSES:-$(nproc)} app processes; logs in $DATA_DIR)
     health    $APP_URL/api/health
     inbox     $MAIL_INBOX_URL   (every e-mail the app sends lands here)
     storage   $S3_ENDPOINT/$BUCKET
@@ -39,4 +36,6 @@ $(node_modules/.bin/tsx --conditions=react-server scripts/seed.ts --print-sign-i
   Ctrl-C stops everything. Data is kept in .data/dev.
 
 MSG
-wait "$APP_PID"
+# Runs until Ctrl-C or until a process of the app stops.
+wait -n "${PIDS[@]}"
+log "a process of the app stopped; see $DATA_DIR/app-*.log and $DATA_DIR/nginx/error.log"

@@ -40,13 +40,12 @@ step vitest node_modules/.bin/vitest run --config scripts/vitest.config.ts --cov
 
 build_and_serve() {
   node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -60 "$DATA_DIR/build.log"; return 1; }
-  node_modules/.bin/next start --hostname 127.0.0.1 --port "$APP_PORT" >"$DATA_DIR/app.log" 2>&1 &
-  PIDS+=($!)
-  echo $! > "$DATA_DIR/app.pid"
-  wait_for "the app" 60 curl -sf "$APP_URL/api/health"
+  # Behind nginx as in production, with one app process unless PF_APP_PROCESSES says otherwise: every process warms
+  # up on its own, and the browser tests' time limits are set for one.
+  PF_APP_PROCESSES=${PF_APP_PROCESSES:-1} start_app
 }
 if step build build_and_serve; then :; fi
-if [ -f "$DATA_DIR/app.pid" ]; then
+if [ -f "$DATA_DIR/nginx.pid" ]; then
   step e2e env PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/playwright.json" \
     node_modules/.bin/playwright test --config e2e/playwright.config.ts --reporter=list,json
 fi

@@ -52,7 +52,10 @@ async function readText(req: Request, maxBytes: number): Promise<string> {
   if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge(maxBytes);
   if (!req.body) return "";
   const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
+  // Each chunk is decoded as it arrives (a character split between chunks is carried over), so the body is never
+  // copied into one buffer first.
+  const decoder = new TextDecoder("utf-8");
+  let text = "";
   let size = 0;
   for (;;) {
     const { done, value } = await reader.read();
@@ -62,9 +65,9 @@ async function readText(req: Request, maxBytes: number): Promise<string> {
       await reader.cancel().catch(() => {});
       throw tooLarge(maxBytes);
     }
-    chunks.push(value);
+    text += decoder.decode(value, { stream: true });
   }
-  return new TextDecoder("utf-8").decode(Buffer.concat(chunks));
+  return text + decoder.decode();
 }
 
 /** Walks the parsed value without recursion: bounded depth, no NUL in strings or keys. */

@@ -17,6 +17,7 @@ import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
 import { passwordResetMail } from "@/lib/mail/templates";
 import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
 import { endOtherSessions } from "./session";
+import { forgetCachedAuth } from "./token-auth";
 import { hashToken, randomToken } from "./tokens";
 
 /** How long an invitation link works. */
@@ -161,6 +162,7 @@ export async function resetPassword(token: string, password: string): Promise<{ 
       .where(and(eq(authAttempts.kind, "sign-in"), eq(authAttempts.key, `email:${updated.email}`)));
     return updated;
   });
+  forgetCachedAuth();
   await endOtherSessions(user.id, null);
   return { userId: user.id };
 }

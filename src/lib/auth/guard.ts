@@ -1,11 +1,11 @@
 import "server-only";
-import { findActiveApiToken } from "@/db/queries/api-tokens";
 import { getMembership } from "@/db/queries/members";
 import type { Role } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError, errorResponse } from "@/lib/errors";
 import { type Action, can } from "./permissions";
 import { type SessionUser, validateSessionCookie } from "./session";
+import { authenticateToken, tokenMembership } from "./token-auth";
 
 /**
  * Who may call a route handler. Every exported handler is wrapped by `route` or `publicRoute`, and a test
@@ -81,7 +81,11 @@ export function route<P = Params>(
       let member: MemberCaller | null = null;
       if ("action" in access) {
         if (!auth.workspaceId) throw new AppError("forbidden:no-workspace", "Choose a workspace first.");
-        const membership = await getMembership({ workspaceId: auth.workspaceId, userId: caller.user.id });
+        // A token's membership is remembered as briefly as the token itself (token-auth.ts); a session's is read.
+        const membership =
+          caller.via === "token"
+            ? await tokenMembership(auth.workspaceId, caller.user.id)
+            : await getMembership({ workspaceId: auth.workspaceId, userId: caller.user.id });
         if (!membership)
           throw new AppError("forbidden:not-a-member", "You are not a member of this workspace.");
         if (!can(membership.role, access.action, membership.leadRights)) {
@@ -111,7 +115,7 @@ async function authenticate(req: Request, allowBearer: boolean) {
   if (authorization?.startsWith("Bearer ")) {
     if (!allowBearer)
       throw new AppError("unauthenticated:token-not-accepted", "API tokens are accepted only under /api/v1.");
-    const token = await findActiveApiToken(authorization.slice(7).trim());
+    const token = await authenticateToken(authorization.slice(7).trim());
     if (!token) throw new AppError("unauthenticated:token", "The API token is not valid or was revoked.");
     return {
       caller: { user: token.user, sessionId: null, via: "token" } satisfies Caller,

@@ -1,7 +1,6 @@
-import { type CheckContext, checkPulse, prepareCheck } from "@/lib/soa/check";
+import { atCaseTemp, type CheckContext, checkPulse, prepareCheck } from "@/lib/soa/check";
 import type { FosterTerm } from "@/lib/soa/foster";
 import type { Policy, Pulse, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
-import { worseVerdict } from "@/lib/soa/verdict";
 
 /** Where a pulse of a project comes from. */
 export type PulseSource = "fault-case" | "measured" | "capture";
@@ -39,7 +38,8 @@ export interface Evaluation {
 
 /**
  * Checks every pulse against every candidate through the engine, at each pulse's case temperature and the project's
- * policy. One engine context per (candidate, case temperature); captures are loaded once and shared. With a case
+ * policy. One prepared part per candidate, shared by the case temperatures (only the derating differs); captures
+ * are loaded once and shared; no per-pulse allocation beyond the results themselves. With a case
  * path (METHODS.md §14) the case heats with each pulse's power through it.
  */
 export async function evaluate(
@@ -48,28 +48,42 @@ export async function evaluate(
   policy: Policy,
   caseNetwork?: FosterTerm[],
 ): Promise<Evaluation> {
-  const loaded = new Map<string, Pulse>();
-  for (const p of pulses) loaded.set(p.id, typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+  const loaded: Pulse[] = [];
+  for (const p of pulses) loaded.push(typeof p.pulse === "function" ? await p.pulse() : p.pulse);
   const results: Evaluation["results"] = {};
-  const worstByPulse: Evaluation["worstByPulse"] = {};
+  // The worst verdict so far per pulse, by index (severity 0..3); keyed by id once, at the end.
+  const worst = new Uint8Array(pulses.length);
+  const anyChecked = candidates.length > 0;
   for (const candidate of candidates) {
-    const contexts = new Map<number, CheckContext>();
     const forPart: Record<string, PulseResult> = {};
-    for (const p of pulses) {
-      if (candidate.limits === null) {
-        worstByPulse[p.id] = worseVerdict(worstByPulse[p.id] ?? "pass", "no-data");
-        continue;
-      }
+    if (candidate.limits === null) {
+      for (let k = 0; k < pulses.length; k++) worst[k] = Math.max(worst[k], SEVERITY["no-data"]);
+      results[candidate.partId] = forPart;
+      continue;
+    }
+    // One prepared part; each other case temperature shares its curves and thermal data (atCaseTemp).
+    let base: CheckContext | null = null;
+    const contexts = new Map<number, CheckContext>();
+    for (let k = 0; k < pulses.length; k++) {
+      const p = pulses[k];
       let ctx = contexts.get(p.caseTemp);
-      if (!ctx) {
-        ctx = prepareCheck(candidate.limits, p.caseTemp, policy, caseNetwork);
+      if (ctx === undefined) {
+        base ??= prepareCheck(candidate.limits, p.caseTemp, policy, caseNetwork);
+        ctx = atCaseTemp(base, p.caseTemp);
         contexts.set(p.caseTemp, ctx);
       }
-      const result = checkPulse(ctx, loaded.get(p.id)!);
+      const result = checkPulse(ctx, loaded[k]);
       forPart[p.id] = result;
-      worstByPulse[p.id] = worseVerdict(worstByPulse[p.id] ?? "pass", result.verdict);
+      const severity = SEVERITY[result.verdict];
+      if (severity > worst[k]) worst[k] = severity;
     }
     results[candidate.partId] = forPart;
   }
+  const worstByPulse: Evaluation["worstByPulse"] = {};
+  if (anyChecked) for (let k = 0; k < pulses.length; k++) worstByPulse[pulses[k].id] = VERDICTS[worst[k]];
   return { results, worstByPulse };
 }
+
+/** Verdicts by severity (METHODS.md §8: fail > no-data > marginal > pass). */
+const VERDICTS: readonly Verdict[] = ["pass", "marginal", "no-data", "fail"];
+const SEVERITY: Record<Verdict, number> = { pass: 0, marginal: 1, "no-data": 2, fail: 3 };

@@ -50,7 +50,7 @@ import type {
   Verdict,
   WaveformPulse,
 } from "./types";
-import { curveVerdict, thermalVerdict, utilisation, worseVerdict } from "./verdict";
+import { curveVerdict, thermalVerdict, utilisation, worse } from "./verdict";
 import { READ_CURRENT_SHARE, readWaveform, recordStart } from "./waveform-check";
 
 /** Everything about a part and its conditions that does not depend on the pulse, computed once per check. */
@@ -98,6 +98,15 @@ export function prepareCheck(
     // Both networks driven by the same power: their sum is the response of the union of their terms (§14).
     junction: network === null ? null : caseTerms === null ? network : [...network, ...caseTerms],
   };
+}
+
+/**
+ * The same part and conditions at another case temperature: only the derating differs, so the prepared curves,
+ * their reader and the thermal data are shared (a project checks its fault cases at their own temperatures).
+ */
+export function atCaseTemp(ctx: CheckContext, caseTemp: number): CheckContext {
+  if (caseTemp === ctx.caseTemp) return ctx;
+  return { ...ctx, caseTemp, derating: derate(ctx.part.tjMax, caseTemp, ctx.curves.refCaseTemp) };
 }
 
 /** What a pulse's kind contributes to its result. */
@@ -386,7 +395,7 @@ export function checkPulse(ctx: CheckContext, pulse: Pulse): PulseResult {
       hardFail: (outcome.flags & (FLAG_BIT["over-voltage"] | FLAG_BIT["over-current"])) !== 0,
     });
     if (outcome.noValueElsewhere && curve !== "fail") curve = "no-data";
-    if ((outcome.flags & FLAG_BIT["voltage-margin"]) !== 0) curve = worseVerdict(curve, "marginal");
+    if ((outcome.flags & FLAG_BIT["voltage-margin"]) !== 0) curve = worse(curve, "marginal");
   }
   let { flags } = outcome;
   if (ctx.caseNetwork !== null) flags |= FLAG_BIT["case-heating"];
@@ -396,8 +405,10 @@ export function checkPulse(ctx: CheckContext, pulse: Pulse): PulseResult {
     tjPeak = ctx.caseTemp + outcome.rise;
     thermal = thermalVerdict(tjPeak, ctx.part.tjMax, ctx.policy.tjGuard);
   }
-  let verdict = worseVerdict(curve, thermal ?? "pass", outcome.stabilityVerdict ?? "pass");
-  if (outcome.capMarginal) verdict = worseVerdict(verdict, "marginal");
+  let verdict = curve;
+  if (thermal !== null) verdict = worse(verdict, thermal);
+  if (outcome.stabilityVerdict !== null) verdict = worse(verdict, outcome.stabilityVerdict);
+  if (outcome.capMarginal) verdict = worse(verdict, "marginal");
   const result: PulseResult = {
     id: pulse.id,
     allowedCurrent: outcome.allowed,

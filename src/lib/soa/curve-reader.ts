@@ -26,9 +26,19 @@ export const WIDTH_TOLERANCE = 1e-9;
 /** Bit of each flag in a flag mask (the flag's position in FLAGS). */
 export const FLAG_BIT = Object.fromEntries(FLAGS.map((flag, k) => [flag, 1 << k])) as Record<Flag, number>;
 
-/** The flags of a mask, in FLAGS order. */
+// The flag lists made so far, one per mask: a matrix of 50 000 results has a few dozen distinct masks, so results
+// share them instead of each allocating its own. Frozen, so that no caller can change another result's flags.
+const flagLists = new Map<number, readonly Flag[]>();
+const MAX_FLAG_LISTS = 4096;
+
+/** The flags of a mask, in FLAGS order (a shared, frozen array). */
 export function flagsOf(mask: number): Flag[] {
-  return FLAGS.filter((_, k) => (mask & (1 << k)) !== 0);
+  let list = flagLists.get(mask);
+  if (list === undefined) {
+    list = Object.freeze(FLAGS.filter((_, k) => (mask & (1 << k)) !== 0));
+    if (flagLists.size < MAX_FLAG_LISTS) flagLists.set(mask, list);
+  }
+  return list as Flag[];
 }
 
 // A cap lowers the reading only when below it by more than 1e-12 relative (as a difference of logarithms).

@@ -5,7 +5,7 @@
 // curve's power level. Z_θ (transient thermal impedance) as defined by JEDEC JESD24-3.
 import type { PreparedCurve, PreparedCurveSet } from "./curve-set";
 import { type FosterTerm, rth, zth } from "./foster";
-import { type CurvePoint, interpolateCurve } from "./interpolate-curve";
+import type { CurvePoint } from "./interpolate-curve";
 
 /** Relative tolerance at the ends of the digitised width range, as for matching a width (METHODS.md §3). */
 const RANGE_TOLERANCE = 1e-9;
@@ -49,7 +49,26 @@ export function impedanceFromCurves(set: PreparedCurveSet, tjMax: number, rthJc?
     const first = levels[0][0];
     const last = levels[levels.length - 1][0];
     if (t < first * (1 - RANGE_TOLERANCE) || t > last * (1 + RANGE_TOLERANCE)) return null;
-    return interpolateCurve(levels, Math.min(last, Math.max(first, t))).current;
+    return levelAt(levels, Math.min(last, Math.max(first, t)));
   };
   return { zth: zthValue, rth: rthValue };
+}
+
+/**
+ * Z_th at t within [t_1, t_m] (clamped by the caller): interpolateCurve's log-log arithmetic, step for step, without
+ * its result object (repeated pulses read Z_th several times each).
+ */
+function levelAt(levels: readonly CurvePoint[], t: number): number {
+  let lo = 0;
+  let hi = levels.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (levels[mid][0] <= t) lo = mid;
+    else hi = mid - 1;
+  }
+  const [tj, zj] = levels[lo];
+  if (tj === t) return zj;
+  const [tk, zk] = levels[lo + 1];
+  const s = Math.log(zk / zj) / Math.log(tk / tj);
+  return zj * (t / tj) ** s;
 }

@@ -5,6 +5,7 @@ import { route } from "@/lib/auth/guard";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { changePasswordSchema } from "@/lib/auth/schemas";
 import { endOtherSessions } from "@/lib/auth/session";
+import { forgetCachedAuth } from "@/lib/auth/token-auth";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 
@@ -24,6 +25,7 @@ export const POST = route({ signedIn: true }, async (req, caller) => {
     .update(users)
     .set({ passwordHash: await hashPassword(newPassword) })
     .where(eq(users.id, caller.user.id));
+  forgetCachedAuth();
   await endOtherSessions(caller.user.id, caller.sessionId);
   return json({ status: "ok" });
 });

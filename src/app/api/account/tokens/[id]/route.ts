@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { apiTokens } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
+import { forgetCachedAuth } from "@/lib/auth/token-auth";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
 import { isUuid } from "@/lib/uuid";
@@ -29,5 +30,6 @@ export const DELETE = route<{ id: string }>({ signedIn: true }, async (_req, cal
       tx,
     );
   });
+  forgetCachedAuth();
   return json({ status: "ok" });
 });

@@ -6,6 +6,7 @@ import { memberships, projects } from "@/db/schema";
 import { type MemberCaller, route } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { changeRoleSchema } from "@/lib/auth/schemas";
+import { forgetCachedAuth } from "@/lib/auth/token-auth";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { isUuid } from "@/lib/uuid";
@@ -68,6 +69,7 @@ export const PATCH = route<{ userId: string }>(
         tx,
       );
     });
+    forgetCachedAuth();
     return json({
       status: "ok",
       role,
@@ -112,6 +114,7 @@ export const DELETE = route<{ userId: string }>(
         tx,
       );
     });
+    forgetCachedAuth();
     return json({ status: "ok" });
   },
 );

@@ -1,0 +1,155 @@
+// API tokens are remembered for a few seconds per process (src/lib/auth/auth-cache.ts). These tests hold the rules
+// on the real database: a change made by another process (here: another connection, not this process's routes)
+// reaches this one through the triggers' NOTIFY and ends the access within the stated TTL; last_used_at is
+// written off the response path at most once a minute; a wrong workspace is still a 404.
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { apiTokens, memberships, projects } from "@/db/schema";
+import { AUTH_CACHE_TTL_MS } from "@/lib/auth/auth-cache";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { authCache, settleTokenWrites, whenListening } from "@/lib/auth/token-auth";
+import {
+  addMember,
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { POST as createToken } from "../account/tokens/route";
+import { POST as checkPost } from "../v1/check/route";
+import { POST as postMeasurements } from "../v1/projects/[id]/measurements/route";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+
+const checkRequest = {
+  part: {
+    vdsMax: 80,
+    tjMax: 175,
+    soa: {
+      curves: [
+        {
+          duration: 1e-3,
+          points: [
+            [10, 40],
+            [40, 10],
+          ],
+        },
+      ],
+    },
+  },
+  caseTemp: 25,
+  pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
+};
+
+let ws: TestWorkspace;
+let other: TestWorkspace;
+beforeAll(async () => {
+  ws = await createTestWorkspace("Token cache");
+  other = await createTestWorkspace("Token cache other");
+  await whenListening();
+});
+afterAll(async () => {
+  await deleteWorkspace(ws.id);
+  await deleteWorkspace(other.id);
+  await testDb.sql.end();
+});
+
+async function newToken(userId: string) {
+  const cookie = await sessionCookie(userId, ws.id);
+  const res = await call(h(createToken), "POST", { cookie, body: { name: "cache" } });
+  return (await res.json()).token as { id: string; secret: string };
+}
+
+const check = (secret: string) => call(h(checkPost), "POST", { bearer: secret, body: checkRequest });
+
+/** Resolves at this process's next clear of its memory (a notification heard), or rejects after the TTL. */
+function nextClear(): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => {
+      stop();
+      reject(new Error(`no change was heard within the ${AUTH_CACHE_TTL_MS} ms TTL`));
+    }, AUTH_CACHE_TTL_MS);
+    const stop = authCache.onClear(() => {
+      clearTimeout(timer);
+      stop();
+      resolve();
+    });
+  });
+}
+
+describe("remembered API tokens", () => {
+  it("listen for changes, so they are remembered at all", () => {
+    expect(authCache.enabled).toBe(true);
+  });
+
+  it("answer 401 once another process revokes the token (heard through NOTIFY, within the TTL)", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    expect((await check(token.secret)).status).toBe(200);
+    // Remembered now: the second answer needs no database.
+    expect((await check(token.secret)).status).toBe(200);
+    const heard = nextClear();
+    // Another connection, as another app process would: this process's routes do not clear anything.
+    await testDb.db.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, token.id));
+    await heard;
+    expect((await check(token.secret)).status).toBe(401);
+  });
+
+  it("answer 403 once another process removes the member, and 200 again for a member re-added", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    expect((await check(token.secret)).status).toBe(200);
+    const heard = nextClear();
+    await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
+    await heard;
+    expect((await check(token.secret)).status).toBe(403);
+  });
+
+  it("are not cleared by a last_used_at write (no notification for it)", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    let cleared = 0;
+    const stop = authCache.onClear(() => cleared++);
+    await testDb.db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, token.id));
+    // A statement that does notify, after it: once it is heard, the earlier write would have been too.
+    const heard = nextClear();
+    await testDb.db.update(apiTokens).set({ revokedAt: null }).where(eq(apiTokens.id, token.id));
+    await heard;
+    stop();
+    expect(cleared).toBe(1);
+  });
+
+  it("have last_used_at written after the answer, once, not at every request", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    const lastUsed = async () =>
+      (await testDb.db.select().from(apiTokens).where(eq(apiTokens.id, token.id)))[0].lastUsedAt;
+    expect(await lastUsed()).toBeNull();
+    expect((await check(token.secret)).status).toBe(200);
+    await settleTokenWrites();
+    const first = await lastUsed();
+    expect(first).toBeInstanceOf(Date);
+    for (let k = 0; k < 5; k++) expect((await check(token.secret)).status).toBe(200);
+    await settleTokenWrites();
+    expect((await lastUsed())?.getTime()).toBe(first?.getTime());
+  });
+
+  it("still answer 404 for a project of another workspace, remembered or not", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    const [foreign] = await testDb.db
+      .insert(projects)
+      .values({ workspaceId: other.id, name: "Elsewhere", caseTemp: 60 })
+      .returning({ id: projects.id });
+    for (let k = 0; k < 2; k++) {
+      const res = await call(h(postMeasurements), "POST", {
+        bearer: token.secret,
+        params: { id: foreign.id },
+        body: { pulses: [] },
+      });
+      expect(res.status).toBe(404);
+    }
+  });
+});

@@ -1,0 +1,118 @@
+// A short-lived, in-process memory of API-token authentications and of the memberships they act in, so that the
+// check API does not ask the database three times per request (issue: fast under load).
+//
+// Rules that keep it safe:
+// - an entry lives at most AUTH_CACHE_TTL_MS (5 s) after it was read from the database: a change that reached no
+//   process's notice (a notification lost while the listening connection was down) is seen within that bound;
+// - every change that can end or narrow an access (token revoked or expired, password reset or changed, sign-out
+//   everywhere, a membership added, changed or removed, an account or workspace deleted) fires a PostgreSQL
+//   NOTIFY from a trigger (drizzle/0011), and every app process clears its whole memory when it hears one;
+//   the process that made the change also clears its own at once (`forgetCachedAuth`);
+// - a database read that started before a clear is not remembered after it (a generation counter), so a
+//   revocation racing a lookup cannot leave the old answer behind;
+// - only bearer-token requests use it; sessions keep their per-request lookups.
+import { LRUCache } from "lru-cache";
+import type { Role } from "@/db/schema";
+
+/** How long a token's or membership's answer is reused without the database, in ms. */
+export const AUTH_CACHE_TTL_MS = 5_000;
+/** `last_used_at` is written at most once per this interval per token (and never on the response path). */
+export const LAST_USED_INTERVAL_MS = 60_000;
+/** The PostgreSQL channel the triggers notify on any change to tokens, memberships or accounts. */
+export const AUTH_CHANNEL = "pulsefence_auth";
+
+export interface CachedToken {
+  id: string;
+  workspaceId: string;
+  user: { id: string; email: string; name: string };
+}
+
+export interface CachedMembership {
+  role: Role;
+  leadRights: boolean;
+}
+
+/** A clock in ms (performance.now() in the app; a test may pass its own). */
+export interface Clock {
+  now(): number;
+}
+
+const MAX_ENTRIES = 10_000;
+
+export class AuthCache {
+  /** Token hash → the live token, or null for a hash that matched no live token. */
+  private readonly tokens: LRUCache<string, { value: CachedToken | null }>;
+  private readonly memberships: LRUCache<string, CachedMembership>;
+  /** Token id → when this process last wrote its last_used_at (clock ms). Survives clears: it is not access. */
+  private readonly lastUsed: LRUCache<string, number>;
+  private generationCount = 0;
+  private readonly clearedListeners = new Set<() => void>();
+  /** False until the process listens for changes; nothing is remembered meanwhile. */
+  enabled: boolean;
+
+  constructor(
+    private readonly clock: Clock = performance,
+    options: { enabled?: boolean; ttlMs?: number } = {},
+  ) {
+    const ttl = options.ttlMs ?? AUTH_CACHE_TTL_MS;
+    this.enabled = options.enabled ?? true;
+    this.tokens = new LRUCache({ max: MAX_ENTRIES, ttl, ttlResolution: 0, perf: clock, ttlAutopurge: false });
+    this.memberships = new LRUCache({
+      max: MAX_ENTRIES,
+      ttl,
+      ttlResolution: 0,
+      perf: clock,
+      ttlAutopurge: false,
+    });
+    this.lastUsed = new LRUCache({ max: MAX_ENTRIES });
+  }
+
+  /** The current generation: pass it back to `remember…` so a read that raced a clear is dropped. */
+  generation(): number {
+    return this.generationCount;
+  }
+
+  token(hash: string): { value: CachedToken | null } | undefined {
+    return this.enabled ? this.tokens.get(hash) : undefined;
+  }
+
+  rememberToken(hash: string, value: CachedToken | null, generation: number): void {
+    if (this.enabled && generation === this.generationCount) this.tokens.set(hash, { value });
+  }
+
+  membership(workspaceId: string, userId: string): CachedMembership | undefined {
+    return this.enabled ? this.memberships.get(`${workspaceId}:${userId}`) : undefined;
+  }
+
+  rememberMembership(workspaceId: string, userId: string, value: CachedMembership, generation: number): void {
+    if (this.enabled && generation === this.generationCount) {
+      this.memberships.set(`${workspaceId}:${userId}`, value);
+    }
+  }
+
+  /**
+   * True when this token's last_used_at is due a write (none by this process within LAST_USED_INTERVAL_MS), and
+   * marks it written; the caller then writes it off the response path.
+   */
+  lastUsedDue(tokenId: string): boolean {
+    const now = this.clock.now();
+    const last = this.lastUsed.get(tokenId);
+    if (last !== undefined && now - last < LAST_USED_INTERVAL_MS) return false;
+    this.lastUsed.set(tokenId, now);
+    return true;
+  }
+
+  /** Forgets every token and membership (a change was made or heard of). */
+  clear(): void {
+    this.generationCount++;
+    this.tokens.clear();
+    this.memberships.clear();
+    for (const listener of this.clearedListeners) listener();
+  }
+
+  /** Calls `listener` at every clear until the returned function is called. */
+  onClear(listener: () => void): () => void {
+    this.clearedListeners.add(listener);
+    return () => this.clearedListeners.delete(listener);
+  }
+}
