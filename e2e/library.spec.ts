@@ -63,14 +63,20 @@ test("an engineer adds a part, drops its SOA curves and reads them derated and b
   });
 
   await test.step("dropping a CSV shows the progress, then the chart with every curve", async () => {
-    // Hold the check for a moment so that its progress words can be seen.
+    // Hold the check's request at the network layer until its progress words have been seen, then let it go.
+    let release = () => {};
+    const held = new Promise<void>((resolve) => {
+      release = resolve;
+    });
     await page.route("**/curve-sets", async (route) => {
-      await new Promise((resolve) => setTimeout(resolve, 1200));
+      await held;
       await route.continue();
     });
     await part.dropCsv("soa-curves.csv");
     await expect(page.getByText("Checking the curves…")).toBeVisible();
     await expect(page.getByRole("progressbar", { name: "Checking the curves…" })).toBeVisible();
+    await expect(page.getByText("soa-curves.csv accepted: 5 curves")).toHaveCount(0);
+    release();
     await expect(page.getByText("soa-curves.csv accepted: 5 curves")).toBeVisible();
     await page.unroute("**/curve-sets");
     await expect(part.series("curve")).toHaveCount(5);
