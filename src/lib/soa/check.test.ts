@@ -276,6 +276,7 @@ describe("runCheck, pulse shapes", () => {
     expect(reversed).toMatchObject({ curveVerdict: "no-data", allowedCurrent: null, at: null });
   });
 
+  // Derived from §8: the thermal verdict exists only with a thermal model.
   it("has no Tj and no thermal verdict without a Foster network", () => {
     const { foster: _, ...bare } = fullPart;
     for (const pulse of [
@@ -288,6 +289,7 @@ describe("runCheck, pulse shapes", () => {
     }
   });
 
+  // Our choice: results in request order, so a caller can pair them by position as well as by id.
   it("answers every pulse in request order, and nothing for no pulses", () => {
     const pulses: Pulse[] = ["c", "a", "b"].map((id) => ({ id, kind: "rect", v: 10, i: 1, duration: 1e-3 }));
     expect(check(fullPart, pulses).map((r) => r.id)).toEqual(["c", "a", "b"]);
@@ -299,12 +301,14 @@ describe("runCheck, flags and verdicts", () => {
   const rect = (v: number, i: number, duration: number, extra: Partial<Pulse> = {}) =>
     ({ kind: "rect", v, i, duration, ...extra }) as Shape;
 
+  // Derived from §2: V > V_DSS is a fail with flag over-voltage, whatever the curves say.
   it("over-voltage: V above V_DSS fails whatever the curves say", () => {
     const result = one({ ...fullPart, vdsMax: 50 }, rect(55, 0.1, 1e-3));
     expect(result).toMatchObject({ verdict: "fail", flags: ["over-voltage"] });
     expect(result.utilisation).toBeLessThan(0.8);
   });
 
+  // Derived from §6: hard limits of a waveform use max v_n.
   it("over-voltage on a capture uses its largest sample of v, not the peak-power sample", () => {
     const t = [0, 1e-3, 2e-3, 3e-3];
     const result = one(fullPart, { kind: "waveform", t, v: [61, 20, 20, 5], i: [0, 10, 10, 0] });
@@ -312,6 +316,7 @@ describe("runCheck, flags and verdicts", () => {
     expect(result.verdict).toBe("fail");
   });
 
+  // Derived from §2 and §6: I > I_DM fails; a waveform uses max |i_n|.
   it("over-current: I above I_DM fails; a capture uses its largest |i|", () => {
     expect(one(fullPart, rect(1, 401, 1e-5))).toMatchObject({
       verdict: "fail",
@@ -349,6 +354,7 @@ describe("runCheck, flags and verdicts", () => {
     });
   });
 
+  // Derived from §3: the three rules outside the curves' widths.
   it("shorter-than-shortest-curve, dc-curve-used and longer-than-longest-curve", () => {
     expect(one(fullPart, rect(20, 1, 1e-7)).flags).toEqual(["shorter-than-shortest-curve"]);
     expect(one(fullPart, rect(20, 1, 10)).flags).toEqual(["dc-curve-used"]);
@@ -361,6 +367,7 @@ describe("runCheck, flags and verdicts", () => {
     });
   });
 
+  // Derived from §2: below V_1 the first current, above V_n no value.
   it("below-curve-range keeps the first current; above-curve-range has no data", () => {
     expect(one(fullPart, rect(1, 1, 1e-3))).toMatchObject({
       allowedCurrent: expect.closeTo(300, 10),
@@ -373,6 +380,7 @@ describe("runCheck, flags and verdicts", () => {
     });
   });
 
+  // Derived from §6: t_eq = E/p_peak; p_peak = 0 is no-data with flag no-power.
   it("reads a one-sample spike at E/p = 1 ms; no power leaves a capture without a point on the curves", () => {
     const t = [0, 1e-3, 2e-3];
     // Derived: p = 0, 100, 0 W, E = 0.1 J by the trapezoid rule, so the spike is read at 1 ms: 40 A.
@@ -390,6 +398,7 @@ describe("runCheck, flags and verdicts", () => {
     });
   });
 
+  // Derived from §7: a Z_th value outside the data gives no-data, flag repetition-outside-data.
   it("repetition-outside-data without a Foster network when the curves do not reach the period", () => {
     const result = one(utilisationPart, rect(20, 1, 1e-3, { repeat: { period: 5e-2 } }));
     expect(result).toMatchObject({
@@ -436,12 +445,14 @@ describe("runCheck, flags and verdicts", () => {
     expect(one({ ...fullPart, vdsMax: 80 }, rect(70, 0.01, 1e-3)).verdict).toBe("no-data");
   });
 
+  // Derived from §8: pass up to u_max, marginal up to 1.
   it("applies the policy's utilisation limit", () => {
     const pulse = rect(20, 12, 2e-3);
     expect(one(utilisationPart, pulse, 100).verdict).toBe("pass");
     expect(one(utilisationPart, pulse, 100, { utilisationLimit: 0.7 }).verdict).toBe("marginal");
   });
 
+  // Our choice: one fixed flag order, so results compare and read the same every time.
   it("lists flags in one fixed order", () => {
     const result = one(
       { ...fullPart, vdsMax: 10, idPulseMax: 1 },
@@ -458,6 +469,7 @@ describe("runCheck, flags and verdicts", () => {
 });
 
 describe("checkPulse", () => {
+  // Our choice: the prepared path is an optimisation and must answer exactly what runCheck answers.
   it("reuses one prepared part for many pulses with the same results as runCheck", () => {
     const ctx = prepareCheck(fullPart, 70);
     const pulse: Pulse = {
@@ -679,6 +691,7 @@ describe("revision 2 rules", () => {
     expect(one(fullPart, rect(49, 0.1, 1e-3), 25, { voltageLimit: 0.9 }).curveVerdict).toBe("pass");
   });
 
+  // Derived from §6: ends-mid-pulse caps at marginal; v·i < −0.01·p_peak flags negative-power-clamped.
   it("ends-mid-pulse caps the verdict at marginal; negative power is clamped and flagged", () => {
     const t = [0, 1e-3, 2e-3];
     const ends = one(fullPart, { kind: "waveform", t, v: [10, 10, 10], i: [0, 1, 1] });
