@@ -62,6 +62,19 @@ test("an engineer adds a part, drops its SOA curves and reads them derated and b
     await expect(page.getByText("No SOA curves yet")).toBeVisible();
   });
 
+  await test.step("the upload panel links the example CSV files, served as static files", async () => {
+    for (const [name, href] of [
+      ["Example: table form (CSV)", "/examples/soa-curves-table.csv"],
+      ["Example: paired columns (CSV)", "/examples/soa-curves-paired.csv"],
+    ]) {
+      await expect(page.getByRole("link", { name })).toHaveAttribute("href", href);
+      const res = await page.request.get(href);
+      expect(res.status()).toBe(200);
+      expect(res.headers()["content-type"]).toContain("text/csv");
+      expect(await res.text()).toContain("V_DS [V]");
+    }
+  });
+
   await test.step("dropping a CSV shows the progress, then the chart with every curve", async () => {
     // Hold the check's request at the network layer until its progress words have been seen, then let it go.
     let release = () => {};
