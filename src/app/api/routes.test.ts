@@ -27,6 +27,7 @@ import {
 import type { Access, GuardedHandler } from "@/lib/auth/guard";
 import { type Action, can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
+import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import {
   addMember,
   type CallOptions,
@@ -301,10 +302,17 @@ async function project(): Promise<string> {
 
 async function projectWithDecision(): Promise<{ id: string; decisionId: string }> {
   const id = await project();
-  const snapshot = {
+  const snapshot: DecisionSnapshot = {
     takenAt: new Date().toISOString(),
     project: { id, name: "Route test", description: null, caseTemp: 60 },
-    policy: { caseTemp: 60, utilisationLimit: 0.8, tjGuard: 25, betweenCurves: "loglog" },
+    policy: {
+      caseTemp: 60,
+      utilisationLimit: 0.8,
+      tjGuard: 25,
+      voltageLimit: 0.8,
+      betweenCurves: "loglog",
+      caseNetwork: null,
+    },
     candidates: [],
     pulses: [],
     results: {},
