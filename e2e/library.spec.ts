@@ -62,15 +62,34 @@ test("an engineer adds a part, drops its SOA curves and reads them derated and b
     await expect(page.getByText("No SOA curves yet")).toBeVisible();
   });
 
+  await test.step("the upload panel links the example CSV files, served as static files", async () => {
+    for (const [name, href] of [
+      ["Example: table form (CSV)", "/examples/soa-curves-table.csv"],
+      ["Example: paired columns (CSV)", "/examples/soa-curves-paired.csv"],
+    ]) {
+      await expect(page.getByRole("link", { name })).toHaveAttribute("href", href);
+      const res = await page.request.get(href);
+      expect(res.status()).toBe(200);
+      expect(res.headers()["content-type"]).toContain("text/csv");
+      expect(await res.text()).toContain("V_DS [V]");
+    }
+  });
+
   await test.step("dropping a CSV shows the progress, then the chart with every curve", async () => {
-    // Hold the check for a moment so that its progress words can be seen.
+    // Hold the check's request at the network layer until its progress words have been seen, then let it go.
+    let release = () => {};
+    const held = new Promise<void>((resolve) => {
+      release = resolve;
+    });
     await page.route("**/curve-sets", async (route) => {
-      await new Promise((resolve) => setTimeout(resolve, 1200));
+      await held;
       await route.continue();
     });
     await part.dropCsv("soa-curves.csv");
     await expect(page.getByText("Checking the curves…")).toBeVisible();
     await expect(page.getByRole("progressbar", { name: "Checking the curves…" })).toBeVisible();
+    await expect(page.getByText("soa-curves.csv accepted: 5 curves")).toHaveCount(0);
+    release();
     await expect(page.getByText("soa-curves.csv accepted: 5 curves")).toBeVisible();
     await page.unroute("**/curve-sets");
     await expect(part.series("curve")).toHaveCount(5);

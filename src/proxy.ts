@@ -42,4 +42,4 @@ export function proxy(req: NextRequest) {
   return response;
 }
 
-export const config = { matcher: ["/((?!api|_next|fonts|favicon.ico).*)"] };
+export const config = { matcher: ["/((?!api|_next|fonts|examples|favicon.ico).*)"] };

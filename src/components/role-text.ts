@@ -13,6 +13,7 @@ export const roleSummaries: Record<Role, string> = {
 export const actionDescriptions: Record<Action, string> = {
   "workspace.read": "See the workspace's part library, projects, checks and decisions",
   "measurement.write": "Log measured pulses and upload scope captures",
+  "measurement.manage": "Correct or delete measured pulses and captures that others recorded",
   "check.run": "Run checks of pulses against candidate parts",
   "part.write": "Add parts to the library with their SOA curve sets and thermal models",
   "project.write": "Create projects, candidates and fault cases",

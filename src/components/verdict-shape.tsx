@@ -1,11 +1,6 @@
-export type Verdict = "pass" | "marginal" | "fail" | "no-data";
+import { verdictWords } from "./format";
 
-const label: Record<Verdict, string> = {
-  pass: "pass",
-  marginal: "marginal",
-  fail: "fail",
-  "no-data": "no data",
-};
+export type Verdict = "pass" | "marginal" | "fail" | "no-data";
 
 const colour: Record<Verdict, string> = {
   pass: "var(--color-pass)",
@@ -59,7 +54,7 @@ export function VerdictBadge({ verdict }: { verdict: Verdict }) {
       <svg width="12" height="12" viewBox="0 0 12 12" aria-hidden="true">
         <VerdictGlyph verdict={verdict} x={6} y={6} size={9} />
       </svg>
-      <span className="font-medium">{label[verdict]}</span>
+      <span className="font-medium">{verdictWords[verdict]}</span>
     </span>
   );
 }

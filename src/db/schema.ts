@@ -14,6 +14,8 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+// Types only (erased at run time): what a JSON column holds, so every read is typed without a cast.
+import type { DecisionSnapshot } from "@/lib/projects/decisions";
 
 // Tables ----------------------------------------------------------------------------------------------------
 
@@ -526,7 +528,7 @@ export const decisions = pgTable(
     chosenPartId: uuid().references(() => parts.id, { onDelete: "set null" }),
     chosenLabel: text().notNull(),
     rationale: text().notNull(),
-    snapshot: jsonb().$type<Record<string, unknown>>().notNull(),
+    snapshot: jsonb().$type<DecisionSnapshot>().notNull(),
     signedBy: uuid().references(() => users.id, { onDelete: "set null" }),
     signedByName: text().notNull(),
     signedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

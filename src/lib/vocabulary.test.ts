@@ -1,7 +1,7 @@
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { examplePairedCsv } from "@/lib/csv/curve-set-examples";
+import { readExample } from "@/test/examples";
 import { REPLACED_WORDS } from "./vocabulary";
 
 const root = path.join(import.meta.dirname, "..");
@@ -34,6 +34,6 @@ describe("the product's vocabulary", () => {
   });
 
   it("the paired-columns example names its quantities, not a digitiser's axis letters", () => {
-    expect(examplePairedCsv.split("\n")[1]).toMatch(/^V_DS \[V\],I_D \[A\]/);
+    expect(readExample("soa-curves-paired.csv").split("\n")[1]).toMatch(/^V_DS \[V\],I_D \[A\]/);
   });
 });

@@ -1,8 +1,12 @@
-// Every route handler against every role and against a member of another workspace.
-// The route files are found on disk: a new route without a guard, or without a fixture here, fails this test.
+// Every route handler against a pinned table of what each method needs, checked against the files on disk: a route
+// file or an exported method that is not in the table fails, and so does a handler whose guard declares another
+// action than the one pinned here (a destructive route declared with a read action cannot pass). Each method is
+// called as Next.js dispatches it (HEAD and OPTIONS implemented by the framework) by: nobody, a session cookie of
+// each role, an API token of each role, a member of another workspace, and a cookie from another site's page.
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { and, eq } from "drizzle-orm";
+import { autoImplementMethods } from "next/dist/server/route-modules/app-route/helpers/auto-implement-methods";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   apiTokens,
@@ -13,15 +17,20 @@ import {
   faultCases,
   invitations,
   measuredPulses,
+  memberships,
   parts,
+  pendingUploads,
   projectCandidates,
   projects,
+  type Role,
 } from "@/db/schema";
 import type { Access, GuardedHandler } from "@/lib/auth/guard";
-import { can, roles } from "@/lib/auth/permissions";
+import { type Action, can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
+import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import {
   addMember,
+  type CallOptions,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -31,7 +40,96 @@ import {
 } from "@/test/fixtures";
 
 const apiDir = path.join(import.meta.dirname);
-const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
+/** The methods a route file may export. HEAD and OPTIONS are left to Next.js (checked below), never exported. */
+const exportable = ["GET", "POST", "PUT", "PATCH", "DELETE", "HEAD", "OPTIONS"] as const;
+type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+const unsafe = new Set<string>(["POST", "PUT", "PATCH", "DELETE"]);
+
+/**
+ * What a method needs and what an allowed caller gets back: `need` is "public", "signed-in" (the caller's own
+ * account) or an action of the permission table; `bearer` when an API token is accepted (only under /api/v1);
+ * `ok` the status an allowed caller gets with `body` (default {}): a success, or the validation answer (400) of a
+ * request without the required fields.
+ */
+interface Pin {
+  need: "public" | "signed-in" | Action;
+  ok: number;
+  bearer?: true;
+  body?: unknown;
+}
+const pin = (need: Pin["need"], ok: number, extra: Omit<Pin, "need" | "ok"> = {}): Pin => ({
+  need,
+  ok,
+  ...extra,
+});
+
+// The pinned table. Adding a route or a method, or changing what one needs, is a decision: it is made here.
+const table: Record<string, Partial<Record<Method, Pin>>> = {
+  "/api/account/password": { POST: pin("signed-in", 400) },
+  "/api/account/profile": { PATCH: pin("signed-in", 400) },
+  "/api/account/tokens": {
+    GET: pin("signed-in", 200),
+    POST: pin("workspace.read", 201, { body: { name: "bench" } }),
+  },
+  "/api/account/tokens/[id]": { DELETE: pin("signed-in", 200) },
+  "/api/auth/forgot-password": { POST: pin("public", 400) },
+  "/api/auth/reset-password": { POST: pin("public", 400) },
+  "/api/auth/sign-in": { POST: pin("public", 400) },
+  "/api/auth/sign-out": { POST: pin("signed-in", 200) },
+  "/api/auth/sign-out-everywhere": { POST: pin("signed-in", 200) },
+  "/api/auth/sign-up": { POST: pin("public", 400) },
+  "/api/health": { GET: pin("public", 200) },
+  "/api/invitations/accept": { POST: pin("public", 400) },
+  "/api/parts": { GET: pin("workspace.read", 200), POST: pin("part.write", 400) },
+  "/api/parts/[id]": { GET: pin("workspace.read", 200), PATCH: pin("part.write", 400) },
+  "/api/parts/[id]/archive": { POST: pin("part.write", 200, { body: { archived: true } }) },
+  "/api/parts/[id]/curve-sets": { POST: pin("part.write", 400) },
+  "/api/parts/[id]/curve-sets/[setId]/activate": { POST: pin("part.write", 200) },
+  "/api/parts/[id]/curve-sets/[setId]/file": { GET: pin("workspace.read", 302) },
+  "/api/parts/[id]/limits": { GET: pin("workspace.read", 200) },
+  "/api/parts/[id]/thermal": { PUT: pin("part.write", 400) },
+  "/api/parts/[id]/thermal/fit": { POST: pin("part.write", 400) },
+  "/api/parts/[id]/transfer": { PUT: pin("part.write", 400), DELETE: pin("part.write", 200) },
+  "/api/parts/[id]/uploads": { POST: pin("part.write", 400) },
+  "/api/parts/[id]/verify": { POST: pin("part.verify", 200, { body: { acceptances: [] } }) },
+  "/api/projects": { GET: pin("workspace.read", 200), POST: pin("project.write", 400) },
+  "/api/projects/sample": { POST: pin("project.write", 201) },
+  "/api/projects/[id]": { GET: pin("workspace.read", 200), PATCH: pin("project.write", 400) },
+  "/api/projects/[id]/archive": { POST: pin("project.write", 200, { body: { archived: true } }) },
+  "/api/projects/[id]/audit": { GET: pin("audit.read", 200) },
+  "/api/projects/[id]/candidates": { POST: pin("project.write", 400) },
+  "/api/projects/[id]/candidates/[partId]": { DELETE: pin("project.write", 200) },
+  "/api/projects/[id]/captures": { GET: pin("workspace.read", 200), POST: pin("measurement.write", 400) },
+  "/api/projects/[id]/captures/[captureId]": {
+    GET: pin("workspace.read", 200),
+    DELETE: pin("measurement.write", 200),
+  },
+  "/api/projects/[id]/check": { GET: pin("workspace.read", 200) },
+  "/api/projects/[id]/decisions": { GET: pin("workspace.read", 200), POST: pin("decision.sign", 400) },
+  "/api/projects/[id]/decisions/[decisionId]": { GET: pin("workspace.read", 200) },
+  "/api/projects/[id]/decisions/[decisionId]/csv": { GET: pin("workspace.read", 200) },
+  "/api/projects/[id]/decisions/[decisionId]/report": { GET: pin("workspace.read", 200) },
+  "/api/projects/[id]/fault-cases": { POST: pin("project.write", 400) },
+  "/api/projects/[id]/fault-cases/[caseId]": {
+    PATCH: pin("project.write", 400),
+    DELETE: pin("project.write", 200),
+  },
+  "/api/projects/[id]/matrix": { GET: pin("workspace.read", 200) },
+  "/api/projects/[id]/measurements": { POST: pin("measurement.write", 400) },
+  "/api/projects/[id]/measurements/[measurementId]": {
+    PATCH: pin("measurement.write", 400),
+    DELETE: pin("measurement.write", 200),
+  },
+  "/api/projects/[id]/measurements/preview": { POST: pin("measurement.write", 400) },
+  "/api/projects/[id]/uploads": { POST: pin("measurement.write", 400) },
+  "/api/team/invitations": { GET: pin("member.invite", 200), POST: pin("member.invite", 400) },
+  "/api/team/invitations/[id]": { DELETE: pin("member.invite", 200) },
+  "/api/team/invitations/[id]/resend": { POST: pin("member.invite", 201) },
+  "/api/team/members/[userId]": { PATCH: pin("member.manage", 400), DELETE: pin("member.manage", 200) },
+  "/api/v1/check": { POST: pin("check.run", 400, { bearer: true }) },
+  "/api/v1/projects/[id]/measurements": { POST: pin("measurement.write", 400, { bearer: true }) },
+  "/api/workspaces/switch": { POST: pin("signed-in", 400) },
+};
 
 function findRoutes(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {
@@ -46,20 +144,40 @@ const routeFiles = findRoutes(apiDir).map((file) => ({
   route: `/api/${path.relative(apiDir, path.dirname(file)).split(path.sep).join("/")}`,
 }));
 
-// Routes anyone may call. Making a route public is a decision: it must be listed here.
-const publicRoutes = new Set([
-  "POST /api/auth/sign-up",
-  "POST /api/auth/sign-in",
-  "POST /api/auth/forgot-password",
-  "POST /api/auth/reset-password",
-  "POST /api/invitations/accept",
-  "GET /api/health",
-]);
+type Module = Partial<Record<(typeof exportable)[number], GuardedHandler>>;
+type Dispatch = Record<
+  string,
+  (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>
+>;
+const modules = new Map<string, Module>();
+async function load(route: string): Promise<Module> {
+  const found = routeFiles.find((r) => r.route === route);
+  if (!found) throw new Error(`no route file for ${route}`);
+  if (!modules.has(route)) modules.set(route, (await import(found.file)) as Module);
+  return modules.get(route)!;
+}
+
+/** The route's handler for `method` as Next.js picks it: HEAD runs GET, OPTIONS is answered, others are 405. */
+async function dispatch(route: string, method: string, options: CallOptions = {}): Promise<Response> {
+  const handlers = autoImplementMethods((await load(route)) as never) as unknown as Dispatch;
+  const handler = handlers[method];
+  const withBody = method !== "GET" && method !== "HEAD" && method !== "OPTIONS";
+  return call(handler as never, method, { ...options, body: withBody ? (options.body ?? {}) : undefined });
+}
 
 let a: TestWorkspace; // the workspace whose resources are addressed
-// Members of a who hold lead rights beside their role (one-person teams): an admin and a technician.
-const withLeadRights: { role: (typeof roles)[number]; id: string }[] = [];
 let b: TestWorkspace; // another team: must never reach a's resources
+interface Caller {
+  who: string;
+  role: Role;
+  id: string;
+  leadRights: boolean;
+}
+/**
+ * Every member of a: one per role, and an admin and a technician who hold lead rights beside their role. Each call
+ * gets a fresh session or token, so that no call depends on what an earlier one did (sign-out-everywhere revokes).
+ */
+const callers: Caller[] = [];
 
 // Fresh resources of workspace a for each call of a route with parameters (a call may consume them).
 const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
@@ -69,13 +187,13 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/account/tokens/[id]": async () => ({ id: await apiToken() }),
   "/api/parts/[id]": async () => ({ id: await part() }),
   "/api/parts/[id]/archive": async () => ({ id: await part() }),
-  "/api/parts/[id]/verify": async () => ({ id: await part() }),
+  "/api/parts/[id]/verify": async () => partWithCurveSet(),
   "/api/parts/[id]/thermal": async () => ({ id: await part() }),
   "/api/parts/[id]/transfer": async () => ({ id: await part() }),
   "/api/parts/[id]/thermal/fit": async () => ({ id: await part() }),
   "/api/parts/[id]/uploads": async () => ({ id: await part() }),
   "/api/parts/[id]/curve-sets": async () => ({ id: await part() }),
-  "/api/parts/[id]/limits": async () => ({ id: await part() }),
+  "/api/parts/[id]/limits": async () => partWithCurveSet(),
   "/api/parts/[id]/curve-sets/[setId]/file": async () => partWithCurveSet(),
   "/api/projects/[id]": async () => ({ id: await project() }),
   "/api/projects/[id]/archive": async () => ({ id: await project() }),
@@ -184,10 +302,17 @@ async function project(): Promise<string> {
 
 async function projectWithDecision(): Promise<{ id: string; decisionId: string }> {
   const id = await project();
-  const snapshot = {
+  const snapshot: DecisionSnapshot = {
     takenAt: new Date().toISOString(),
     project: { id, name: "Route test", description: null, caseTemp: 60 },
-    policy: { caseTemp: 60, utilisationLimit: 0.8, tjGuard: 25, betweenCurves: "loglog" },
+    policy: {
+      caseTemp: 60,
+      utilisationLimit: 0.8,
+      tjGuard: 25,
+      voltageLimit: 0.8,
+      betweenCurves: "loglog",
+      caseNetwork: null,
+    },
     candidates: [],
     pulses: [],
     results: {},
@@ -266,21 +391,45 @@ async function apiToken(): Promise<string> {
   return row.id;
 }
 
-async function load(file: string): Promise<Partial<Record<(typeof methods)[number], GuardedHandler>>> {
-  return (await import(file)) as Partial<Record<(typeof methods)[number], GuardedHandler>>;
+async function apiTokenFor(userId: string, workspaceId: string): Promise<string> {
+  const secret = randomToken("pf_");
+  await testDb.db.insert(apiTokens).values({
+    userId,
+    workspaceId,
+    name: "route test",
+    tokenHash: hashToken(secret),
+    prefix: secret.slice(0, 9),
+  });
+  return secret;
+}
+
+async function pendingUpload(workspaceId: string, purpose: string): Promise<string> {
+  const [row] = await testDb.db
+    .insert(pendingUploads)
+    .values({
+      workspaceId,
+      objectKey: `${workspaceId}/test/${crypto.randomUUID()}`,
+      fileName: "x.csv",
+      purpose,
+    })
+    .returning({ id: pendingUploads.id });
+  return row.id;
 }
 
 beforeAll(async () => {
   a = await createTestWorkspace("Routes A");
   b = await createTestWorkspace("Routes B");
-  const { memberships } = await import("@/db/schema");
+  for (const role of roles) {
+    const id = a.members[role].id;
+    callers.push({ who: role, role, id, leadRights: false });
+  }
   for (const role of ["admin", "technician"] as const) {
-    const user = await addMember(a.id, role);
+    const { id } = await addMember(a.id, role);
     await testDb.db
       .update(memberships)
       .set({ leadRights: true })
-      .where(and(eq(memberships.userId, user.id), eq(memberships.workspaceId, a.id)));
-    withLeadRights.push({ role, id: user.id });
+      .where(and(eq(memberships.userId, id), eq(memberships.workspaceId, a.id)));
+    callers.push({ who: `${role} with lead rights`, role, id, leadRights: true });
   }
 });
 afterAll(async () => {
@@ -289,98 +438,307 @@ afterAll(async () => {
   await testDb.sql.end();
 });
 
-describe("route guards", () => {
-  it("finds the route handlers on disk", () => {
-    expect(routeFiles.length).toBeGreaterThanOrEqual(15);
+const allows = (need: Pin["need"], c: Pick<Caller, "role" | "leadRights">) =>
+  need === "signed-in" || need === "public" || can(c.role, need, c.leadRights);
+const pinnedMethods = (route: string) => Object.keys(table[route] ?? {}) as Method[];
+/** The methods each route is called with: its pinned ones, and HEAD for a GET (Next.js runs GET for it). */
+const calledMethods = (route: string) => [...pinnedMethods(route), ...(table[route]?.GET ? ["HEAD"] : [])];
+const pinOf = (route: string, method: string) =>
+  table[route][(method === "HEAD" ? "GET" : method) as Method]!;
+const params = (route: string, owner = a.members.engineer.id) => {
+  tokenOwner = owner;
+  return paramFixtures[route]?.() ?? Promise.resolve({});
+};
+
+describe("the pinned route table", () => {
+  it("lists exactly the route files and the methods they export", async () => {
+    const onDisk: string[] = [];
+    for (const { route } of routeFiles) {
+      const mod = await load(route);
+      for (const method of exportable) if (mod[method]) onDisk.push(`${method} ${route}`);
+    }
+    const pinned = Object.keys(table).flatMap((route) => pinnedMethods(route).map((m) => `${m} ${route}`));
+    expect(onDisk.sort()).toEqual(pinned.sort());
   });
 
-  for (const { file, route } of routeFiles) {
-    describe(route, () => {
-      it("wraps every exported handler in a guard; public ones are listed", async () => {
-        const mod = await load(file);
-        const exported = methods.filter((m) => mod[m]);
-        expect(exported.length).toBeGreaterThan(0);
-        for (const method of exported) {
-          const access = mod[method]?.access as Access | undefined;
-          expect(access, `${method} ${route} has no guard`).toBeTypeOf("object");
-          expect(
-            "public" in access! === publicRoutes.has(`${method} ${route}`),
-            `${method} ${route} public?`,
-          ).toBe(true);
-        }
-        if (route.includes("[")) expect(paramFixtures[route], `add a fixture for ${route}`).toBeDefined();
-      });
+  it("has a fixture for every route with parameters", () => {
+    for (const route of Object.keys(table))
+      if (route.includes("[")) expect(paramFixtures[route], `add a fixture for ${route}`).toBeDefined();
+  });
+});
 
-      it("answers 401 without a session, allows or denies each role by the permission table", async () => {
-        const mod = await load(file);
-        for (const method of methods) {
-          const handler = mod[method];
-          if (!handler || "public" in handler.access) continue;
-          const access = handler.access;
-          const params = () => paramFixtures[route]?.() ?? Promise.resolve({});
-          const anonymous = await call(handler, method, { body: {}, params: await params() });
-          expect(anonymous.status, `${method} ${route} without a session`).toBe(401);
-          const callers = [
-            ...roles.map((role) => ({ role, id: a.members[role].id, leadRights: false })),
-            ...withLeadRights.map((m) => ({ ...m, leadRights: true })),
-          ];
-          for (const { role, id, leadRights } of callers) {
-            const who = leadRights ? `${role} with lead rights` : role;
-            tokenOwner = id;
-            const res = await call(handler, method, {
-              cookie: await sessionCookie(id, a.id),
-              body: {},
-              params: await params(),
+for (const route of Object.keys(table)) {
+  describe(route, () => {
+    it("declares the guard pinned for each method", async () => {
+      const mod = await load(route);
+      for (const method of pinnedMethods(route)) {
+        const { need, bearer } = table[route][method]!;
+        const access = mod[method]?.access as Access | undefined;
+        const expected: Access =
+          need === "public"
+            ? { public: true }
+            : need === "signed-in"
+              ? { signedIn: true }
+              : { action: need, ...(bearer ? { bearer } : {}) };
+        expect(access, `${method} ${route}`).toEqual(expected);
+      }
+    });
+
+    it("answers anonymous callers 401, or the public answer", async () => {
+      for (const method of calledMethods(route)) {
+        const { need, ok, body } = pinOf(route, method);
+        const res = await dispatch(route, method, { body, params: await params(route) });
+        expect(res.status, `${method} ${route} without a session`).toBe(need === "public" ? ok : 401);
+      }
+    });
+
+    it("OPTIONS names the methods without running a handler; other methods are 405", async () => {
+      const res = await dispatch(route, "OPTIONS", { params: await params(route) });
+      expect(res.status).toBe(204);
+      const allow = [...calledMethods(route), "OPTIONS"].sort().join(", ");
+      expect(res.headers.get("allow")).toBe(allow);
+      for (const method of ["GET", "POST", "PUT", "PATCH", "DELETE"].filter(
+        (m) => !table[route][m as Method],
+      )) {
+        const other = await dispatch(route, method, { params: await params(route) });
+        expect(other.status, `${method} ${route}`).toBe(405);
+      }
+    });
+
+    if (Object.values(table[route]).every((p) => p.need === "public")) return;
+
+    it("allows or refuses a session cookie of each role as the table says", async () => {
+      for (const method of calledMethods(route)) {
+        const { need, ok, body } = pinOf(route, method);
+        for (const caller of callers) {
+          const res = await dispatch(route, method, {
+            cookie: await sessionCookie(caller.id, a.id),
+            body,
+            params: await params(route, caller.id),
+          });
+          const expected = allows(need, caller) ? ok : 403;
+          expect(res.status, `${caller.who}: ${method} ${route}`).toBe(expected);
+        }
+      }
+    });
+
+    it("accepts an API token only under /api/v1, by the same table", async () => {
+      for (const method of calledMethods(route)) {
+        const { need, ok, body, bearer } = pinOf(route, method);
+        for (const caller of callers) {
+          const res = await dispatch(route, method, {
+            bearer: await apiTokenFor(caller.id, a.id),
+            body,
+            params: await params(route, caller.id),
+          });
+          const expected = !bearer ? 401 : allows(need, caller) ? ok : 403;
+          expect(res.status, `${caller.who} by token: ${method} ${route}`).toBe(expected);
+        }
+      }
+    });
+
+    const changes = pinnedMethods(route).filter((m) => unsafe.has(m));
+    if (changes.length > 0)
+      it("refuses a cookie-authenticated change from another site or without an Origin", async () => {
+        for (const method of changes) {
+          const { need, ok, body, bearer } = pinOf(route, method);
+          const caller = callers.find((c) => allows(need, c))!;
+          const cookie = await sessionCookie(caller.id, a.id);
+          for (const origin of ["https://elsewhere.example", null]) {
+            const headers: Record<string, string> = origin ? { origin } : {};
+            const res = await callWithout(route, method, origin === null, {
+              cookie,
+              headers,
+              body,
+              params: await params(route, caller.id),
             });
-            const allowed = "signedIn" in access || can(role, access.action, leadRights);
-            if (allowed)
-              expect([401, 403], `${who} ${method} ${route} → ${res.status}`).not.toContain(res.status);
-            else expect(res.status, `${who} ${method} ${route}`).toBe(403);
+            expect(res.status, `${method} ${route} from ${origin ?? "no origin"}`).toBe(403);
+          }
+          // A token is not sent by a browser on its own: the Origin does not matter to it.
+          if (bearer) {
+            const res = await dispatch(route, method, {
+              bearer: await apiTokenFor(caller.id, a.id),
+              headers: { origin: "https://elsewhere.example" },
+              body,
+              params: await params(route, caller.id),
+            });
+            expect(res.status, `${method} ${route} by token from another site`).toBe(ok);
           }
         }
       });
 
-      if (!route.includes("[")) return;
-      it("answers 404 to a member of another workspace", async () => {
-        const mod = await load(file);
-        for (const method of methods) {
-          const handler = mod[method];
-          if (!handler) continue;
-          tokenOwner = a.members.engineer.id;
-          // An outsider whose role in their own workspace would allow the action: only the wall stops them.
-          const access = handler.access;
-          const outsiderRole = "action" in access ? roles.find((r) => can(r, access.action))! : "admin";
-          const outsider = b.members[outsiderRole];
-          const res = await call(handler, method, {
-            cookie: await sessionCookie(outsider.id, b.id),
-            body: { role: "lead" },
-            params: await paramFixtures[route]!(),
-          });
-          expect(res.status, `${method} ${route} from another workspace`).toBe(404);
-        }
-      });
+    if (!route.includes("[")) return;
+    it("answers 404 to a member of another workspace addressing this workspace's ids in the path", async () => {
+      for (const method of calledMethods(route)) {
+        const { need, body } = pinOf(route, method);
+        // An outsider whose role in their own workspace would allow the action: only the wall stops them.
+        const role = roles.find((r) => allows(need, { role: r, leadRights: false })) ?? "admin";
+        const outsider = b.members[role];
+        const res = await dispatch(route, method, {
+          cookie: await sessionCookie(outsider.id, b.id),
+          body: body ?? { role: "lead" },
+          params: await params(route),
+        });
+        expect(res.status, `${method} ${route} from another workspace`).toBe(404);
+      }
     });
-  }
+  });
+}
+
+/** Calls a change with a cookie, optionally without any Origin header (a script or an old browser). */
+async function callWithout(route: string, method: string, noOrigin: boolean, options: CallOptions) {
+  if (!noOrigin) return dispatch(route, method, options);
+  const handlers = autoImplementMethods((await load(route)) as never) as unknown as Dispatch;
+  const headers = new Headers({ host: new URL(process.env.APP_URL ?? "http://127.0.0.1:3100").host });
+  if (options.cookie) headers.set("cookie", options.cookie);
+  headers.set("content-type", "application/json");
+  const req = new Request(new URL("/api/test", process.env.APP_URL ?? "http://127.0.0.1:3100"), {
+    method,
+    headers,
+    body: JSON.stringify(options.body ?? {}),
+  });
+  return handlers[method](req, { params: Promise.resolve(options.params ?? {}) });
+}
+
+// Ids of another workspace's resources in a request's body or query string: 404 or 400, never a success.
+describe("foreign ids in bodies and query strings", () => {
+  const cookieOf = (role: Role) => sessionCookie(a.members[role].id, a.id);
+  let foreignPart = "";
+  let foreignProject = "";
+  beforeAll(async () => {
+    const [p] = await testDb.db
+      .insert(parts)
+      .values({
+        workspaceId: b.id,
+        partNumber: "FOREIGN-1",
+        maker: "Elsewhere",
+        technology: "si-mosfet",
+        package: "TO-220",
+        vdsMax: 80,
+        tjMax: 175,
+      })
+      .returning({ id: parts.id });
+    foreignPart = p.id;
+    const [q] = await testDb.db
+      .insert(projects)
+      .values({ workspaceId: b.id, name: "Foreign project", caseTemp: 25 })
+      .returning({ id: projects.id });
+    foreignProject = q.id;
+  });
+
+  it("a candidate from another workspace's library is 404", async () => {
+    const res = await dispatch("/api/projects/[id]/candidates", "POST", {
+      cookie: await cookieOf("engineer"),
+      body: { partId: foreignPart },
+      params: { id: await project() },
+    });
+    expect(res.status).toBe(404);
+  });
+
+  it("signing another workspace's part as the choice is 400", async () => {
+    const res = await dispatch("/api/projects/[id]/decisions", "POST", {
+      cookie: await cookieOf("lead"),
+      body: { partId: foreignPart, rationale: "The other team's part looked fine to us." },
+      params: { id: await project() },
+    });
+    expect(res.status).toBe(400);
+  });
+
+  it("a project owner from another workspace is 400, on create and on edit", async () => {
+    const body = { name: "Owned elsewhere", caseTemp: "25", ownerId: b.members.engineer.id };
+    const cookie = await cookieOf("engineer");
+    expect((await dispatch("/api/projects", "POST", { cookie, body })).status).toBe(400);
+    const edit = await dispatch("/api/projects/[id]", "PATCH", {
+      cookie,
+      body,
+      params: { id: await project() },
+    });
+    expect(edit.status).toBe(400);
+  });
+
+  it("switching to a workspace the user is not a member of is 404", async () => {
+    const res = await dispatch("/api/workspaces/switch", "POST", {
+      cookie: await cookieOf("engineer"),
+      body: { workspaceId: b.id },
+    });
+    expect(res.status).toBe(404);
+  });
+
+  it("an upload registered by another workspace is 404 for curve sets, Z_th fits and captures", async () => {
+    const cookie = await cookieOf("engineer");
+    const curve = await dispatch("/api/parts/[id]/curve-sets", "POST", {
+      cookie,
+      body: { uploadId: await pendingUpload(b.id, "curve-set") },
+      params: { id: await part() },
+    });
+    expect(curve.status).toBe(404);
+    const fit = await dispatch("/api/parts/[id]/thermal/fit", "POST", {
+      cookie,
+      body: { uploadId: await pendingUpload(b.id, "zth") },
+      params: { id: await part() },
+    });
+    expect(fit.status).toBe(404);
+    const capture = await dispatch("/api/projects/[id]/captures", "POST", {
+      cookie,
+      body: {
+        uploadId: await pendingUpload(b.id, "capture"),
+        name: "C1",
+        mapping: { time: 0, voltage: 1, current: 2 },
+      },
+      params: { id: await project() },
+    });
+    expect(capture.status).toBe(404);
+  });
+
+  it("ids of another workspace in the query string change nothing a GET answers", async () => {
+    const query = `?workspaceId=${b.id}&projectId=${foreignProject}&partId=${foreignPart}&id=${foreignPart}`;
+    const cookie = await cookieOf("lead");
+    for (const route of Object.keys(table).filter((r) => table[r].GET && table[r].GET?.need !== "public")) {
+      const res = await dispatch(route, "GET", {
+        cookie,
+        path: `/api/x${query}`,
+        params: await params(route),
+      });
+      expect(res.status, `GET ${route}${query}`).toBe(table[route].GET!.ok);
+      const text = res.status === 302 ? (res.headers.get("location") ?? "") : await res.text();
+      for (const id of [b.id, foreignProject, foreignPart]) expect(text, `GET ${route}`).not.toContain(id);
+    }
+  });
 });
 
-describe("cross-workspace", () => {
+// measurement.write lets a member change what they recorded; measurement.manage, what anyone recorded.
+describe("measured pulses and captures recorded by another member", () => {
+  for (const route of [
+    "/api/projects/[id]/measurements/[measurementId]",
+    "/api/projects/[id]/captures/[captureId]",
+  ])
+    it(`DELETE ${route}: 403 for an engineer, 200 for a lead and an admin`, async () => {
+      const author = a.members.technician.id;
+      for (const role of ["engineer", "lead", "admin"] as const) {
+        const res = await dispatch(route, "DELETE", {
+          cookie: await sessionCookie(a.members[role].id, a.id),
+          params: await params(route, author),
+        });
+        expect(res.status, role).toBe(role === "engineer" ? 403 : 200);
+      }
+    });
+});
+
+describe("sessions and workspaces", () => {
   it("a session cannot act in a workspace its user is not a member of", async () => {
-    const { GET } = await import("./team/invitations/route");
-    const res = await call(GET as GuardedHandler, "GET", {
+    const res = await dispatch("/api/team/invitations", "GET", {
       cookie: await sessionCookie(b.members.admin.id, a.id),
     });
     expect(res.status).toBe(403);
   });
 
   it("a member removed from the workspace loses access at once", async () => {
-    const { GET } = await import("./team/invitations/route");
     const lead = await addMember(a.id, "lead");
     const cookie = await sessionCookie(lead.id, a.id);
-    expect((await call(GET as GuardedHandler, "GET", { cookie })).status).toBe(200);
-    const { memberships } = await import("@/db/schema");
+    expect((await dispatch("/api/team/invitations", "GET", { cookie })).status).toBe(200);
     await testDb.db
       .delete(memberships)
       .where(and(eq(memberships.userId, lead.id), eq(memberships.workspaceId, a.id)));
-    expect((await call(GET as GuardedHandler, "GET", { cookie })).status).toBe(403);
+    expect((await dispatch("/api/team/invitations", "GET", { cookie })).status).toBe(403);
   });
 });

@@ -1,45 +1,14 @@
 import { triangleEquivalent } from "@/lib/soa/equivalent-rectangle";
-import type { PulseResult, Verdict } from "@/lib/soa/types";
-import { formatQuantity, type Unit } from "@/lib/soa/units";
-import type { CheckedPulse, PulseSource } from "./types";
+import type { PulseResult } from "@/lib/soa/types";
+import { percent, q, sourceWords, verdictWords } from "../format";
+import type { CheckedPulse } from "./types";
 
-export const verdictWords: Record<Verdict, string> = {
-  pass: "pass",
-  marginal: "marginal",
-  fail: "fail",
-  "no-data": "no data",
-};
-
-export const sourceWords: Record<PulseSource, string> = {
-  "fault-case": "fault case",
-  measured: "measured",
-  capture: "capture",
-};
-
-/** A quantity, or a dash where there is none (JSON turns NaN into null). */
-export function q(value: number | null | undefined, unit: Unit | "", digits = 3): string {
-  return value === null || value === undefined || !Number.isFinite(value)
-    ? "—"
-    : formatQuantity(value, unit, digits);
-}
-
-/** Utilisation as a percentage: 0.834 → "83 %", 1.32 → "132 %", 0.042 → "4.2 %". */
-export function percent(u: number | null | undefined): string {
-  if (u === null || u === undefined || !Number.isFinite(u)) return "—";
-  return `${u < 0.1 ? (u * 100).toPrecision(2) : Math.round(u * 100)}\u2009%`;
-}
+export { percent, q, shapeWords, sourceWords, verdictWords } from "../format";
 
 /** "1 pulse", "3 pulses". */
 export function plural(count: number, noun: string): string {
   return `${count} ${noun}${count === 1 ? "" : "s"}`;
 }
-
-export const shapeWords = {
-  rect: "rectangle",
-  triangle: "falling triangle",
-  waveform: "waveform",
-  avalanche: "unclamped turn-off (avalanche)",
-} as const;
 
 /** A unit cost with its currency ("2.85 EUR"), or a dash. */
 export function money(value: number | null, currency: string | null): string {

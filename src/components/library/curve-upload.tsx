@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { messageOf } from "@/components/api-client";
 import { FormMessage } from "@/components/form";
-import { curveCsvHelp, exampleLongCsv, examplePairedCsv } from "@/lib/csv/curve-set-examples";
+import { curveCsvHelp } from "@/lib/csv/curve-set-help";
 import type { CsvIssue } from "@/lib/csv/issues";
 import { callJson, RejectedFile, uploadToStorage } from "./api";
 import { CsvDropzone } from "./csv-dropzone";
@@ -24,8 +24,6 @@ interface Registered {
   findings: unknown[];
   warnings: CsvIssue[];
 }
-
-const exampleHref = (text: string) => `data:text/csv;charset=utf-8,${encodeURIComponent(text)}`;
 
 /**
  * Uploads a curve set: the browser sends the CSV straight to storage (progress in words), then the server reads
@@ -112,14 +110,14 @@ export function CurveUpload({ partId }: { partId: string }) {
         <p>{curveCsvHelp[0]}</p>
         <p className="flex flex-wrap gap-x-4 gap-y-1">
           <a
-            href={exampleHref(exampleLongCsv)}
+            href="/examples/soa-curves-table.csv"
             download="pulsefence-soa-example-table.csv"
             className="text-accent underline underline-offset-2"
           >
             Example: table form (CSV)
           </a>
           <a
-            href={exampleHref(examplePairedCsv)}
+            href="/examples/soa-curves-paired.csv"
             download="pulsefence-soa-example-paired.csv"
             className="text-accent underline underline-offset-2"
           >

@@ -1,6 +1,6 @@
+import { decadeDomain } from "@/lib/chart/log-axis";
 import { formatQuantity } from "@/lib/soa/units";
 import { type ChartColours, curveHues } from "./chart-colours";
-import { decadeDomain } from "./log-ticks";
 import type { ChartCurve, ChartDuration, SoaChartProps } from "./types";
 
 // What the SOA chart draws, worked out from its props before any pixel: the lines with their styles, the

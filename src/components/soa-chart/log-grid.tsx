@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
+import { decadeTicks, engineeringTick, minorTicks } from "@/lib/chart/log-axis";
 import type { ChartColours } from "./chart-colours";
-import { decadeTicks, engineeringTick, minorTicks } from "./log-ticks";
 
 export type Scale = (value: number) => number;
 

@@ -2,8 +2,8 @@
 
 import { scaleLinear, scaleLog } from "d3-scale";
 import { useMemo } from "react";
+import { decadeDomain, decadeTicks, engineeringTick, minorTicks } from "@/lib/chart/log-axis";
 import { useChartColours } from "./chart-colours";
-import { decadeDomain, decadeTicks, engineeringTick, minorTicks } from "./log-ticks";
 
 const margin = { top: 10, left: 52, bottom: 44, right: 16 };
 

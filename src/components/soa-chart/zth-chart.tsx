@@ -2,10 +2,10 @@
 
 import { scaleLog } from "d3-scale";
 import { useMemo } from "react";
+import { decadeDomain } from "@/lib/chart/log-axis";
 import { type FosterTerm, zth } from "@/lib/soa/foster";
 import { useChartColours } from "./chart-colours";
 import { LogGrid } from "./log-grid";
-import { decadeDomain } from "./log-ticks";
 
 const samplesPerDecade = 30;
 const margin = { top: 10, left: 52, bottom: 44, right: 16 };

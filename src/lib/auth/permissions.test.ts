@@ -38,6 +38,11 @@ describe("permission table", () => {
     expect(rolesAllowed("workspace.read")).toEqual(["admin", "lead", "engineer", "technician"]);
   });
 
+  it("lets admins and leads change others' measured pulses and captures; lead rights do not", () => {
+    expect(roles.filter((r) => can(r, "measurement.manage"))).toEqual(["admin", "lead"]);
+    expect(can("technician", "measurement.manage", true)).toBe(false);
+  });
+
   it("lets only admins manage members; admins and leads invite", () => {
     expect(roles.filter((r) => can(r, "member.manage"))).toEqual(["admin"]);
     expect(roles.filter((r) => can(r, "member.invite"))).toEqual(["admin", "lead"]);

@@ -3,8 +3,12 @@
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { findCurveSetIssues } from "@/lib/soa/findings";
+import { readExample } from "@/test/examples";
 import { type CurveSetCsvResult, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } from "./curve-set";
-import { curveCsvHelp, exampleLongCsv, examplePairedCsv } from "./curve-set-examples";
+import { curveCsvHelp } from "./curve-set-help";
+
+const exampleLongCsv = readExample("soa-curves-table.csv");
+const examplePairedCsv = readExample("soa-curves-paired.csv");
 
 const THIN = "\u2009";
 

@@ -17,8 +17,8 @@ import { type RawCurve, sameWidth } from "./curve-set-raw";
 import { type CsvIssue, createIssueList, type IssueList } from "./issues";
 import { MAX_CSV_BYTES, readTable } from "./text";
 
-export { curveCsvHelp, exampleLongCsv, examplePairedCsv } from "./curve-set-examples";
 export { curvesToLongCsv, formatWidth } from "./curve-set-export";
+export { curveCsvHelp } from "./curve-set-help";
 export type { CsvIssue } from "./issues";
 export { MAX_CSV_BYTES } from "./text";
 

@@ -29,7 +29,7 @@ const storage = createStorage({
 });
 const h = (handler: unknown) => handler as GuardedHandler;
 
-// A small valid curve set in the long format the app documents (src/lib/csv/curve-set-examples.ts).
+// A small valid curve set in the long format the app documents (public/examples/soa-curves-table.csv).
 const csv = ["width,V_DS [V],I_D [A]", "1 ms,1,60", "1 ms,10,40", "1 ms,40,10", "DC,1,30", "DC,40,1.25"].join(
   "\n",
 );

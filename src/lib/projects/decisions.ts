@@ -135,7 +135,7 @@ export async function signDecision(
         chosenPartId: chosen.partId,
         chosenLabel: `${chosen.maker} ${chosen.partNumber}`,
         rationale: input.rationale,
-        snapshot: snapshot as unknown as Record<string, unknown>,
+        snapshot,
         signedBy: caller.user.id,
         signedByName: caller.user.name,
         signedAt,

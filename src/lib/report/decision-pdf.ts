@@ -1,5 +1,6 @@
 import path from "node:path";
 import PDFDocument from "pdfkit";
+import { engineeringTick, logTicks } from "@/lib/chart/log-axis";
 import { computeLimits } from "@/lib/library/limits";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { CAUTION, explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
@@ -502,36 +503,40 @@ function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): void {
   const x = (v: number) => x0 + (Math.log10(v / vMin) / vDecades) * w;
   const y = (i: number) => y0 + h - (Math.log10(i / iMin) / iDecades) * h;
   doc.save();
-  for (let d = vMin; d <= vMax * 1.0001; d *= 10) {
-    for (let m = 1; m < 10 && d * m <= vMax * 1.0001; m++) {
+  const vTicks = logTicks([vMin, vMax]);
+  const iTicks = logTicks([iMin, iMax]);
+  for (const [ticks, major] of [
+    [vTicks.minor, false],
+    [vTicks.major, true],
+  ] as const) {
+    for (const v of ticks) {
       doc
-        .moveTo(x(d * m), y0)
-        .lineTo(x(d * m), y0 + h)
-        .lineWidth(m === 1 ? 0.6 : 0.2)
+        .moveTo(x(v), y0)
+        .lineTo(x(v), y0 + h)
+        .lineWidth(major ? 0.6 : 0.2)
         .strokeColor(line)
         .stroke();
     }
-    doc
-      .font("mono")
-      .fontSize(7)
-      .fillColor(muted)
-      .text(engineering(d), x(d) - 15, y0 + h + 4, { width: 30, align: "center" });
   }
-  for (let d = iMin; d <= iMax * 1.0001; d *= 10) {
-    for (let m = 1; m < 10 && d * m <= iMax * 1.0001; m++) {
+  for (const [ticks, major] of [
+    [iTicks.minor, false],
+    [iTicks.major, true],
+  ] as const) {
+    for (const i of ticks) {
       doc
-        .moveTo(x0, y(d * m))
-        .lineTo(x0 + w, y(d * m))
-        .lineWidth(m === 1 ? 0.6 : 0.2)
+        .moveTo(x0, y(i))
+        .lineTo(x0 + w, y(i))
+        .lineWidth(major ? 0.6 : 0.2)
         .strokeColor(line)
         .stroke();
     }
-    doc
-      .font("mono")
-      .fontSize(7)
-      .fillColor(muted)
-      .text(engineering(d), x0 - 34, y(d) - 3, { width: 30, align: "right" });
   }
+  doc.font("mono").fontSize(7).fillColor(muted);
+  for (const v of vTicks.major) {
+    doc.text(engineeringTick(v, 1e-3), x(v) - 15, y0 + h + 4, { width: 30, align: "center" });
+  }
+  for (const i of iTicks.major)
+    doc.text(engineeringTick(i, 1e-3), x0 - 34, y(i) - 3, { width: 30, align: "right" });
   doc
     .font("regular")
     .fontSize(8)
@@ -592,11 +597,6 @@ function marker(doc: Doc, cx: number, cy: number, verdict: Verdict, r = 3.5): vo
       .polygon([cx, cy - r * 1.3], [cx + r * 1.3, cy], [cx, cy + r * 1.3], [cx - r * 1.3, cy])
       .lineWidth(1)
       .stroke(colour);
-}
-
-function engineering(v: number): string {
-  if (v >= 1000) return `${v / 1000}k`;
-  return String(Number(v.toPrecision(3)));
 }
 
 function footer(doc: Doc, snapshot: DecisionSnapshot): void {

@@ -45,6 +45,7 @@ describe("inrushPulses", () => {
     expect(rect.ok).toBe(true);
   });
 
+  // Derived from §11: P(t) = (V_in − S·t)·(C_L·S + S·t/R_L) falls from t = 0 when the load term dominates.
   it("puts the peak at the start when the load current dominates", () => {
     const result = ok(inrushPulses({ capacitance: 1e-3, slew: 1000, supply: 4, load: 10, samples: 11 }));
     expect(result.figures.peakPowerTime).toBe(0);
@@ -52,6 +53,7 @@ describe("inrushPulses", () => {
     expect((result.pulses[0] as WaveformPulse).t).toHaveLength(11);
   });
 
+  // Our choice: a builder refuses inputs §11's formulas cannot use, with a reason.
   it("rejects inputs that are not finite and > 0, and too few samples", () => {
     expect(inrushPulses({ capacitance: 0, slew: 1, supply: 1 })).toEqual({
       ok: false,
@@ -69,6 +71,7 @@ describe("currentLimitFault", () => {
     expect(result.figures).toEqual({ power: 1080, energy: 1080 * 2e-3, duty: null });
   });
 
+  // Derived from §11 (auto-retry makes it a periodic train) and §7 (repeat { period, count? }).
   it("becomes a periodic train with auto-retry, finite or endless", () => {
     const endless = ok(
       currentLimitFault({ busVoltageMax: 54, currentLimitMax: 20, faultTimeMax: 2e-3, retryPeriod: 0.1 }),
@@ -87,6 +90,7 @@ describe("currentLimitFault", () => {
     expect(counted.pulses[0]).toMatchObject({ repeat: { period: 0.1, count: 7 } });
   });
 
+  // Derived from §7: the period must exceed the pulse's width and N ≥ 1.
   it("rejects a retry period not longer than the fault, and a bad count", () => {
     expect(
       currentLimitFault({ busVoltageMax: 1, currentLimitMax: 1, faultTimeMax: 1, retryPeriod: 1 }).ok,
@@ -129,6 +133,7 @@ describe("tripWindow", () => {
     expect(result.figures).toEqual({ nominal: 125, min: 125, max: 125 });
   });
 
+  // Our choice: §11's trip window is refused where its worst case has no meaning.
   it("rejects bad values, tolerances outside [0, 1) and an offset that swallows the threshold", () => {
     const shunt = { nominal: 1e-3, tolerance: 0.01 };
     const reference = { nominal: 0.1, tolerance: 0.01 };
@@ -155,6 +160,7 @@ describe("clampTurnOff", () => {
     expect((3200 * 3.125e-6) / 2).toBeCloseTo(result.figures.energy, 12);
   });
 
+  // Derived from §11: I_pk = I_trip,max + (V_bus/L)·t_delay.
   it("adds the current rise during the turn-off delay", () => {
     const result = ok(
       clampTurnOff({ inductance: 1e-6, tripCurrent: 50, busVoltage: 48, clampVoltage: 64, delay: 1e-7 }),
@@ -162,6 +168,7 @@ describe("clampTurnOff", () => {
     expect(result.figures.peakCurrent).toBeCloseTo(54.8, 12);
   });
 
+  // Derived from §11: the clamp time L·I_pk/(V_cl − V_bus) needs V_cl > V_bus.
   it("rejects a clamp at or below the bus and a negative delay", () => {
     expect(clampTurnOff({ inductance: 1e-6, tripCurrent: 50, busVoltage: 48, clampVoltage: 48 }).ok).toBe(
       false,
@@ -172,6 +179,7 @@ describe("clampTurnOff", () => {
     expect(clampTurnOff({ inductance: 0, tripCurrent: 50, busVoltage: 48, clampVoltage: 64 }).ok).toBe(false);
   });
 
+  // Derived from §9: whatever a builder returns is a valid pulse of the check contract.
   it("gives pulses the check contract accepts", () => {
     const pulses = [
       ...ok(clampTurnOff({ inductance: 1e-6, tripCurrent: 50, busVoltage: 48, clampVoltage: 64 })).pulses,

@@ -127,6 +127,7 @@ describe("handleCheckRequest", () => {
     }
   }
 
+  // Derived from §9: invalid input answers 400 with the field path and the reason.
   it("answers 400 with the field path for an invalid request", () => {
     expect(handleCheckRequest({ caseTemp: 25, pulses: [] })).toEqual({
       status: 400,
@@ -136,6 +137,7 @@ describe("handleCheckRequest", () => {
 });
 
 describe("handleCheckText", () => {
+  // Derived from §9: the contract's text entry point answers as the object one does.
   it("parses JSON text and checks it", () => {
     const outcome = handleCheckText(
       JSON.stringify(body({ foster: true, dc: true, betweenCurves: "loglog" })),
@@ -143,6 +145,7 @@ describe("handleCheckText", () => {
     expect(outcome.status).toBe(200);
   });
 
+  // Derived from §9 (400 with a path); our choice: the whole body's path is "".
   it('rejects text that is not JSON (a bare NaN, say) at path "" without a stack trace', () => {
     const outcome = handleCheckText('{"caseTemp": NaN}');
     expect(outcome.status).toBe(400);

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { DEFAULT_REF_CASE_TEMP, prepareCurveSet } from "./curve-set";
 
 describe("prepareCurveSet", () => {
+  // Derived from §1 (points sorted by V) and §3 (finite curves by duration, DC last).
   it("sorts points by V and finite curves by width, and keeps the DC curve apart", () => {
     const set = prepareCurveSet({
       refCaseTemp: 30,
@@ -34,6 +35,7 @@ describe("prepareCurveSet", () => {
     expect(prepareCurveSet({ curves: [] })).toEqual({ refCaseTemp: 25, finite: [], dc: null });
   });
 
+  // Our choice: preparation is lenient because validation (§9) has already refused such input.
   it("leaves out invalid points and curves, keeps the first of equal widths (validation rejects all)", () => {
     const set = prepareCurveSet({
       curves: [

@@ -17,6 +17,7 @@ describe("derate", () => {
     expect(derate(175, 200)).toBe(0);
   });
 
+  // Derived from §5 (k clamped to [0, 1]); our choice: NaN inputs claim nothing, k = 0.
   it("gives 0 when nothing can be claimed: Tj,max ≤ T_ref or NaN inputs", () => {
     expect(derate(25, 20, 25)).toBe(0);
     expect(derate(20, 10, 25)).toBe(0);
@@ -25,6 +26,7 @@ describe("derate", () => {
     expect(derate(175, 50, Number.NaN)).toBe(0);
   });
 
+  // Derived from §5: k = (Tj,max − Tc)/(Tj,max − T_ref) falls as Tc rises.
   it("never rises with case temperature", () => {
     // Property (derived): k is a clamped decreasing linear function of Tc.
     fc.assert(

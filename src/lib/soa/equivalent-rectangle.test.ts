@@ -65,12 +65,14 @@ describe("waveformEquivalent", () => {
     expect(rect.ok && rect.energy).toBeGreaterThan(117);
   });
 
+  // Derived from §6: p_peak = 0 has no equivalent width (no-power).
   it("has no rectangle without positive power: empty, all ≤ 0 or NaN", () => {
     expect(waveformEquivalent([], [])).toEqual({ ok: false, flag: "no-power" });
     expect(waveformEquivalent([0, 1], [0, -3])).toEqual({ ok: false, flag: "no-power" });
     expect(waveformEquivalent([0, 1], [Number.NaN, Number.NaN])).toEqual({ ok: false, flag: "no-power" });
   });
 
+  // Our choice: a compensated (Kahan–Neumaier) sum, so long captures lose no digits of E.
   it("keeps full precision over a million samples (compensated sum)", () => {
     // Derived: a constant 3 W over 1 s holds 3 J; the steps 1e-6 s are not exact in binary.
     const n = 1_000_001;

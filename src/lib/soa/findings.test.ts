@@ -10,6 +10,7 @@ import { zth } from "./foster";
 import type { CurveSet } from "./types";
 
 describe("findCurveSetIssues", () => {
+  // Our choice (findings.ts header): a clean set has no findings.
   it("finds nothing in a clean set, or in an empty one", () => {
     const clean: CurveSet = {
       curves: [
@@ -34,6 +35,7 @@ describe("findCurveSetIssues", () => {
     expect(findCurveSetIssues({ curves: [] })).toEqual([]);
   });
 
+  // Derived from §1: two points with the same V are an input error; findings.ts reports them in digitised order.
   it("finds points not strictly increasing in V, in the order digitised", () => {
     const findings = findCurveSetIssues({
       curves: [
@@ -56,6 +58,7 @@ describe("findCurveSetIssues", () => {
     expect(findings[1].message).toContain("repeats");
   });
 
+  // Derived from §1: every V and I finite and > 0.
   it("finds invalid points and empty curves, and leaves invalid points out of the rest", () => {
     const findings = findCurveSetIssues({
       curves: [
@@ -101,6 +104,7 @@ describe("findCurveSetIssues", () => {
     expect(findings[0].message).toContain("1.29");
   });
 
+  // Derived from §3 (v2): a longer pulse never carries more current than a shorter one.
   it("finds a longer pulse's curve above a shorter one, at the voltage of the largest excess", () => {
     const findings = findCurveSetIssues({
       curves: [
@@ -172,6 +176,7 @@ describe("findCurveSetIssues", () => {
     expect(found.map((f) => [f.kind, f.size])).toEqual([["longer-above-shorter", "+6 %"]]);
   });
 
+  // Our choice: stable keys, so a verifier's acceptance survives a re-upload of the same data.
   it("keys a finding by what it is, so the same finding found again has the same key", () => {
     const set: CurveSet = {
       curves: [
@@ -196,6 +201,7 @@ describe("findCurveSetIssues", () => {
     expect(findCurveSetIssues(structuredClone(set))[0].key).toBe(first.key);
   });
 
+  // Our choice (findings.ts header): curves are compared on their common V range only.
   it("does not compare curves without a common voltage range, nor report equal curves", () => {
     const findings = findCurveSetIssues({
       curves: [
@@ -207,6 +213,7 @@ describe("findCurveSetIssues", () => {
     expect(findings).toEqual([]);
   });
 
+  // Our choice: a 20 % tolerance between the curves' power level and §4's Z_th (digitising noise is 1–4 %).
   it("finds curves whose power level disagrees with the Foster network by more than 20 %", () => {
     expect(THERMAL_MISMATCH_LIMIT).toBe(0.2);
     const foster = [{ r: 0.5, tau: 1e-2 }];
@@ -229,6 +236,7 @@ describe("findCurveSetIssues", () => {
     expect(findCurveSetIssues(set, { tjMax: 20, foster })).toEqual([]);
   });
 
+  // Our choice: a 10 % tolerance between §4's R_th = Σ R_i and the rated R_th(j-c).
   it("finds a thermal model whose ΣR_i disagrees with the rated R_th(j-c) by more than 10 %", () => {
     expect(RATING_MISMATCH_LIMIT).toBe(0.1);
     const foster = [

@@ -38,6 +38,7 @@ describe("fitFoster recovers known networks", () => {
     expect(fit.maxRelativeError).toBeLessThan(1e-6);
   });
 
+  // Derived from §4: the fitted network's Z_th against the known one's; our choice: the 1 % bound.
   test("a 4-term network with close time constants, within 1 % of Z_th everywhere", () => {
     const four: FosterTerm[] = [
       { r: 0.01, tau: 2e-5 },
@@ -62,6 +63,7 @@ describe("fitFoster recovers known networks", () => {
     expect(zth(terms, 1e-2)).toBeCloseTo(0.13806, 6);
   });
 
+  // Derived from §4; our choice: the 1 % bound (fit-foster.ts header: NNLS then Levenberg–Marquardt).
   test("random 3-term networks with time constants a decade apart fit within 1 %", () => {
     const network = fc
       .tuple(
@@ -87,6 +89,7 @@ describe("fitFoster recovers known networks", () => {
 });
 
 describe("fitFoster reports its error", () => {
+  // Our choice: the bounds; the method is Lawson and Hanson 1974 and Marquardt 1963 (fit-foster.ts header).
   test("noisy points: the error is about the noise, and R_th within 2 %", () => {
     // Deterministic ±0.5 % ripple standing in for digitising noise (invented).
     const points = sample(THREE, 1e-5, 1).map(
@@ -100,6 +103,7 @@ describe("fitFoster reports its error", () => {
     expect(Math.abs(rth(fit.terms) / rth(THREE) - 1)).toBeLessThan(0.02);
   });
 
+  // Derived from §4: the error is recomputed from Z_th of the returned terms.
   test("the reported errors are those of the returned terms", () => {
     const points = sample(
       [
@@ -123,6 +127,7 @@ describe("fitFoster reports its error", () => {
     expect(fit.maxRelativeError).toBeGreaterThan(0);
   });
 
+  // Derived from §4 (every R_i, τ_i > 0); our choice: at most half the points (two parameters a term).
   test("terms are positive, sorted by τ, at most maxTerms and at most half the points", () => {
     const points = sample(THREE, 1e-5, 1);
     for (const maxTerms of [3, 4, 5, 6]) {
@@ -137,6 +142,7 @@ describe("fitFoster reports its error", () => {
     expect(fitted(sample(THREE, 1e-4, 1e-1, 5 / 3), 6).length).toBeLessThanOrEqual(3);
   });
 
+  // Our choice: a fit always comes back with its error, so the user judges it.
   test("data that is not a Foster curve still gives a fit and its (large) error", () => {
     const points: ZthPoint[] = [
       [1e-4, 0.1],

@@ -48,23 +48,26 @@ describe("zth", () => {
   });
 
   // Derived: Taylor series 1 − e^(−x) = x − x²/2 + x³/6 − …
+  // Derived from §4: use expm1 so that tiny x keeps full precision.
   it("keeps full relative precision for t ≪ τ", () => {
     const x = 1e-12;
     expectRelative(zth(ONE_TERM, x), x - x ** 2 / 2 + x ** 3 / 6, 1e-15);
   });
 
+  // Derived from §4: Z_th(0) = 0 and an empty sum is 0; our choice: t < 0 is 0.
   it("is 0 for t ≤ 0 and for an empty network", () => {
     expect(zth(TWO_TERMS, 0)).toBe(0);
     expect(zth(TWO_TERMS, -1)).toBe(0);
     expect(zth([], 1)).toBe(0);
   });
 
+  // Derived from §4: Z_th → R_th = Σ R_i as t → ∞.
   it("reaches R_th at t = Infinity and propagates NaN", () => {
     expect(zth(TWO_TERMS, Number.POSITIVE_INFINITY)).toBe(0.5);
     expect(zth(TWO_TERMS, Number.NaN)).toBeNaN();
   });
 
-  // Derived: each term R(1 − e^(−t/τ)) has a positive first and a negative second derivative.
+  // Derived from §4: each term R(1 − e^(−t/τ)) has a positive first and a negative second derivative.
   it("is increasing, concave and below R_th for positive terms", () => {
     fc.assert(
       fc.property(network, fc.double({ min: 1e-7, max: 1, noNaN: true }), (net, t) => {
@@ -98,6 +101,7 @@ describe("zth", () => {
 });
 
 describe("rth", () => {
+  // Derived from §4: R_th = Σ_i R_i.
   it("is the sum of the term resistances, 0 for an empty network", () => {
     expect(rth(TWO_TERMS)).toBeCloseTo(0.5, 15);
     expect(rth([])).toBe(0);

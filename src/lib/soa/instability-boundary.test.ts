@@ -35,6 +35,7 @@ describe("instabilityBoundary(transfer, z)", () => {
     expect(at(5)).toBeCloseTo(40 / 0.241432, -0.5);
   });
 
+  // Derived from §12: V_max(I) = 1/(α(I)·Z_th) over the currents where α > 0, read on the Ta curve.
   it("spans the cooler curve's currents, ascending, with every point where α > 0", () => {
     const boundary = instabilityBoundary(transfer, 0.1);
     expect(boundary[0][1]).toBeCloseTo(1, 12);
@@ -43,11 +44,13 @@ describe("instabilityBoundary(transfer, z)", () => {
     for (const [v] of boundary) expect(v).toBeGreaterThan(0);
   });
 
+  // Derived from §12: V_max = 1/(α·Z) has no meaning for Z ≤ 0.
   it("is empty for a thermal impedance that is not positive", () => {
     expect(instabilityBoundary(transfer, 0)).toEqual([]);
     expect(instabilityBoundary(transfer, Number.NaN)).toEqual([]);
   });
 
+  // Derived from §12: the boundary is drawn only where α > 0.
   it("stops at the zero-temperature-coefficient point, where α turns negative", () => {
     // Hand-made data (derived): the hotter curve starts above and ends below, crossing at 5 A.
     const crossing = prepareTransfer({

@@ -62,6 +62,7 @@ describe("interpolateCurve", () => {
     );
   });
 
+  // Derived from §2: exact at every digitised point.
   it("is exact at every digitised point", () => {
     fc.assert(
       fc.property(curveArb, (points) => {
@@ -70,6 +71,7 @@ describe("interpolateCurve", () => {
     );
   });
 
+  // Derived from §2: I(V) = I_j·(V/V_j)^s, a straight line on log-log axes.
   it("is a straight line on log-log axes within a segment (constant slope)", () => {
     // Derived: a power law I = I_j·(V/V_j)^s has the same log-log slope everywhere between V_j and V_(j+1).
     const points: CurvePoint[] = [
@@ -83,6 +85,7 @@ describe("interpolateCurve", () => {
     expect(slope2).toBeCloseTo(slope1, 12);
   });
 
+  // Derived from §2: below V_1 the first current, flag below-curve-range; above V_n no value.
   it("holds the first current below the curve's range and gives nothing above it", () => {
     const points: CurvePoint[] = [
       [1, 100],
@@ -98,11 +101,13 @@ describe("interpolateCurve", () => {
     });
   });
 
+  // Our choice: nothing to read gives no value, and no flag that would explain a reading.
   it("gives no value and no flag for an empty curve or a NaN voltage", () => {
     expect(interpolateCurve([], 5)).toEqual({ current: null, flag: null });
     expect(interpolateCurve([[1, 2]], Number.NaN)).toEqual({ current: null, flag: null });
   });
 
+  // Derived from §2: a one-point curve has V_1 = V_n; below it the first current, above it nothing.
   it("reads a one-point curve at its voltage only", () => {
     expect(interpolateCurve([[5, 7]], 5)).toEqual({ current: 7, flag: null });
     expect(interpolateCurve([[5, 7]], 4)).toEqual({ current: 7, flag: "below-curve-range" });

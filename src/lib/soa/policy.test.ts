@@ -12,6 +12,7 @@ describe("resolvePolicy", () => {
     expect(resolvePolicy({})).toEqual(DEFAULT_POLICY);
   });
 
+  // Derived from §8: the margin policy's fields are the project's; our choice: 0 is a value, not a default.
   it("keeps every field given, zero included", () => {
     expect(
       resolvePolicy({ utilisationLimit: 1, tjGuard: 0, voltageLimit: 1, betweenCurves: "thermal" }),

@@ -74,6 +74,7 @@ describe("repetitionScale", () => {
     });
   });
 
+  // Derived from §7: superposition when (N − 1)·T + t_eq is within the data, else the duty-cycle impedance.
   it("without a network: superposition when the curves reach (N − 1)·T + t_eq, else the duty-cycle form", () => {
     // Z_th(t) = √t, read off curves from 1e-4 s to 1 s (within), R_th = 2 K/W. Superposition of 3 pulses of
     // 0.01 s every 0.1 s (derived): √0.01 + (√0.11 − √0.1) + (√0.21 − √0.2).
@@ -90,6 +91,7 @@ describe("repetitionScale", () => {
     expect(twenty.scale).toBeCloseTo(0.1 / duty, 14);
   });
 
+  // Derived from §7: s = min(1, Z_th(t_eq)/Z_rep); no-data with flag repetition-outside-data.
   it("caps at 1 and flags missing or inconsistent data", () => {
     const upRating: ImpedanceSource = { zth: (t) => (t < 0.5 ? 1 : 0.1), rth: 0.1 };
     expect(repetitionScale({ network: null, curves: upRating, tEq: 0.1, period: 1 })).toEqual({

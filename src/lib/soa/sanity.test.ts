@@ -12,6 +12,7 @@ describe("saneValue", () => {
     expect(saneValue(2e6, "time")).toContain("the most a time can be");
   });
 
+  // Our choice (sanity.ts header): wide limits that catch a wrong prefix; NaN and zero are the callers' concern.
   it("accepts values inside the limits, at the limits, and leaves NaN and zero to the caller", () => {
     expect(saneValue(2500, "current")).toBeNull();
     expect(saneValue(SANITY_LIMITS.voltage.max, "voltage")).toBeNull();
@@ -22,6 +23,7 @@ describe("saneValue", () => {
     expect(saneValue(-1e9, "voltage")).toContain("above 100\u2009kV");
   });
 
+  // Our choice (sanity.ts header): temperatures have their own display range.
   it("treats temperatures on their own scale, negatives included", () => {
     expect(saneValue(-40, "temperature")).toBeNull();
     expect(saneValue(-300, "temperature")).toContain("below -273\u2009°C");
@@ -30,6 +32,7 @@ describe("saneValue", () => {
 });
 
 describe("beyondRatings", () => {
+  // Derived from §2 (V_DSS and I_DM are the hard limits); our choice: the wording names the rating.
   it("names what exceeds V(BR)DSS and I_DM (I_D when no pulsed rating is given)", () => {
     expect(beyondRatings({ v: 120, i: 10 }, { vdsMax: 100, idPulseMax: 300 })).toEqual([
       "V_DS 120\u2009V above V(BR)DSS 100\u2009V",
@@ -45,6 +48,7 @@ describe("beyondRatings", () => {
 });
 
 describe("formatTemperature", () => {
+  // Our choice (sanity.ts header): a computed Tj outside the display range is off scale, not digits.
   it("shows issue 12's runaway Tj as off scale, not as eleven digits", () => {
     expect(formatTemperature(25644501323)).toBe("off scale (above 2000\u2009°C)");
     expect(formatTemperature(-500)).toBe("off scale (below -100\u2009°C)");

@@ -49,6 +49,7 @@ function broken(change: (r: ReturnType<typeof request>) => void): ReturnType<typ
 type Json = any;
 
 describe("formatPath", () => {
+  // Our choice: the field path format of §9's 400 answers (a.b[0].c).
   it("writes keys with dots and indices in brackets", () => {
     expect(formatPath(["part", "soa", "curves", 1, "points", 3])).toBe("part.soa.curves[1].points[3]");
     expect(formatPath([])).toBe("");
@@ -57,6 +58,7 @@ describe("formatPath", () => {
 });
 
 describe("validateCheckRequest", () => {
+  // Derived from §9: the contract's request shape.
   it("accepts a valid request and keeps its values", () => {
     const result = validateCheckRequest(request());
     expect(result.ok).toBe(true);
@@ -421,6 +423,7 @@ describe("validateCheckRequest", () => {
     expect(errorOf(body)).toEqual({ path, message });
   });
 
+  // Our choice: the first error a caller sees is the simplest to fix.
   it("reports a shape error before any rule relating fields", () => {
     const body = broken((r) => {
       (r.pulses as Json)[2].id = "r";
@@ -429,6 +432,7 @@ describe("validateCheckRequest", () => {
     expect(errorOf(body).path).toBe("pulses[1].v");
   });
 
+  // Derived from §1 and §9: every number finite; undefined is not a number.
   it("accepts a JavaScript NaN, Infinity or undefined nowhere a number is needed", () => {
     expect(errorOf(broken((r) => (r.caseTemp = Number.NaN))).path).toBe("caseTemp");
     expect(errorOf(broken((r) => (r.part.vdsMax = Number.POSITIVE_INFINITY))).path).toBe("part.vdsMax");

@@ -70,7 +70,7 @@ describe("faultSequence", () => {
   });
 
   it("never draws less power than the sequence, and its energy exceeds it by the ε steps at most", () => {
-    // Derived: each step ramps over ε = 10⁻³ of the shortest piece on the higher power's side, adding at most
+    // Our choice of ε, derived bound: each step ramps over ε = 10⁻³ of the shortest piece on the higher power's side, adding at most
     // ½·ε·p_peak of energy; 4 steps per attempt.
     const { figures, pulse } = built(CLAMPED);
     const epsilon = 1e-3 * figures.turnOffTime;
@@ -156,6 +156,7 @@ describe("faultSequence", () => {
     expect(figures.attempts).toBe(1);
   });
 
+  // Our choice: every refusal names the input and says why.
   it("says which input is wrong", () => {
     expect(faultSequence({ ...CLAMPED, turnOff: { kind: "clamped", clampVoltage: 48 } })).toMatchObject({
       ok: false,
@@ -177,7 +178,7 @@ describe("faultSequence", () => {
 
 describe("unclampedTurnOff", () => {
   it("10 µH, 20 A, 48 V with 100 ns delay: 20.48 A into avalanche, inductor energy ½·L·I²", () => {
-    // Worked by hand: I_pk = 20 + (48/10 µH)·100 ns = 20.48 A; ½·10 µH·20.48² = 2.097152 mJ.
+    // Derived from §11 and §13 by hand: I_pk = 20 + (48/10 µH)·100 ns = 20.48 A; ½·10 µH·20.48² = 2.097152 mJ.
     const result = unclampedTurnOff({ inductance: 10e-6, tripCurrent: 20, busVoltage: 48, delay: 1e-7 });
     if (!result.ok) throw new Error(result.reason);
     expect(result.figures.peakCurrent).toBeCloseTo(20.48, 12);

@@ -42,10 +42,12 @@ describe("impedanceFromCurves", () => {
     expect(source.rth).toBeCloseTo(1.5, 15);
   });
 
+  // Derived from §7: R_th from the part, else from the DC curve.
   it("prefers the part's R_th(j-c) to the DC curve", () => {
     expect(impedanceFromCurves(set, 175, 1.2).rth).toBe(1.2);
   });
 
+  // Derived from §7: a Z_th value outside what the data gives is no data; §3: width tolerance 1e-9.
   it("says nothing outside the digitised widths (1e-9 relative), for NaN, without DC curve or R_th", () => {
     const source = impedanceFromCurves(set, 175);
     expect(source.zth(0.99e-3)).toBeNull();
@@ -62,6 +64,7 @@ describe("impedanceFromCurves", () => {
     expect(impedanceFromCurves(prepareCurveSet({ curves: [] }), 175).zth(1)).toBeNull();
   });
 
+  // Derived from §7: Z_k = (Tj,max − T_ref)/P_k needs Tj,max > T_ref.
   it("derives nothing when Tj,max ≤ T_ref", () => {
     const source = impedanceFromCurves(set, 25);
     expect(source.zth(1e-3)).toBeNull();

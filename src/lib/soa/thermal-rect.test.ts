@@ -76,11 +76,13 @@ describe("trainRise", () => {
     expectToShownDigits(trainRise(ONE_TERM, 1, 0.1, 1, 3), "0.143050");
   });
 
+  // Derived from §4: N = 1 gives (1 − b^1)/(1 − b) = 1; T → ∞ gives b = 0.
   it("one pulse equals rectRise, and an infinite period leaves every pulse alone", () => {
     expect(trainRise(TWO_TERMS, 500, 2e-3, 5e-3, 1)).toBe(rectRise(TWO_TERMS, 500, 2e-3));
     expect(trainRise(TWO_TERMS, 500, 2e-3, Number.POSITIVE_INFINITY)).toBe(rectRise(TWO_TERMS, 500, 2e-3));
   });
 
+  // Derived from §4: continuous train is N → ∞ of the N-pulse closed form.
   it("tends to the continuous train as the count grows", () => {
     const continuous = trainRise(TWO_TERMS, 500, 2e-3, 5e-3);
     expect(trainRise(TWO_TERMS, 500, 2e-3, 5e-3, 10)).toBeLessThan(continuous);
@@ -89,11 +91,13 @@ describe("trainRise", () => {
   });
 
   // Derived: a train with no gap is a DC load, so the continuous peak is P·R_th.
+  // Derived from §4: with T = t_p, a = b and (1 − a)/(1 − b) = 1, so θ = P·Σ R_i.
   it("with the period equal to the width, the continuous train is DC: P·R_th", () => {
     expectRelative(trainRise(TWO_TERMS, 500, 2e-3, 2e-3), 500 * rth(TWO_TERMS), 1e-15);
   });
 
   // Derived: for x = T/τ → 0, Σ_(k<N) e^(−kx) = N − N(N−1)x/2 + O(x²) and 1 − e^(−y) = y − y²/2 + O(y³).
+  // Derived from §4: expm1 keeps full precision for tiny x.
   it("stays precise when the pulse and the period are tiny against τ", () => {
     const [x, y, n] = [1e-12, 5e-13, 10];
     const expected = (y - y ** 2 / 2) * (n - (n * (n - 1) * x) / 2);

@@ -135,7 +135,7 @@ describe("trianglePeakRise", () => {
     expect(peak).toBeGreaterThan(waveformRise([0, 10e-3], [500, 0], THREE_TERMS).peak);
   });
 
-  // Same derivation as above, over the last of four triangles.
+  // Derived from §4 and §7, as above, over the last of four triangles.
   it("for a train, is the maximum over the last triangle of the sampled train", () => {
     const { t, p } = sampledTrain(500, 10e-3, 25e-3, 4, 20_000);
     const sampled = waveformRise(t, p, THREE_TERMS);
@@ -161,6 +161,7 @@ describe("trianglePeakRise", () => {
     expectRelative(steady, integrateTrain(THREE_TERMS, 500, 10e-3, 40e-3, 150), 1e-10);
   });
 
+  // Derived from §7: N = 1 starts from rest; N → ∞ is the continuous train's start state.
   it("a train of one is the single triangle; more pulses rise towards the continuous train", () => {
     const single = trianglePeakRise(TWO_TERMS, 500, 10e-3);
     expect(trianglePeakRise(TWO_TERMS, 500, 10e-3, { period: 25e-3, count: 1 })).toBe(single);
@@ -175,6 +176,7 @@ describe("trianglePeakRise", () => {
     );
   });
 
+  // Our choice: nothing heats, so the rise is 0 (an empty sum, §4).
   it("is 0 for a width ≤ 0, an empty network or fewer than one pulse", () => {
     expect(trianglePeakRise(TWO_TERMS, 500, 0)).toBe(0);
     expect(trianglePeakRise(TWO_TERMS, 500, -1)).toBe(0);
@@ -182,11 +184,13 @@ describe("trianglePeakRise", () => {
     expect(trianglePeakRise(TWO_TERMS, 500, 1e-3, { period: 2e-3, count: 0 })).toBe(0);
   });
 
+  // Derived from §4: θ_i is linear in P; P = 0 gives 0.
   it("is 0 for zero peak power, alone or in a train", () => {
     expect(trianglePeakRise(TWO_TERMS, 0, 1e-3)).toBe(0);
     expect(trianglePeakRise(TWO_TERMS, 0, 1e-3, { period: 2e-3 })).toBe(0);
   });
 
+  // Derived from §7: T must be greater than the pulse's width; our choice: NaN, not a number that looks real.
   it("is NaN when the period is shorter than the width or the power is NaN", () => {
     expect(trianglePeakRise(TWO_TERMS, 500, 2e-3, { period: 1e-3 })).toBeNaN();
     expect(trianglePeakRise(TWO_TERMS, Number.NaN, 1e-3)).toBeNaN();

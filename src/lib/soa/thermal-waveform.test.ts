@@ -48,6 +48,7 @@ describe("waveformRise", () => {
   });
 
   // Derived: for x → 0, 1 − e^(−x) = x − x²/2 + x³/6 and φ(x) = x/2 − x²/6 + x³/24, to O(x⁴).
+  // Derived from §4: use expm1 so that tiny x keeps full precision.
   it("keeps full precision for a step of 1e-12 τ", () => {
     const x = 1e-12;
     const { peak } = waveformRise([0, x], [3, 7], ONE_TERM);
@@ -55,7 +56,7 @@ describe("waveformRise", () => {
     expectRelative(peak, expected, 1e-15);
   });
 
-  // Derived: constant power P from rest gives R·P·(1 − e^(−t/τ)); a million steps of 1e-6 τ must not drift.
+  // Derived from §4: constant power P from rest gives R·P·(1 − e^(−t/τ)); a million steps of 1e-6 τ must not drift.
   it("does not drift over a million steps far shorter than τ", () => {
     const n = 1_000_000;
     const t = Float64Array.from({ length: n + 1 }, (_, j) => j * 1e-6);
@@ -88,6 +89,7 @@ describe("waveformRise", () => {
   });
 
   // Derived: a constant power sampled at any points is piecewise-linear, so the update is exact: P·Z_th(t_p).
+  // Derived from §4: the exact update of a constant power is the rectangle's closed form.
   it("a sampled rectangle ends at rectRise, on uniform and non-uniform axes", () => {
     fc.assert(
       fc.property(
@@ -110,6 +112,7 @@ describe("waveformRise", () => {
 
   // Derived: a zero step changes nothing, so appending one moves a uniform axis onto the per-step path without
   // changing the answer; both paths are exact and must agree to rounding.
+  // Our choice: the uniform-step fast path is an optimisation and must agree with §4's per-step update.
   it("the uniform fast path and the per-step path agree", () => {
     fc.assert(
       fc.property(
@@ -131,6 +134,7 @@ describe("waveformRise", () => {
   });
 
   // Derived: the rise is linear in the network, so nine terms are the sum of three three-term networks.
+  // Derived from §4: Z_th and each θ_i are a sum over independent terms.
   it("more than four terms give the sum of their parts, with or without a trace", () => {
     const net = Array.from({ length: 9 }, (_, i) => ({ r: 0.01 * (i + 1), tau: 10 ** (-6 + i / 2) }));
     const t = Array.from({ length: 5000 }, (_, j) => j * 2e-6);
@@ -149,11 +153,13 @@ describe("waveformRise", () => {
     expect(whole.peak).toBe(Math.max(...whole.trace!));
   });
 
+  // Our choice: the earliest sample on ties, as §6 takes the earliest binding sample.
   it("reports the first sample of the peak, t_0 included: a waveform that only cools peaks at 0 at index 0", () => {
     expect(waveformRise([0, 1, 2], [5, 5, 5], [{ r: 1, tau: 0.1 }]).peakIndex).toBe(2);
     expect(waveformRise([0, 1, 2, 3], [-5, -5, -5, -5], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: 0 });
   });
 
+  // Derived from §6 (at least two samples make a waveform); our choice: fewer give a rest state.
   it("handles a 2-sample waveform, a single sample and an empty one", () => {
     expect(waveformRise([0, 2], [10, 10], ONE_TERM, { trace: true }).trace).toEqual(
       Float64Array.from([0, -10 * Math.expm1(-2)]),
@@ -168,15 +174,18 @@ describe("waveformRise", () => {
     expect(waveformRise([], [], ONE_TERM, { trace: true }).trace).toHaveLength(0);
   });
 
+  // Derived from §4: an empty sum is 0.
   it("gives 0 everywhere for an empty network, on both paths", () => {
     expect(waveformRise([0, 1, 2], [1, 2, 3], [], { trace: true }).trace).toEqual(new Float64Array(3));
     expect(waveformRise([0, 1, 3], [1, 2, 3], [])).toMatchObject({ peak: 0, peakIndex: 0, maxRise: 0 });
   });
 
+  // Our choice: no time passes, so nothing heats.
   it("treats a time axis with all samples at one instant as holding the rest state", () => {
     expect(waveformRise([1, 1, 1], [1, 2, 3], ONE_TERM)).toMatchObject({ peak: 0, peakIndex: 0, maxRise: 0 });
   });
 
+  // Derived from §6: t strictly increasing; our choice: a RangeError, as for any programming error.
   it("rejects differing lengths and a decreasing or NaN time axis with a RangeError", () => {
     expect(() => waveformRise([0, 1], [1], ONE_TERM)).toThrow(RangeError);
     expect(() => waveformRise([0, 2, 1], [1, 1, 1], ONE_TERM)).toThrow(RangeError);
@@ -184,6 +193,7 @@ describe("waveformRise", () => {
     expect(() => waveformRise([0, Number.NaN, 2], [1, 1, 1], ONE_TERM)).toThrow(RangeError);
   });
 
+  // Our choice: a NaN peak at index −1 rather than a number that looks real.
   it("gives a NaN peak at index −1 for NaN or infinite power", () => {
     expect(waveformRise([0, 1, 2], [1, Number.NaN, 1], ONE_TERM)).toMatchObject({
       peak: Number.NaN,
@@ -213,6 +223,7 @@ describe("waveformRiseVI", () => {
 
   // Derived: p = v·i formed inside the pass is the same product powerFromVI stores, fed to the same update, so
   // the fused and split routes must agree bit for bit on either path, with or without a trace, for any term count.
+  // Our choice: the fused path is an optimisation and must agree bit for bit with the two-step path.
   it("gives waveformRise(t, powerFromVI(v, i)) bit for bit, on uniform and non-uniform axes", () => {
     fc.assert(
       fc.property(
@@ -259,6 +270,7 @@ describe("waveformRiseVI", () => {
     expectSameBits(uniform, waveformRise([0, x], [96, 12], ONE_TERM, { trace: true }));
   });
 
+  // Derived from §4 (an empty sum is 0); our choice: NaN at index −1 for bad power.
   it("gives 0 everywhere for an empty network, and a NaN peak at index −1 for NaN or infinite power", () => {
     expect(waveformRiseVI([0, 1, 3], [1, 2, 3], [1, 1, 1], [], { trace: true }).trace).toEqual(
       new Float64Array(3),
@@ -273,6 +285,7 @@ describe("waveformRiseVI", () => {
     });
   });
 
+  // Derived from §6: t strictly increasing; our choice: the same RangeError as waveformRise.
   it("rejects differing lengths and a decreasing time axis with a RangeError, as waveformRise does", () => {
     expect(() => waveformRiseVI([0, 1], [1], [1, 1], ONE_TERM)).toThrow(RangeError);
     expect(() => waveformRiseVI([0, 1], [1, 1], [1], ONE_TERM)).toThrow(RangeError);
@@ -284,12 +297,14 @@ describe("waveformRiseVI", () => {
 
 describe("rampFactor", () => {
   // Derived: φ(x) = 1 − (1 − e^(−x))/x; its closed form is accurate to a few 1e-15 above x = 0.05.
+  // Derived from §4: the ramp factor 1 − (1 − a)/x; our choice: a series below x = 1/4 for precision.
   it("matches the closed form on both sides of the switch to the series at x = 1/4", () => {
     for (const x of [0.05, 0.1, 0.2, 0.25 - 1e-12, 0.25, 0.3, 1, 30]) {
       expectRelative(rampFactor(x), 1 + Math.expm1(-x) / x, 1e-13);
     }
   });
 
+  // Derived from §4: 1 − (1 − e^(−x))/x → 0 as x → 0 and → 1 as x → ∞.
   it("is 0 at x = 0 and tends to 1 as x grows", () => {
     expect(rampFactor(0)).toBe(0);
     expect(rampFactor(Number.POSITIVE_INFINITY)).toBe(1);

@@ -47,12 +47,14 @@ describe("parseQuantity", () => {
     expect(value(text, unit)).toBe(expected);
   });
 
+  // Our choice: "4.2m" with the unit implied (METHODS.md introduction: prefixes p n u µ m k M).
   it("reads a prefix alone as that power of ten, with the expected unit implied", () => {
     const parsed = parseQuantity("4.2m", "s");
     expect(parsed).toEqual({ ok: true, value: 4.2e-3, unit: "s" });
     expect(parseQuantity("3M")).toEqual({ ok: true, value: 3e6, unit: null });
   });
 
+  // Common practice, no source: SI prefixes are case-sensitive (m = 10⁻³, M = 10⁶).
   it("keeps m (milli) and M (mega) apart", () => {
     expect(value("1 ms")).toBe(1e-3);
     expect(value("1 Ms")).toBe(1e6);
@@ -67,12 +69,14 @@ describe("parseQuantity", () => {
     expect(value("250,5µs", "s")).toBe(250.5e-6);
   });
 
+  // Derived from §1: "DC" is a curve duration, nowhere else a value.
   it('returns "DC" only when the option allows it', () => {
     expect(value("DC", "s", true)).toBe("DC");
     expect(value(" dc ", "s", true)).toBe("DC");
     expect(reason("DC", "s")).toBe("'DC' is not allowed here");
   });
 
+  // Our choice: every refusal says why.
   it("rejects garbage with a clear reason", () => {
     expect(reason("")).toBe("expected a number");
     expect(reason("abc")).toBe("expected a number");
@@ -115,6 +119,7 @@ describe("formatQuantity", () => {
     expect(formatQuantity(x, unit)).toBe(expected);
   });
 
+  // Our choice: formatting to a given number of significant figures, "—" for no value.
   it("honours the number of significant figures and shows nothing for non-finite values", () => {
     expect(formatQuantity(Math.PI * 1e-3, "s", 5)).toBe(`3.1416${THIN}ms`);
     expect(formatQuantity(Math.PI, "V", 1)).toBe(`3${THIN}V`);
@@ -122,6 +127,7 @@ describe("formatQuantity", () => {
     expect(formatQuantity(Number.POSITIVE_INFINITY, "A")).toBe("—");
   });
 
+  // Our choice: formatting and parsing are inverse to the digits shown.
   it("parseQuantity(formatQuantity(x)) gives x back to three significant figures", () => {
     fc.assert(
       fc.property(

@@ -13,6 +13,7 @@ describe("worseVerdict", () => {
 
 describe("curveVerdict", () => {
   const base = { current: 8, allowed: 10, utilisationLimit: 0.8, hardFail: false };
+  // Derived from §8: pass if u ≤ u_max, marginal if u ≤ 1, fail beyond.
   it("passes up to the utilisation limit, is marginal up to 1, fails beyond", () => {
     expect(curveVerdict(base)).toBe("pass");
     expect(curveVerdict({ ...base, current: 9 })).toBe("marginal");
@@ -20,12 +21,14 @@ describe("curveVerdict", () => {
     expect(curveVerdict({ ...base, current: 10.0001 })).toBe("fail");
   });
 
+  // Derived from §2 and §8.
   it("fails on a hard limit whatever the curves say, and has no data without an allowed current", () => {
     expect(curveVerdict({ ...base, hardFail: true })).toBe("fail");
     expect(curveVerdict({ ...base, allowed: null, hardFail: true })).toBe("fail");
     expect(curveVerdict({ ...base, allowed: null })).toBe("no-data");
   });
 
+  // Derived from §8: I_allowed = 0 is a fail; our choice: a NaN current fails rather than passes.
   it("fails when nothing is allowed, and on a NaN current", () => {
     expect(curveVerdict({ ...base, allowed: 0 })).toBe("fail");
     expect(curveVerdict({ ...base, current: Number.NaN })).toBe("fail");
@@ -33,6 +36,7 @@ describe("curveVerdict", () => {
 });
 
 describe("utilisation", () => {
+  // Derived from §8: u = I/I_allowed, null at I_allowed = 0 (JSON has no infinity).
   it("is I/I_allowed, and null when the allowed current is null or 0 (JSON has no infinity)", () => {
     expect(utilisation(12, 15)).toBeCloseTo(0.8, 15);
     expect(utilisation(12, null)).toBeNull();

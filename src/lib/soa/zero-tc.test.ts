@@ -19,6 +19,7 @@ const crossing = {
 };
 
 describe("transferCrossings(transfer)", () => {
+  // Derived from §12: where the two transfer curves cross, α = 0 (worked by hand above).
   it("finds the zero-temperature-coefficient point at 3.5 V, 5 A (derived above)", () => {
     const result = transferCrossings(prepareTransfer(crossing))!;
     expect(result.crossings).toHaveLength(1);
@@ -50,6 +51,7 @@ describe("transferCrossings(transfer)", () => {
     expect(result.last).toBe(1);
   });
 
+  // Derived from §12: outside a curve's points it has no value.
   it("is null when the curves share no gate voltage range", () => {
     expect(
       transferCrossings(

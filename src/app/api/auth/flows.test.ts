@@ -1,6 +1,8 @@
-// The account flows end to end through the real route handlers, PostgreSQL and the mail fake.
+// The account flows end to end through the real route handlers, PostgreSQL and the mail fake. Each test makes its
+// own workspace and users, so no test depends on what another did before it (passwords changed, accounts locked,
+// sessions ended), and any one of them can run alone.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import { apiTokens, invitations, sessions, users } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import {
@@ -32,37 +34,29 @@ const unique = () => crypto.randomUUID().slice(0, 8);
 const linkToken = (text: string, path: string) =>
   new RegExp(`${path}/([A-Za-z0-9_-]+)`).exec(text)?.[1] ?? "";
 
-// Every response body the flows see, to search for secrets at the end.
-const seen: string[] = [];
-async function record(res: Response): Promise<Response> {
-  seen.push(
-    `${[...res.headers.entries()].filter(([k]) => k !== "set-cookie").join("\n")}\n${await res.clone().text()}`,
-  );
-  return res;
+const created: string[] = [];
+/** A fresh workspace with one member of each role, deleted after the file. */
+async function workspace(): Promise<TestWorkspace> {
+  const ws = await createTestWorkspace("Flows");
+  created.push(ws.id);
+  return ws;
 }
-
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Flows");
-});
 afterAll(async () => {
-  await deleteWorkspace(ws.id);
+  for (const id of created) await deleteWorkspace(id);
   await testDb.sql.end();
 });
 
 describe("sign-up and sign-in", () => {
   it("creates an account with its own workspace, the new user as admin, and signs in", async () => {
     const email = `founder-${unique()}@example.test`;
-    const res = await record(
-      await call(h(signUp), "POST", {
-        body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" },
-      }),
-    );
+    const res = await call(h(signUp), "POST", {
+      body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" },
+    });
     expect(res.status).toBe(201);
     const cookie = cookiePair(res.headers.get("set-cookie")!);
     expect(res.headers.get("set-cookie")).toMatch(/HttpOnly/i);
     expect(res.headers.get("set-cookie")).toMatch(/SameSite=Lax/i);
-    const tokens = await record(await call(h(listTokens), "GET", { cookie }));
+    const tokens = await call(h(listTokens), "GET", { cookie });
     expect(tokens.status).toBe(200);
     const again = await call(h(signUp), "POST", {
       body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Other" },
@@ -85,6 +79,7 @@ describe("sign-up and sign-in", () => {
   });
 
   it("answers the 6th failed sign-in within 15 minutes with 429 and Retry-After", async () => {
+    const ws = await workspace();
     const ip = `10.${unique().length}.0.${Math.floor(Math.random() * 250)}-${unique()}`;
     const headers = { "x-forwarded-for": ip };
     for (let k = 0; k < 5; k++) {
@@ -105,6 +100,7 @@ describe("sign-up and sign-in", () => {
   });
 
   it("without a proxy's client address, one person's failures do not lock out another", async () => {
+    const ws = await workspace();
     for (let k = 0; k < 6; k++) {
       await call(h(signIn), "POST", {
         body: { email: `victim-${unique()}@example.test`, password: "wrong" },
@@ -114,7 +110,7 @@ describe("sign-up and sign-in", () => {
     const other = await call(h(signIn), "POST", {
       body: { email: ws.members.lead.email, password: testPassword },
     });
-    expect([200, 401]).toContain(other.status);
+    expect(other.status).toBe(200);
     const locked = await call(h(signIn), "POST", {
       body: { email: ws.members.admin.email, password: testPassword },
     });
@@ -122,12 +118,11 @@ describe("sign-up and sign-in", () => {
   });
 
   it("signs in with the right password", async () => {
-    const res = await record(
-      await call(h(signIn), "POST", {
-        body: { email: ws.members.technician.email, password: testPassword },
-        headers: { "x-forwarded-for": `ip-${unique()}` },
-      }),
-    );
+    const ws = await workspace();
+    const res = await call(h(signIn), "POST", {
+      body: { email: ws.members.technician.email, password: testPassword },
+      headers: { "x-forwarded-for": `ip-${unique()}` },
+    });
     expect(res.status).toBe(200);
     expect(res.headers.get("set-cookie")).toMatch(/^pulsefence_session=/);
   });
@@ -135,24 +130,21 @@ describe("sign-up and sign-in", () => {
 
 describe("invitations", () => {
   it("e-mails a link that works once, and never after expiry", async () => {
+    const ws = await workspace();
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const email = `new-tech-${unique()}@example.test`;
-    const res = await record(
-      await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } }),
-    );
+    const res = await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } });
     expect(res.status).toBe(201);
     const mail = await waitForMail(email);
     expect(mail.subject).toContain(ws.name);
     const token = linkToken(mail.text, "/invite");
     expect(token.length).toBeGreaterThan(20);
-    const listed = await record(await call(h(listInvitations), "GET", { cookie: admin }));
+    const listed = await call(h(listInvitations), "GET", { cookie: admin });
     expect((await listed.json()).invitations.map((i: { email: string }) => i.email)).toContain(email);
 
-    const accepted = await record(
-      await call(h(acceptInvitation), "POST", {
-        body: { token, name: "Ivo Brandt", password: testPassword },
-      }),
-    );
+    const accepted = await call(h(acceptInvitation), "POST", {
+      body: { token, name: "Ivo Brandt", password: testPassword },
+    });
     expect(accepted.status).toBe(200);
     const second = await call(h(acceptInvitation), "POST", {
       body: { token, name: "Ivo Brandt", password: testPassword },
@@ -173,6 +165,7 @@ describe("invitations", () => {
   });
 
   it("keeps one open invitation per address: a second invitation replaces the first", async () => {
+    const ws = await workspace();
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const email = `twice-${unique()}@example.test`;
     await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } });
@@ -184,6 +177,7 @@ describe("invitations", () => {
   });
 
   it("refuses a lead handing out the admin role, and a technician inviting at all", async () => {
+    const ws = await workspace();
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
     const res = await call(h(invite), "POST", {
       cookie: lead,
@@ -201,6 +195,7 @@ describe("invitations", () => {
 
 describe("password reset", () => {
   it("resets once by e-mailed link and signs out every session", async () => {
+    const ws = await workspace();
     const user = ws.members.lead;
     const before = await sessionCookie(user.id, ws.id);
     const res = await call(h(forgotPassword), "POST", {
@@ -233,6 +228,7 @@ describe("password reset", () => {
   });
 
   it("a password change ends the user's other sessions but keeps this one", async () => {
+    const ws = await workspace();
     const user = ws.members.engineer;
     const other = await sessionCookie(user.id, ws.id);
     const mine = await sessionCookie(user.id, ws.id);
@@ -268,19 +264,20 @@ describe("API tokens", () => {
   };
 
   it("authenticates POST /api/v1/check with a bearer token until it is revoked", async () => {
+    const ws = await workspace();
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const created = await record(await call(h(createToken), "POST", { cookie, body: { name: "bench 3" } }));
+    const created = await call(h(createToken), "POST", { cookie, body: { name: "bench 3" } });
     expect(created.status).toBe(201);
     const { token } = await created.json();
     expect(token.secret).toMatch(/^pf_/);
 
-    const ok = await record(await call(h(checkPost), "POST", { bearer: token.secret, body: request }));
+    const ok = await call(h(checkPost), "POST", { bearer: token.secret, body: request });
     expect(ok.status).toBe(200);
     const body = await ok.json();
     expect(body.results).toHaveLength(1);
     expect(body.results[0]).toMatchObject({ id: "p1", verdict: expect.any(String), derating: 1 });
 
-    const listed = await record(await call(h(listTokens), "GET", { cookie }));
+    const listed = await call(h(listTokens), "GET", { cookie });
     expect(JSON.stringify(await listed.json())).not.toContain(token.secret);
 
     expect((await call(h(revokeToken), "DELETE", { cookie, params: { id: token.id } })).status).toBe(200);
@@ -288,6 +285,7 @@ describe("API tokens", () => {
   });
 
   it("answers an invalid check request 400 with the field path", async () => {
+    const ws = await workspace();
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
     const res = await call(h(checkPost), "POST", { cookie, body: { ...request, caseTemp: "hot" } });
     expect(res.status).toBe(400);
@@ -295,6 +293,7 @@ describe("API tokens", () => {
   });
 
   it("refuses a bearer token outside /api/v1", async () => {
+    const ws = await workspace();
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
     const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "misuse" } })).json();
     expect((await call(h(listInvitations), "GET", { bearer: token.secret })).status).toBe(401);
@@ -303,6 +302,7 @@ describe("API tokens", () => {
 
 describe("secrets", () => {
   it("sign-out everywhere ends every session of the user", async () => {
+    const ws = await workspace();
     const user = ws.members.admin;
     const one = await sessionCookie(user.id, ws.id);
     const two = await sessionCookie(user.id, ws.id);
@@ -310,15 +310,42 @@ describe("secrets", () => {
     expect((await call(h(listTokens), "GET", { cookie: two })).status).toBe(401);
   });
 
-  it("no response of these flows contains a password hash, a token hash or another user's session id", async () => {
-    seen.push(await (await call(h(health), "GET")).text());
+  it("no response of the account flows contains a password hash, a token hash or a session id", async () => {
+    const ws = await workspace();
+    const seen: string[] = [];
+    const record = async (res: Response) => {
+      const headers = [...res.headers.entries()].filter(([k]) => k !== "set-cookie").join("\n");
+      seen.push(`${headers}\n${await res.text()}`);
+      return res;
+    };
+    const ip = { "x-forwarded-for": `ip-${unique()}` };
+    const email = `secret-${unique()}@example.test`;
+    const body = { name: "Tove Marsh", email, password: testPassword, workspaceName: "Marsh Bench" };
+    await record(await call(h(signUp), "POST", { body }));
+    await record(await call(h(signIn), "POST", { body: { email, password: testPassword }, headers: ip }));
+    const admin = await sessionCookie(ws.members.admin.id, ws.id);
+    const invited = `invited-${unique()}@example.test`;
+    await record(
+      await call(h(invite), "POST", { cookie: admin, body: { email: invited, role: "engineer" } }),
+    );
+    await record(await call(h(listInvitations), "GET", { cookie: admin }));
+    const token = linkToken((await waitForMail(invited)).text, "/invite");
+    await record(
+      await call(h(acceptInvitation), "POST", { body: { token, name: "Nell", password: testPassword } }),
+    );
+    await record(await call(h(createToken), "POST", { cookie: admin, body: { name: "bench" } }));
+    await record(await call(h(listTokens), "GET", { cookie: admin }));
+    await record(
+      await call(h(forgotPassword), "POST", { body: { email: ws.members.lead.email }, headers: ip }),
+    );
+    await record(await call(h(health), "GET"));
+
     const hashes = (await testDb.db.select({ h: users.passwordHash }).from(users)).map((r) => r.h);
     const tokenHashes = [
       ...(await testDb.db.select({ h: apiTokens.tokenHash }).from(apiTokens)).map((r) => r.h),
       ...(await testDb.db.select({ h: invitations.tokenHash }).from(invitations)).map((r) => r.h),
     ];
     const sessionIds = (await testDb.db.select({ id: sessions.id }).from(sessions)).map((r) => r.id);
-    expect(seen.length).toBeGreaterThan(8);
     const all = seen.join("\n");
     for (const secret of [...hashes, ...tokenHashes, ...sessionIds]) expect(all.includes(secret)).toBe(false);
     expect(all).not.toMatch(/\$argon2id\$/);

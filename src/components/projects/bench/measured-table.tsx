@@ -10,6 +10,7 @@ import { FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
+import { can } from "@/lib/auth/permissions";
 import { invalidateProject, type MeasuredRecord, type ProjectCheck } from "../api";
 import { q, repeatOf, repeatText } from "../format";
 import type { Person, Viewer } from "../project-workspace";
@@ -36,7 +37,7 @@ export function MeasuredTable({
   const queryClient = useQueryClient();
   const [confirming, setConfirming] = useState<string | null>(null);
   const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = viewer.role === "lead" || viewer.role === "admin";
+  const mayDeleteAny = can(viewer.role, "measurement.manage");
   const remove = useMutation({
     mutationFn: (id: string) => sendJson("DELETE", `/api/projects/${projectId}/measurements/${id}`),
     onSuccess: async () => {

@@ -12,6 +12,7 @@ import { sizeText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
+import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
 import { q } from "../format";
 import type { PanelProps } from "../project-workspace";
@@ -30,7 +31,7 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   const captures = list.data?.captures ?? [];
   const selected = params.get("capture") ?? captures[0]?.id ?? null;
   const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = viewer.role === "lead" || viewer.role === "admin";
+  const mayDeleteAny = can(viewer.role, "measurement.manage");
 
   function open(id: string) {
     const next = new URLSearchParams(params);

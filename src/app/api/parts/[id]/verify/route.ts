@@ -14,8 +14,8 @@ import { loadPart } from "@/lib/library/parts";
  * Every open finding of the active curve set must be accepted with a reason; who, when and the reasons are kept.
  */
 export const POST = route<{ id: string }>({ action: "part.verify" }, async (req, caller, { id }) => {
-  const { acceptances } = await parseBody(req, verifySchema);
   const part = await loadPart(caller, id);
+  const { acceptances } = await parseBody(req, verifySchema);
   const active = await getActiveCurveSet({ partId: part.id });
   if (!active) {
     throw new AppError("conflict:no-curves", "Upload the part's SOA curves before verifying it.");

@@ -33,7 +33,7 @@ export default async function DecisionPage({
   const { id, decisionId } = await params;
   const project = await loadProject({ workspaceId: member.workspace.id }, id).catch(missing);
   const decision = await loadDecision(project.id, decisionId).catch(missing);
-  const snapshot = decision.snapshot as unknown as DecisionSnapshot;
+  const snapshot = decision.snapshot;
   const chosen = snapshot.ranking.find((r) => r.partId === decision.chosenPartId);
   const chosenPart = snapshot.candidates.find((c) => c.partId === decision.chosenPartId);
   const base = `/projects/${project.id}`;

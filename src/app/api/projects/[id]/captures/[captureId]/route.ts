@@ -1,4 +1,5 @@
 import { route } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
 import { caseTrace, junctionTrace } from "@/lib/capture/process";
 import { deleteCapture, getCapture, loadCaptureSamples } from "@/lib/capture/store";
 import { AppError } from "@/lib/errors";
@@ -52,7 +53,7 @@ export const DELETE = route<Params>(
   async (_req, caller, { id, captureId }) => {
     const project = await loadWritableProject(caller, id);
     const capture = await getCapture({ projectId: project.id, captureId });
-    if (capture.createdBy !== caller.user.id && caller.role !== "lead" && caller.role !== "admin") {
+    if (capture.createdBy !== caller.user.id && !can(caller.role, "measurement.manage", caller.leadRights)) {
       throw new AppError(
         "forbidden:capture",
         "Only the person who uploaded a capture, or a lead, can delete it.",

@@ -1,6 +1,6 @@
 import { route } from "@/lib/auth/guard";
 import { json } from "@/lib/http";
-import { computeDrift, type DecisionSnapshot, loadDecision, snapshotNow } from "@/lib/projects/decisions";
+import { computeDrift, loadDecision, snapshotNow } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 
 /**
@@ -12,7 +12,7 @@ export const GET = route<{ id: string; decisionId: string }>(
   async (_req, caller, { id, decisionId }) => {
     const project = await loadProject(caller, id);
     const decision = await loadDecision(project.id, decisionId);
-    const frozen = decision.snapshot as unknown as DecisionSnapshot;
+    const frozen = decision.snapshot;
     const drift = computeDrift(frozen, await snapshotNow(project));
     return json({ decision, drift });
   },

@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { measuredPulses } from "@/db/schema";
 import { type MemberCaller, route } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
 import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
@@ -18,8 +19,7 @@ async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measu
         .where(and(eq(measuredPulses.projectId, projectId), eq(measuredPulses.id, measurementId)))
     : [];
   if (!row) throw new AppError("not_found:measurement", "No such measured pulse in this project.");
-  const mayChangeAny = caller.role === "lead" || caller.role === "admin";
-  if (row.createdBy !== caller.user.id && !mayChangeAny) {
+  if (row.createdBy !== caller.user.id && !can(caller.role, "measurement.manage", caller.leadRights)) {
     throw new AppError("forbidden:not-yours", "Only its author or a lead can change a measured pulse.");
   }
   return row;

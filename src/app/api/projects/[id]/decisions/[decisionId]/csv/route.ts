@@ -1,5 +1,5 @@
 import { route } from "@/lib/auth/guard";
-import { type DecisionSnapshot, loadDecision } from "@/lib/projects/decisions";
+import { loadDecision } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 import { decisionCsv } from "@/lib/report/decision-csv";
 import { downloadName } from "@/lib/report/file-name";
@@ -10,7 +10,7 @@ export const GET = route<{ id: string; decisionId: string }>(
   async (_req, caller, { id, decisionId }) => {
     const project = await loadProject(caller, id);
     const decision = await loadDecision(project.id, decisionId);
-    const snapshot = decision.snapshot as unknown as DecisionSnapshot;
+    const snapshot = decision.snapshot;
     return new Response(decisionCsv(snapshot), {
       headers: {
         "content-type": "text/csv; charset=utf-8",

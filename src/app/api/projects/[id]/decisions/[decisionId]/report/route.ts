@@ -1,5 +1,5 @@
 import { route } from "@/lib/auth/guard";
-import { type DecisionSnapshot, loadDecision } from "@/lib/projects/decisions";
+import { loadDecision } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 import { renderDecisionPdf } from "@/lib/report/decision-pdf";
 import { attachmentDisposition } from "@/lib/report/file-name";
@@ -12,13 +12,9 @@ export const GET = route<{ id: string; decisionId: string }>(
     const decision = await loadDecision(project.id, decisionId);
     const pdf = await renderDecisionPdf({
       decision,
-      snapshot: decision.snapshot as unknown as DecisionSnapshot,
+      snapshot: decision.snapshot,
     });
-    const disposition = attachmentDisposition(
-      (decision.snapshot as unknown as DecisionSnapshot).project.name,
-      decision.signedAt,
-      "pdf",
-    );
+    const disposition = attachmentDisposition(decision.snapshot.project.name, decision.signedAt, "pdf");
     return new Response(new Uint8Array(pdf), {
       headers: {
         "content-type": "application/pdf",

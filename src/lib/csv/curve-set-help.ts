@@ -1,41 +1,5 @@
-// The downloadable examples and the format description of the curve-set upload panel. The numbers are invented
-// for a fictional 100 V part (R_DS(on) line 5 mΩ, 300 A pulsed and 100 A continuous limits, constant-power lines
-// of 6 kW, 2 kW, 600 W, 250 W and 150 W); they describe no real product.
-
-/** A long table: one row per point. */
-export const exampleLongCsv = `pulse width,V_DS [V],I_D [A]
-10us,0.1,20
-10us,1.5,300
-10us,20,300
-10us,50,120
-10us,100,60
-100us,0.1,20
-100us,1.5,300
-100us,6.67,300
-100us,100,20
-1ms,0.1,20
-1ms,1.5,300
-1ms,2,300
-1ms,10,60
-1ms,100,6
-10ms,0.1,20
-10ms,1.12,224
-10ms,100,2.5
-DC,0.1,20
-DC,0.5,100
-DC,1.5,100
-DC,100,1.5
-`;
-
-/** Paired columns: curve names above V/I column pairs, a row naming the quantities, curves of different lengths. */
-export const examplePairedCsv = `10us,,100 µs,,1ms,,DC,
-V_DS [V],I_D [A],V_DS [V],I_D [A],V_DS [V],I_D [A],V_DS [V],I_D [A]
-0.1,20,0.1,20,0.1,20,0.1,20
-1.5,300,1.5,300,1.5,300,0.5,100
-20,300,6.67,300,2,300,1.5,100
-50,120,100,20,10,60,100,1.5
-100,60,,,100,6,,
-`;
+// The format description of the curve-set upload panel. Its downloadable examples are static files,
+// public/examples/soa-curves-table.csv and soa-curves-paired.csv (src/lib/csv/public-examples.test.ts parses them).
 
 /** The format in plain words, one paragraph per entry, for the upload panel. */
 export const curveCsvHelp: readonly string[] = [

@@ -1,0 +1,7 @@
+"use client";
+
+import { SegmentError, type SegmentErrorProps } from "@/components/segment-error";
+
+export default function ProjectsError(props: SegmentErrorProps) {
+  return <SegmentError {...props} what="the projects" />;
+}
