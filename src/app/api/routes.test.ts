@@ -49,6 +49,7 @@ const routeFiles = findRoutes(apiDir).map((file) => ({
 // Routes anyone may call. Making a route public is a decision: it must be listed here.
 const publicRoutes = new Set([
   "POST /api/auth/sign-up",
+  "POST /api/auth/sign-up/confirm",
   "POST /api/auth/sign-in",
   "POST /api/auth/forgot-password",
   "POST /api/auth/reset-password",

@@ -1,7 +1,7 @@
 // The account flows end to end through the real route handlers, PostgreSQL and the mail fake.
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, invitations, sessions, users } from "@/db/schema";
+import { apiTokens, invitations, memberships, sessions, users } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import {
   call,
@@ -13,7 +13,7 @@ import {
   testDb,
   testPassword,
 } from "@/test/fixtures";
-import { waitForMail } from "@/test/services";
+import { readInbox, waitForMail } from "@/test/services";
 import { POST as changePassword } from "../account/password/route";
 import { DELETE as revokeToken } from "../account/tokens/[id]/route";
 import { POST as createToken, GET as listTokens } from "../account/tokens/route";
@@ -25,12 +25,25 @@ import { POST as forgotPassword } from "./forgot-password/route";
 import { POST as resetPassword } from "./reset-password/route";
 import { POST as signIn } from "./sign-in/route";
 import { POST as signOutEverywhere } from "./sign-out-everywhere/route";
+import { POST as confirmSignUp } from "./sign-up/confirm/route";
 import { POST as signUp } from "./sign-up/route";
 
 const h = (handler: unknown) => handler as GuardedHandler;
 const unique = () => crypto.randomUUID().slice(0, 8);
 const linkToken = (text: string, path: string) =>
   new RegExp(`${path}/([A-Za-z0-9_-]+)`).exec(text)?.[1] ?? "";
+
+/** The latest e-mail to `address` whose subject matches (the fake stores mail asynchronously). */
+async function mailTo(address: string, subject: RegExp) {
+  for (let wait = 0; wait < 100; wait++) {
+    const mail = (await readInbox())
+      .filter((m) => m.to.some((t) => t.address === address) && subject.test(m.subject))
+      .at(-1);
+    if (mail) return mail;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no e-mail to ${address} matching ${subject}`);
+}
 
 // Every response body the flows see, to search for secrets at the end.
 const seen: string[] = [];
@@ -51,23 +64,45 @@ afterAll(async () => {
 });
 
 describe("sign-up and sign-in", () => {
-  it("creates an account with its own workspace, the new user as admin, and signs in", async () => {
+  it("answers a new address and one with an account alike, and creates the account only by the e-mailed link", async () => {
     const email = `founder-${unique()}@example.test`;
-    const res = await record(
-      await call(h(signUp), "POST", {
-        body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" },
-      }),
-    );
-    expect(res.status).toBe(201);
-    const cookie = cookiePair(res.headers.get("set-cookie")!);
-    expect(res.headers.get("set-cookie")).toMatch(/HttpOnly/i);
-    expect(res.headers.get("set-cookie")).toMatch(/SameSite=Lax/i);
+    const body = { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" };
+    const fresh = await record(await call(h(signUp), "POST", { body }));
+    expect(fresh.status).toBe(202);
+    expect(fresh.headers.get("set-cookie")).toBeNull();
+    const freshBody = await fresh.text();
+    expect(await testDb.db.select().from(users).where(eq(users.email, email))).toHaveLength(0);
+
+    const token = linkToken((await mailTo(email, /Finish creating/)).text, "/sign-up/confirm");
+    const confirmed = await record(await call(h(confirmSignUp), "POST", { body: { token } }));
+    expect(confirmed.status).toBe(201);
+    const cookie = cookiePair(confirmed.headers.get("set-cookie")!);
+    expect(confirmed.headers.get("set-cookie")).toMatch(/HttpOnly/i);
+    expect(confirmed.headers.get("set-cookie")).toMatch(/SameSite=Lax/i);
     const tokens = await record(await call(h(listTokens), "GET", { cookie }));
     expect(tokens.status).toBe(200);
-    const again = await call(h(signUp), "POST", {
-      body: { name: "Mara Quill", email, password: testPassword, workspaceName: "Other" },
-    });
-    expect(again.status).toBe(409);
+    expect((await call(h(confirmSignUp), "POST", { body: { token } })).status).toBe(404);
+    const [created] = await testDb.db.select().from(users).where(eq(users.email, email));
+    const founded = await testDb.db.select().from(memberships).where(eq(memberships.userId, created.id));
+    expect(founded.map((m) => [m.role, m.leadRights])).toEqual([["admin", true]]);
+
+    // The same address again: the same status and body, no session, no second account or workspace; the owner
+    // is told by e-mail, with a reset link that works.
+    const again = await call(h(signUp), "POST", { body: { ...body, workspaceName: "Other" } });
+    expect(again.status).toBe(202);
+    expect(again.headers.get("set-cookie")).toBeNull();
+    expect(await again.text()).toBe(freshBody);
+    expect(await testDb.db.select().from(users).where(eq(users.email, email))).toHaveLength(1);
+    expect(
+      await testDb.db.select().from(memberships).where(eq(memberships.userId, created.id)),
+    ).toHaveLength(1);
+    const told = await mailTo(email, /tried to sign up/);
+    const resetToken = linkToken(told.text, "/reset-password");
+    expect(told.text).not.toContain("/sign-up/confirm/");
+    expect(
+      (await call(h(resetPassword), "POST", { body: { token: resetToken, password: "after a sign-up try" } }))
+        .status,
+    ).toBe(200);
   });
 
   it("names the invalid fields of a sign-up", async () => {
@@ -224,12 +259,16 @@ describe("password reset", () => {
     expect(signedIn.status).toBe(200);
   });
 
-  it("answers an unknown e-mail the same way, sending nothing", async () => {
+  it("answers an unknown e-mail the same way; its e-mail says no account uses the address", async () => {
+    const email = `nobody-${unique()}@example.test`;
     const res = await call(h(forgotPassword), "POST", {
-      body: { email: `nobody-${unique()}@example.test` },
+      body: { email },
       headers: { "x-forwarded-for": `ip-${unique()}` },
     });
     expect(res.status).toBe(200);
+    const mail = await mailTo(email, /Reset your Pulsefence password/);
+    expect(mail.text).toContain("no account uses it");
+    expect(mail.text).not.toContain("/reset-password/");
   });
 
   it("a password change ends the user's other sessions but keeps this one", async () => {
