@@ -4,6 +4,7 @@ import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as getNotices, PATCH as setNotices } from "@/app/api/account/notices/route";
 import { POST as activate } from "@/app/api/parts/[id]/curve-sets/[setId]/activate/route";
+import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
 import { POST as signPost } from "@/app/api/projects/[id]/decisions/route";
 import { POST as savePost } from "@/app/api/projects/[id]/measurements/route";
 import {
@@ -246,5 +247,46 @@ describe("decision drift", () => {
       .from(notices)
       .where(and(eq(notices.subjectType, "decision-drift"), eq(notices.subjectId, decision.id)));
     expect(driftRows).toHaveLength(2);
+  });
+});
+
+describe("verification lapsed", () => {
+  it("a verifier who turned these notices off hears nothing when the part returns to draft", async () => {
+    const [part] = await testDb.db
+      .insert(parts)
+      .values({
+        workspaceId: ws.id,
+        partNumber: "NT-8",
+        maker: "Notice Devices",
+        technology: "si-mosfet",
+        package: "TO-220",
+        vdsMax: 60,
+        tjMax: 175,
+        status: "verified",
+        verifiedBy: ws.members.admin.id,
+        verifiedAt: new Date(),
+      })
+      .returning();
+    const admin = await sessionCookie(ws.members.admin.id, ws.id);
+    const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
+    await call(h(setNotices), "PATCH", {
+      cookie: admin,
+      body: { failingEvidence: true, decisionDrift: true, verificationLapsed: false },
+    });
+    const before = (await readInbox()).length;
+    const res = await call(h(thermalPut), "PUT", {
+      cookie: engineer,
+      params: { id: part.id },
+      body: { terms: [{ r: 0.5, tau: 0.01 }] },
+    });
+    expect(res.status).toBe(200);
+    const [after] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
+    expect(after.status).toBe("draft");
+    expect(await newMailTo(ws.members.admin.email, before, 0)).toHaveLength(0);
+    const queued = await testDb.db
+      .select()
+      .from(mailOutbox)
+      .where(and(eq(mailOutbox.to, ws.members.admin.email), eq(mailOutbox.kind, "verification-lapsed")));
+    expect(queued).toHaveLength(0);
   });
 });
