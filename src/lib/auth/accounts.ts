@@ -14,6 +14,7 @@ import {
 } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+import { isUniqueViolation } from "@/lib/library/parts";
 import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
 import {
   passwordResetMail,
@@ -116,6 +117,17 @@ export async function requestSignUp(input: {
  * an address that got an account meanwhile (an invitation accepted) may be told so.
  */
 export async function confirmSignUp(token: string): Promise<{ userId: string; workspaceId: string }> {
+  return consumeSignUpLink(token).catch((error: unknown) => {
+    // Two links for one address used at once: the unique e-mail lets one through; the other is told as above.
+    throw isUniqueViolation(error) ? accountExists() : error;
+  });
+}
+
+function accountExists(): AppError {
+  return new AppError("conflict:email", "An account with this e-mail already exists. Sign in instead.");
+}
+
+function consumeSignUpLink(token: string) {
   return db.transaction(async (tx) => {
     const [pending] = await tx
       .delete(pendingSignUps)
@@ -131,9 +143,7 @@ export async function confirmSignUp(token: string): Promise<{ userId: string; wo
       where: eq(users.email, pending.email),
       columns: { id: true },
     });
-    if (existing) {
-      throw new AppError("conflict:email", "An account with this e-mail already exists. Sign in instead.");
-    }
+    if (existing) throw accountExists();
     await tx.delete(pendingSignUps).where(eq(pendingSignUps.email, pending.email));
     return createAccount(tx, pending);
   });
