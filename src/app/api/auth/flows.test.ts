@@ -93,9 +93,9 @@ describe("sign-up and sign-in", () => {
     expect(again.headers.get("set-cookie")).toBeNull();
     expect(await again.text()).toBe(freshBody);
     expect(await testDb.db.select().from(users).where(eq(users.email, email))).toHaveLength(1);
-    expect(
-      await testDb.db.select().from(memberships).where(eq(memberships.userId, created.id)),
-    ).toHaveLength(1);
+    expect(await testDb.db.select().from(memberships).where(eq(memberships.userId, created.id))).toHaveLength(
+      1,
+    );
     const told = await mailTo(email, /tried to sign up/);
     const resetToken = linkToken(told.text, "/reset-password");
     expect(told.text).not.toContain("/sign-up/confirm/");
