@@ -28,6 +28,8 @@ const technician = {
 test("an admin invites a technician by e-mail, who joins with the technician's reduced menu", async ({
   page,
 }) => {
+  // Signing up now goes through the e-mailed link, and the invitation through the mail fake too.
+  test.setTimeout(120_000);
   const shell = new AppShell(page);
 
   await test.step("the admin signs up and lands on the overview", async () => {

@@ -29,14 +29,43 @@ export const workspaces = pgTable("workspaces", {
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 
-/** A person. E-mail addresses are stored lower-cased. */
+/**
+ * A person. E-mail addresses are stored lower-cased. The `notice…` flags are the person's choice of optional
+ * e-mails (account mail such as invitations and reset links is always sent); all are on for a new account.
+ */
 export const users = pgTable("users", {
   id: uuid().primaryKey().defaultRandom(),
   email: text().notNull().unique(),
   name: text().notNull(),
   passwordHash: text().notNull(),
+  /** Measured pulses and captures that fail or have no data, on projects the person owns. */
+  noticeFailingEvidence: boolean().notNull().default(true),
+  /** A standing decision the person signed, or on a project they own, drifts after a library change. */
+  noticeDecisionDrift: boolean().notNull().default(true),
+  /** A part the person verified returns to draft because its data changed. */
+  noticeVerificationLapsed: boolean().notNull().default(true),
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
+
+/**
+ * A sign-up waiting for its address to be confirmed: the account and its workspace are created only when the link
+ * e-mailed to the address is used, so the sign-up form answers the same whether or not the address has an account.
+ * The token is stored hashed, as reset links are.
+ */
+export const pendingSignUps = pgTable(
+  "pending_sign_ups",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    email: text().notNull(),
+    name: text().notNull(),
+    passwordHash: text().notNull(),
+    workspaceName: text().notNull(),
+    tokenHash: text().notNull().unique(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.expiresAt)],
+);
 
 /**
  * A signed-in browser. The id is the SHA-256 of the cookie's token (a stolen table signs no one in); the active
@@ -133,7 +162,7 @@ export const authAttempts = pgTable(
   "auth_attempts",
   {
     id: uuid().primaryKey().defaultRandom(),
-    kind: text({ enum: ["sign-in", "reset", "reset-use"] }).notNull(),
+    kind: text({ enum: ["sign-in", "reset", "reset-use", "sign-up"] }).notNull(),
     key: text().notNull(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
@@ -465,7 +494,11 @@ export const captures = pgTable(
   (t) => [index().on(t.projectId)],
 );
 
-/** One e-mail per failing measured pulse or capture: a row here means the owner's e-mail is in the outbox. */
+/**
+ * What has been noticed by e-mail, so nothing is noticed twice: each failing measured pulse or capture (one e-mail
+ * per paste, upload or bench post lists them all), and each change of a standing decision's drift. A row here means
+ * the e-mail is in the outbox, written in the same transaction.
+ */
 export const notices = pgTable(
   "notices",
   {
@@ -475,10 +508,15 @@ export const notices = pgTable(
       .references(() => workspaces.id, { onDelete: "cascade" }),
     subjectType: text().notNull(),
     subjectId: uuid().notNull(),
+    /**
+     * Which state of the subject was noticed: empty for a failing pulse (noticed once, ever); for a drifting
+     * decision, a hash of the verdicts that changed, so each change is noticed once and an unchanged drift never again.
+     */
+    fingerprint: text().notNull().default(""),
     recipientId: uuid().references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex().on(t.subjectType, t.subjectId)],
+  (t) => [uniqueIndex("notices_subject_fingerprint_idx").on(t.subjectType, t.subjectId, t.fingerprint)],
 );
 
 /**

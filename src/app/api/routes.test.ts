@@ -65,6 +65,7 @@ const pin = (need: Pin["need"], ok: number, extra: Omit<Pin, "need" | "ok"> = {}
 
 // The pinned table. Adding a route or a method, or changing what one needs, is a decision: it is made here.
 const table: Record<string, Partial<Record<Method, Pin>>> = {
+  "/api/account/notices": { GET: pin("signed-in", 200), PATCH: pin("signed-in", 400) },
   "/api/account/password": { POST: pin("signed-in", 400) },
   "/api/account/profile": { PATCH: pin("signed-in", 400) },
   "/api/account/tokens": {
@@ -78,6 +79,7 @@ const table: Record<string, Partial<Record<Method, Pin>>> = {
   "/api/auth/sign-out": { POST: pin("signed-in", 200) },
   "/api/auth/sign-out-everywhere": { POST: pin("signed-in", 200) },
   "/api/auth/sign-up": { POST: pin("public", 400) },
+  "/api/auth/sign-up/confirm": { POST: pin("public", 400) },
   "/api/health": { GET: pin("public", 200) },
   "/api/invitations/accept": { POST: pin("public", 400) },
   "/api/parts": { GET: pin("workspace.read", 200), POST: pin("part.write", 400) },

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, gt, isNull } from "drizzle-orm";
+import { and, eq, gt, isNull, lt } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import {
@@ -8,13 +8,20 @@ import {
   invitations,
   memberships,
   passwordResets,
+  pendingSignUps,
   users,
   workspaces,
 } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
+import { isUniqueViolation } from "@/lib/library/parts";
 import { enqueueMail, kickOutbox } from "@/lib/mail/outbox";
-import { passwordResetMail } from "@/lib/mail/templates";
+import {
+  passwordResetMail,
+  passwordResetNoAccountMail,
+  signUpConfirmMail,
+  signUpExistingAccountMail,
+} from "@/lib/mail/templates";
 import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
 import { endOtherSessions } from "./session";
 import { forgetCachedAuth } from "./token-auth";
@@ -38,46 +45,140 @@ export function slugify(name: string): string {
     .replace(/[^a-z0-9]/g, "x")}`;
 }
 
-/** Creates the user and their workspace, with the user as admin, in one transaction. */
-export async function createAccount(input: {
+/** How long a sign-up's confirmation link works. */
+export const signUpLinkLifetimeMs = 24 * 60 * 60 * 1000;
+
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/**
+ * Asks for a new account and its workspace. The answer must not tell whether the address already has an account,
+ * by its content or its timing, so both paths do the same work: the password is hashed, one link token is made and
+ * stored hashed, and one e-mail goes into the outbox in one transaction (delivered after the answer). A new address
+ * gets a link that creates the account when used (`confirmSignUp`); an address with an account gets an e-mail
+ * saying someone tried to sign up with it, with a reset link, and nothing about the account changes.
+ */
+export async function requestSignUp(input: {
   name: string;
   email: string;
   password: string;
   workspaceName: string;
-}) {
+}): Promise<void> {
   const passwordHash = await hashPassword(input.password);
+  const token = randomToken();
+  const tokenHash = hashToken(token);
+  const now = Date.now();
+  const existing = await db.query.users.findFirst({
+    where: eq(users.email, input.email),
+    columns: { id: true },
+  });
+  await db.transaction(async (tx) => {
+    await tx.delete(pendingSignUps).where(lt(pendingSignUps.expiresAt, new Date(now)));
+    if (existing) {
+      await tx.insert(passwordResets).values({
+        userId: existing.id,
+        tokenHash,
+        expiresAt: new Date(now + resetLinkLifetimeMs),
+      });
+      await enqueueMail(
+        signUpExistingAccountMail({
+          to: input.email,
+          signInLink: `${env().APP_URL}/sign-in`,
+          resetLink: `${env().APP_URL}/reset-password/${token}`,
+        }),
+        { kind: "sign-up-existing" },
+        tx,
+      );
+    } else {
+      await tx.insert(pendingSignUps).values({
+        email: input.email,
+        name: input.name,
+        passwordHash,
+        workspaceName: input.workspaceName,
+        tokenHash,
+        expiresAt: new Date(now + signUpLinkLifetimeMs),
+      });
+      await enqueueMail(
+        signUpConfirmMail({
+          to: input.email,
+          name: input.name,
+          workspaceName: input.workspaceName,
+          link: `${env().APP_URL}/sign-up/confirm/${token}`,
+        }),
+        { kind: "sign-up" },
+        tx,
+      );
+    }
+  });
+  kickOutbox();
+}
+
+/**
+ * Uses a sign-up link once: creates the user and their workspace, with the user as admin (and lead rights, so one
+ * person can run it), in one transaction that also consumes the link. Only the holder of the mailbox gets here, so
+ * an address that got an account meanwhile (an invitation accepted) may be told so.
+ */
+export async function confirmSignUp(token: string): Promise<{ userId: string; workspaceId: string }> {
+  return consumeSignUpLink(token).catch((error: unknown) => {
+    // Two links for one address used at once: the unique e-mail lets one through; the other is told as above.
+    throw isUniqueViolation(error) ? accountExists() : error;
+  });
+}
+
+function accountExists(): AppError {
+  return new AppError("conflict:email", "An account with this e-mail already exists. Sign in instead.");
+}
+
+function consumeSignUpLink(token: string) {
   return db.transaction(async (tx) => {
+    const [pending] = await tx
+      .delete(pendingSignUps)
+      .where(and(eq(pendingSignUps.tokenHash, hashToken(token)), gt(pendingSignUps.expiresAt, new Date())))
+      .returning();
+    if (!pending) {
+      throw new AppError(
+        "not_found:sign-up-link",
+        "This sign-up link is not valid any more: used or expired. Sign up again.",
+      );
+    }
     const existing = await tx.query.users.findFirst({
-      where: eq(users.email, input.email),
+      where: eq(users.email, pending.email),
       columns: { id: true },
     });
-    if (existing)
-      throw new AppError("conflict:email", "An account with this e-mail already exists. Sign in instead.");
-    const [user] = await tx
-      .insert(users)
-      .values({ email: input.email, name: input.name, passwordHash })
-      .returning({ id: users.id });
-    const [workspace] = await tx
-      .insert(workspaces)
-      .values({ name: input.workspaceName, slug: slugify(input.workspaceName) })
-      .returning({ id: workspaces.id });
-    // The founder of a workspace is its only member: they hold lead rights too, so they can verify and sign alone.
-    await tx
-      .insert(memberships)
-      .values({ workspaceId: workspace.id, userId: user.id, role: "admin", leadRights: true });
-    await recordAudit(
-      {
-        workspaceId: workspace.id,
-        actorId: user.id,
-        action: "membership.created",
-        subjectType: "user",
-        subjectId: user.id,
-        details: { role: "admin", leadRights: true, via: "sign-up" },
-      },
-      tx,
-    );
-    return { userId: user.id, workspaceId: workspace.id };
+    if (existing) throw accountExists();
+    await tx.delete(pendingSignUps).where(eq(pendingSignUps.email, pending.email));
+    return createAccount(tx, pending);
   });
+}
+
+/** Creates the user and their workspace, with the user as admin, in the caller's transaction. */
+async function createAccount(
+  tx: Tx,
+  input: { name: string; email: string; passwordHash: string; workspaceName: string },
+) {
+  const [user] = await tx
+    .insert(users)
+    .values({ email: input.email, name: input.name, passwordHash: input.passwordHash })
+    .returning({ id: users.id });
+  const [workspace] = await tx
+    .insert(workspaces)
+    .values({ name: input.workspaceName, slug: slugify(input.workspaceName) })
+    .returning({ id: workspaces.id });
+  // The founder of a workspace is its only member: they hold lead rights too, so they can verify and sign alone.
+  await tx
+    .insert(memberships)
+    .values({ workspaceId: workspace.id, userId: user.id, role: "admin", leadRights: true });
+  await recordAudit(
+    {
+      workspaceId: workspace.id,
+      actorId: user.id,
+      action: "membership.created",
+      subjectType: "user",
+      subjectId: user.id,
+      details: { role: "admin", leadRights: true, via: "sign-up" },
+    },
+    tx,
+  );
+  return { userId: user.id, workspaceId: workspace.id };
 }
 
 /** Checks e-mail and password; the same work is done for unknown e-mails so timing reveals nothing. */
@@ -99,19 +200,27 @@ export async function defaultWorkspace(userId: string): Promise<string | null> {
   return rows[0]?.id ?? null;
 }
 
-/** Sends a reset link when the account exists; says nothing either way. */
+/**
+ * Sends a reset link when the account exists, and an e-mail saying no account uses the address when it does not.
+ * Both paths do the same work on the request (one lookup, one token made, one transaction that queues one e-mail;
+ * delivery happens after the answer, by the outbox), so neither the answer nor its timing tells which it was.
+ */
 export async function requestPasswordReset(email: string): Promise<void> {
   const user = await db.query.users.findFirst({ where: eq(users.email, email), columns: { id: true } });
-  if (!user) return;
   const token = randomToken();
+  const tokenHash = hashToken(token);
   await db.transaction(async (tx) => {
-    await tx.insert(passwordResets).values({
-      userId: user.id,
-      tokenHash: hashToken(token),
-      expiresAt: new Date(Date.now() + resetLinkLifetimeMs),
-    });
+    if (user) {
+      await tx.insert(passwordResets).values({
+        userId: user.id,
+        tokenHash,
+        expiresAt: new Date(Date.now() + resetLinkLifetimeMs),
+      });
+    }
     await enqueueMail(
-      passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` }),
+      user
+        ? passwordResetMail({ to: email, link: `${env().APP_URL}/reset-password/${token}` })
+        : passwordResetNoAccountMail({ to: email, signUpLink: `${env().APP_URL}/sign-up` }),
       { kind: "password-reset" },
       tx,
     );

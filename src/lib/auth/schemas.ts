@@ -30,6 +30,8 @@ export const forgotPasswordSchema = z.object({ email });
 
 export const resetPasswordSchema = z.object({ token: z.string().min(20), password });
 
+export const confirmSignUpSchema = z.object({ token: z.string().min(20).max(200) });
+
 export const acceptInvitationSchema = z.object({
   token: z.string().min(20),
   name: personName.optional(),
@@ -55,4 +57,11 @@ export const changePasswordSchema = z.object({
 
 export const createTokenSchema = z.object({
   name: z.string().trim().min(1, { message: "Name the token, e.g. the bench it runs on" }).max(60),
+});
+
+/** The optional e-mails a person chooses; account mail (invitations, reset and sign-up links) is always sent. */
+export const noticePreferencesSchema = z.object({
+  failingEvidence: z.boolean(),
+  decisionDrift: z.boolean(),
+  verificationLapsed: z.boolean(),
 });

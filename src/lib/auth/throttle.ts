@@ -8,7 +8,7 @@ import { AppError } from "@/lib/errors";
 export const throttleWindowMs = 15 * 60 * 1000;
 export const throttleLimit = 5;
 
-type Kind = "sign-in" | "reset" | "reset-use";
+type Kind = "sign-in" | "reset" | "reset-use" | "sign-up";
 
 /**
  * The keys an attempt counts against: the e-mail address (or link), and the client's IP when a configured proxy in

@@ -10,7 +10,8 @@ import { logError } from "@/lib/log";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
-import { draftFields, findingPart, noticeLapsedVerification } from "./part-findings";
+import { noticePartChange } from "./part-changed";
+import { draftFields, findingPart } from "./part-findings";
 
 /** An upload not registered within this time is removed by the cleanup step. */
 export const staleUploadMs = 60 * 60 * 1000;
@@ -244,7 +245,7 @@ export async function registerCurveSet(
       );
       return row;
     });
-    await noticeLapsedVerification(input.part, `new curve set ${upload.fileName}`, input.userName);
+    await noticePartChange(input.part, `new curve set ${upload.fileName}`, input.userName);
     // The presigned object is no longer needed; if storage fails here, the cleanup step removes it later.
     await discardUpload(storage, upload);
     return { curveSet: set, curves: parsed.curves.length, findings, warnings: parsed.warnings };

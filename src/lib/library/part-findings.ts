@@ -1,7 +1,7 @@
 import "server-only";
-import { asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { curveSets, curves, type Part, users } from "@/db/schema";
+import { curveSets, curves, memberships, type Part, users } from "@/db/schema";
 import { env } from "@/lib/env";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { verificationLapsedMail } from "@/lib/mail/templates";
@@ -71,10 +71,15 @@ export async function noticeLapsedVerification(
   actorName: string,
 ): Promise<boolean> {
   if (part.status !== "verified" || !part.verifiedBy) return false;
-  const verifier = await db.query.users.findFirst({
-    where: eq(users.id, part.verifiedBy),
-    columns: { email: true },
-  });
+  // Only a current member who has not turned these notices off is told.
+  const [verifier] = await db
+    .select({ email: users.email })
+    .from(users)
+    .innerJoin(
+      memberships,
+      and(eq(memberships.userId, users.id), eq(memberships.workspaceId, part.workspaceId)),
+    )
+    .where(and(eq(users.id, part.verifiedBy), eq(users.noticeVerificationLapsed, true)));
   if (!verifier) return false;
   await enqueueMail(
     verificationLapsedMail({

@@ -6,7 +6,8 @@ import { getPart } from "@/db/queries/parts";
 import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
-import { draftFields, noticeLapsedVerification, refreshFindings } from "./part-findings";
+import { noticePartChange } from "./part-changed";
+import { draftFields, refreshFindings } from "./part-findings";
 import type { PartValues } from "./part-schema";
 
 /** The caller's workspace's part, or 404 (a part of another workspace does not exist for the caller). */
@@ -133,7 +134,7 @@ async function writePart(caller: MemberCaller, part: Part, values: PartValues): 
     return updated;
   });
   if (limitsChanged) {
-    await noticeLapsedVerification(part, `ratings changed: ${changed.join(", ")}`, caller.user.name);
+    await noticePartChange(part, `ratings changed: ${changed.join(", ")}`, caller.user.name);
   }
   return updated;
 }
@@ -173,6 +174,6 @@ export async function setThermalModel(
     );
     return updated;
   });
-  await noticeLapsedVerification(part, "thermal model changed", caller.user.name);
+  await noticePartChange(part, "thermal model changed", caller.user.name);
   return updated;
 }

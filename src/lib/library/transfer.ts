@@ -7,7 +7,8 @@ import type { MemberCaller } from "@/lib/auth/guard";
 import { csvIssue } from "@/lib/csv/issues";
 import { parseTransferCsv } from "@/lib/csv/transfer";
 import { CsvRejected } from "./curve-upload";
-import { draftFields, noticeLapsedVerification } from "./part-findings";
+import { noticePartChange } from "./part-changed";
+import { draftFields } from "./part-findings";
 import { reviewTransfer, type TransferFinding } from "./transfer-findings";
 
 /**
@@ -68,6 +69,6 @@ async function writeTransfer(
     );
     return updated;
   });
-  await noticeLapsedVerification(part, "transfer characteristics changed", caller.user.name);
+  await noticePartChange(part, "transfer characteristics changed", caller.user.name);
   return updated;
 }

@@ -2,6 +2,8 @@
 // then back: nothing is marked sent before it is, and nothing is lost.
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { POST as forgotPassword } from "@/app/api/auth/forgot-password/route";
+import { POST as signUp } from "@/app/api/auth/sign-up/route";
 import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
 import { POST as saveMeasurements } from "@/app/api/projects/[id]/measurements/route";
 import { POST as resend } from "@/app/api/team/invitations/[id]/resend/route";
@@ -101,6 +103,41 @@ describe("with the mail server down", () => {
       body: { token, name: "Rae Outbox", password: testPassword },
     });
     expect(accepted.status).toBe(200);
+  });
+
+  it("forgot-password answers a known and an unknown address alike, each queuing one e-mail, none sent on the request", async () => {
+    const known = ws.members.lead.email;
+    const unknown = `nobody-${crypto.randomUUID().slice(0, 8)}@example.test`;
+    const answers = [];
+    for (const email of [known, unknown]) {
+      const res = await call(h(forgotPassword), "POST", { body: { email } });
+      answers.push({ status: res.status, body: await res.text(), cookie: res.headers.get("set-cookie") });
+    }
+    // Mail is down: a known address is not a 503 (nor any other answer than the unknown one's).
+    expect(answers[0]).toEqual(answers[1]);
+    expect(answers[0].status).toBe(200);
+    await outboxIdle();
+    for (const email of [known, unknown]) {
+      const rows = (await outboxTo(email)).filter((m) => m.kind === "password-reset");
+      expect(rows.map((r) => r.status)).toEqual(["pending"]);
+    }
+  });
+
+  it("sign-up answers a new address and one with an account alike, each queuing one e-mail", async () => {
+    const known = ws.members.technician.email;
+    const fresh = `new-${crypto.randomUUID().slice(0, 8)}@example.test`;
+    const answers = [];
+    for (const email of [known, fresh]) {
+      const res = await call(h(signUp), "POST", {
+        body: { name: "Ida Probe", email, password: testPassword, workspaceName: "Probe Lab" },
+      });
+      answers.push({ status: res.status, body: await res.text(), cookie: res.headers.get("set-cookie") });
+    }
+    expect(answers[0]).toEqual(answers[1]);
+    expect(answers[0]).toMatchObject({ status: 202, cookie: null });
+    await outboxIdle();
+    expect((await outboxTo(known)).filter((m) => m.kind === "sign-up-existing")).toHaveLength(1);
+    expect((await outboxTo(fresh)).map((m) => [m.kind, m.status])).toEqual([["sign-up", "pending"]]);
   });
 
   it("lists the workspace's e-mails and their state for admins, without bodies", async () => {

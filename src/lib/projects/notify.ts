@@ -4,7 +4,7 @@ import { db } from "@/db";
 import { memberships, notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
-import { failingPulseMail } from "@/lib/mail/templates";
+import { type FailingPulse, failingEvidenceMail } from "@/lib/mail/templates";
 import { formatTemperature } from "@/lib/soa/sanity";
 import { formatQuantity } from "@/lib/soa/units";
 import type { checkProject } from "./check";
@@ -14,9 +14,11 @@ type Checked = Awaited<ReturnType<typeof checkProject>>;
 const sourceWords = { measured: "measured pulse", capture: "capture", "fault-case": "fault case" } as const;
 
 /**
- * E-mails the project's owner engineer about each new measured pulse or capture that fails, or has no data, on
- * any candidate: exactly one e-mail per pulse. The notice row and the e-mail in the outbox are written together,
- * so a re-check never queues again and a mail outage only delays the e-mail; it never undoes the measurement.
+ * E-mails the project's owner about the new measured pulses or captures of one action (a paste, an upload, a bench
+ * post) that fail, or have no data, on any candidate: one e-mail listing them all. Each pulse is noticed once, ever:
+ * its notice row and the e-mail in the outbox are written in one transaction, so a re-check never queues again and
+ * a mail outage only delays the e-mail; it never undoes the measurement. Only a current member of the workspace who
+ * has not turned these notices off is told. Returns how many pulses the e-mail lists.
  */
 export async function notifyFailingEvidence(
   project: Project,
@@ -24,7 +26,6 @@ export async function notifyFailingEvidence(
   pulseIds: string[],
 ): Promise<number> {
   if (!project.ownerId) return 0;
-  // Only a current member of the project's workspace is told: a removed owner hears nothing more.
   const [owner] = await db
     .select({ email: users.email })
     .from(users)
@@ -32,58 +33,64 @@ export async function notifyFailingEvidence(
       memberships,
       and(eq(memberships.userId, users.id), eq(memberships.workspaceId, project.workspaceId)),
     )
-    .where(eq(users.id, project.ownerId));
+    .where(and(eq(users.id, project.ownerId), eq(users.noticeFailingEvidence, true)));
   if (!owner) return 0;
-  let queued = 0;
-  for (const pulse of checked.pulses.filter((p) => pulseIds.includes(p.id))) {
-    const worst = checked.worstByPulse[pulse.id];
-    if (worst !== "fail" && worst !== "no-data") continue;
-    if (pulse.source === "fault-case") continue;
-    const verdicts = checked.candidates.map((c) => {
-      const r = checked.results[c.partId]?.[pulse.id];
-      const detail = r
-        ? [
-            r.utilisation !== null ? `utilisation ${(r.utilisation * 100).toFixed(0)} %` : null,
-            r.tjPeak !== null ? `Tj peak ${formatTemperature(r.tjPeak)}` : null,
-          ]
-            .filter(Boolean)
-            .join(", ")
-        : "no SOA curves";
-      return { candidate: `${c.maker} ${c.partNumber}`, verdict: r?.verdict ?? "no-data", detail };
-    });
-    const figures = [
-      pulse.v !== null ? formatQuantity(pulse.v, "V") : null,
-      pulse.i !== null ? formatQuantity(pulse.i, "A") : null,
-      pulse.duration !== null ? formatQuantity(pulse.duration, "s") : null,
-    ]
-      .filter(Boolean)
-      .join(", ");
-    const mail = failingPulseMail({
-      to: owner.email,
-      projectName: project.name,
-      pulseName: pulse.name,
-      source: sourceWords[pulse.source],
-      pulseFigures: figures,
-      verdicts,
-      link: `${env().APP_URL}/projects/${project.id}?pulse=${pulse.id}`,
-    });
-    const ownerId = project.ownerId;
-    const claimed = await db.transaction(async (tx) => {
-      const [notice] = await tx
-        .insert(notices)
-        .values({
+  const failing = checked.pulses.filter(
+    (p) =>
+      pulseIds.includes(p.id) &&
+      p.source !== "fault-case" &&
+      ["fail", "no-data"].includes(checked.worstByPulse[p.id] ?? "pass"),
+  );
+  if (failing.length === 0) return 0;
+  const ownerId = project.ownerId;
+  const projectLink = `${env().APP_URL}/projects/${project.id}`;
+  const listed = await db.transaction(async (tx) => {
+    const claimed = await tx
+      .insert(notices)
+      .values(
+        failing.map((pulse) => ({
           workspaceId: project.workspaceId,
           subjectType: pulse.source,
           subjectId: pulse.id,
           recipientId: ownerId,
-        })
-        .onConflictDoNothing()
-        .returning({ id: notices.id });
-      if (notice) await enqueueMail(mail, { kind: "failing-pulse", workspaceId: project.workspaceId }, tx);
-      return Boolean(notice);
+        })),
+      )
+      .onConflictDoNothing()
+      .returning({ subjectId: notices.subjectId });
+    const fresh = failing.filter((p) => claimed.some((c) => c.subjectId === p.id));
+    if (fresh.length === 0) return 0;
+    const mail = failingEvidenceMail({
+      to: owner.email,
+      projectName: project.name,
+      pulses: fresh.map((pulse) => describePulse(checked, pulse, `${projectLink}?pulse=${pulse.id}`)),
+      projectLink,
     });
-    if (claimed) queued++;
-  }
-  if (queued) await flushOutbox();
-  return queued;
+    await enqueueMail(mail, { kind: "failing-pulse", workspaceId: project.workspaceId }, tx);
+    return fresh.length;
+  });
+  if (listed) await flushOutbox();
+  return listed;
+}
+
+function describePulse(checked: Checked, pulse: Checked["pulses"][number], link: string): FailingPulse {
+  const verdicts = checked.candidates.map((c) => {
+    const r = checked.results[c.partId]?.[pulse.id];
+    const detail = r
+      ? [
+          r.utilisation !== null ? `utilisation ${(r.utilisation * 100).toFixed(0)} %` : null,
+          r.tjPeak !== null ? `Tj peak ${formatTemperature(r.tjPeak)}` : null,
+        ]
+          .filter(Boolean)
+          .join(", ")
+      : "no SOA curves";
+    return { candidate: `${c.maker} ${c.partNumber}`, verdict: r?.verdict ?? "no-data", detail };
+  });
+  const pulseFigures = [
+    pulse.v !== null ? formatQuantity(pulse.v, "V") : null,
+    pulse.i !== null ? formatQuantity(pulse.i, "A") : null,
+    pulse.duration !== null ? formatQuantity(pulse.duration, "s") : null,
+  ]
+    .filter(Boolean)
+    .join(", ");
+  return { pulseName: pulse.name, source: sourceWords[pulse.source], pulseFigures, verdicts, link };
 }

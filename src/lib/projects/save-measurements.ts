@@ -64,8 +64,8 @@ export function benchTextRows(input: z.output<typeof saveBenchTextSchema>) {
 
 /**
  * Saves measured pulses in one transaction, attributed to the caller; then checks the project and e-mails its
- * owner once for each saved pulse that fails or has no data on any candidate. Returns the saved ids, how many
- * notices went out, and the verdicts of the saved pulses on every candidate.
+ * owner once, listing every saved pulse that fails or has no data on any candidate. Returns the saved ids, how many
+ * pulses that e-mail lists, and the verdicts of the saved pulses on every candidate.
  */
 export async function saveMeasurements(
   caller: MemberCaller,

@@ -9,7 +9,8 @@ export default function SignUpPage() {
   return (
     <>
       <AuthHeading title="Create a workspace">
-        Start your team&apos;s workspace; you will be its admin and can invite the others.
+        Start your team&apos;s workspace; you will be its admin and can invite the others. We e-mail you a
+        link to finish.
       </AuthHeading>
       <SignUpForm />
       <AuthFooter>

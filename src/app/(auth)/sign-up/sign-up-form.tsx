@@ -1,7 +1,6 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
@@ -10,8 +9,7 @@ import { applyServerErrors } from "@/components/form-errors";
 import { signUpSchema } from "@/lib/auth/schemas";
 
 export function SignUpForm() {
-  const router = useRouter();
-  const [leaving, setLeaving] = useState(false);
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
@@ -25,15 +23,21 @@ export function SignUpForm() {
   const onSubmit = handleSubmit(async (values) => {
     try {
       await sendJson("POST", "/api/auth/sign-up", values);
-      setLeaving(true);
-      router.replace("/app");
-      router.refresh();
+      setSentTo(values.email);
     } catch (error) {
-      applyServerErrors(error, setError, ["name", "email", "password", "workspaceName"], {
-        "conflict:email": "email",
-      });
+      applyServerErrors(error, setError, ["name", "email", "password", "workspaceName"]);
     }
   });
+
+  if (sentTo) {
+    return (
+      <FormMessage tone="done">
+        Check your e-mail: a link to finish creating your workspace is on its way to{" "}
+        <strong className="font-medium">{sentTo}</strong>. It works once, for 24 hours. Nothing arrived in a
+        few minutes? Look in the spam folder, or sign up again.
+      </FormMessage>
+    );
+  }
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
@@ -71,8 +75,8 @@ export function SignUpForm() {
       />
       <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
       <FormActions>
-        <Button type="submit" variant="primary" pending={isSubmitting || leaving}>
-          {isSubmitting || leaving ? "Creating…" : "Create workspace"}
+        <Button type="submit" variant="primary" pending={isSubmitting}>
+          {isSubmitting ? "Sending…" : "Create workspace"}
         </Button>
       </FormActions>
     </form>

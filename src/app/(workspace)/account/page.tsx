@@ -2,8 +2,10 @@ import type { Metadata } from "next";
 import { PageHeader, Section } from "@/components/page-header";
 import { EmptyRow, Table, Th } from "@/components/table";
 import { listApiTokens } from "@/db/queries/api-tokens";
+import { getNoticePreferences } from "@/lib/auth/notice-preferences";
 import { requireMember } from "@/lib/auth/page";
 import { CreateTokenForm } from "./create-token-form";
+import { NoticePreferencesForm } from "./notice-preferences-form";
 import { PasswordForm } from "./password-form";
 import { ProfileForm } from "./profile-form";
 import { SignOutEverywhere } from "./sign-out-everywhere";
@@ -13,7 +15,10 @@ export const metadata: Metadata = { title: "Account" };
 
 export default async function AccountPage() {
   const member = await requireMember();
-  const tokens = await listApiTokens({ userId: member.user.id });
+  const [tokens, notices] = await Promise.all([
+    listApiTokens({ userId: member.user.id }),
+    getNoticePreferences(member.user.id),
+  ]);
   const workspaceNames = new Map(member.workspaces.map((w) => [w.id, w.name]));
   const active = tokens.filter((t) => !t.revokedAt).length;
 
@@ -33,6 +38,14 @@ export default async function AccountPage() {
           <PasswordForm email={member.user.email} />
         </Section>
       </div>
+
+      <Section
+        id="notices"
+        title="Notices"
+        description="Which e-mails Pulsefence sends you about the team's work, in every workspace you are in."
+      >
+        <NoticePreferencesForm preferences={notices} />
+      </Section>
 
       <Section
         id="tokens"

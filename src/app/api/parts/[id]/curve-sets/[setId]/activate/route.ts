@@ -5,7 +5,8 @@ import { curveSets, parts } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
-import { draftFields, noticeLapsedVerification } from "@/lib/library/part-findings";
+import { noticePartChange } from "@/lib/library/part-changed";
+import { draftFields } from "@/lib/library/part-findings";
 import { loadPart } from "@/lib/library/parts";
 import { isUuid } from "@/lib/uuid";
 
@@ -41,7 +42,7 @@ export const POST = route<{ id: string; setId: string }>(
       );
       return set.fileName;
     });
-    await noticeLapsedVerification(part, `curve set ${fileName} made active`, caller.user.name);
+    await noticePartChange(part, `curve set ${fileName} made active`, caller.user.name);
     return json({ status: "ok" });
   },
 );
