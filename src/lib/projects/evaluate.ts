@@ -20,8 +20,13 @@ export interface ProjectPulse {
   duration: number | null;
   kind: Pulse["kind"];
   repeat?: Repeat;
-  /** The pulse in the engine's form; captures are loaded only when checked. */
-  pulse: Pulse | (() => Promise<Pulse>);
+  /** The pulse in the engine's form; captures are loaded only when checked; null: only `stored` results count. */
+  pulse: Pulse | (() => Promise<Pulse>) | null;
+  /**
+   * Results already computed and current (a capture's, stored by its job), by candidate: they are used as they
+   * are, and a candidate missing here gets no result for this pulse yet (it is being recomputed).
+   */
+  stored?: Record<string, PulseResult>;
 }
 
 export interface EvaluatedCandidate {
@@ -39,8 +44,9 @@ export interface Evaluation {
 
 /**
  * Checks every pulse against every candidate through the engine, at each pulse's case temperature and the project's
- * policy. One engine context per (candidate, case temperature); captures are loaded once and shared. With a case
- * path (METHODS.md §14) the case heats with each pulse's power through it.
+ * policy. One engine context per (candidate, case temperature); captures are loaded once and shared, and a pulse
+ * with stored results is not checked again. With a case path (METHODS.md §14) the case heats with each pulse's
+ * power through it.
  */
 export async function evaluate(
   candidates: EvaluatedCandidate[],
@@ -49,7 +55,10 @@ export async function evaluate(
   caseNetwork?: FosterTerm[],
 ): Promise<Evaluation> {
   const loaded = new Map<string, Pulse>();
-  for (const p of pulses) loaded.set(p.id, typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+  for (const p of pulses) {
+    if (p.stored || p.pulse === null) continue;
+    loaded.set(p.id, typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+  }
   const results: Evaluation["results"] = {};
   const worstByPulse: Evaluation["worstByPulse"] = {};
   for (const candidate of candidates) {
@@ -58,6 +67,14 @@ export async function evaluate(
     for (const p of pulses) {
       if (candidate.limits === null) {
         worstByPulse[p.id] = worseVerdict(worstByPulse[p.id] ?? "pass", "no-data");
+        continue;
+      }
+      if (p.stored || p.pulse === null) {
+        const known = p.stored?.[candidate.partId];
+        if (known) {
+          forPart[p.id] = known;
+          worstByPulse[p.id] = worseVerdict(worstByPulse[p.id] ?? "pass", known.verdict);
+        }
         continue;
       }
       let ctx = contexts.get(p.caseTemp);
