@@ -152,10 +152,7 @@ export function CaptureUpload({
         />
       ) : null}
       {phase.kind === "checking" ? (
-        <UploadProgress
-          label="Keeping the file and queueing it to be read and checked…"
-          fraction={null}
-        />
+        <UploadProgress label="Keeping the file and queueing it to be read and checked…" fraction={null} />
       ) : null}
       {phase.kind === "failed" ? (
         <FormMessage tone="error">
