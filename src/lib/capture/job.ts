@@ -196,7 +196,9 @@ export async function recheckCapture(storage: Storage, captureId: string): Promi
       .from(captures)
       .where(eq(captures.id, captureId))
       .for("update");
-    if (still) await storeCaptureResults(tx, captureId, results);
+    if (!still) return;
+    await storeCaptureResults(tx, captureId, results);
+    await tx.update(captures).set({ error: null }).where(eq(captures.id, captureId));
   });
   return true;
 }
@@ -229,7 +231,18 @@ export async function startCaptureWorkers(storage: () => Storage, concurrency: n
       await processCaptureJob(storage(), job.data.captureId, { attempt: job });
     });
     await boss.work<{ captureId: string }>(RECHECK_QUEUE, options, async ([job]) => {
-      await recheckCapture(storage(), job.data.captureId);
+      try {
+        await recheckCapture(storage(), job.data.captureId);
+      } catch (error) {
+        // After the last try, the capture says so: its page stops waiting and shows why.
+        if (job.retryCount >= job.retryLimit) {
+          await db
+            .update(captures)
+            .set({ error: failureWords(error, "recomputing its results", job, true) })
+            .where(eq(captures.id, job.data.captureId));
+        }
+        throw error;
+      }
     });
   }
 }

@@ -84,7 +84,9 @@ export function useCapture(projectId: string, captureId: string | null) {
     enabled: captureId !== null,
     refetchInterval: (query) => {
       const data = query.state.data;
-      return data && (inProgress(data.capture.status) || data.stale) ? FOLLOW_MS : false;
+      // A recheck that gave up says why (capture.error): the page then stops waiting for it.
+      const rechecking = data?.stale && data.capture.error === null;
+      return data && (inProgress(data.capture.status) || rechecking) ? FOLLOW_MS : false;
     },
   });
 }

@@ -172,6 +172,11 @@ export function CaptureView({
 
   return (
     <div className="space-y-5" data-testid="capture-view" data-status="done">
+      {detail.data.stale && capture.error ? (
+        <p role="alert" className="text-sm text-fail">
+          {capture.error}
+        </p>
+      ) : null}
       <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
         <Figure
           label="Samples"
