@@ -436,6 +436,9 @@ describe("capture routes", () => {
       .set({ caseNetwork: casePath, applyCaseNetwork: true })
       .where(eq(projects.id, projectId));
     try {
+      // A changed case path is an input of the stored results: stale until rechecked.
+      expect((await detail(captureId)).stale).toBe(true);
+      expect(await recheckCapture(storage, captureId)).toBe(true);
       const res = await call(h(captureGet), "GET", {
         cookie: cookies.technician,
         params: { id: projectId, captureId },
@@ -453,6 +456,7 @@ describe("capture routes", () => {
       expect(bySmall.junction.tjPeak).toBeGreaterThan(40 + waveformRise(samples.t, p, network).maxRise);
     } finally {
       await db.update(projects).set({ applyCaseNetwork: false }).where(eq(projects.id, projectId));
+      await recheckCapture(storage, captureId);
     }
   });
 
