@@ -7,7 +7,7 @@ const nextConfig: NextConfig = {
   // The test command type-checks the whole tree with tsc once; the build need not do it again.
   typescript: { ignoreBuildErrors: true },
   reactStrictMode: true,
-  serverExternalPackages: ["@node-rs/argon2", "s3rver", "maildev", "pdfkit"],
+  serverExternalPackages: ["@node-rs/argon2", "s3rver", "maildev", "pdfkit", "pg-boss"],
   // Headers for every response; each page's content security policy (with its nonce) is set in src/proxy.ts.
   async headers() {
     return [

@@ -1,5 +1,7 @@
-import { expect, test } from "@playwright/test";
+import { expect, type Page, test } from "@playwright/test";
+import { benchCaptureCsv } from "./fixtures/capture-csv";
 import { signIn } from "./pages/auth-pages";
+import { createComparedProject } from "./pages/decisions-page";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot } from "./screenshots";
 
@@ -46,5 +48,85 @@ test("a failing capture shows the sample that decided it", async ({ page }) => {
     // stability factor, whatever its curves say.
     await expect(details.getByTestId("decided-by").first()).toContainText("stability factor");
     await saveScreenshot(page, "capture-result-details");
+  });
+});
+
+test.describe("a capture's job", () => {
+  const stamp = Date.now().toString(36);
+  const inrush = { name: "Pre-charge inrush", kind: "triangle" as const, v: 48, i: 1.5, duration: 0.048 };
+
+  async function uploadCapture(page: Page, name: string, csv: string) {
+    await page.getByLabel("Capture upload: choose a file").setInputFiles({
+      name,
+      mimeType: "text/csv",
+      buffer: Buffer.from(csv),
+    });
+    await page.getByRole("button", { name: "Upload and check" }).click();
+  }
+
+  test("an uploaded capture shows that it is queued, then its stored results", async ({ page, baseURL }) => {
+    await signIn(page, engineer);
+    const projectId = await createComparedProject(
+      page.request,
+      baseURL!,
+      { name: `Capture job ${stamp}`, caseTemp: 25 },
+      inrush,
+      ["QM-80T16", "QM-100G28"],
+    );
+    // The capture's own answers are held until the page has shown the state the upload answered with: no timer
+    // decides what the test sees.
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => {
+      release = resolve;
+    });
+    await page.route(new RegExp(`/api/projects/${projectId}/captures/[0-9a-f-]{36}$`), async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.goto(`/projects/${projectId}?tab=captures`);
+    await uploadCapture(page, "linear-run.csv", benchCaptureCsv());
+
+    const status = page.getByTestId("capture-status");
+    await expect(status).toHaveAttribute("data-status", "queued");
+    await expect(status).toContainText("Queued: waiting for a worker");
+    await saveScreenshot(page, "capture-queued");
+    release();
+
+    const view = page.getByTestId("capture-view");
+    await expect(view).toHaveAttribute("data-status", "done");
+    const verdicts = view.getByRole("table", { name: "Verdicts for linear-run" });
+    for (const part of ["QM-80T16", "QM-100G28"]) {
+      await expect(
+        verdicts.getByRole("row").filter({ hasText: part }).locator("[data-verdict]"),
+      ).toHaveAttribute("data-verdict", /^(pass|marginal|fail)$/);
+    }
+    await expect(view.getByTestId("capture-traces")).toBeVisible();
+    const listed = page
+      .getByRole("table", { name: "Captures" })
+      .getByRole("row")
+      .filter({ hasText: "linear-run" });
+    await expect(listed).toContainText("20,000");
+    await saveScreenshot(page, "capture-done");
+  });
+
+  test("a capture that cannot be read is marked failed, saying what and where", async ({ page, baseURL }) => {
+    await signIn(page, engineer);
+    const projectId = await createComparedProject(
+      page.request,
+      baseURL!,
+      { name: `Capture failure ${stamp}`, caseTemp: 25 },
+      inrush,
+      ["QM-80T16"],
+    );
+    await page.goto(`/projects/${projectId}?tab=captures`);
+    // The bad value lies beyond what the browser previews: only the server's job finds it.
+    await uploadCapture(page, "bad-run.csv", benchCaptureCsv(20_000, 19_000));
+    const status = page.getByTestId("capture-status");
+    await expect(status).toHaveAttribute("data-status", "failed");
+    await expect(status).toContainText(/Failed while reading the CSV: .*row 19,?001.*V_DS/);
+    await expect(
+      page.getByRole("table", { name: "Captures" }).getByRole("row").filter({ hasText: "bad-run" }),
+    ).toContainText("failed");
+    await saveScreenshot(page, "capture-failed");
   });
 });

@@ -15,6 +15,7 @@ import {
   workspaces,
 } from "../src/db/schema";
 import { hashPassword } from "../src/lib/auth/password";
+import { processCaptureJob } from "../src/lib/capture/job";
 import { registerCapture } from "../src/lib/capture/store";
 import { demoCaptureCsv, demoCaptureFileName, demoCaptureName } from "../src/lib/demo/capture";
 import { DEMO_SCENARIO } from "../src/lib/demo/parts";
@@ -90,7 +91,10 @@ async function seedProject(workspaceId: string, ids: Record<string, string>): Pr
   await seedCapture(workspaceId, ids.technician);
 }
 
-/** One scope capture, through the same path as a technician's upload (CSV in storage → streamed parse → rows). */
+/**
+ * One scope capture, through the same path as a technician's upload (CSV in storage → registered → the job's
+ * streamed parse, samples, checks and rows), its job run here rather than queued.
+ */
 async function seedCapture(workspaceId: string, technicianId: string): Promise<void> {
   const [project] = await db
     .select()
@@ -109,7 +113,7 @@ async function seedCapture(workspaceId: string, technicianId: string): Promise<v
     .returning();
   await storage().put(objectKey, demoCaptureCsv(), { contentType: "text/csv" });
   const technician = demoUsers.find((u) => u.role === "technician")!;
-  await registerCapture(storage(), {
+  const capture = await registerCapture(storage(), {
     project,
     caller: { workspaceId, user: { id: technicianId, email: technician.email, name: technician.name } },
     upload,
@@ -130,6 +134,8 @@ async function seedCapture(workspaceId: string, technicianId: string): Promise<v
     probe: "100:1 differential, 50 A current probe",
     note: "Invented demo capture.",
   });
+  if ((await processCaptureJob(storage(), capture.id, { notify: false })) !== "done")
+    throw new Error("the demo capture failed");
 }
 
 const workspaceId = await seedWorkspace();

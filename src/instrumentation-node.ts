@@ -14,3 +14,22 @@ try {
 // The mail outbox worker: delivers queued e-mails and retries them while the mail server is down.
 const { startOutboxWorker } = await import("@/lib/mail/outbox");
 startOutboxWorker();
+
+// The capture job workers (JOB_WORKERS per process; any number of processes or machines share the queue). On a stop
+// signal the queue stops taking jobs and lets running ones finish (up to 10 s) before the process exits; Next.js
+// exits at once on its own unless NEXT_MANUAL_SIG_HANDLE is set, and a job cut short is retried by another worker.
+const [{ env }, { startCaptureWorkers }, { stopJobQueue }, { storage }, { logError }] = await Promise.all([
+  import("@/lib/env"),
+  import("@/lib/capture/job"),
+  import("@/lib/jobs/boss"),
+  import("@/lib/storage"),
+  import("@/lib/log"),
+]);
+startCaptureWorkers(storage, env().JOB_WORKERS).catch((error) =>
+  logError("capture workers did not start", error),
+);
+for (const signal of ["SIGTERM", "SIGINT"] as const) {
+  process.once(signal, () => {
+    void stopJobQueue(10_000).finally(() => process.exit(signal === "SIGTERM" ? 143 : 130));
+  });
+}

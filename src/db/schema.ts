@@ -467,7 +467,15 @@ export interface CaptureTrace {
   p: [number, number][];
 }
 
-/** A scope capture: the uploaded CSV and the parsed samples (binary) in storage, the summary here. */
+/** Where a capture's processing job stands (src/lib/capture/job.ts). */
+export const captureStatusEnum = pgEnum("capture_status", ["queued", "processing", "done", "failed"]);
+
+/**
+ * A scope capture: the uploaded CSV and the parsed samples (binary) in storage, the summary here. A capture is
+ * registered as `queued` with its CSV kept and its keys reserved; a job parses it, stores the samples, and writes
+ * the summary, the drawn trace and its results per candidate (capture_results) in one transaction (`done`), or
+ * says what failed and where (`failed`). Summary, trace and SHA-256 are null until then.
+ */
 export const captures = pgTable(
   "captures",
   {
@@ -480,10 +488,15 @@ export const captures = pgTable(
     samplesKey: text().notNull().unique(),
     fileName: text().notNull(),
     size: integer().notNull(),
-    sha256: text().notNull(),
+    sha256: text(),
     mapping: jsonb().$type<Record<string, unknown>>().notNull(),
-    summary: jsonb().$type<CaptureSummary>().notNull(),
-    trace: jsonb().$type<CaptureTrace>().notNull(),
+    summary: jsonb().$type<CaptureSummary>(),
+    trace: jsonb().$type<CaptureTrace>(),
+    status: captureStatusEnum().notNull().default("done"),
+    /** Why the last attempt failed, said for the page (what and where); null when none did. */
+    error: text(),
+    attempts: integer().notNull().default(0),
+    processedAt: timestamp({ withTimezone: true }),
     start: recordStartEnum(),
     note: text(),
     boardSerial: text(),
@@ -492,6 +505,40 @@ export const captures = pgTable(
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index().on(t.projectId)],
+);
+
+/** A decimated junction-temperature trace of a capture on one candidate, kept for display. */
+export interface StoredJunction {
+  tjPeak: number;
+  tPeak: number;
+  start: "rest" | "steady";
+  trace: { t: number[]; y: [number, number][] };
+}
+
+/**
+ * A capture's check on one candidate, stored when its job finishes so that viewing the capture never reloads its
+ * samples. `fingerprint` hashes every input the result rests on (the candidate's limits, the project's case
+ * temperature, margin policy and case path, the capture's start): a result whose fingerprint differs from the
+ * current inputs' is stale, is never shown as current, and is recomputed by a job (src/lib/capture/results.ts).
+ */
+export const captureResults = pgTable(
+  "capture_results",
+  {
+    captureId: uuid()
+      .notNull()
+      .references(() => captures.id, { onDelete: "cascade" }),
+    partId: uuid()
+      .notNull()
+      .references(() => parts.id, { onDelete: "cascade" }),
+    fingerprint: text().notNull(),
+    /** The engine's result; null when the candidate has no SOA curves (no data). */
+    result: jsonb().$type<Record<string, unknown>>(),
+    junction: jsonb().$type<StoredJunction>(),
+    /** The case temperature through the capture when the project applies its case path (the same on every row). */
+    caseTrace: jsonb().$type<StoredJunction>(),
+    computedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.captureId, t.partId] })],
 );
 
 /**
@@ -609,5 +656,7 @@ export type Project = typeof projects.$inferSelect;
 export type FaultCase = typeof faultCases.$inferSelect;
 export type MeasuredPulse = typeof measuredPulses.$inferSelect;
 export type Capture = typeof captures.$inferSelect;
+export type CaptureStatus = (typeof captureStatusEnum.enumValues)[number];
+export type CaptureResultRow = typeof captureResults.$inferSelect;
 export type Decision = typeof decisions.$inferSelect;
 export type OutboxMail = typeof mailOutbox.$inferSelect;

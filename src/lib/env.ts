@@ -24,6 +24,8 @@ const schema = z.object({
   MAIL_INBOX_URL: z.url().optional(),
   /** How many reverse proxies in front of the app append to X-Forwarded-For; 0 (default) trusts none. */
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
+  /** Capture jobs this process works on at once (src/lib/capture/job.ts); 0: it only queues them. */
+  JOB_WORKERS: z.coerce.number().int().min(0).max(16).default(1),
 });
 
 export type Env = z.infer<typeof schema>;

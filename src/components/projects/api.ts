@@ -127,6 +127,8 @@ export interface ProjectCheck {
   pulses: CheckedPulse[];
   results: Record<string, Record<string, PulseResult>>;
   worstByPulse: Record<string, Verdict>;
+  /** Captures being processed or rechecked: their results are not all here yet (absent in frozen records). */
+  pendingCaptures?: string[];
 }
 
 export interface CandidateLimits {
@@ -175,12 +177,17 @@ export function useProject(projectId: string) {
   });
 }
 
-/** The check is always fetched fresh on mount: the library may have changed since it was last seen. */
+/**
+ * The check is always fetched fresh on mount: the library may have changed since it was last seen. Captures still
+ * processed or rechecked are named in `pendingCaptures`, and the check is fetched again until there are none.
+ */
 export function useProjectCheck(projectId: string) {
   return useQuery({
     queryKey: projectKeys.check(projectId),
     queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
     staleTime: 0,
+    // While a capture's job runs, ask again until its results are in.
+    refetchInterval: (query) => (query.state.data?.pendingCaptures?.length ? 1500 : false),
   });
 }
 

@@ -166,7 +166,14 @@ export function junctionTrace(
     start: given = null,
     buckets = TRACE_BUCKETS,
     caseNetwork = null,
-  }: { start?: RecordStart | null; buckets?: number; caseNetwork?: readonly FosterTerm[] | null } = {},
+    peakPower,
+  }: {
+    start?: RecordStart | null;
+    buckets?: number;
+    caseNetwork?: readonly FosterTerm[] | null;
+    /** max(p, 0) when already known (a job checking many candidates passes the summary's). */
+    peakPower?: number;
+  } = {},
 ): JunctionTrace {
   return riseTrace(
     t,
@@ -175,6 +182,7 @@ export function junctionTrace(
     caseTemp,
     given,
     buckets,
+    peakPower,
   );
 }
 
@@ -187,9 +195,13 @@ export function caseTrace(
   p: ArrayLike<number>,
   caseNetwork: readonly FosterTerm[],
   caseTemp: number,
-  { start: given = null, buckets = TRACE_BUCKETS }: { start?: RecordStart | null; buckets?: number } = {},
+  {
+    start: given = null,
+    buckets = TRACE_BUCKETS,
+    peakPower,
+  }: { start?: RecordStart | null; buckets?: number; peakPower?: number } = {},
 ): JunctionTrace {
-  return riseTrace(t, p, caseNetwork, caseTemp, given, buckets);
+  return riseTrace(t, p, caseNetwork, caseTemp, given, buckets, peakPower);
 }
 
 function riseTrace(
@@ -199,9 +211,10 @@ function riseTrace(
   base: number,
   given: RecordStart | null,
   buckets: number,
+  knownPeak?: number,
 ): JunctionTrace {
-  let peakPower = 0;
-  for (let k = 0; k < p.length; k++) if (p[k] > peakPower) peakPower = p[k];
+  let peakPower = Math.max(knownPeak ?? 0, 0);
+  if (knownPeak === undefined) for (let k = 0; k < p.length; k++) if (p[k] > peakPower) peakPower = p[k];
   const { start } = recordStart(Math.max(p[0] ?? 0, 0), peakPower, given ?? undefined);
   const rise = waveformRise(t, p, network, { trace: true, steady: start === "steady" });
   const temperature = rise.trace ?? new Float64Array(0);

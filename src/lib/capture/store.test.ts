@@ -20,7 +20,9 @@ import {
   projects,
 } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
+import { RETRY_LIMIT } from "@/lib/jobs/boss";
 import { presignUpload } from "@/lib/library/curve-upload";
+import { checkProject } from "@/lib/projects/check";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
 import { createStorage } from "@/lib/storage/storage";
 import {
@@ -33,6 +35,7 @@ import {
   testDb,
 } from "@/test/fixtures";
 import { requireEnv, waitForMail } from "@/test/services";
+import { processCaptureJob, recheckCapture, startCaptureWorkers } from "./job";
 import { captureMappingSchema, previewCaptureText } from "./parse";
 import { parseCaptureText } from "./parse-stream";
 import { processCapture } from "./process";
@@ -212,18 +215,48 @@ afterAll(async () => {
   await testDb.sql.end();
 });
 
+/** Registers, then runs the capture's job here (the queue's worker does the same in the app). */
+async function registerAndProcess(text: string, body: Record<string, unknown> = {}) {
+  const registered = await register(text, body);
+  expect(registered.res.status).toBe(202);
+  const answer = await registered.res.json();
+  const outcome = await processCaptureJob(storage, answer.capture.id);
+  return { ...registered, answer, outcome };
+}
+
+async function detail(captureId: string, cookie = cookies.technician) {
+  const res = await call(h(captureGet), "GET", { cookie, params: { id: projectId, captureId } });
+  expect(res.status).toBe(200);
+  return res.json();
+}
+
 describe("capture upload", () => {
-  it("stores the CSV, the binary samples and the row with summary, trace, size and SHA-256; samples reload bit for bit", async () => {
+  it("answers 202 at once with the queued capture; its job stores the samples, summary, trace, size and SHA-256", async () => {
     const text = inrushCsv();
     const { res, ticket, mapping } = await register(text, { note: "ambient 23 °C", boardSerial: "PC-0042" });
-    expect(res.status).toBe(201);
+    expect(res.status).toBe(202);
     const body = await res.json();
+    expect(body).toEqual({
+      capture: { id: expect.any(String), name: "Pre-charge, run 3", status: "queued" },
+      jobId: expect.any(String),
+    });
+    const [queued] = await db.select().from(captures).where(eq(captures.id, body.capture.id));
+    expect(queued).toMatchObject({ status: "queued", summary: null, trace: null, sha256: null });
+    // The capture keeps its own copy of the CSV from the start; the presigned object is removed.
+    expect(queued.objectKey).not.toBe(ticket.objectKey);
+    expect((await storage.get(queued.objectKey))?.toString()).toBe(text);
+    expect(await storage.head(ticket.objectKey)).toBeNull();
+    expect((await detail(body.capture.id)).capture).toMatchObject({ status: "queued", summary: null });
+
+    expect(await processCaptureJob(storage, body.capture.id)).toBe("done");
     const [row] = await db.select().from(captures).where(eq(captures.id, body.capture.id));
     const parsed = parseCaptureText(text, captureMappingSchema.parse(mapping));
     const { summary, trace } = processCapture(parsed);
-    expect(body.capture).toEqual({ id: row.id, name: "Pre-charge, run 3", summary: row.summary });
     expect(row).toMatchObject({
       projectId,
+      status: "done",
+      error: null,
+      attempts: 1,
       samplesKey: samplesKeyOf(ticket.objectKey),
       fileName: "precharge-run-3.csv",
       size: Buffer.byteLength(text),
@@ -235,12 +268,8 @@ describe("capture upload", () => {
       createdBy: ws.members.technician.id,
     });
     expect(row.summary).toEqual(summary);
-    expect(row.summary.samples).toBe(2000);
+    expect(row.summary?.samples).toBe(2000);
     expect(row.trace).toEqual(trace);
-    // The capture keeps its own copy of the CSV; the presigned object is removed.
-    expect(row.objectKey).not.toBe(ticket.objectKey);
-    expect((await storage.get(row.objectKey))?.toString()).toBe(text);
-    expect(await storage.head(ticket.objectKey)).toBeNull();
     expect((await storage.head(row.samplesKey))?.size).toBe(16 + 24 * 2000);
     expect(await pendingFor([row.objectKey, row.samplesKey])).toEqual([]);
     const samples = await loadCaptureSamples(storage, row);
@@ -249,35 +278,69 @@ describe("capture upload", () => {
         Buffer.from(parsed[key].buffer, parsed[key].byteOffset, parsed[key].byteLength),
       );
     }
+    // A job run again for a capture already done changes nothing.
+    expect(await processCaptureJob(storage, body.capture.id)).toBe("skipped");
   });
 
-  it("answers with each candidate's verdict and e-mails the owner once when one fails", async () => {
-    const { res } = await register(inrushCsv(1500));
-    expect(res.status).toBe(201);
-    const body = await res.json();
-    expect(body.verdicts[small.id]).toMatchObject({
+  it("stores each candidate's verdict when the job finishes and e-mails the owner once when one fails", async () => {
+    const { answer, outcome } = await registerAndProcess(inrushCsv(1500));
+    expect(outcome).toBe("done");
+    const body = await detail(answer.capture.id);
+    const of = (part: Part) => body.candidates.find((c: { partId: string }) => c.partId === part.id);
+    expect(of(small).result).toMatchObject({
       verdict: "fail",
       flags: expect.arrayContaining(["equivalent-rectangle"]),
     });
-    expect(body.verdicts[big.id]).toMatchObject({ verdict: "pass", tjPeak: null });
-    expect(body.notified).toBe(1);
+    expect(of(big).result).toMatchObject({ verdict: "pass", tjPeak: null });
     const mail = await waitForMail(ws.members.engineer.email);
-    expect(mail.text).toContain(body.capture.id);
+    expect(mail.text).toContain(answer.capture.id);
   });
 
-  it("leaves no row, no object and no pending upload behind when the file is malformed", async () => {
+  it("marks a malformed file failed, saying what and where, without retrying it", async () => {
     const lines = inrushCsv().split("\r\n");
     lines[206] = lines[206].replace(/,[^,]+,/, ",23.97G0,");
     const text = lines.join("\r\n");
-    const { res, ticket } = await register(text);
-    expect(res.status).toBe(400);
-    const error = (await res.json()).error;
-    expect(error.code).toBe("invalid:csv");
-    expect(error.details.issues[0]).toMatchObject({ row: 207, column: "CH1 (V)" });
-    expect(await db.select().from(captures).where(eq(captures.objectKey, ticket.objectKey))).toEqual([]);
+    const { answer, outcome, ticket } = await registerAndProcess(text);
+    expect(outcome).toBe("failed");
+    const body = await detail(answer.capture.id);
+    expect(body.capture).toMatchObject({ status: "failed", summary: null, attempts: 1 });
+    expect(body.capture.error).toMatch(/^Failed while reading the CSV: .*row 207.*CH1 \(V\)/);
+    expect(body.candidates.every((c: { result: unknown }) => c.result === null)).toBe(true);
     expect(await storage.head(ticket.objectKey)).toBeNull();
     expect(await storage.head(samplesKeyOf(ticket.objectKey))).toBeNull();
     expect(await pendingFor([ticket.objectKey, samplesKeyOf(ticket.objectKey)])).toEqual([]);
+  });
+
+  it("retries a failure of storage a bounded number of times, then marks the capture failed", async () => {
+    const { res } = await register(inrushCsv(100), { name: "storage down" });
+    const { capture } = await res.json();
+    const down = {
+      ...storage,
+      head: async () => {
+        throw Object.assign(new Error("connect ECONNREFUSED"), { code: "ECONNREFUSED" });
+      },
+    };
+    const state = async () => (await db.select().from(captures).where(eq(captures.id, capture.id)))[0];
+    for (const retryCount of [0, 1]) {
+      await expect(
+        processCaptureJob(down, capture.id, { attempt: { retryCount, retryLimit: RETRY_LIMIT } }),
+      ).rejects.toThrow("ECONNREFUSED");
+      expect(await state()).toMatchObject({
+        status: "queued",
+        attempts: retryCount + 1,
+        error: `Failed while reading the file from storage: an unexpected error (ECONNREFUSED). Try ${retryCount + 1} of ${RETRY_LIMIT + 1}; trying again shortly.`,
+      });
+    }
+    expect(
+      await processCaptureJob(down, capture.id, { attempt: { retryCount: 2, retryLimit: RETRY_LIMIT } }),
+    ).toBe("failed");
+    expect(await state()).toMatchObject({
+      status: "failed",
+      attempts: 3,
+      error:
+        "Failed while reading the file from storage: an unexpected error (ECONNREFUSED). Gave up after 3 tries.",
+    });
+    expect((await detail(capture.id)).capture.status).toBe("failed");
   });
 
   it("removes the stored samples again when the row cannot be written", async () => {
@@ -340,17 +403,12 @@ describe("capture routes", () => {
   let captureId: string;
 
   beforeAll(async () => {
-    const { res } = await register(inrushCsv(), { name: "for the chart" });
-    captureId = (await res.json()).capture.id;
+    const { answer } = await registerAndProcess(inrushCsv(), { name: "for the chart" });
+    captureId = answer.capture.id;
   });
 
   it("GET draws the capture and, per candidate with a Foster network, the engine's Tj through it", async () => {
-    const res = await call(h(captureGet), "GET", {
-      cookie: cookies.technician,
-      params: { id: projectId, captureId },
-    });
-    expect(res.status).toBe(200);
-    const body = await res.json();
+    const body = await detail(captureId);
     expect(body.capture).not.toHaveProperty("objectKey");
     expect(body.capture).not.toHaveProperty("samplesKey");
     expect(body.capture.trace.t).toHaveLength(2000);
@@ -361,6 +419,7 @@ describe("capture routes", () => {
     expect(bySmall.junction.tjPeak).toBe(40 + rise.maxRise);
     expect(bySmall.junction.tPeak).toBe(rise.maxTime);
     expect(bySmall.junction.trace.t).toEqual(body.capture.trace.t);
+    expect(bySmall.result.tjPeak).toBe(40 + rise.maxRise);
     expect(body.candidates.find((c: { partId: string }) => c.partId === big.id).junction).toBeNull();
     const list = await (
       await call(h(capturesGet), "GET", { cookie: cookies.lead, params: { id: projectId } })
@@ -377,6 +436,9 @@ describe("capture routes", () => {
       .set({ caseNetwork: casePath, applyCaseNetwork: true })
       .where(eq(projects.id, projectId));
     try {
+      // A changed case path is an input of the stored results: stale until rechecked.
+      expect((await detail(captureId)).stale).toBe(true);
+      expect(await recheckCapture(storage, captureId)).toBe(true);
       const res = await call(h(captureGet), "GET", {
         cookie: cookies.technician,
         params: { id: projectId, captureId },
@@ -394,6 +456,62 @@ describe("capture routes", () => {
       expect(bySmall.junction.tjPeak).toBeGreaterThan(40 + waveformRise(samples.t, p, network).maxRise);
     } finally {
       await db.update(projects).set({ applyCaseNetwork: false }).where(eq(projects.id, projectId));
+      await recheckCapture(storage, captureId);
+    }
+  });
+
+  it("viewing a capture and checking its project never read its samples again", async () => {
+    const [row] = await db.select().from(captures).where(eq(captures.id, captureId));
+    const kept = await storage.get(row.samplesKey);
+    await storage.remove(row.samplesKey);
+    try {
+      const body = await detail(captureId);
+      expect(body.stale).toBe(false);
+      expect(body.candidates.every((c: { result: unknown }) => c.result !== null)).toBe(true);
+      const [project] = await db.select().from(projects).where(eq(projects.id, projectId));
+      const checked = await checkProject(project);
+      expect(checked.results[small.id][captureId].verdict).toBe(body.candidates[0].result.verdict);
+      expect(checked.pendingCaptures).toEqual([]);
+    } finally {
+      await storage.put(row.samplesKey, kept!);
+    }
+  });
+
+  it("a candidate added later makes the stored results stale, never shown as current, until a recheck", async () => {
+    const late = await newPart("PFT-L", 3, network);
+    await db.insert(projectCandidates).values({ projectId, partId: late.id });
+    try {
+      const body = await detail(captureId);
+      expect(body.stale).toBe(true);
+      const byLate = body.candidates.find((c: { partId: string }) => c.partId === late.id);
+      expect(byLate).toMatchObject({ stale: true, result: null, junction: null });
+      // The candidates already checked keep their current results.
+      expect(body.candidates.find((c: { partId: string }) => c.partId === small.id).stale).toBe(false);
+      const [project] = await db.select().from(projects).where(eq(projects.id, projectId));
+      const checked = await checkProject(project);
+      expect(checked.pendingCaptures).toContain(captureId);
+      expect(checked.results[late.id][captureId]).toBeUndefined();
+
+      expect(await recheckCapture(storage, captureId)).toBe(true);
+      const after = await detail(captureId);
+      expect(after.stale).toBe(false);
+      expect(after.candidates.find((c: { partId: string }) => c.partId === late.id).result.verdict).toMatch(
+        /pass|marginal|fail/,
+      );
+      expect(await recheckCapture(storage, captureId)).toBe(false);
+
+      // A changed project (its case temperature) is an input too.
+      await db.update(projects).set({ caseTemp: 60 }).where(eq(projects.id, projectId));
+      expect((await detail(captureId)).stale).toBe(true);
+      const [hot] = await db.select().from(projects).where(eq(projects.id, projectId));
+      const recomputed = await checkProject(hot, { staleCaptures: "recompute" });
+      expect(recomputed.pendingCaptures).not.toContain(captureId);
+      expect(recomputed.results[small.id][captureId].tjPeak).toBeGreaterThan(
+        checked.results[small.id][captureId].tjPeak!,
+      );
+    } finally {
+      await db.update(projects).set({ caseTemp: 40 }).where(eq(projects.id, projectId));
+      await db.delete(projectCandidates).where(eq(projectCandidates.partId, late.id));
     }
   });
 
@@ -420,5 +538,23 @@ describe("capture routes", () => {
 
     const { res } = await register(inrushCsv(100), { name: "lead removes it" });
     expect((await del(cookies.lead, (await res.json()).capture.id)).status).toBe(200);
+  });
+});
+
+describe("the job queue", () => {
+  it("a worker of the queue processes a registered capture", async () => {
+    await startCaptureWorkers(() => storage, 1);
+    const { res } = await register(inrushCsv(300), { name: "through the queue" });
+    const { capture } = await res.json();
+    let status = "queued";
+    for (let k = 0; k < 300 && (status === "queued" || status === "processing"); k++) {
+      await new Promise((resolve) => setTimeout(resolve, 100));
+      status = (await detail(capture.id)).capture.status;
+    }
+    expect(status).toBe("done");
+    const body = await detail(capture.id);
+    expect(
+      body.candidates.find((c: { partId: string }) => c.partId === small.id).result.verdict,
+    ).toBeTruthy();
   });
 });

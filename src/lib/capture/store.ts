@@ -1,5 +1,4 @@
 import "server-only";
-import { createHash } from "node:crypto";
 import { Readable } from "node:stream";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
@@ -13,10 +12,11 @@ import type { RecordStart, WaveformPulse } from "@/lib/soa/types";
 import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
 import { type CaptureMapping, MAX_CAPTURE_BYTES } from "./parse";
-import { type CaptureSamples, parseCaptureStream } from "./parse-stream";
-import { decodeSamplesStream, encodeSamplesParts, processCapture } from "./process";
+import type { CaptureSamples } from "./parse-stream";
+import { decodeSamplesStream, encodeSamplesParts } from "./process";
 
-// A capture lives in three places: the uploaded CSV and its parsed samples (binary) in object storage, and its row.
+// A capture lives in four places: the uploaded CSV and its parsed samples (binary) in object storage, its row, and
+// its results per candidate (capture_results, src/lib/capture/results.ts).
 // Every object is written or removed with a row in pending_uploads standing for it until the capture row is
 // committed (or, on deletion, until the object is gone): whatever fails, storage and rows end consistent, at the
 // latest after the stale-upload cleanup (src/lib/library/curve-upload.ts) has run.
@@ -34,6 +34,9 @@ const listed = {
   fileName: captures.fileName,
   size: captures.size,
   summary: captures.summary,
+  status: captures.status,
+  error: captures.error,
+  attempts: captures.attempts,
   start: captures.start,
   note: captures.note,
   boardSerial: captures.boardSerial,
@@ -43,12 +46,12 @@ const listed = {
 };
 
 /**
- * Copies an uploaded capture CSV to a key of its own (one no presigned URL was issued for, so a later PUT to the
- * upload's URL changes nothing the capture points to), streams that copy, parses and summarises it, stores the
- * samples as a binary object beside it and, in one transaction, inserts the capture row and retires the pending
- * rows; the presigned object is removed after commit. Any failure removes the objects and the pending rows (the
- * cleanup step finishes the job if storage cannot be reached). Returns the row and the parsed samples (to check
- * them without reading them back).
+ * Registers an uploaded capture CSV for processing: copies it to a key of its own (one no presigned URL was issued
+ * for, so a later PUT to the upload's URL changes nothing the capture points to), checks that it is there and not
+ * too large, and in one transaction inserts the capture row as `queued` (owning its CSV's key and the key its
+ * samples will be stored under), records the audit event and retires the pending rows; the presigned object is
+ * removed after commit. Parsing, the samples and the checks are the job's (src/lib/capture/job.ts). Any failure
+ * removes the copy, the upload and the pending rows (the cleanup step finishes the job if storage is down).
  */
 export async function registerCapture(
   storage: Storage,
@@ -64,7 +67,7 @@ export async function registerCapture(
     boardSerial?: string;
     probe?: string;
   },
-): Promise<{ capture: Capture; samples: CaptureSamples }> {
+): Promise<Capture> {
   const { project, caller, upload } = input;
   if (!upload.objectKey.startsWith(`${project.workspaceId}/projects/${project.id}/`)) {
     throw new AppError("not_found:upload", "No such upload for this project. Upload the file again.");
@@ -97,30 +100,11 @@ export async function registerCapture(
     const original = await storage.head(upload.objectKey);
     if (original) await storage.copy(upload.objectKey, keptKey);
     const head = original ? await storage.head(keptKey) : null;
-    const stream = head ? await storage.stream(keptKey) : null;
-    if (!head || !stream) {
+    if (!head)
       throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
-    }
     if (head.size > MAX_CAPTURE_BYTES) {
-      stream.destroy();
       throw new AppError("too_large:file", `The file is larger than ${MAX_CAPTURE_BYTES / 1e6} MB.`);
     }
-    const hash = createHash("sha256");
-    const parsed = await parseCaptureStream(stream, input.mapping, {
-      sizeHint: head.size,
-      onChunk: (chunk) => hash.update(chunk),
-    });
-    const sha256 = hash.digest("hex");
-    const { summary, trace } = processCapture(parsed);
-    const parts = encodeSamplesParts(parsed);
-    await storage.put(
-      samplesKey,
-      Readable.from(parts.map((part) => Buffer.from(part.buffer, part.byteOffset, part.byteLength))),
-      {
-        contentType: "application/octet-stream",
-        contentLength: parts.reduce((sum, part) => sum + part.byteLength, 0),
-      },
-    );
     const capture = await db.transaction(async (tx) => {
       const [row] = await tx
         .insert(captures)
@@ -130,11 +114,9 @@ export async function registerCapture(
           objectKey: keptKey,
           samplesKey,
           fileName: upload.fileName,
-          size: parsed.bytes,
-          sha256,
-          mapping: parsed.mapping,
-          summary,
-          trace,
+          size: head.size,
+          mapping: input.mapping as unknown as Record<string, unknown>,
+          status: "queued",
           start: input.start ?? null,
           note: input.note ?? null,
           boardSerial: input.boardSerial ?? null,
@@ -149,7 +131,7 @@ export async function registerCapture(
           action: "capture.added",
           subjectType: "project",
           subjectId: project.id,
-          details: { captureId: row.id, name: row.name, fileName: row.fileName, samples: summary.samples },
+          details: { captureId: row.id, name: row.name, fileName: row.fileName, size: head.size },
         },
         tx,
       );
@@ -157,13 +139,41 @@ export async function registerCapture(
       return row;
     });
     await discardUpload(storage, upload);
-    return { capture, samples: parsed };
+    return capture;
   } catch (error) {
     await discardUpload(storage, { id: reserved.id, objectKey: samplesKey });
     await discardUpload(storage, { id: kept.id, objectKey: keptKey });
     await discardUpload(storage, upload);
     throw error;
   }
+}
+
+/** A capture whose job could not be queued: failed, saying so (its row and objects stay until it is deleted). */
+export async function markUnqueued(captureId: string): Promise<void> {
+  await db
+    .update(captures)
+    .set({
+      status: "failed",
+      error: "Failed while queueing it for processing: the job queue could not be reached.",
+    })
+    .where(eq(captures.id, captureId));
+}
+
+/** Stores parsed samples as the capture's binary object, streamed from the samples' own memory. */
+export async function putSamples(
+  storage: Storage,
+  samplesKey: string,
+  samples: CaptureSamples,
+): Promise<void> {
+  const parts = encodeSamplesParts(samples);
+  await storage.put(
+    samplesKey,
+    Readable.from(parts.map((part) => Buffer.from(part.buffer, part.byteOffset, part.byteLength))),
+    {
+      contentType: "application/octet-stream",
+      contentLength: parts.reduce((sum, part) => sum + part.byteLength, 0),
+    },
+  );
 }
 
 /** The project's capture, or a 404. */
@@ -246,13 +256,13 @@ export async function deleteCapture(
 }
 
 /**
- * A capture as a pulse of its project's check, drawn at its equal-energy rectangle; the samples are loaded only
- * when the check needs them.
+ * A processed capture as a pulse of its project's check, drawn at its equal-energy rectangle; the samples are
+ * loaded only when the check needs them, and null when only stored results are to be used.
  */
 export function capturePulse(
   project: Project,
-  capture: Pick<Capture, "id" | "name" | "summary" | "start">,
-  samples: CaptureSamples | (() => Promise<CaptureSamples>),
+  capture: Pick<Capture, "id" | "name" | "start"> & { summary: NonNullable<Capture["summary"]> },
+  samples: CaptureSamples | (() => Promise<CaptureSamples>) | null,
 ): ProjectPulse {
   const rect = capture.summary.equivalent;
   // The engine walks any array-like; WaveformPulse names number[] for the JSON contract.
@@ -272,22 +282,11 @@ export function capturePulse(
     i: rect.ok ? rect.i : null,
     duration: rect.ok ? rect.duration : null,
     kind: "waveform",
-    pulse: typeof samples === "function" ? async () => asPulse(await samples()) : asPulse(samples),
+    pulse:
+      samples === null
+        ? null
+        : typeof samples === "function"
+          ? async () => asPulse(await samples())
+          : asPulse(samples),
   };
-}
-
-/** Every capture of a project as pulses for `checkProject(project, { captures })`, oldest first. */
-export async function captureProjectPulses(storage: Storage, project: Project): Promise<ProjectPulse[]> {
-  const rows = await db
-    .select({
-      id: captures.id,
-      name: captures.name,
-      summary: captures.summary,
-      start: captures.start,
-      samplesKey: captures.samplesKey,
-    })
-    .from(captures)
-    .where(eq(captures.projectId, project.id))
-    .orderBy(captures.createdAt);
-  return rows.map((row) => capturePulse(project, row, () => loadCaptureSamples(storage, row)));
 }

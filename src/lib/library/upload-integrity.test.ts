@@ -9,6 +9,7 @@ import { POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
 import { POST as projectUploadPost } from "@/app/api/projects/[id]/uploads/route";
 import { captures, curveSets, type Part, parts, projects } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
+import { processCaptureJob } from "@/lib/capture/job";
 import { createStorage } from "@/lib/storage/storage";
 import {
   call,
@@ -157,8 +158,10 @@ describe("capture uploads", () => {
       params: { id: project.id },
       body: { uploadId: ticket.uploadId, name: "run", mapping: { time: 0, voltage: 1, current: 2 } },
     });
-    expect(res.status).toBe(201);
+    expect(res.status).toBe(202);
     await put(ticket.url, text.replace("t,v,i", "t,v,9"));
+    // The job runs after the PUT: it still reads the copy kept at registration.
+    expect(await processCaptureJob(storage, (await res.json()).capture.id)).toBe("done");
     const [row] = await testDb.db.select().from(captures).where(eq(captures.projectId, project.id));
     const stored = await storage.get(row.objectKey);
     expect(stored?.toString()).toBe(text);

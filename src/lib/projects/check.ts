@@ -1,45 +1,51 @@
 import "server-only";
 import type { Project } from "@/db/schema";
-import { captureProjectPulses } from "@/lib/capture/store";
+import { queueRechecks, recheckCapture } from "@/lib/capture/job";
+import { captureStates } from "@/lib/capture/results";
 import { storage } from "@/lib/storage";
 import { evaluate, type ProjectPulse } from "./evaluate";
+import { projectCaseNetwork, projectPolicy } from "./policy";
 import { type Candidate, loadCandidates } from "./projects";
 import { faultCasePulse, listFaultCases, listMeasuredPulses, measuredPulse } from "./pulses";
 
-/** The project's margin policy in the engine's terms. */
-export function projectPolicy(project: Project) {
-  return {
-    utilisationLimit: project.utilisationLimit,
-    tjGuard: project.tjGuard,
-    voltageLimit: project.voltageLimit,
-    betweenCurves: project.betweenCurves,
-  } as const;
-}
-
-/**
- * The case path the checks heat the case through (METHODS.md §14): the project's case-to-ambient network when it
- * is to be applied, else none (the case held at its temperature).
- */
-export function projectCaseNetwork(project: Project) {
-  return project.applyCaseNetwork && project.caseNetwork?.length ? project.caseNetwork : undefined;
-}
-
-/** Every pulse of the project: fault cases first, then measured pulses, then captures. */
+/** Every pulse of the project: fault cases first, then measured pulses, then the processed captures. */
 export async function loadProjectPulses(
   project: Project,
-  extra: { captures?: () => Promise<ProjectPulse[]> } = {},
-): Promise<ProjectPulse[]> {
+  candidates: Candidate[],
+  extra: { captures?: () => Promise<ProjectPulse[]>; staleCaptures?: StaleCaptures } = {},
+): Promise<{ pulses: ProjectPulse[]; pendingCaptures: string[] }> {
   const [cases, measured, captured] = await Promise.all([
     listFaultCases(project.id),
     listMeasuredPulses(project.id),
-    // Captures are read back from storage only when there are any; a caller may pass its own loader.
-    (extra.captures ?? (() => captureProjectPulses(storage(), project)))(),
+    extra.captures
+      ? extra.captures().then((pulses) => ({ pulses, pending: [] as string[] }))
+      : currentCaptures(project, candidates, extra.staleCaptures ?? "queue"),
   ]);
-  return [
-    ...cases.map((c) => faultCasePulse(project, c)),
-    ...measured.map((m) => measuredPulse(project, m)),
-    ...captured,
-  ];
+  return {
+    pulses: [
+      ...cases.map((c) => faultCasePulse(project, c)),
+      ...measured.map((m) => measuredPulse(project, m)),
+      ...captured.pulses,
+    ],
+    pendingCaptures: captured.pending,
+  };
+}
+
+/**
+ * What to do with a capture whose stored results are stale: "queue" a recheck and leave its results out meanwhile
+ * (naming it pending), or "recompute" it now, before answering (the comparison and a decision's snapshot).
+ */
+export type StaleCaptures = "queue" | "recompute";
+
+/** The project's processed captures with their current stored results, and those still pending. */
+async function currentCaptures(project: Project, candidates: Candidate[], stale: StaleCaptures) {
+  let states = await captureStates(project, candidates);
+  if (states.stale.length && stale === "recompute") {
+    for (const id of states.stale) await recheckCapture(storage(), id);
+    states = await captureStates(project, candidates);
+  }
+  queueRechecks(states.stale);
+  return { pulses: states.pulses, pending: [...states.pending, ...states.stale] };
 }
 
 /**
@@ -49,12 +55,14 @@ export async function loadProjectPulses(
  */
 export async function checkProject(
   project: Project,
-  extra: { captures?: () => Promise<ProjectPulse[]>; candidates?: Candidate[] } = {},
+  extra: {
+    captures?: () => Promise<ProjectPulse[]>;
+    candidates?: Candidate[];
+    staleCaptures?: StaleCaptures;
+  } = {},
 ) {
-  const [candidates, pulses] = await Promise.all([
-    extra.candidates ?? loadCandidates(project.id),
-    loadProjectPulses(project, extra),
-  ]);
+  const candidates = extra.candidates ?? (await loadCandidates(project.id));
+  const { pulses, pendingCaptures } = await loadProjectPulses(project, candidates, extra);
   const evaluation = await evaluate(
     candidates.map((c) => ({ partId: c.part.id, limits: c.limits })),
     pulses,
@@ -81,7 +89,9 @@ export async function checkProject(
       /** The widths of the active curve set's curves, for saying which curves a reading used. */
       widths: c.limits?.soa.curves.map((curve) => curve.duration) ?? [],
     })),
-    pulses: pulses.map(({ pulse: _pulse, ...rest }) => rest),
+    pulses: pulses.map(({ pulse: _pulse, stored: _stored, ...rest }) => rest),
+    /** Captures being processed, or whose results are being recomputed: their results are not all here yet. */
+    pendingCaptures,
     ...evaluation,
   };
 }

@@ -83,9 +83,14 @@ export function buildSnapshot(project: Project, candidates: Candidate[], checked
 
 /** The project's current check, and the snapshot it would freeze now. */
 export async function snapshotNow(project: Project): Promise<DecisionSnapshot> {
-  const candidates = await loadCandidates(project.id);
-  const checked = await checkProject(project, { candidates });
+  const { candidates, checked } = await checkNow(project);
   return buildSnapshot(project, candidates, checked);
+}
+
+/** The project's check with every processed capture's results current (stale ones are recomputed first). */
+async function checkNow(project: Project) {
+  const candidates = await loadCandidates(project.id);
+  return { candidates, checked: await checkProject(project, { candidates, staleCaptures: "recompute" }) };
 }
 
 /**
@@ -99,7 +104,15 @@ export async function signDecision(
   project: Project,
   input: { partId: string; rationale: string; idempotencyKey?: string },
 ): Promise<Decision> {
-  const snapshot = await snapshotNow(project);
+  const { candidates, checked } = await checkNow(project);
+  // A decision frozen while a capture is still being processed would leave that evidence out.
+  if (checked.pendingCaptures.length) {
+    throw new AppError(
+      "conflict:captures-pending",
+      "A capture of this project is still being processed. Sign once its results are in.",
+    );
+  }
+  const snapshot = buildSnapshot(project, candidates, checked);
   const chosen = snapshot.candidates.find((c) => c.partId === input.partId);
   if (!chosen) throw new AppError("invalid:candidate", "Choose one of the project's candidates.");
   const decisionId = crypto.randomUUID();

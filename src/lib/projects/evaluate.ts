@@ -19,8 +19,13 @@ export interface ProjectPulse {
   duration: number | null;
   kind: Pulse["kind"];
   repeat?: Repeat;
-  /** The pulse in the engine's form; captures are loaded only when checked. */
-  pulse: Pulse | (() => Promise<Pulse>);
+  /** The pulse in the engine's form; captures are loaded only when checked; null: only `stored` results count. */
+  pulse: Pulse | (() => Promise<Pulse>) | null;
+  /**
+   * Results already computed and current (a capture's, stored by its job), by candidate: they are used as they
+   * are, and a candidate missing here gets no result for this pulse yet (it is being recomputed).
+   */
+  stored?: Record<string, PulseResult>;
 }
 
 export interface EvaluatedCandidate {
@@ -39,8 +44,9 @@ export interface Evaluation {
 /**
  * Checks every pulse against every candidate through the engine, at each pulse's case temperature and the project's
  * policy. One prepared part per candidate, shared by the case temperatures (only the derating differs); captures
- * are loaded once and shared; no per-pulse allocation beyond the results themselves. With a case
- * path (METHODS.md §14) the case heats with each pulse's power through it.
+ * are loaded once and shared, and a pulse with stored results is not checked again; no per-pulse allocation
+ * beyond the results themselves. With a case path (METHODS.md §14) the case heats with each pulse's power through
+ * it. A pulse with no verdict yet from any candidate (its stored results being recomputed) gets no worst verdict.
  */
 export async function evaluate(
   candidates: EvaluatedCandidate[],
@@ -48,16 +54,21 @@ export async function evaluate(
   policy: Policy,
   caseNetwork?: FosterTerm[],
 ): Promise<Evaluation> {
-  const loaded: Pulse[] = [];
-  for (const p of pulses) loaded.push(typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+  const loaded: (Pulse | null)[] = [];
+  for (const p of pulses) {
+    loaded.push(p.stored || p.pulse === null ? null : typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+  }
   const results: Evaluation["results"] = {};
-  // The worst verdict so far per pulse, by index (severity 0..3); keyed by id once, at the end.
+  // The worst verdict so far per pulse, by index (severity 0..3), and whether it has one; keyed by id at the end.
   const worst = new Uint8Array(pulses.length);
-  const anyChecked = candidates.length > 0;
+  const judged = new Uint8Array(pulses.length);
   for (const candidate of candidates) {
     const forPart: Record<string, PulseResult> = {};
     if (candidate.limits === null) {
-      for (let k = 0; k < pulses.length; k++) worst[k] = Math.max(worst[k], SEVERITY["no-data"]);
+      for (let k = 0; k < pulses.length; k++) {
+        worst[k] = Math.max(worst[k], SEVERITY["no-data"]);
+        judged[k] = 1;
+      }
       results[candidate.partId] = forPart;
       continue;
     }
@@ -66,21 +77,32 @@ export async function evaluate(
     const contexts = new Map<number, CheckContext>();
     for (let k = 0; k < pulses.length; k++) {
       const p = pulses[k];
+      const pulse = loaded[k];
+      if (pulse === null) {
+        const known = p.stored?.[candidate.partId];
+        if (known) {
+          forPart[p.id] = known;
+          worst[k] = Math.max(worst[k], SEVERITY[known.verdict]);
+          judged[k] = 1;
+        }
+        continue;
+      }
       let ctx = contexts.get(p.caseTemp);
       if (ctx === undefined) {
         base ??= prepareCheck(candidate.limits, p.caseTemp, policy, caseNetwork);
         ctx = atCaseTemp(base, p.caseTemp);
         contexts.set(p.caseTemp, ctx);
       }
-      const result = checkPulse(ctx, loaded[k]);
+      const result = checkPulse(ctx, pulse);
       forPart[p.id] = result;
       const severity = SEVERITY[result.verdict];
       if (severity > worst[k]) worst[k] = severity;
+      judged[k] = 1;
     }
     results[candidate.partId] = forPart;
   }
   const worstByPulse: Evaluation["worstByPulse"] = {};
-  if (anyChecked) for (let k = 0; k < pulses.length; k++) worstByPulse[pulses[k].id] = VERDICTS[worst[k]];
+  for (let k = 0; k < pulses.length; k++) if (judged[k]) worstByPulse[pulses[k].id] = VERDICTS[worst[k]];
   return { results, worstByPulse };
 }
 

@@ -2,8 +2,8 @@ import "server-only";
 import type { Project } from "@/db/schema";
 import type { MeasurementRow } from "@/lib/csv/measurements";
 import type { PulseResult } from "@/lib/soa/types";
-import { projectCaseNetwork, projectPolicy } from "./check";
 import { evaluate } from "./evaluate";
+import { projectCaseNetwork, projectPolicy } from "./policy";
 import { loadCandidates } from "./projects";
 
 /**

@@ -9,7 +9,12 @@ import { formatTemperature } from "@/lib/soa/sanity";
 import { formatQuantity } from "@/lib/soa/units";
 import type { checkProject } from "./check";
 
-type Checked = Awaited<ReturnType<typeof checkProject>>;
+type FullCheck = Awaited<ReturnType<typeof checkProject>>;
+/** What the notice needs of a check: the pulses concerned, their results and the candidates' names. */
+type Checked = Pick<FullCheck, "results" | "worstByPulse"> & {
+  candidates: Pick<FullCheck["candidates"][number], "partId" | "maker" | "partNumber">[];
+  pulses: Pick<FullCheck["pulses"][number], "id" | "source" | "name" | "v" | "i" | "duration">[];
+};
 
 const sourceWords = { measured: "measured pulse", capture: "capture", "fault-case": "fault case" } as const;
 

@@ -44,7 +44,7 @@ function refusal(rejections: FileRejection[]): string {
 
 /**
  * Uploading a scope capture: the browser reads the file's first 64 KB for the column picker, then sends the whole
- * file straight to storage (progress in words) and asks the server to parse and check it.
+ * file straight to storage (progress in words) and asks the server to queue it to be parsed and checked.
  */
 export function CaptureUpload({
   projectId,
@@ -152,10 +152,7 @@ export function CaptureUpload({
         />
       ) : null}
       {phase.kind === "checking" ? (
-        <UploadProgress
-          label="Reading the samples, computing power, energy and junction temperature, checking every candidate…"
-          fraction={null}
-        />
+        <UploadProgress label="Keeping the file and queueing it to be read and checked…" fraction={null} />
       ) : null}
       {phase.kind === "failed" ? (
         <FormMessage tone="error">

@@ -4,6 +4,7 @@ import type { ReactNode } from "react";
 import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { Sym } from "@/components/library/symbols";
+import { UploadProgress } from "@/components/library/upload-progress";
 import { LoadingBox } from "@/components/loading-box";
 import { Table, Td, Th, Tr } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
@@ -12,7 +13,7 @@ import type { PulseResult } from "@/lib/soa/types";
 import type { ProjectCheck } from "../api";
 import { q } from "../format";
 import { UtilisationBar } from "../results/utilisation-bar";
-import { useCapture } from "./capture-api";
+import { type CaptureStatus, useCapture } from "./capture-api";
 import { TraceCharts, type TracePanel } from "./trace-charts";
 
 const junctionStyles = [
@@ -38,24 +39,45 @@ function Figure({ label, value, note }: { label: ReactNode; value: string; note?
   );
 }
 
+/** A capture on its way to results: queued or being processed, and why the last try failed when it is retried. */
+function CaptureProgress({ status, error }: { status: "queued" | "processing"; error?: string | null }) {
+  return (
+    <div className="space-y-2" data-testid="capture-status" data-status={status}>
+      <UploadProgress
+        label={
+          status === "queued"
+            ? "Queued: waiting for a worker to read the samples and check them…"
+            : "Processing: reading the samples, computing power, energy and junction temperature, checking every candidate…"
+        }
+        fraction={null}
+      />
+      {error ? <p className="text-xs text-ink-muted">{error}</p> : null}
+    </div>
+  );
+}
+
 /**
- * One capture: its figures, its verdict against every candidate, and V, I, P and T_j against a shared time axis.
- * Verdicts come from the project's check (or, right after an upload, from the upload's answer).
+ * One capture: while its job runs, its progress; if it failed, what failed and where; then its figures, its
+ * verdict against every candidate (stored when its job finished), and V, I, P and T_j against a shared time axis.
  */
 export function CaptureView({
   projectId,
   captureId,
   check,
-  fresh,
+  registered,
 }: {
   projectId: string;
   captureId: string;
   check: ProjectCheck | undefined;
-  fresh: Record<string, PulseResult | null> | null;
+  /** The status the upload answered with, shown until the capture's own answer arrives. */
+  registered: CaptureStatus | null;
 }) {
   const detail = useCapture(projectId, captureId);
-  if (detail.isPending)
+  if (detail.isPending) {
+    if (registered === "queued" || registered === "processing")
+      return <CaptureProgress status={registered} />;
     return <LoadingBox className="h-96">Loading the waveforms of the capture…</LoadingBox>;
+  }
   if (detail.isError) {
     return (
       <p role="alert" className="text-sm text-fail">
@@ -65,9 +87,32 @@ export function CaptureView({
   }
   const { capture, candidates, caseTemp } = detail.data;
   const { summary, trace } = capture;
+  if (capture.status === "failed") {
+    return (
+      <div role="alert" className="space-y-1 text-sm" data-testid="capture-status" data-status="failed">
+        <p className="font-medium text-fail">This capture could not be processed.</p>
+        <p>{capture.error ?? "Its job failed."}</p>
+        <p className="text-xs text-ink-muted">
+          Fix the file or its columns and upload it again; delete this one.
+        </p>
+      </div>
+    );
+  }
+  if (capture.status !== "done" || !summary || !trace) {
+    return (
+      <CaptureProgress
+        status={capture.status === "processing" ? "processing" : "queued"}
+        error={capture.error}
+      />
+    );
+  }
   const eq = summary.equivalent;
-  const verdictOf = (partId: string): PulseResult | null | undefined =>
-    check?.results[partId]?.[captureId] ?? fresh?.[partId];
+  const byPart = new Map(candidates.map((c) => [c.partId, c]));
+  /** The stored result; undefined while it is being rechecked. */
+  const verdictOf = (partId: string): PulseResult | null | undefined => {
+    const c = byPart.get(partId);
+    return c?.stale ? undefined : (c?.result ?? null);
+  };
 
   const panels: TracePanel[] = [
     {
@@ -126,7 +171,12 @@ export function CaptureView({
   }
 
   return (
-    <div className="space-y-5" data-testid="capture-view">
+    <div className="space-y-5" data-testid="capture-view" data-status="done">
+      {detail.data.stale && capture.error ? (
+        <p role="alert" className="text-sm text-fail">
+          {capture.error}
+        </p>
+      ) : null}
       <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
         <Figure
           label="Samples"
@@ -188,7 +238,7 @@ export function CaptureView({
                   <Td className="font-medium">{c.partNumber}</Td>
                   <Td data-verdict={result?.verdict ?? "no-data"}>
                     {result === undefined ? (
-                      <span className="text-ink-faint">not checked yet</span>
+                      <span className="text-ink-faint">being rechecked…</span>
                     ) : (
                       <VerdictBadge verdict={result?.verdict ?? "no-data"} />
                     )}

@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { usePathname, useSearchParams } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { ConfirmDelete } from "@/components/confirm-delete";
@@ -16,7 +16,13 @@ import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
 import { q } from "../format";
 import type { PanelProps } from "../project-workspace";
-import { captureKeys, type RegisteredCapture, useCaptures } from "./capture-api";
+import {
+  type CaptureListItem,
+  captureKeys,
+  inProgress,
+  type RegisteredCapture,
+  useCaptures,
+} from "./capture-api";
 import { CaptureUpload } from "./capture-upload";
 import { CaptureView } from "./capture-view";
 
@@ -30,6 +36,17 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   const [confirming, setConfirming] = useState<string | null>(null);
   const captures = list.data?.captures ?? [];
   const selected = params.get("capture") ?? captures[0]?.id ?? null;
+  // When a capture's job finishes, the project's check (results, charts, comparison) has new evidence.
+  const pendingIds = captures
+    .filter((c) => inProgress(c.status))
+    .map((c) => c.id)
+    .join(",");
+  const following = useRef(pendingIds);
+  useEffect(() => {
+    if (following.current !== pendingIds && following.current !== "")
+      void invalidateProject(queryClient, projectId);
+    following.current = pendingIds;
+  }, [pendingIds, queryClient, projectId]);
   const names = new Map(people.map((p) => [p.id, p.name]));
   const mayDeleteAny = can(viewer.role, "measurement.manage");
 
@@ -69,10 +86,9 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
           />
           {fresh ? (
             <FormMessage tone="done">
-              {fresh.capture.name} uploaded and checked.
-              {fresh.notified > 0
-                ? " The project's owner was e-mailed: it fails or has no data on a candidate."
-                : ""}
+              {fresh.capture.name} uploaded and queued: the server reads it and checks it against every
+              candidate; its progress and then its results show below. If it fails or has no data on a
+              candidate, the project&apos;s owner is e-mailed.
             </FormMessage>
           ) : null}
         </Section>
@@ -114,7 +130,7 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
               </EmptyRow>
             ) : null}
             {captures.map((c) => {
-              const eq = c.summary.equivalent;
+              const eq = c.summary?.equivalent;
               const worst = check?.worstByPulse[c.id];
               const mine = c.createdBy === viewer.id;
               return (
@@ -132,14 +148,20 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
                       {c.fileName}, {sizeText(c.size)}
                     </span>
                   </Td>
-                  <Td numeric>{c.summary.samples.toLocaleString("en-GB")}</Td>
-                  <Td numeric>{q(c.summary.pPeak, "W")}</Td>
-                  <Td numeric>{q(c.summary.energy, "J")}</Td>
+                  <Td numeric>{c.summary ? c.summary.samples.toLocaleString("en-GB") : "—"}</Td>
+                  <Td numeric>{c.summary ? q(c.summary.pPeak, "W") : "—"}</Td>
+                  <Td numeric>{c.summary ? q(c.summary.energy, "J") : "—"}</Td>
                   <Td numeric>
-                    {eq.ok ? `${q(eq.v, "V")} × ${q(eq.i, "A")}, ${q(eq.duration, "s")}` : "none"}
+                    {!eq ? "—" : eq.ok ? `${q(eq.v, "V")} × ${q(eq.i, "A")}, ${q(eq.duration, "s")}` : "none"}
                   </Td>
                   <Td>
-                    {worst ? <VerdictBadge verdict={worst} /> : <span className="text-ink-faint">—</span>}
+                    {c.status !== "done" ? (
+                      <StatusWord status={c.status} />
+                    ) : worst ? (
+                      <VerdictBadge verdict={worst} />
+                    ) : (
+                      <span className="text-ink-faint">—</span>
+                    )}
                   </Td>
                   <Td className="text-ink-muted">
                     {c.createdBy ? (mine ? "you" : (names.get(c.createdBy) ?? "a former member")) : "—"}
@@ -170,16 +192,29 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
         <Caution className="mt-3" />
       </Section>
 
-      {selected && captures.some((c) => c.id === selected) ? (
-        <Section id="capture" title={captures.find((c) => c.id === selected)?.name ?? "Capture"}>
+      {selected && (captures.some((c) => c.id === selected) || fresh?.capture.id === selected) ? (
+        <Section
+          id="capture"
+          title={captures.find((c) => c.id === selected)?.name ?? fresh?.capture.name ?? "Capture"}
+        >
           <CaptureView
             projectId={projectId}
             captureId={selected}
             check={check}
-            fresh={fresh?.capture.id === selected ? fresh.verdicts : null}
+            registered={fresh?.capture.id === selected ? fresh.capture.status : null}
           />
         </Section>
       ) : null}
     </div>
+  );
+}
+
+/** A capture not (yet) done, in words. */
+function StatusWord({ status }: { status: CaptureListItem["status"] }) {
+  const words = { queued: "queued", processing: "processing…", failed: "failed", done: "done" } as const;
+  return (
+    <span className={status === "failed" ? "text-fail" : "text-ink-muted"} data-capture-status={status}>
+      {words[status]}
+    </span>
   );
 }

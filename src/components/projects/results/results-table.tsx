@@ -35,6 +35,7 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
   const [open, setOpen] = useState<Set<string>>(() => new Set(highlight ? [highlight] : []));
   const highlighted = useRef<HTMLTableRowElement | null>(null);
   const columns = 4 + candidates.length;
+  const pendingCaptures = new Set(check.pendingCaptures ?? []);
 
   useEffect(() => {
     highlighted.current?.scrollIntoView({ block: "center" });
@@ -150,15 +151,21 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
                         <td className={`${cell} ${num}`}>{q(pulse.duration, "s")}</td>
                         {candidates.map((c) => {
                           const result = results[c.partId]?.[pulse.id];
+                          // A capture whose job is recomputing its results: no verdict is shown until it is in.
+                          const pending = !result && c.hasCurves && pendingCaptures.has(pulse.id);
                           return (
                             <td
                               key={c.partId}
                               className={`${cell} border-l py-1`}
-                              data-verdict={result?.verdict ?? "no-data"}
+                              data-verdict={pending ? "pending" : (result?.verdict ?? "no-data")}
                               data-part={c.partNumber}
                             >
                               <span className="flex items-center justify-between gap-2">
-                                <VerdictBadge verdict={result?.verdict ?? "no-data"} />
+                                {pending ? (
+                                  <span className="text-xs text-ink-muted">being rechecked…</span>
+                                ) : (
+                                  <VerdictBadge verdict={result?.verdict ?? "no-data"} />
+                                )}
                                 {result ? (
                                   <UtilisationBar
                                     utilisation={result.utilisation}
@@ -180,7 +187,9 @@ export function ResultsTable({ check, highlight }: { check: ProjectCheck; highli
                                     </span>
                                   </>
                                 ) : (
-                                  <span>{c.hasCurves ? "not checked" : "no SOA curves yet"}</span>
+                                  <span>
+                                    {pending ? "" : c.hasCurves ? "not checked" : "no SOA curves yet"}
+                                  </span>
                                 )}
                               </span>
                               {result &&

@@ -1,11 +1,11 @@
 import { z } from "zod";
 import { route } from "@/lib/auth/guard";
+import { queueCapture } from "@/lib/capture/job";
 import { captureMappingSchema } from "@/lib/capture/parse";
-import { capturePulse, listCaptures, registerCapture } from "@/lib/capture/store";
+import { listCaptures, markUnqueued, registerCapture } from "@/lib/capture/store";
+import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { getPendingUpload } from "@/lib/library/curve-upload";
-import { checkProject } from "@/lib/projects/check";
-import { notifyFailingEvidence } from "@/lib/projects/notify";
 import { loadProject, loadWritableProject } from "@/lib/projects/projects";
 import { storage } from "@/lib/storage";
 
@@ -26,16 +26,17 @@ const registerSchema = z.object({
   probe: optionalText(120),
 });
 
-/** GET /api/projects/:id/captures: the project's captures with their summaries, newest first. */
+/** GET /api/projects/:id/captures: the project's captures with their status and summaries, newest first. */
 export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_req, caller, { id }) => {
   const project = await loadProject(caller, id);
   return json({ captures: await listCaptures(project.id) });
 });
 
 /**
- * POST /api/projects/:id/captures { uploadId, name, mapping, start, note, boardSerial, probe }: parses the uploaded CSV
- * (streaming), stores its samples and summary, checks it against every candidate and e-mails the project's owner
- * if it fails or has no data on any of them. 201 with the capture's summary and its verdict per candidate.
+ * POST /api/projects/:id/captures { uploadId, name, mapping, start, note, boardSerial, probe }: keeps the uploaded
+ * CSV and queues its processing (parse, samples, checks against every candidate, a notice if it fails or has no
+ * data on one), answering at once: 202 with the capture's id, its status ("queued") and the job's id. The capture's
+ * page follows its status (GET …/captures/:captureId) to its results.
  */
 export const POST = route<{ id: string }>({ action: "measurement.write" }, async (req, caller, { id }) => {
   const project = await loadWritableProject(caller, id);
@@ -45,16 +46,18 @@ export const POST = route<{ id: string }>({ action: "measurement.write" }, async
     uploadId: input.uploadId,
     purpose: "capture",
   });
-  const { capture, samples } = await registerCapture(storage(), { ...input, project, caller, upload });
-  const checked = await checkProject(project, {
-    captures: async () => [capturePulse(project, capture, samples)],
-  });
-  const notified = await notifyFailingEvidence(project, checked, [capture.id]);
-  const verdicts = Object.fromEntries(
-    checked.candidates.map((c) => [c.partId, checked.results[c.partId]?.[capture.id] ?? null]),
-  );
+  const capture = await registerCapture(storage(), { ...input, project, caller, upload });
+  let jobId: string | null;
+  try {
+    jobId = await queueCapture(capture.id);
+  } catch (error) {
+    await markUnqueued(capture.id);
+    throw new AppError("unavailable:jobs", "The capture could not be queued for processing. Try again.", {
+      cause: error,
+    });
+  }
   return json(
-    { capture: { id: capture.id, name: capture.name, summary: capture.summary }, verdicts, notified },
-    { status: 201 },
+    { capture: { id: capture.id, name: capture.name, status: capture.status }, jobId },
+    { status: 202 },
   );
 });

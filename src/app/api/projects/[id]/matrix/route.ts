@@ -11,7 +11,8 @@ import { attachmentDisposition } from "@/lib/report/file-name";
  */
 export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_req, caller, { id }) => {
   const project = await loadProject(caller, id);
-  const checked = await checkProject(project);
+  // A download is a record: captures' stale results are recomputed before it is written, not left out.
+  const checked = await checkProject(project, { staleCaptures: "recompute" });
   const ranking = rankCandidates(
     checked.candidates,
     checked.pulses.map((p) => p.id),

@@ -1,20 +1,22 @@
 import { route } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
-import { caseTrace, junctionTrace } from "@/lib/capture/process";
-import { deleteCapture, getCapture, loadCaptureSamples } from "@/lib/capture/store";
+import { queueRechecks } from "@/lib/capture/job";
+import { storedResults } from "@/lib/capture/results";
+import { deleteCapture, getCapture } from "@/lib/capture/store";
 import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
 import { loadCandidates, loadProject, loadWritableProject } from "@/lib/projects/projects";
-import { powerFromVI } from "@/lib/soa/thermal-waveform";
 import { storage } from "@/lib/storage";
 
 type Params = { id: string; captureId: string };
 
 /**
- * GET /api/projects/:id/captures/:captureId: the capture's summary and drawn trace, and for each candidate with a
- * Foster network its junction temperature through the capture (at the project's case temperature, heated through the
- * project's case path when it applies one, whose case temperature comes too; from the start the
- * check uses): peak, when, and a trace decimated on the same buckets as the capture's.
+ * GET /api/projects/:id/captures/:captureId: the capture's status ("queued", "processing", "done", "failed" with the
+ * reason, what and where) and, once done, its summary and drawn trace and, per candidate, its stored result and
+ * junction-temperature trace (at the project's case temperature, heated through the project's case path when it
+ * applies one, whose case temperature comes too; from the start the check uses). Nothing is read
+ * from storage or recomputed here: a result whose inputs changed since it was stored is answered as `stale` (no
+ * result) and a recheck is queued.
  */
 export const GET = route<Params>({ action: "workspace.read" }, async (_req, caller, { id, captureId }) => {
   const project = await loadProject(caller, id);
@@ -22,28 +24,28 @@ export const GET = route<Params>({ action: "workspace.read" }, async (_req, call
   // The object keys stay on the server.
   const { objectKey, samplesKey, ...capture } = row;
   const candidates = await loadCandidates(project.id);
-  const thermal = candidates.some((c) => c.part.foster?.length);
-  const samples = thermal ? await loadCaptureSamples(storage(), row) : null;
-  const p = samples ? powerFromVI(samples.v, samples.i) : null;
-  // The case path heats the case from the same power when the project applies it (METHODS.md §14).
-  const caseNetwork = project.applyCaseNetwork && project.caseNetwork?.length ? project.caseNetwork : null;
+  const stored = row.status === "done" ? await storedResults(project, candidates, row) : null;
+  const stale = stored !== null && [...stored.values()].some((s) => !s.current);
+  if (stale) queueRechecks([row.id]);
   return json({
     capture,
     caseTemp: project.caseTemp,
-    case:
-      samples && p && caseNetwork
-        ? caseTrace(samples.t, p, caseNetwork, project.caseTemp, { start: row.start })
-        : null,
-    candidates: candidates.map(({ part }) => ({
-      partId: part.id,
-      partNumber: part.partNumber,
-      maker: part.maker,
-      tjMax: part.tjMax,
-      junction:
-        samples && p && part.foster?.length
-          ? junctionTrace(samples.t, p, part.foster, project.caseTemp, { start: row.start, caseNetwork })
-          : null,
-    })),
+    // The case temperature through the capture when the project applies its case path (METHODS.md §14).
+    case: [...(stored?.values() ?? [])].find((s) => s.current && s.caseTrace)?.caseTrace ?? null,
+    stale,
+    candidates: candidates.map(({ part }) => {
+      const mine = stored?.get(part.id);
+      const current = mine?.current === true;
+      return {
+        partId: part.id,
+        partNumber: part.partNumber,
+        maker: part.maker,
+        tjMax: part.tjMax,
+        stale: stored !== null && !current,
+        result: current ? mine.result : null,
+        junction: current ? mine.junction : null,
+      };
+    }),
   });
 });
 

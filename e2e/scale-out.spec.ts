@@ -1,0 +1,122 @@
+import { type ChildProcess, spawn } from "node:child_process";
+import { openSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { type APIRequestContext, expect, request, test } from "@playwright/test";
+import { benchCaptureCsv } from "./fixtures/capture-csv";
+
+// Scale-out, shown: two app instances of the same build against one database and one store, as behind a load
+// balancer. B is the suite's app (its capture workers on); A is another `next start` on the next free port of this
+// checkout's range, started here with JOB_WORKERS=0, so it only queues jobs. Both serve the same public origin
+// (APP_URL), which the load balancer would carry: requests to A say B's origin, as a browser would.
+
+const appB = process.env.APP_URL ?? "http://127.0.0.1:3100";
+const portA = Number(new URL(appB).port) + 7;
+const appA = `http://127.0.0.1:${portA}`;
+const origin = new URL(appB).origin;
+const stamp = Date.now().toString(36);
+const person = {
+  name: "Noor Lindqvist",
+  email: `noor.${stamp}@pulsefence.test`,
+  password: "scale-out-demo-password",
+  workspaceName: `Scale-out lab ${stamp}`,
+};
+
+let instanceA: ChildProcess;
+let onA: APIRequestContext;
+let onB: APIRequestContext;
+
+test.describe.configure({ mode: "serial" });
+
+test.beforeAll(async () => {
+  test.setTimeout(120_000);
+  const log = openSync(path.join(tmpdir(), `pulsefence-instance-a-${portA}.log`), "w");
+  instanceA = spawn(
+    path.join(process.cwd(), "node_modules/.bin/next"),
+    ["start", "--hostname", "127.0.0.1", "--port", String(portA)],
+    { env: { ...process.env, JOB_WORKERS: "0" }, stdio: ["ignore", log, log] },
+  );
+  await expect
+    .poll(async () => (await fetch(`${appA}/api/health`).catch(() => null))?.status ?? 0, {
+      timeout: 90_000,
+      intervals: [250],
+    })
+    .toBe(200);
+  onA = await request.newContext({ baseURL: appA, extraHTTPHeaders: { origin } });
+});
+
+test.afterAll(async () => {
+  await onA?.dispose();
+  await onB?.dispose();
+  if (instanceA && instanceA.exitCode === null) {
+    const exited = new Promise((resolve) => instanceA.once("exit", resolve));
+    instanceA.kill("SIGTERM");
+    await exited;
+  }
+});
+
+test("a session made on one instance works on the other", async () => {
+  const signedUp = await onA.post("/api/auth/sign-up", { data: person });
+  expect(signedUp.status(), await signedUp.text()).toBe(201);
+  // The session cookie instance A set, carried to instance B.
+  onB = await request.newContext({
+    baseURL: appB,
+    extraHTTPHeaders: { origin },
+    storageState: await onA.storageState(),
+  });
+  const projects = await onB.get("/api/projects");
+  expect(projects.status()).toBe(200);
+  const created = await onB.post("/api/projects", { data: { name: "Two instances", caseTemp: 25 } });
+  expect(created.status(), await created.text()).toBe(201);
+  // What B wrote, A reads: one database.
+  const listed: { projects: { name: string }[] } = await (await onA.get("/api/projects")).json();
+  expect(listed.projects.map((p) => p.name)).toContain("Two instances");
+});
+
+test("a capture job queued by instance A is finished by a worker of instance B", async () => {
+  const created = await onA.post("/api/projects", { data: { name: "Queued on A", caseTemp: 25 } });
+  expect(created.status(), await created.text()).toBe(201);
+  const projectId: string = (await created.json()).project.id;
+  const csv = benchCaptureCsv(5_000);
+  const ticket = await onA.post(`/api/projects/${projectId}/uploads`, {
+    data: { fileName: "two-instances.csv", size: Buffer.byteLength(csv), purpose: "capture" },
+  });
+  expect(ticket.status(), await ticket.text()).toBe(201);
+  const { uploadId, url } = await ticket.json();
+  const put = await fetch(url, { method: "PUT", body: csv, headers: { "content-type": "text/csv" } });
+  expect(put.status).toBe(200);
+  const registered = await onA.post(`/api/projects/${projectId}/captures`, {
+    data: { uploadId, name: "Queued on A", mapping: { time: 0, voltage: 1, current: 2, header: true } },
+  });
+  expect(registered.status(), await registered.text()).toBe(202);
+  const { capture, jobId } = await registered.json();
+  expect(capture.status).toBe("queued");
+  expect(jobId).toBeTruthy();
+  // A has no workers: only B's can take the job. A answers the outcome from the shared database.
+  await expect
+    .poll(
+      async () =>
+        (await (await onA.get(`/api/projects/${projectId}/captures/${capture.id}`)).json()).capture.status,
+      {
+        timeout: 30_000,
+        intervals: [250],
+      },
+    )
+    .toBe("done");
+  const detail = await (await onB.get(`/api/projects/${projectId}/captures/${capture.id}`)).json();
+  expect(detail.capture.summary.samples).toBe(5_000);
+});
+
+test("a sign-in throttle counts failures on both instances together", async () => {
+  const attempt = (ctx: APIRequestContext, password: string) =>
+    ctx.post("/api/auth/sign-in", { data: { email: person.email, password } });
+  const statuses: number[] = [];
+  for (const ctx of [onA, onB, onA, onB, onA])
+    statuses.push((await attempt(ctx, "not the password")).status());
+  expect(statuses.every((s) => s === 401 || s === 400)).toBe(true);
+  // The sixth attempt is refused on either instance, even with the right password.
+  const refused = await attempt(onB, person.password);
+  expect(refused.status()).toBe(429);
+  expect(refused.headers()["retry-after"]).toBeTruthy();
+  expect((await attempt(onA, person.password)).status()).toBe(429);
+});
