@@ -56,7 +56,9 @@ export async function evaluate(
 ): Promise<Evaluation> {
   const loaded: (Pulse | null)[] = [];
   for (const p of pulses) {
-    loaded.push(p.stored || p.pulse === null ? null : typeof p.pulse === "function" ? await p.pulse() : p.pulse);
+    loaded.push(
+      p.stored || p.pulse === null ? null : typeof p.pulse === "function" ? await p.pulse() : p.pulse,
+    );
   }
   const results: Evaluation["results"] = {};
   // The worst verdict so far per pulse, by index (severity 0..3), and whether it has one; keyed by id at the end.

@@ -27,7 +27,7 @@ export function nextStep(
   if (member.can("part.verify") && state.awaiting.length > 0) {
     const part = state.awaiting[0];
     return {
-      text: `${state.awaiting.length} library ${state.awaiting.length === 1 ? "part is" : "parts are"} still an unverified draft. Check ${part.partNumber} against its datasheet and verify it before signing a decision that relies on it.`,
+      text: `${state.awaiting.length} library ${state.awaiting.length === 1 ? "part is still an unverified draft" : "parts are still unverified drafts"}. Check ${part.partNumber} against its datasheet and verify it before signing a decision that relies on it.`,
       link: { href: `/library/${part.id}`, label: `Verify ${part.partNumber}` },
     };
   }
