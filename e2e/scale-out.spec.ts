@@ -4,6 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { type APIRequestContext, expect, request, test } from "@playwright/test";
 import { benchCaptureCsv } from "./fixtures/capture-csv";
+import { linkIn, waitForMail } from "./pages/mail-inbox";
 
 // Scale-out, shown: two app instances of the same build against one database and one store, as behind a load
 // balancer. B is the suite's app (its capture workers on); A is another `next start` on the next free port of this
@@ -56,8 +57,13 @@ test.afterAll(async () => {
 });
 
 test("a session made on one instance works on the other", async () => {
+  // Sign-up answers 202 and e-mails a link; using it on instance A creates the account and signs in there.
   const signedUp = await onA.post("/api/auth/sign-up", { data: person });
-  expect(signedUp.status(), await signedUp.text()).toBe(201);
+  expect(signedUp.status(), await signedUp.text()).toBe(202);
+  const link = linkIn(await waitForMail(person.email, /Finish creating/), "/sign-up/confirm/");
+  const token = new URL(link).pathname.split("/").pop();
+  const confirmed = await onA.post("/api/auth/sign-up/confirm", { data: { token } });
+  expect(confirmed.status(), await confirmed.text()).toBe(201);
   // The session cookie instance A set, carried to instance B.
   onB = await request.newContext({
     baseURL: appB,
