@@ -14,6 +14,7 @@ import {
   saveBuilt,
 } from "./builder-layout";
 import { clampForm } from "./builder-schemas";
+import { TurnOffChoice } from "./turn-off-choice";
 
 type Values = z.input<typeof clampForm>;
 
@@ -118,19 +119,7 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
       }
       fields={
         <div className="grid gap-4 sm:grid-cols-3">
-          <fieldset className="sm:col-span-3">
-            <legend className="mb-1 text-sm font-medium">At turn-off the current falls</legend>
-            <div className="flex flex-wrap gap-x-5 gap-y-1 text-sm">
-              <label className="inline-flex min-h-11 items-center gap-2">
-                <input type="radio" value="clamp" {...register("clamp")} />
-                through a clamp
-              </label>
-              <label className="inline-flex min-h-11 items-center gap-2">
-                <input type="radio" value="none" {...register("clamp")} />
-                with no clamp (avalanche)
-              </label>
-            </div>
-          </fieldset>
+          <TurnOffChoice registration={register("clamp")} className="sm:col-span-3" />
           <UnitField
             id="clamp-l"
             label="Loop inductance L"

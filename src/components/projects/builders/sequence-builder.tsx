@@ -20,6 +20,7 @@ import {
   saveBuilt,
 } from "./builder-layout";
 import { sequenceForm } from "./builder-schemas";
+import { TurnOffChoice } from "./turn-off-choice";
 
 type Values = z.input<typeof sequenceForm>;
 type Input = z.output<typeof sequenceForm>;
@@ -255,19 +256,7 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
             error={errors.inductance?.message}
             {...register("inductance")}
           />
-          <fieldset className="sm:col-span-2">
-            <legend className="mb-1 text-sm font-medium">At turn-off the current falls</legend>
-            <div className="flex flex-wrap gap-x-5 gap-y-1 text-sm">
-              <label className="inline-flex min-h-11 items-center gap-2">
-                <input type="radio" value="clamp" {...register("clamp")} />
-                through a clamp
-              </label>
-              <label className="inline-flex min-h-11 items-center gap-2">
-                <input type="radio" value="none" {...register("clamp")} />
-                with no clamp (avalanche)
-              </label>
-            </div>
-          </fieldset>
+          <TurnOffChoice registration={register("clamp")} className="sm:col-span-2" />
           {unclamped ? (
             <UnitField
               id="seq-vbr"
