@@ -144,12 +144,23 @@ start_services() {
 # Serves the built app as PF_APP_PROCESSES `next start` processes (default: one per core) on loopback ports behind
 # Debian's nginx on APP_PORT, which balances them (least connections, kept-alive upstream connections) and sheds
 # overload: more than PF_APP_INFLIGHT requests in flight per process (default 24) answer 503 with Retry-After at
-# once instead of queueing into timeouts; /api/health is exempt, so it stays answerable under load. Logs go to
-# $DATA_DIR/app-N.log and $DATA_DIR/nginx/. NEXT_DIST_DIR, if set, names the build every process serves.
+# once instead of queueing into timeouts; /api/health is exempt, so it stays answerable under load. Bearer-token
+# POSTs to /api/v1/check go to PF_API_PROCESSES lean API servers instead (src/server/api-server.ts: the same
+# handler without the framework's request path; default one per core, PF_API_INFLIGHT in flight each, default 64).
+# Logs go to $DATA_DIR/app-N.log, api-N.log and $DATA_DIR/nginx/. NEXT_DIST_DIR, if set, names the build served.
 start_app() {
   local processes=${PF_APP_PROCESSES:-$(nproc)} inflight=${PF_APP_INFLIGHT:-24} k port servers=""
+  local api_processes=${PF_API_PROCESSES:-$(nproc)} api_inflight=${PF_API_INFLIGHT:-64} api_servers=""
   local conf_dir="$DATA_DIR/nginx"
   mkdir -p "$conf_dir/tmp"
+  for k in $(seq 1 "$api_processes"); do
+    port=$((APP_BACKEND_PORT + 20 + k))
+    (cd "$ROOT" && PORT=$port HOST=127.0.0.1 exec node --conditions=react-server --import tsx src/server/api-main.ts) \
+      >"$DATA_DIR/api-$k.log" 2>&1 &
+    PIDS+=($!)
+    echo $! > "$DATA_DIR/api-$k.pid"
+    api_servers+="    server 127.0.0.1:$port max_fails=0;"$'\n'
+  done
   for k in $(seq 1 "$processes"); do
     port=$((APP_BACKEND_PORT + k))
     # Kept-alive connections outlive nginx's (60 s), so nginx never reuses one the app has just closed.
@@ -181,8 +192,19 @@ http {
 $servers    keepalive 128;
     keepalive_timeout 60s;
   }
-  # One zone for the whole server (a constant key: requests with an empty key would not be counted).
+  upstream api {
+    least_conn;
+$api_servers    keepalive 128;
+    keepalive_timeout 60s;
+  }
+  # Which pool answers POST /api/v1/check: the lean API servers for an API token, the app for a session.
+  map "\$request_method \$http_authorization" \$check_pool {
+    "~^POST Bearer " api;
+    default app;
+  }
+  # One zone per pool for the whole server (a constant key: requests with an empty key would not be counted).
   limit_conn_zone \$server_port zone=inflight:1m;
+  limit_conn_zone \$server_port zone=api_inflight:1m;
   limit_conn_status 503;
   limit_conn_log_level warn;
   server {
@@ -202,6 +224,10 @@ $servers    keepalive 128;
     location = /api/health {
       proxy_pass http://app;
     }
+    location = /api/v1/check {
+      limit_conn api_inflight $((api_processes * api_inflight));
+      proxy_pass http://\$check_pool;
+    }
     location @overloaded {
       default_type application/json;
       add_header Retry-After 1 always;
@@ -217,6 +243,10 @@ NGINX
   echo $! > "$DATA_DIR/nginx.pid"
   for k in $(seq 1 "$processes"); do
     wait_for "app process $k" 90 curl -sf "http://127.0.0.1:$((APP_BACKEND_PORT + k))/api/health"
+  done
+  for k in $(seq 1 "$api_processes"); do
+    # Any answer will do (401 without a token): the server is listening.
+    wait_for "API server $k" 60 curl -s -o /dev/null -X POST "http://127.0.0.1:$((APP_BACKEND_PORT + 20 + k))/api/v1/check"
   done
   wait_for "the app" 30 curl -sf "$APP_URL/api/health"
 }

@@ -42,7 +42,7 @@ build_and_serve() {
   node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -60 "$DATA_DIR/build.log"; return 1; }
   # Behind nginx as in production, with one app process unless PF_APP_PROCESSES says otherwise: every process warms
   # up on its own, and the browser tests' time limits are set for one.
-  PF_APP_PROCESSES=${PF_APP_PROCESSES:-1} start_app
+  PF_APP_PROCESSES=${PF_APP_PROCESSES:-1} PF_API_PROCESSES=${PF_API_PROCESSES:-1} start_app
 }
 if step build build_and_serve; then :; fi
 if [ -f "$DATA_DIR/nginx.pid" ]; then

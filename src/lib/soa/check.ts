@@ -51,7 +51,13 @@ import type {
   WaveformPulse,
 } from "./types";
 import { curveVerdict, thermalVerdict, utilisation, worse } from "./verdict";
-import { READ_CURRENT_SHARE, readWaveform, recordStart } from "./waveform-check";
+import {
+  READ_CURRENT_SHARE,
+  readWaveform,
+  recordCaseRise,
+  recordFigures,
+  recordStart,
+} from "./waveform-check";
 
 /** Everything about a part and its conditions that does not depend on the pulse, computed once per check. */
 export interface CheckContext {
@@ -238,13 +244,8 @@ function capture(ctx: CheckContext, pulse: WaveformPulse): Outcome {
   const { t, v, i } = pulse;
   let derating = ctx.derating;
   if (ctx.caseNetwork !== null) {
-    let peakPower = 0;
-    for (let k = 0; k < t.length; k++) peakPower = Math.max(peakPower, v[k] * i[k]);
-    const { start } = recordStart(Math.max(v[0] * i[0], 0), peakPower, pulse.start);
-    derating = deratingAt(
-      ctx,
-      waveformRiseVI(t, v, i, ctx.caseNetwork, { steady: start === "steady" }).maxRise,
-    );
+    const { start } = recordStart(Math.max(v[0] * i[0], 0), recordFigures(pulse).peakPower, pulse.start);
+    derating = deratingAt(ctx, recordCaseRise(pulse, ctx.caseNetwork, start === "steady"));
   }
   const reading = readWaveform(ctx.reader, pulse, derating);
   let flags = reading.flags | limitFlags(ctx, reading.vMax, reading.iMaxAbs);

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { CurveReader, flagsOf } from "./curve-reader";
 import { prepareCurveSet } from "./curve-set";
 import type { CurveSet, WaveformPulse } from "./types";
-import { readWaveform, recordStart } from "./waveform-check";
+import { readWaveform, recordCaseRise, recordFigures, recordStart } from "./waveform-check";
 
 /** A curve set falling with width at every voltage (ordered), with a steeper segment at high voltage. */
 const ordered: CurveSet = {
@@ -95,5 +95,52 @@ describe("readWaveform (METHODS.md §6)", () => {
     expect(recordStart(1, 100)).toEqual({ start: "steady", decided: true, startsMidPulse: true });
     expect(recordStart(50, 100, "rest")).toEqual({ start: "rest", decided: false, startsMidPulse: true });
     expect(recordStart(0, 0)).toEqual({ start: "rest", decided: false, startsMidPulse: false });
+  });
+});
+
+// METHODS.md §6: p_n = v_n·i_n, E the trapezoid integral of max(p, 0), T_rec = t_last − t_0; worked by hand.
+describe("recordFigures (METHODS.md §6)", () => {
+  const record: WaveformPulse = {
+    id: "r",
+    kind: "waveform",
+    t: [0, 1e-3, 2e-3],
+    v: [10, 10, 10],
+    i: [0, 2, -0.5],
+  };
+
+  it("sums a record by hand: p = 0, 20, −5 W → p_peak 20 W, E = 10 + 10 mJ, power flowing back", () => {
+    expect(recordFigures(record)).toEqual({
+      vMax: 10,
+      iMaxAbs: 2,
+      peakPower: 20,
+      // −5 W < −0.01 × 20 W
+      negativePower: true,
+      energy: expect.closeTo(0.02, 15),
+      recordLength: 2e-3,
+    });
+  });
+
+  it("sums each record once, whatever number of parts reads it", () => {
+    expect(recordFigures(record)).toBe(recordFigures(record));
+    expect(recordFigures({ ...record })).not.toBe(recordFigures(record));
+  });
+
+  // METHODS.md §4: one term R(1 − e^(−t/τ)), R = 0.5 K/W, τ = 1 ms, under 20 W for 1 ms, then p falls linearly to
+  // 0 over the next ms. The rise at 1 ms is 20·0.5·(1 − e^(−1)) = 6.32 K; it grows on while R·p exceeds it, but
+  // stays below 20 W held for 2 ms: 20·0.5·(1 − e^(−2)) = 8.65 K.
+  it("gives the case path's rise once per network, the same for every part", () => {
+    const pulse: WaveformPulse = {
+      id: "c",
+      kind: "waveform",
+      t: [0, 0, 1e-3, 2e-3],
+      v: [0, 10, 10, 0],
+      i: [0, 2, 2, 0],
+    };
+    const network = [{ r: 0.5, tau: 1e-3 }];
+    const rise = recordCaseRise(pulse, network, false);
+    expect(rise).toBeGreaterThanOrEqual(20 * 0.5 * (1 - Math.exp(-1)) - 1e-9);
+    expect(rise).toBeLessThan(20 * 0.5 * (1 - Math.exp(-2)));
+    expect(recordCaseRise(pulse, [{ r: 0.5, tau: 1e-3 }], false)).toBe(rise);
+    expect(recordCaseRise(pulse, [{ r: 1, tau: 1e-3 }], false)).toBeCloseTo(2 * rise, 9);
   });
 });

@@ -8,6 +8,8 @@
 // `starts-mid-pulse`; p_last ≥ 0.01·p_peak flags `ends-mid-pulse`.
 import { type CurveReader, FLAG_BIT } from "./curve-reader";
 import { recordEnergy } from "./equivalent-rectangle";
+import type { FosterTerm } from "./foster";
+import { waveformRiseVI } from "./thermal-waveform";
 import type { RecordStart, WaveformPulse } from "./types";
 
 /** Share of the peak power at which a record's first or last sample counts as inside a pulse (METHODS.md §6). */
@@ -49,11 +51,28 @@ export interface WaveformReading {
   binding: { index: number; width: number | null; lnAllowed: number } | null;
 }
 
-/**
- * Reads a waveform (at least two samples, t strictly increasing) on the curves through `reader`, with the
- * derating factor `derating` (k of METHODS.md §5; only its logarithm enters, to order samples when k = 0).
- */
-export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating: number): WaveformReading {
+/** What a record is, whatever part reads it: computed once per record (`recordFigures`). */
+export interface RecordFigures {
+  /** Largest v_n (V), largest |i_n| (A) and largest p_n = v_n·i_n (W, 0 when none is positive). */
+  vMax: number;
+  iMaxAbs: number;
+  peakPower: number;
+  /** Some p_n < −0.01·p_peak: power flowing back, counted as zero (`negative-power-clamped`). */
+  negativePower: boolean;
+  /** E = ∫ max(p, 0) dt by trapezoids (J), and T_rec = t_last − t_0 (s). */
+  energy: number;
+  recordLength: number;
+}
+
+// A record checked against many parts (a project's candidates) is summed once. Keyed by the pulse object, whose
+// sample arrays the engine never changes; the memory goes with the pulse.
+const figuresOf = new WeakMap<WaveformPulse, RecordFigures>();
+const caseRisesOf = new WeakMap<WaveformPulse, Map<string, number>>();
+
+/** The figures of a record (METHODS.md §6), computed at its first reading and reused for every other part. */
+export function recordFigures(pulse: WaveformPulse): RecordFigures {
+  const known = figuresOf.get(pulse);
+  if (known) return known;
   const { t, v, i } = pulse;
   const n = t.length;
   let vMax = Number.NEGATIVE_INFINITY;
@@ -64,13 +83,52 @@ export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating
     iMaxAbs = Math.max(iMaxAbs, Math.abs(i[k]));
     peakPower = Math.max(peakPower, v[k] * i[k]);
   }
-  let flags = 0;
-  for (let k = 0; k < n; k++) {
-    if (v[k] * i[k] < -0.01 * peakPower) {
-      flags |= FLAG_BIT["negative-power-clamped"];
-      break;
-    }
+  let negativePower = false;
+  for (let k = 0; k < n && !negativePower; k++) negativePower = v[k] * i[k] < -0.01 * peakPower;
+  const figures: RecordFigures = {
+    vMax,
+    iMaxAbs,
+    peakPower,
+    negativePower,
+    energy: peakPower > 0 ? recordEnergy(t, v, i) : 0,
+    recordLength: t[n - 1] - t[0],
+  };
+  figuresOf.set(pulse, figures);
+  return figures;
+}
+
+/**
+ * The case's largest rise over a record through the project's case path (METHODS.md §14), the same for every part
+ * checked on it: computed once per record, network and start. The network is keyed by its terms' values.
+ */
+export function recordCaseRise(
+  pulse: WaveformPulse,
+  network: readonly FosterTerm[],
+  steady: boolean,
+): number {
+  let rises = caseRisesOf.get(pulse);
+  if (rises === undefined) {
+    rises = new Map();
+    caseRisesOf.set(pulse, rises);
   }
+  const key = `${steady ? "s" : "r"}${network.map((term) => `${term.r}/${term.tau}`).join(",")}`;
+  let rise = rises.get(key);
+  if (rise === undefined) {
+    rise = waveformRiseVI(pulse.t, pulse.v, pulse.i, network, { steady }).maxRise;
+    rises.set(key, rise);
+  }
+  return rise;
+}
+
+/**
+ * Reads a waveform (at least two samples, t strictly increasing) on the curves through `reader`, with the
+ * derating factor `derating` (k of METHODS.md §5; only its logarithm enters, to order samples when k = 0).
+ */
+export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating: number): WaveformReading {
+  const { t, v, i } = pulse;
+  const n = t.length;
+  const { vMax, iMaxAbs, peakPower, negativePower, energy, recordLength } = recordFigures(pulse);
+  const flags = negativePower ? FLAG_BIT["negative-power-clamped"] : 0;
   const reading: WaveformReading = {
     vMax,
     iMaxAbs,
@@ -97,8 +155,6 @@ export function readWaveform(reader: CurveReader, pulse: WaveformPulse, derating
     reading.endsMidPulse = true;
     reading.flags |= FLAG_BIT["ends-mid-pulse"];
   }
-  const energy = recordEnergy(t, v, i);
-  const recordLength = t[n - 1] - t[0];
   const lnEnergy = Math.log(energy);
   const lnRecord = Math.log(recordLength);
   reading.energy = energy;

@@ -1,0 +1,150 @@
+// The lean API server answers exactly as the app's route would, over real HTTP: same access checks, same body
+// limits, same errors, and the same result for the same request; it serves nothing else.
+import type { AddressInfo } from "node:net";
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { apiTokens, memberships } from "@/db/schema";
+import type { GuardedHandler } from "@/lib/auth/guard";
+import { whenListening } from "@/lib/auth/token-auth";
+import {
+  addMember,
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  type TestWorkspace,
+  testDb,
+} from "@/test/fixtures";
+import { POST as createToken } from "../app/api/account/tokens/route";
+import { POST as checkPost } from "../app/api/v1/check/route";
+import { createApiServer } from "./api-server";
+
+const h = (handler: unknown) => handler as GuardedHandler;
+
+// Two pulses against one curve: 20 V × 10 A for 1 ms sits on the 1 ms line between (10 V, 40 A) and (40 V, 10 A)
+// (log-log: at 20 V the line gives 40·(20/10)^(log(10/40)/log(40/10)) = 20 A), 60 V is past V_DS,max.
+const body = {
+  part: {
+    vdsMax: 80,
+    tjMax: 175,
+    soa: {
+      curves: [
+        {
+          duration: 1e-3,
+          points: [
+            [10, 40],
+            [40, 10],
+          ],
+        },
+      ],
+    },
+  },
+  caseTemp: 25,
+  pulses: [
+    { id: "inside", kind: "rect", v: 20, i: 10, duration: 1e-3 },
+    { id: "over-voltage", kind: "rect", v: 90, i: 1, duration: 1e-3 },
+  ],
+};
+
+let ws: TestWorkspace;
+let server: ReturnType<typeof createApiServer>;
+let base: string;
+beforeAll(async () => {
+  ws = await createTestWorkspace("Lean API");
+  await whenListening();
+  server = createApiServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+});
+afterAll(async () => {
+  await new Promise((resolve) => server.close(resolve));
+  await deleteWorkspace(ws.id);
+  await testDb.sql.end();
+});
+
+async function newToken(userId: string) {
+  const cookie = await sessionCookie(userId, ws.id);
+  const res = await call(h(createToken), "POST", { cookie, body: { name: "lean" } });
+  return (await res.json()).token as { id: string; secret: string };
+}
+
+const post = (headers: Record<string, string>, payload: string, path = "/api/v1/check") =>
+  fetch(`${base}${path}`, {
+    method: "POST",
+    headers: { "content-type": "application/json", ...headers },
+    body: payload,
+  });
+
+describe("the lean API server", () => {
+  it("answers a token's check with the route's own result", async () => {
+    const user = await addMember(ws.id, "technician");
+    const token = await newToken(user.id);
+    const res = await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(body));
+    expect(res.status).toBe(200);
+    const lean = await res.json();
+    const viaRoute = await (await call(h(checkPost), "POST", { bearer: token.secret, body })).json();
+    expect(lean).toEqual(viaRoute);
+    expect(lean.results.map((r: { verdict: string }) => r.verdict)).toEqual(["pass", "fail"]);
+  });
+
+  it("refuses a missing or unknown token with the route's 401", async () => {
+    const none = await post({}, JSON.stringify(body));
+    expect(none.status).toBe(401);
+    expect((await none.json()).error.code).toBe("unauthenticated");
+    const unknown = await post({ authorization: "Bearer pf_not-a-token" }, JSON.stringify(body));
+    expect(unknown.status).toBe(401);
+    expect((await unknown.json()).error.code).toBe("unauthenticated:token");
+  });
+
+  it("refuses a revoked token and a removed member", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    expect((await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(body))).status).toBe(200);
+    await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
+    await expect
+      .poll(async () => (await post({ authorization: `Bearer ${token.secret}` }, "{}")).status, {
+        timeout: 6_000,
+      })
+      .toBe(403);
+    await testDb.db.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, token.id));
+    await expect
+      .poll(async () => (await post({ authorization: `Bearer ${token.secret}` }, "{}")).status, {
+        timeout: 6_000,
+      })
+      .toBe(401);
+  });
+
+  it("names the field of invalid input, and bounds the body as the app does", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    const auth = { authorization: `Bearer ${token.secret}` };
+    const broken = await post(auth, "{");
+    expect(broken.status).toBe(400);
+    expect((await broken.json()).error.path).toBe("");
+    const invalid = await post(auth, JSON.stringify({ ...body, caseTemp: "hot" }));
+    expect(invalid.status).toBe(400);
+    expect((await invalid.json()).error.path).toBe("caseTemp");
+    const huge = await post(auth, JSON.stringify({ ...body, pad: "x".repeat(5 * 1024 * 1024) }));
+    expect(huge.status).toBe(413);
+  });
+
+  it("answers 64 requests at once, each with its own result", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newToken(user.id);
+    const answers = await Promise.all(
+      Array.from({ length: 64 }, async (_, k) => {
+        const own = { ...body, pulses: [{ id: `p${k}`, kind: "rect", v: 20, i: 10, duration: 1e-3 }] };
+        const res = await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(own));
+        return { status: res.status, id: (await res.json()).results[0].id };
+      }),
+    );
+    expect(answers).toEqual(Array.from({ length: 64 }, (_, k) => ({ status: 200, id: `p${k}` })));
+  });
+
+  it("serves nothing but the check contract", async () => {
+    const get = await fetch(`${base}/api/v1/check`);
+    expect(get.status).toBe(404);
+    expect((await get.json()).error.code).toBe("not_found:route");
+    expect((await post({}, "{}", "/api/projects")).status).toBe(404);
+  });
+});
