@@ -164,7 +164,7 @@ start_app() {
   for k in $(seq 1 "$processes"); do
     port=$((APP_BACKEND_PORT + k))
     # Kept-alive connections outlive nginx's (60 s), so nginx never reuses one the app has just closed.
-    "$ROOT/node_modules/.bin/next" start --hostname 127.0.0.1 --port "$port" --keepAliveTimeout 75000 \
+    PF_COMPRESS_AT_PROXY=1 "$ROOT/node_modules/.bin/next" start --hostname 127.0.0.1 --port "$port" --keepAliveTimeout 75000 \
       >"$DATA_DIR/app-$k.log" 2>&1 &
     PIDS+=($!)
     echo $! > "$DATA_DIR/app-$k.pid"
@@ -178,12 +178,21 @@ error_log $conf_dir/error.log warn;
 events { worker_connections 4096; }
 http {
   access_log off;
+  include /etc/nginx/mime.types;
+  default_type application/octet-stream;
   client_body_temp_path $conf_dir/tmp/body;
   proxy_temp_path $conf_dir/tmp/proxy;
   fastcgi_temp_path $conf_dir/tmp/fastcgi;
   uwsgi_temp_path $conf_dir/tmp/uwsgi;
   scgi_temp_path $conf_dir/tmp/scgi;
   server_tokens off;
+  # nginx compresses text answers, so the app's processes (PF_COMPRESS_AT_PROXY, next.config.ts) keep their CPU.
+  gzip on;
+  gzip_proxied any;
+  gzip_vary on;
+  gzip_comp_level 4;
+  gzip_min_length 1024;
+  gzip_types text/plain text/css text/csv application/json application/javascript text/javascript text/x-component image/svg+xml;
   # The app bounds every body itself (413 before reading it all); bodies stream through unbuffered.
   client_max_body_size 0;
   proxy_request_buffering off;
@@ -221,8 +230,16 @@ $api_servers    keepalive 128;
       limit_conn inflight $((processes * inflight));
       proxy_pass http://app;
     }
+    # Health is answered by the lean API servers, never queued behind pages (each app process also answers it on
+    # its own port, which start_app waits for).
     location = /api/health {
-      proxy_pass http://app;
+      proxy_pass http://api;
+    }
+    # The build's static files (content-hashed names) straight from disk, cached for good.
+    location /_next/static/ {
+      alias $ROOT/${NEXT_DIST_DIR:-.next}/static/;
+      add_header Cache-Control "public, max-age=31536000, immutable";
+      add_header X-Content-Type-Options nosniff;
     }
     location = /api/v1/check {
       limit_conn api_inflight $((api_processes * api_inflight));

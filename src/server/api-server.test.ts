@@ -1,5 +1,5 @@
 // The lean API server answers exactly as the app's route would, over real HTTP: same access checks, same body
-// limits, same errors, and the same result for the same request; it serves nothing else.
+// limits, same errors and headers, and the same result for the same request; it serves nothing else.
 import type { AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -141,7 +141,19 @@ describe("the lean API server", () => {
     expect(answers).toEqual(Array.from({ length: 64 }, (_, k) => ({ status: 200, id: `p${k}` })));
   });
 
-  it("serves nothing but the check contract", async () => {
+  it("answers health with the route's probes, for GET and HEAD, with the app's headers", async () => {
+    const get = await fetch(`${base}/api/health`);
+    expect(get.status).toBe(200);
+    expect(await get.json()).toEqual({ db: "ok", storage: "ok", mail: "ok" });
+    expect(get.headers.get("cache-control")).toBe("no-store");
+    expect(get.headers.get("x-content-type-options")).toBe("nosniff");
+    expect(get.headers.get("x-frame-options")).toBe("DENY");
+    const head = await fetch(`${base}/api/health`, { method: "HEAD" });
+    expect(head.status).toBe(200);
+    expect(await head.text()).toBe("");
+  });
+
+  it("serves nothing but the check contract and health", async () => {
     const get = await fetch(`${base}/api/v1/check`);
     expect(get.status).toBe(404);
     expect((await get.json()).error.code).toBe("not_found:route");
