@@ -1,3 +1,4 @@
+// Long file: the whole database schema in one module, as drizzle-kit reads it to generate migrations.
 import { relations, sql } from "drizzle-orm";
 import {
   boolean,

@@ -1,3 +1,5 @@
+// Long file: the account life cycle (sign-up, sign-in, reset, password change, tokens, sign-out everywhere) in one
+// module, because each step ends or narrows access the same way (sessions, tokens, the auth memory's NOTIFY).
 import "server-only";
 import { and, eq, gt, isNull, lt } from "drizzle-orm";
 import { db } from "@/db";

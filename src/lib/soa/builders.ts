@@ -2,6 +2,8 @@
 // contract's form and the intermediate figures an engineer would write down beside them. Inputs are SI
 // values; any input that is not finite and > 0 (or breaks a stated relation) gives { ok: false, reason }
 // naming it.
+//
+// Long file: every builder of METHODS.md §11 with its figures, one function each, kept together as one table.
 import type { Pulse, RectPulse, TrianglePulse, WaveformPulse } from "./types";
 
 export type BuilderResult<F> = { ok: true; pulses: Pulse[]; figures: F } | { ok: false; reason: string };

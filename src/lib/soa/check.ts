@@ -17,6 +17,9 @@
 //   ratings its curve verdict is no data; with a case network its Tj includes the case rise, while k_av stays at
 //   Tc (the case does not heat in microseconds);
 // - `case-heating` is flagged on every pulse checked with a case network.
+//
+// Long file: the one place where every rule of METHODS.md §9 meets for a pulse; each kind of pulse has its own
+// function here, and splitting them apart would scatter the order in which the rules apply.
 import { avalancheDerating, avalancheEvent } from "./avalanche";
 import { CurveReader, FLAG_BIT, flagsOf } from "./curve-reader";
 import { type PreparedCurveSet, prepareCurveSet } from "./curve-set";

@@ -16,6 +16,8 @@
 // every finite curve of duration ≤ t_p that has a value at V, a DC or longer-than-longest reading by every
 // finite curve; where that lowers it (beyond 1e-12 relative, so that rounding alone never flags), flag
 // `capped-by-shorter-curve`. Flags of the curves read only for the cap are not raised: they do not make the value.
+//
+// Long file: the reader's hot loop and the bookkeeping it relies on (remembered segments, flags) belong together.
 import type { PreparedCurve, PreparedCurveSet } from "./curve-set";
 import { type FosterTerm, zth } from "./foster";
 import { type BetweenCurves, FLAGS, type Flag } from "./types";

@@ -12,6 +12,8 @@
 // Decisions: at least 4 points, t strictly increasing, t and Z finite and > 0; at most 3–6 terms (default 4) and
 // never more than half the number of points (each term has two parameters). The result may have fewer terms when
 // the data holds fewer time constants. Cost: O(grid² · points) for NNLS, small for the rest.
+//
+// Long file: one numerical method (NNLS, merging, refinement) whose steps share their working arrays.
 import { type FosterTerm, zth } from "./foster";
 
 /** One point of a thermal impedance curve: t in s, Z_th in K/W. */

@@ -23,6 +23,9 @@
 // than min τ_i/8 (a dense capture) is tested at its two ends only. Every sign change found is refined by bisection
 // to 1e-12 of the segment. Segments are refined only where r could exceed the best rise known: on the segment,
 // r(s) ≤ r(0) + s·Σ_i max(q_i(0), q_i(h)) since each q_i is monotone.
+//
+// Long file: the exact update, its fast paths (one pass over v·i, the trace, the largest rise between samples)
+// and their shared step arithmetic must stay bit-for-bit alike, so they are kept side by side.
 
 import type { FosterTerm } from "./foster";
 
