@@ -8,6 +8,9 @@
 // - every curve holds at least one point, a Foster array at least one term; a request may hold no pulses;
 // - the reference case temperature must lie below Tj,max (else no derating factor exists);
 // - two curve widths within 1e-9 relative are the same width (the tolerance of METHODS.md §3).
+//
+// Long file: the contract's whole request shape and its cross-field rules, kept together so that one read shows
+// everything a request must satisfy.
 import { z } from "zod";
 import { SANITY_LIMITS, type SaneQuantity, saneValue } from "./sanity";
 import type { CheckRequest } from "./types";
