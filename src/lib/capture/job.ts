@@ -1,10 +1,10 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { captures, projects } from "@/db/schema";
 import { AppError } from "@/lib/errors";
-import { CAPTURE_QUEUE, jobQueue, RECHECK_QUEUE } from "@/lib/jobs/boss";
+import { CAPTURE_QUEUE, GAVE_UP_QUEUE, jobQueue, RECHECK_QUEUE } from "@/lib/jobs/boss";
 import { logError } from "@/lib/log";
 import { notifyFailingEvidence } from "@/lib/projects/notify";
 import { loadCandidates } from "@/lib/projects/projects";
@@ -203,6 +203,28 @@ export async function recheckCapture(storage: Storage, captureId: string): Promi
   return true;
 }
 
+/** Said on a capture whose job failed for good without saying why (its worker died on every try). */
+export const GAVE_UP_WORDS =
+  "Processing stopped without finishing on every try (the worker was stopped or ran out of time or memory). Upload the file again; if it fails again, the server's log says more.";
+/** Said on a processed capture whose results could not be recomputed after a change. */
+export const RECHECK_GAVE_UP_WORDS =
+  "Its results could not be recomputed after the last change (the worker stopped on every try); they are not shown as current.";
+
+/**
+ * A capture job that the queue gave up on (GAVE_UP_QUEUE): a capture still waiting is marked failed, a processed one
+ * whose recheck gave up says so, unless a handler already said why. Safe to run twice.
+ */
+export async function captureGaveUp(captureId: string): Promise<void> {
+  await db
+    .update(captures)
+    .set({ status: "failed", error: GAVE_UP_WORDS })
+    .where(and(eq(captures.id, captureId), inArray(captures.status, ["queued", "processing"])));
+  await db
+    .update(captures)
+    .set({ error: RECHECK_GAVE_UP_WORDS })
+    .where(and(eq(captures.id, captureId), eq(captures.status, "done"), isNull(captures.error)));
+}
+
 /** Queues a registered capture's processing; answers the job's id. */
 export async function queueCapture(captureId: string): Promise<string | null> {
   return (await jobQueue()).send(CAPTURE_QUEUE, { captureId });
@@ -226,6 +248,9 @@ export async function startCaptureWorkers(storage: () => Storage, concurrency: n
   if (concurrency < 1) return;
   const boss = await jobQueue();
   const options = { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: 0.5 } as const;
+  await boss.work<{ captureId: string }>(GAVE_UP_QUEUE, options, async ([job]) => {
+    await captureGaveUp(job.data.captureId);
+  });
   for (let k = 0; k < concurrency; k++) {
     await boss.work<{ captureId: string }>(CAPTURE_QUEUE, options, async ([job]) => {
       await processCaptureJob(storage(), job.data.captureId, { attempt: job });

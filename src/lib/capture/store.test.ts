@@ -20,7 +20,7 @@ import {
   projects,
 } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
-import { RETRY_LIMIT } from "@/lib/jobs/boss";
+import { CAPTURE_QUEUE, jobQueue, RETRY_LIMIT } from "@/lib/jobs/boss";
 import { presignUpload } from "@/lib/library/curve-upload";
 import { checkProject } from "@/lib/projects/check";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
@@ -35,7 +35,7 @@ import {
   testDb,
 } from "@/test/fixtures";
 import { requireEnv, waitForMail } from "@/test/services";
-import { processCaptureJob, recheckCapture, startCaptureWorkers } from "./job";
+import { GAVE_UP_WORDS, processCaptureJob, recheckCapture, startCaptureWorkers } from "./job";
 import { captureMappingSchema, previewCaptureText } from "./parse";
 import { parseCaptureText } from "./parse-stream";
 import { processCapture } from "./process";
@@ -542,6 +542,25 @@ describe("capture routes", () => {
 });
 
 describe("the job queue", () => {
+  it("marks a capture failed, not processing for ever, when its job fails for good without a word", async () => {
+    const boss = await jobQueue();
+    const { res } = await register(inrushCsv(300), { name: "worker lost" });
+    const { capture } = await res.json();
+    // No worker runs yet in this process: take every waiting job, as workers that then die would.
+    await boss.fetch(CAPTURE_QUEUE, { batchSize: 100 });
+    await db.update(captures).set({ status: "processing" }).where(eq(captures.id, capture.id));
+    // Its last try, taken and lost: the queue fails it (as it does when the job expires) and gives it up.
+    const last = await boss.send(CAPTURE_QUEUE, { captureId: capture.id }, { retryLimit: 0 });
+    const [taken] = await boss.fetch(CAPTURE_QUEUE);
+    expect(taken.id).toBe(last);
+    await boss.fail(CAPTURE_QUEUE, taken.id, { message: "worker lost" });
+    await startCaptureWorkers(() => storage, 1);
+    await expect
+      .poll(async () => (await detail(capture.id)).capture.status, { timeout: 15_000, interval: 200 })
+      .toBe("failed");
+    expect((await detail(capture.id)).capture.error).toBe(GAVE_UP_WORDS);
+  });
+
   it("a worker of the queue processes a registered capture", async () => {
     await startCaptureWorkers(() => storage, 1);
     const { res } = await register(inrushCsv(300), { name: "through the queue" });

@@ -13,13 +13,22 @@ export const CAPTURE_QUEUE = "capture-process";
 /** Recompute a capture's stored results whose inputs changed (a candidate added, a part or the project edited). */
 export const RECHECK_QUEUE = "capture-recheck";
 
+/**
+ * Where the queue puts a capture job that failed for good, however it failed: the handler threw on its last try, or
+ * its worker died (killed, out of memory) on every try and the job expired. Its worker marks the capture failed, so
+ * that no capture waits in "processing" for ever.
+ */
+export const GAVE_UP_QUEUE = "capture-gave-up";
+
 /** Tries per job: the first, then `RETRY_LIMIT` retries 2 s, 4 s… apart; then the capture is marked failed. */
 export const RETRY_LIMIT = 2;
 
+// The dead-letter queue first: the others refer to it.
 const queues: PgBoss.Queue[] = [
-  { name: CAPTURE_QUEUE, policy: "standard" as const },
+  { name: GAVE_UP_QUEUE, policy: "standard" as const },
+  { name: CAPTURE_QUEUE, policy: "standard" as const, deadLetter: GAVE_UP_QUEUE },
   // One waiting and one running recheck per capture at most (its id is the singleton key).
-  { name: RECHECK_QUEUE, policy: "stately" as const },
+  { name: RECHECK_QUEUE, policy: "stately" as const, deadLetter: GAVE_UP_QUEUE },
 ].map((q) => ({
   ...q,
   retryLimit: RETRY_LIMIT,
@@ -43,7 +52,12 @@ export async function createBoss(url: string, { supervise = true } = {}): Promis
   boss.on("error", (error) => logError("job queue", error));
   await boss.start();
   for (const queue of queues) {
-    if (await boss.getQueue(queue.name)) continue;
+    const existing = await boss.getQueue(queue.name);
+    if (existing) {
+      // A queue made before it had a dead-letter queue gains one.
+      if (existing.deadLetter !== queue.deadLetter) await boss.updateQueue(queue.name, queue);
+      continue;
+    }
     // Two processes starting at once may both try: the loser's duplicate-key error is harmless.
     await boss.createQueue(queue.name, queue).catch(async (error) => {
       if (!(await boss.getQueue(queue.name))) throw error;
