@@ -4,7 +4,8 @@ import { connect, createServer, type Server, type Socket } from "node:net";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { GuardedHandler } from "@/lib/auth/guard";
 
-const appUrl = "http://127.0.0.1:3100";
+// The app's address as the test profile sets it (the Origin check compares against it).
+const appUrl = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const logged: string[] = [];
 let handlers: { projects: GuardedHandler; health: GuardedHandler; signIn: GuardedHandler };
 let downPort = 0;
