@@ -153,6 +153,9 @@ start_app() {
   local api_processes=${PF_API_PROCESSES:-$(nproc)} api_inflight=${PF_API_INFLIGHT:-64} api_servers=""
   local conf_dir="$DATA_DIR/nginx"
   mkdir -p "$conf_dir/tmp"
+  # nginx appends the address it was reached from to X-Forwarded-For: one trusted hop, so sign-in throttling also
+  # counts per client address. Not in the test profile, whose browser tests all come from one address.
+  if [ "$PROFILE" = dev ]; then export TRUSTED_PROXY_HOPS=${TRUSTED_PROXY_HOPS:-1}; fi
   for k in $(seq 1 "$api_processes"); do
     port=$((APP_BACKEND_PORT + 20 + k))
     (cd "$ROOT" && PORT=$port HOST=127.0.0.1 exec node --conditions=react-server --import tsx src/server/api-main.ts) \
