@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, memberships } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { whenListening } from "@/lib/auth/token-auth";
+import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
   call,
@@ -21,30 +22,7 @@ import { createApiServer } from "./api-server";
 
 const h = (handler: unknown) => handler as GuardedHandler;
 
-// Two pulses against one curve: 20 V × 10 A for 1 ms sits on the 1 ms line between (10 V, 40 A) and (40 V, 10 A)
-// (log-log: at 20 V the line gives 40·(20/10)^(log(10/40)/log(40/10)) = 20 A), 60 V is past V_DS,max.
-const body = {
-  part: {
-    vdsMax: 80,
-    tjMax: 175,
-    soa: {
-      curves: [
-        {
-          duration: 1e-3,
-          points: [
-            [10, 40],
-            [40, 10],
-          ],
-        },
-      ],
-    },
-  },
-  caseTemp: 25,
-  pulses: [
-    { id: "inside", kind: "rect", v: 20, i: 10, duration: 1e-3 },
-    { id: "over-voltage", kind: "rect", v: 90, i: 1, duration: 1e-3 },
-  ],
-};
+const body = smallCheckRequest([insidePulse, overVoltagePulse]);
 
 let ws: TestWorkspace;
 let server: ReturnType<typeof createApiServer>;
@@ -133,7 +111,7 @@ describe("the lean API server", () => {
     const token = await newToken(user.id);
     const answers = await Promise.all(
       Array.from({ length: 64 }, async (_, k) => {
-        const own = { ...body, pulses: [{ id: `p${k}`, kind: "rect", v: 20, i: 10, duration: 1e-3 }] };
+        const own = smallCheckRequest([{ ...insidePulse, id: `p${k}` }]);
         const res = await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(own));
         return { status: res.status, id: (await res.json()).results[0].id };
       }),

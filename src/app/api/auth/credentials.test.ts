@@ -4,6 +4,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, passwordResets, sessions } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
+import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
   call,
@@ -34,25 +35,7 @@ afterAll(async () => {
 });
 
 // The smallest valid check contract (METHODS.md §9): one curve, one pulse.
-const checkRequest = {
-  part: {
-    vdsMax: 80,
-    tjMax: 175,
-    soa: {
-      curves: [
-        {
-          duration: 1e-3,
-          points: [
-            [10, 40],
-            [40, 10],
-          ],
-        },
-      ],
-    },
-  },
-  caseTemp: 25,
-  pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
-};
+const checkRequest = smallCheckRequest();
 
 async function resetLinks(email: string, count: number): Promise<string[]> {
   const tokens: string[] = [];

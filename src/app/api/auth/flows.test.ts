@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, invitations, memberships, sessions, users } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
+import { smallCheckRequest } from "@/test/check-request";
 import {
   call,
   cookiePair,
@@ -286,25 +287,7 @@ describe("password reset", () => {
 });
 
 describe("API tokens", () => {
-  const request = {
-    part: {
-      vdsMax: 80,
-      tjMax: 175,
-      soa: {
-        curves: [
-          {
-            duration: 1e-3,
-            points: [
-              [10, 40],
-              [40, 10],
-            ],
-          },
-        ],
-      },
-    },
-    caseTemp: 25,
-    pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
-  };
+  const request = smallCheckRequest();
 
   it("authenticates POST /api/v1/check with a bearer token until it is revoked", async () => {
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);

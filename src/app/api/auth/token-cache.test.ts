@@ -8,6 +8,7 @@ import { apiTokens, memberships, projects } from "@/db/schema";
 import { AUTH_CACHE_TTL_MS } from "@/lib/auth/auth-cache";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { authCache, settleTokenWrites, whenListening } from "@/lib/auth/token-auth";
+import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
   call,
@@ -23,25 +24,7 @@ import { POST as postMeasurements } from "../v1/projects/[id]/measurements/route
 
 const h = (handler: unknown) => handler as GuardedHandler;
 
-const checkRequest = {
-  part: {
-    vdsMax: 80,
-    tjMax: 175,
-    soa: {
-      curves: [
-        {
-          duration: 1e-3,
-          points: [
-            [10, 40],
-            [40, 10],
-          ],
-        },
-      ],
-    },
-  },
-  caseTemp: 25,
-  pulses: [{ id: "p1", kind: "rect", v: 20, i: 10, duration: 1e-3 }],
-};
+const checkRequest = smallCheckRequest();
 
 let ws: TestWorkspace;
 let other: TestWorkspace;
