@@ -9,15 +9,9 @@
 //   2 M samples is an error naming the row (1-based line of the file) and column;
 // - the file must be UTF-8 (or ASCII) text: NUL bytes or a UTF-16 byte-order mark are refused.
 import { columnLetter, csvIssue } from "@/lib/csv/issues";
-import type { Delimiter } from "@/lib/csv/text";
+import { type Delimiter, splitLine } from "@/lib/csv/text";
 import { AppError } from "@/lib/errors";
-import {
-  type CaptureMapping,
-  MAX_CAPTURE_SAMPLES,
-  PREVIEW_BYTES,
-  previewCaptureText,
-  splitCells,
-} from "./parse";
+import { type CaptureMapping, MAX_CAPTURE_SAMPLES, PREVIEW_BYTES, previewCaptureText } from "./parse";
 
 export interface CaptureSamples {
   /** Times in s, strictly increasing. */
@@ -282,7 +276,7 @@ class StreamingCaptureParser implements CaptureParser {
       if (lineIndex < this.skip) {
         while (buf[p] !== nl) p++;
         if (lineIndex === this.headerLine) {
-          this.labels = splitCells(new TextDecoder().decode(buf.subarray(start, p)), this.delimiter);
+          this.labels = splitLine(new TextDecoder().decode(buf.subarray(start, p)), this.delimiter);
         }
         p++;
         continue;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { captureLines, captureMappingSchema, isNumericCell, previewCaptureText, splitCells } from "./parse";
+import { captureLines, captureMappingSchema, isNumericCell, previewCaptureText } from "./parse";
 
 const keysightLike = [
   "Model,PF-4054 (simulated)",
@@ -171,6 +171,20 @@ describe("previewCaptureText", () => {
     expect(preview.mapping).toMatchObject({ voltage: 1, vScale: 1 });
   });
 
+  it("guesses the separator by the uploads' rule: ';' in half the lines wins over the preamble's commas", () => {
+    const text = [
+      "Model,PF-4054",
+      "Date,2026-01-02",
+      "Time (s);CH1 (V);CH2 (A)",
+      "0;48,0;0,5",
+      "1e-6;47,9;0,6",
+      "2e-6;47,8;0,7",
+    ].join("\n");
+    const preview = previewCaptureText(text, { complete: true });
+    expect(preview.delimiter).toBe(";");
+    expect(preview.mapping).toMatchObject({ skipRows: 2, header: true, time: 0, voltage: 1, current: 2 });
+  });
+
   it("reads a byte-order mark and quoted header cells", () => {
     const text = '\uFEFF"Time (s)","CH1 (V)","CH2 (A)"\n"0","1.5","2"\n"1e-6","1.5","2.5"\n';
     const preview = previewCaptureText(text, { complete: true });
@@ -181,11 +195,6 @@ describe("previewCaptureText", () => {
 });
 
 describe("cells and lines", () => {
-  it("splitCells groups quoted separators and unescapes doubled quotes", () => {
-    expect(splitCells('a, "b,c" ,"say ""hi"""', ",")).toEqual(["a", "b,c", 'say "hi"']);
-    expect(splitCells("1;2 ; 3", ";")).toEqual(["1", "2", "3"]);
-  });
-
   it("isNumericCell takes a decimal comma only where ',' does not separate", () => {
     expect(isNumericCell("1,5", ";")).toBe(true);
     expect(isNumericCell("1,5", ",")).toBe(false);

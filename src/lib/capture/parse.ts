@@ -1,7 +1,8 @@
 // Scope waveform CSVs: the column mapping a capture is read with, and the preview the browser's column picker
 // shows from the first ~64 KB of the file. Pure: runs in the browser and on the server alike. Decisions:
-// - the separator is the one of tab, ";" and "," that gives the most numeric cells on lines with two or more of
-//   them (ties: tab, then ";", then ","); with ";" or tab, a decimal comma is read as a decimal point;
+// - lines are tokenised and the separator guessed by the app's one CSV reader (src/lib/csv/text.ts: papaparse; a
+//   tab if half the first 50 non-blank lines hold one, else ";" by the same rule, else ","); with ";" or tab, a
+//   decimal comma is read as a decimal point;
 // - the data block is the longest run of lines with the same set of numeric columns (two or more), extended back
 //   over lines numeric in at least those columns (instruments that print settings beside the first samples) and
 //   over rows of the same width numeric in half of them or more (a damaged cell is reported, not skipped);
@@ -12,7 +13,7 @@
 //   included, the way an editor numbers them; rows in messages are 1-based.
 import { z } from "zod";
 import { splitHeader, unitScale } from "@/lib/csv/header";
-import type { Delimiter } from "@/lib/csv/text";
+import { type Delimiter, guessDelimiter, splitLine } from "@/lib/csv/text";
 
 /** Most samples a capture may hold: 2 M (48 MB as Float64 t, v, i). */
 export const MAX_CAPTURE_SAMPLES = 2_000_000;
@@ -86,30 +87,6 @@ export interface CapturePreview {
   problems: string[];
 }
 
-/** Splits one line into trimmed cells; double quotes group a cell ("a,b") and "" inside them is a quote. */
-export function splitCells(line: string, delimiter: Delimiter): string[] {
-  if (!line.includes('"')) return line.split(delimiter).map((c) => c.trim());
-  const cells: string[] = [];
-  let cell = "";
-  let quoted = false;
-  for (let k = 0; k < line.length; k++) {
-    const c = line[k];
-    if (quoted) {
-      if (c === '"' && line[k + 1] === '"') {
-        cell += '"';
-        k++;
-      } else if (c === '"') quoted = false;
-      else cell += c;
-    } else if (c === '"') quoted = true;
-    else if (c === delimiter) {
-      cells.push(cell.trim());
-      cell = "";
-    } else cell += c;
-  }
-  cells.push(cell.trim());
-  return cells;
-}
-
 const NUMBER_POINT = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 const NUMBER_ANY = /^[+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+-]?\d+)?$/;
 
@@ -135,28 +112,13 @@ interface LineInfo {
 function describeLines(lines: string[], delimiter: Delimiter): LineInfo[] {
   return lines.map((line) => {
     const blank = line.trim() === "";
-    const cells = blank ? [] : splitCells(line, delimiter);
+    const cells = blank ? [] : splitLine(line, delimiter);
     const numeric: number[] = [];
     cells.forEach((cell, k) => {
       if (isNumericCell(cell, delimiter)) numeric.push(k);
     });
     return { cells, blank, numeric };
   });
-}
-
-function chooseDelimiter(lines: string[]): Delimiter {
-  let best: Delimiter = "\t";
-  let bestScore = -1;
-  for (const delimiter of ["\t", ";", ","] as const) {
-    let score = 0;
-    for (const info of describeLines(lines, delimiter))
-      if (info.numeric.length >= 2) score += info.numeric.length;
-    if (score > bestScore) {
-      best = delimiter;
-      bestScore = score;
-    }
-  }
-  return best;
 }
 
 /** First line of the data block and the numeric columns it shares, or null. */
@@ -255,7 +217,7 @@ function assignRoles(columns: CaptureColumn[]): Record<ColumnRole, CaptureColumn
  */
 export function previewCaptureText(headText: string, options: { complete?: boolean } = {}): CapturePreview {
   const lines = captureLines(headText, options.complete ?? false);
-  const delimiter = chooseDelimiter(lines.slice(0, 2000));
+  const delimiter = guessDelimiter(lines);
   const info = describeLines(lines, delimiter);
   const problems: string[] = [];
   const block = findDataBlock(info);

@@ -3,7 +3,15 @@ import { describe, expect, test } from "vitest";
 import { decimalPoint, readNumber, readWidth } from "./cell";
 import { quantityOfName, splitHeader, unitScale } from "./header";
 import { columnLetter, createIssueList, csvIssue } from "./issues";
-import { detectDelimiter, normaliseText, readTable, textProblem, utf8ByteLength } from "./text";
+import {
+  detectDelimiter,
+  guessDelimiter,
+  normaliseText,
+  readTable,
+  splitLine,
+  textProblem,
+  utf8ByteLength,
+} from "./text";
 
 describe("utf8ByteLength", () => {
   test("agrees with the platform's UTF-8 encoder on any string", () => {
@@ -43,6 +51,22 @@ describe("normaliseText and detectDelimiter", () => {
     ["a;b\n\n\n1;2\n", ";"],
   ])("detects the separator of %j", (text, delimiter) => {
     expect(detectDelimiter(text)).toBe(delimiter);
+  });
+
+  test("guessDelimiter looks at the first 50 non-blank lines only", () => {
+    const lines = [...Array.from({ length: 50 }, () => "a,b"), ...Array.from({ length: 60 }, () => "1;2")];
+    expect(guessDelimiter(lines)).toBe(",");
+    expect(guessDelimiter(["", "  ", "1;2", "a,b"])).toBe(";");
+    expect(guessDelimiter(["1;2", "a,b", "c,d"])).toBe(",");
+  });
+
+  test("splitLine groups quoted separators, unescapes doubled quotes and trims (RFC 4180 quoting)", () => {
+    expect(splitLine('a,"b,c" ,"say ""hi"""', ",")).toEqual(["a", "b,c", 'say "hi"']);
+    expect(splitLine("1;2 ; 3", ";")).toEqual(["1", "2", "3"]);
+    expect(splitLine("1,5\t2", "\t")).toEqual(["1,5", "2"]);
+    expect(splitLine("   ", ",")).toEqual([]);
+    // A quote opens a quoted cell only at the cell's start, as in every uploaded file.
+    expect(splitLine('a, "b,c"', ",")).toEqual(["a", '"b', 'c"']);
   });
 
   test("readTable trims cells and turns blank rows into empty arrays, keeping their place", () => {

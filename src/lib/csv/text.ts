@@ -1,3 +1,6 @@
+// The app's one CSV reader: every upload (curve sets, measurements, Z_th, transfer curves), the capture preview and
+// the rows pasted into the thermal model editor are tokenised here, by papaparse, with one separator rule. Only the
+// capture stream parser (src/lib/capture/parse-stream.ts) scans bytes itself, for speed it measures in its header.
 // Turning an uploaded, already decoded CSV into a table of trimmed cells. Decisions:
 // - the size limit is checked on the UTF-8 byte length, as stored, not on the string length;
 // - text only: a NUL anywhere, or more than 1 % control or undecodable (U+FFFD) characters in the first 64 Ki
@@ -5,6 +8,7 @@
 // - a byte-order mark is dropped and CRLF or CR line ends become LF;
 // - the separator is a tab if at least half of the first 50 non-blank lines hold one, else a semicolon by the same
 //   rule, else a comma (files with decimal commas use ";" or tab, so a comma-separated file has no decimal commas);
+//   `guessDelimiter` is that rule, for whole texts and for lists of lines alike;
 // - cells are tokenised by papaparse (quotes, embedded separators), then trimmed; row k of the table is row k + 1
 //   in a spreadsheet, blank rows included.
 import Papa from "papaparse";
@@ -66,17 +70,36 @@ export function normaliseText(text: string): string {
   return text.replace(/^\uFEFF/, "").replace(/\r\n?/g, "\n");
 }
 
-/** The separator of a normalised text (see the rule in the header). */
-export function detectDelimiter(text: string): Delimiter {
-  const lines = text
-    .split("\n", DETECT_LINES * 20)
-    .filter((line) => line.trim() !== "")
-    .slice(0, DETECT_LINES);
+/**
+ * The separator of some lines, the app's one rule: a tab if at least half of the first 50 non-blank lines hold
+ * one, else a semicolon by the same rule, else a comma.
+ */
+export function guessDelimiter(lines: readonly string[]): Delimiter {
+  const sample: string[] = [];
+  for (const line of lines) {
+    if (sample.length === DETECT_LINES) break;
+    if (line.trim() !== "") sample.push(line);
+  }
   const share = (mark: string) =>
-    lines.filter((line) => line.includes(mark)).length / Math.max(1, lines.length);
+    sample.filter((line) => line.includes(mark)).length / Math.max(1, sample.length);
   if (share("\t") >= 0.5) return "\t";
   if (share(";") >= 0.5) return ";";
   return ",";
+}
+
+/** The separator of a normalised text (see `guessDelimiter`). */
+export function detectDelimiter(text: string): Delimiter {
+  return guessDelimiter(text.split("\n", DETECT_LINES * 20));
+}
+
+/**
+ * The trimmed cells of one line (no line end in it), tokenised like a whole file: double quotes group a cell
+ * ("a,b") and "" inside them is a quote. An unclosed quote runs to the end of the line. A blank line has no cells. (Without a quote in the line papaparse splits it in its fast mode.)
+ */
+export function splitLine(line: string, delimiter: Delimiter): string[] {
+  if (line.trim() === "") return [];
+  const parsed = Papa.parse<string[]>(line, { delimiter, newline: "\n", header: false });
+  return (parsed.data[0] ?? []).map((cell) => cell.trim());
 }
 
 export interface Table {
