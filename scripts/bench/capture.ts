@@ -19,6 +19,7 @@ import {
 import { checkPulse, prepareCheck } from "../../src/lib/soa/check";
 import type { FosterTerm } from "../../src/lib/soa/foster";
 import type { PartLimits, WaveformPulse } from "../../src/lib/soa/types";
+import { comparePapaparse } from "./capture-papaparse";
 
 const SAMPLES = 2_000_000;
 const STEP = 50e-9;
@@ -255,6 +256,8 @@ export async function runCaptureBench(): Promise<void> {
       `  parse from a string held whole ${seconds(textTime)}: ${(SAMPLES / textTime / 1e3).toFixed(1)} M samples/s; ` +
         `maxRSS then ${megabytes(process.resourceUsage().maxRSS * 1024)}`,
     );
+    // Why the stream keeps its own scanner: papaparse on the same file.
+    await comparePapaparse(file, size, mapping);
   } finally {
     rmSync(file, { force: true });
   }
