@@ -1,18 +1,10 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
-import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import { clampTurnOff, unclampedTurnOff } from "@/lib/soa/builders";
-import {
-  BuilderLayout,
-  type BuilderProps,
-  type BuildResult,
-  PulseSummary,
-  saveBuilt,
-} from "./builder-layout";
+import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { clampForm } from "./builder-schemas";
 import { TurnOffChoice } from "./turn-off-choice";
 
@@ -20,7 +12,7 @@ type Values = z.input<typeof clampForm>;
 
 type Input = z.output<typeof clampForm>;
 
-function build(input: Input): (BuildResult & { figures: object }) | { ok: false; reason: string } {
+function build(input: Input): Built {
   const delay = input.delay !== undefined ? { delay: input.delay } : {};
   if (input.clamp === "none") {
     const circuit = {
@@ -33,17 +25,16 @@ function build(input: Input): (BuildResult & { figures: object }) | { ok: false;
     if (!built.ok) return built;
     const pulse = built.pulses[0];
     if (pulse.kind !== "avalanche") return { ok: false, reason: "the builder made no avalanche pulse" };
-    return {
-      ok: true,
-      figures: built.figures,
-      pulse: {
+    return builtCase(
+      {
         kind: "avalanche",
         supply: pulse.supply,
         current: pulse.current,
         inductance: pulse.inductance,
       },
-      origin: { input: circuit, figures: built.figures },
-    };
+      circuit,
+      built.figures,
+    );
   }
   const circuit = {
     inductance: input.inductance,
@@ -56,12 +47,11 @@ function build(input: Input): (BuildResult & { figures: object }) | { ok: false;
   if (!built.ok) return built;
   const pulse = built.pulses[0];
   if (pulse.kind !== "triangle") return { ok: false, reason: "the builder made no triangle" };
-  return {
-    ok: true,
-    figures: built.figures,
-    pulse: { kind: "triangle", v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
-    origin: { input: circuit, figures: built.figures },
-  };
+  return builtCase(
+    { kind: "triangle", v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
+    circuit,
+    built.figures,
+  );
 }
 
 /**
@@ -69,15 +59,8 @@ function build(input: Input): (BuildResult & { figures: object }) | { ok: false;
  * triangle) or with no clamp below breakdown (an avalanche pulse, METHODS.md §13, checked per candidate at its V_BR).
  */
 export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurrent?: string }) {
-  const {
-    register,
-    handleSubmit,
-    setError,
-    control,
-    formState: { errors, isSubmitting },
-  } = useForm<Values, unknown, Input>({
-    resolver: zodResolver(clampForm),
-    mode: "onTouched",
+  const { form, values, frame } = useBuilderForm<Values, Input>({
+    schema: clampForm,
     defaultValues: {
       name: "Short at turn-off, clamped",
       clamp: "clamp",
@@ -87,14 +70,11 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
       clampVoltage: "",
       delay: "",
     },
+    build,
+    origin: (input) => (input.clamp === "none" ? "unclamped" : "clamp"),
+    create,
+    nameId: "clamp-name",
   });
-  const values = useWatch({ control });
-  const parsed = clampForm.safeParse(values);
-  const built = parsed.success ? build(parsed.data) : null;
-
-  const onSubmit = handleSubmit((input) =>
-    saveBuilt(input.clamp === "none" ? "unclamped" : "clamp", input.name, build(input), create, setError),
-  );
   const unclamped = values.clamp === "none";
 
   return (
@@ -118,78 +98,57 @@ export function ClampBuilder({ create, tripCurrent }: BuilderProps & { tripCurre
         )
       }
       fields={
-        <div className="grid gap-4 sm:grid-cols-3">
-          <TurnOffChoice registration={register("clamp")} className="sm:col-span-3" />
-          <UnitField
-            id="clamp-l"
-            label="Loop inductance L"
-            unit="H"
-            placeholder="1µ"
-            error={errors.inductance?.message}
-            {...register("inductance")}
-          />
-          <UnitField
-            id="clamp-trip"
-            label={<Sym main="I" sub="trip,max" />}
-            unit="A"
-            inputMode="decimal"
-            hint="From the trip window"
-            error={errors.tripCurrent?.message}
-            {...register("tripCurrent")}
-          />
-          <UnitField
-            id="clamp-delay"
-            label={
-              <>
-                Turn-off delay <Sym main="t" sub="delay" />
-              </>
-            }
-            unit="s"
-            placeholder="0"
-            hint="Optional"
-            error={errors.delay?.message}
-            {...register("delay")}
-          />
-          <UnitField
-            id="clamp-bus"
-            label={<Sym main="V" sub="bus" />}
-            unit="V"
-            inputMode="decimal"
-            error={errors.busVoltage?.message}
-            {...register("busVoltage")}
-          />
-          {unclamped ? null : (
-            <UnitField
-              id="clamp-vcl"
-              label={
+        <BuilderFields
+          form={form}
+          className="grid gap-4 sm:grid-cols-3"
+          items={[
+            <TurnOffChoice key="clamp" registration={form.register("clamp")} className="sm:col-span-3" />,
+            { name: "inductance", id: "clamp-l", label: "Loop inductance L", unit: "H", placeholder: "1µ" },
+            {
+              name: "tripCurrent",
+              id: "clamp-trip",
+              label: <Sym main="I" sub="trip,max" />,
+              unit: "A",
+              inputMode: "decimal",
+              hint: "From the trip window",
+            },
+            {
+              name: "delay",
+              id: "clamp-delay",
+              label: (
                 <>
-                  Clamp <Sym main="V" sub="cl" />
+                  Turn-off delay <Sym main="t" sub="delay" />
                 </>
-              }
-              unit="V"
-              inputMode="decimal"
-              hint="Above the bus voltage"
-              error={errors.clampVoltage?.message}
-              {...register("clampVoltage")}
-            />
-          )}
-        </div>
-      }
-      figures={built?.ok ? built.figures : null}
-      reason={built && !built.ok ? built.reason : null}
-      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
-      footer={
-        <UnitField
-          id="clamp-name"
-          label="Fault case name"
-          className="max-w-sm"
-          error={errors.name?.message}
-          {...register("name")}
+              ),
+              unit: "s",
+              placeholder: "0",
+              hint: "Optional",
+            },
+            {
+              name: "busVoltage",
+              id: "clamp-bus",
+              label: <Sym main="V" sub="bus" />,
+              unit: "V",
+              inputMode: "decimal",
+            },
+            unclamped
+              ? null
+              : {
+                  name: "clampVoltage",
+                  id: "clamp-vcl",
+                  label: (
+                    <>
+                      Clamp <Sym main="V" sub="cl" />
+                    </>
+                  ),
+                  unit: "V",
+                  inputMode: "decimal",
+                  hint: "Above the bus voltage",
+                },
+          ]}
         />
       }
-      error={errors.root?.server?.message}
-      pending={isSubmitting}
-      onSubmit={onSubmit}
+      {...frame}
     />
   );
 }

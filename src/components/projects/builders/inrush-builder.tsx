@@ -1,12 +1,10 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
-import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import { inrushPulses } from "@/lib/soa/builders";
-import { BuilderLayout, type BuilderProps, PulseSummary, saveBuilt } from "./builder-layout";
+import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { inrushForm } from "./builder-schemas";
 
 type Values = z.input<typeof inrushForm>;
@@ -28,19 +26,18 @@ type Input = z.output<typeof inrushForm>;
  * the same energy at the same peak power (V*, I* at the peak): a rectangle E/P_peak wide, or a falling triangle
  * twice that. The curves read both exactly as they read the waveform itself (METHODS.md §6).
  */
-export function buildInrush(input: Input) {
+export function buildInrush(input: Input): Built {
   const { name: _name, equivalent, ...circuit } = input;
   const built = inrushPulses({ ...circuit, samples: 3 });
-  if (!built.ok) return { ok: false as const, reason: built.reason };
+  if (!built.ok) return { ok: false, reason: built.reason };
   const { figures } = built;
   const pulse = built.pulses[0];
   if (pulse.kind === "triangle") {
-    return {
-      ok: true as const,
+    return builtCase(
+      { kind: "triangle" as const, v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
+      circuit,
       figures,
-      pulse: { kind: "triangle" as const, v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
-      origin: { input: circuit, figures },
-    };
+    );
   }
   const t = figures.peakPowerTime;
   const v = circuit.supply - circuit.slew * t;
@@ -56,25 +53,15 @@ export function buildInrush(input: Input) {
 }
 
 export function InrushBuilder({ create }: BuilderProps) {
-  const {
-    register,
-    handleSubmit,
-    setError,
-    control,
-    formState: { errors, isSubmitting },
-  } = useForm<Values, unknown, Input>({
-    resolver: zodResolver(inrushForm),
+  const { form, values, frame } = useBuilderForm<Values, Input>({
+    schema: inrushForm,
     defaultValues: defaults,
-    mode: "onTouched",
+    build: buildInrush,
+    origin: "inrush",
+    create,
+    nameId: "inrush-name",
   });
-  const values = useWatch({ control });
-  const parsed = inrushForm.safeParse(values);
-  const built = parsed.success ? buildInrush(parsed.data) : null;
   const withLoad = String(values.load ?? "").trim() !== "";
-
-  const onSubmit = handleSubmit((input) =>
-    saveBuilt("inrush", input.name, buildInrush(input), create, setError),
-  );
 
   return (
     <BuilderLayout
@@ -88,100 +75,89 @@ export function InrushBuilder({ create }: BuilderProps) {
         </>
       }
       fields={
-        <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
-          <UnitField
-            id="inrush-supply"
-            label={
-              <>
-                Supply <Sym main="V" sub="in" />
-              </>
-            }
-            unit="V"
-            inputMode="decimal"
-            placeholder="48"
-            error={errors.supply?.message}
-            {...register("supply")}
-          />
-          <UnitField
-            id="inrush-capacitance"
-            label={
-              <>
-                Load capacitance <Sym main="C" sub="L" />
-              </>
-            }
-            unit="F"
-            placeholder="1.5m"
-            error={errors.capacitance?.message}
-            {...register("capacitance")}
-          />
-          <UnitField
-            id="inrush-slew"
-            label="Slew rate dV/dt"
-            unit="V/ms"
-            inputMode="decimal"
-            placeholder="1"
-            error={errors.slew?.message}
-            {...register("slew")}
-          />
-          <UnitField
-            id="inrush-load"
-            label={
-              <>
-                Resistive load <Sym main="R" sub="L" />
-              </>
-            }
-            unit="Ω"
-            hint="Optional: present from the start"
-            error={errors.load?.message}
-            {...register("load")}
-          />
-          {withLoad ? (
-            <fieldset className="sm:col-span-2 xl:col-span-4">
-              <legend className="text-sm font-medium">With a load the pulse is a waveform; save it as</legend>
-              <div className="mt-1.5 flex flex-wrap gap-x-6 gap-y-1 text-sm">
-                <label className="inline-flex items-center gap-2">
-                  <input
-                    type="radio"
-                    value="triangle"
-                    {...register("equivalent")}
-                    className="accent-[var(--color-accent)]"
-                  />
-                  an equal-energy falling triangle at the peak power
-                </label>
-                <label className="inline-flex items-center gap-2">
-                  <input
-                    type="radio"
-                    value="rect"
-                    {...register("equivalent")}
-                    className="accent-[var(--color-accent)]"
-                  />
-                  an equal-energy rectangle at the peak power
-                </label>
-              </div>
-              <p className="mt-1 text-xs text-ink-muted">
-                Fault cases are rectangles or triangles, so the waveform is replaced by a pulse with the same
-                energy and the same peak power (at V* and I* of the peak). The SOA curves read either exactly
-                as they read the waveform itself; with a thermal model the triangle is the closer of the two.
-              </p>
-            </fieldset>
-          ) : null}
-        </div>
-      }
-      figures={built?.ok ? built.figures : null}
-      reason={built && !built.ok ? built.reason : null}
-      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
-      footer={
-        <UnitField
-          id="inrush-name"
-          label="Fault case name"
-          className="max-w-sm"
-          error={errors.name?.message}
-          {...register("name")}
+        <BuilderFields
+          form={form}
+          className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4"
+          items={[
+            {
+              name: "supply",
+              id: "inrush-supply",
+              label: (
+                <>
+                  Supply <Sym main="V" sub="in" />
+                </>
+              ),
+              unit: "V",
+              inputMode: "decimal",
+              placeholder: "48",
+            },
+            {
+              name: "capacitance",
+              id: "inrush-capacitance",
+              label: (
+                <>
+                  Load capacitance <Sym main="C" sub="L" />
+                </>
+              ),
+              unit: "F",
+              placeholder: "1.5m",
+            },
+            {
+              name: "slew",
+              id: "inrush-slew",
+              label: "Slew rate dV/dt",
+              unit: "V/ms",
+              inputMode: "decimal",
+              placeholder: "1",
+            },
+            {
+              name: "load",
+              id: "inrush-load",
+              label: (
+                <>
+                  Resistive load <Sym main="R" sub="L" />
+                </>
+              ),
+              unit: "Ω",
+              hint: "Optional: present from the start",
+            },
+            withLoad ? (
+              <fieldset key="equivalent" className="sm:col-span-2 xl:col-span-4">
+                <legend className="text-sm font-medium">
+                  With a load the pulse is a waveform; save it as
+                </legend>
+                <div className="mt-1.5 flex flex-wrap gap-x-6 gap-y-1 text-sm">
+                  <label className="inline-flex items-center gap-2">
+                    <input
+                      type="radio"
+                      value="triangle"
+                      {...form.register("equivalent")}
+                      className="accent-[var(--color-accent)]"
+                    />
+                    an equal-energy falling triangle at the peak power
+                  </label>
+                  <label className="inline-flex items-center gap-2">
+                    <input
+                      type="radio"
+                      value="rect"
+                      {...form.register("equivalent")}
+                      className="accent-[var(--color-accent)]"
+                    />
+                    an equal-energy rectangle at the peak power
+                  </label>
+                </div>
+                <p className="mt-1 text-xs text-ink-muted">
+                  Fault cases are rectangles or triangles, so the waveform is replaced by a pulse with the
+                  same energy and the same peak power (at V* and I* of the peak). The SOA curves read either
+                  exactly as they read the waveform itself; with a thermal model the triangle is the closer of
+                  the two.
+                </p>
+              </fieldset>
+            ) : null,
+          ]}
         />
       }
-      error={errors.root?.server?.message}
-      pending={isSubmitting}
-      onSubmit={onSubmit}
+      {...frame}
     />
   );
 }

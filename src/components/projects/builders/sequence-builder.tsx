@@ -1,10 +1,7 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo } from "react";
-import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { faultSequence } from "@/lib/soa/sequence";
@@ -12,13 +9,8 @@ import { waveformRiseVI } from "@/lib/soa/thermal-waveform";
 import type { ProjectDetail } from "../api";
 import { TraceCharts, type TracePanel, type TraceSeries } from "../captures/trace-charts";
 import { q } from "../format";
-import {
-  BuilderLayout,
-  type BuilderProps,
-  type BuildResult,
-  PulseSummary,
-  saveBuilt,
-} from "./builder-layout";
+import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { sequenceForm } from "./builder-schemas";
 import { TurnOffChoice } from "./turn-off-choice";
 
@@ -35,7 +27,7 @@ const STYLES = [
 /** Points drawn in all; each step between samples gets its share, at least 2. */
 const DRAWN_POINTS = 6000;
 
-function build(input: Input): (BuildResult & { figures: object }) | { ok: false; reason: string } {
+function build(input: Input): Built {
   const circuit = {
     busVoltageMax: input.supply,
     currentLimitMax: input.limitCurrent,
@@ -60,12 +52,11 @@ function build(input: Input): (BuildResult & { figures: object }) | { ok: false;
   if (!built.ok) return built;
   const pulse = built.pulses[0];
   if (pulse.kind !== "waveform") return { ok: false, reason: "the builder made no waveform" };
-  return {
-    ok: true,
-    figures: built.figures,
-    pulse: { kind: "waveform", samples: { t: pulse.t, v: pulse.v, i: pulse.i } },
-    origin: { input: circuit, figures: built.figures },
-  };
+  return builtCase(
+    { kind: "waveform", samples: { t: pulse.t, v: pulse.v, i: pulse.i } },
+    circuit,
+    built.figures,
+  );
 }
 
 /**
@@ -160,15 +151,8 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
     const values = detail.candidates.map((c) => c.part.avalancheBreakdown ?? c.part.vdsMax);
     return values.length ? Math.min(...values) : null;
   }, [detail.candidates]);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    control,
-    formState: { errors, isSubmitting },
-  } = useForm<Values, unknown, Input>({
-    resolver: zodResolver(sequenceForm),
-    mode: "onTouched",
+  const { form, values, built, frame } = useBuilderForm<Values, Input>({
+    schema: sequenceForm,
     defaultValues: {
       name: "Short, turn-off and restart as one sequence",
       supply: "",
@@ -181,13 +165,13 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
       restarts: "1",
       pause: "",
     },
+    build,
+    origin: "sequence",
+    create,
+    nameId: "seq-name",
   });
-  const values = useWatch({ control });
-  const parsed = sequenceForm.safeParse(values);
-  const built = parsed.success ? build(parsed.data) : null;
   const samples = built?.ok && built.pulse.kind === "waveform" ? built.pulse.samples : null;
   const panels = useMemo(() => (samples ? sequencePanels(samples, detail) : null), [samples, detail]);
-  const onSubmit = handleSubmit((input) => saveBuilt("sequence", input.name, build(input), create, setError));
   const unclamped = values.clamp === "none";
 
   return (
@@ -211,98 +195,83 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
         </>
       }
       fields={
-        <div className="grid gap-4 sm:grid-cols-3">
-          <UnitField
-            id="seq-supply"
-            label={
-              <>
-                Highest supply <Sym main="V" sub="bus" />
-              </>
-            }
-            unit="V"
-            inputMode="decimal"
-            placeholder="54.6"
-            hint="Across the transistor while it holds the short"
-            error={errors.supply?.message}
-            {...register("supply")}
-          />
-          <UnitField
-            id="seq-limit"
-            label={
-              <>
-                Limit current <Sym main="I" sub="lim" />
-              </>
-            }
-            unit="A"
-            inputMode="decimal"
-            placeholder="8"
-            error={errors.limitCurrent?.message}
-            {...register("limitCurrent")}
-          />
-          <UnitField
-            id="seq-hold"
-            label="Fault timer"
-            unit="s"
-            placeholder="2m"
-            hint="How long each attempt holds the limit"
-            error={errors.holdTime?.message}
-            {...register("holdTime")}
-          />
-          <UnitField
-            id="seq-l"
-            label="Loop inductance L"
-            unit="H"
-            placeholder="1µ"
-            error={errors.inductance?.message}
-            {...register("inductance")}
-          />
-          <TurnOffChoice registration={register("clamp")} className="sm:col-span-2" />
-          {unclamped ? (
-            <UnitField
-              id="seq-vbr"
-              label={<Sym main="V" sub="BR" />}
-              unit="V"
-              inputMode="decimal"
-              hint="Lowest of the candidates by default: the longest, most energetic avalanche"
-              error={errors.breakdown?.message}
-              {...register("breakdown")}
-            />
-          ) : (
-            <UnitField
-              id="seq-vcl"
-              label={
+        <BuilderFields
+          form={form}
+          className="grid gap-4 sm:grid-cols-3"
+          items={[
+            {
+              name: "supply",
+              id: "seq-supply",
+              label: (
                 <>
-                  Clamp <Sym main="V" sub="cl" />
+                  Highest supply <Sym main="V" sub="bus" />
                 </>
-              }
-              unit="V"
-              inputMode="decimal"
-              hint="Above the supply"
-              error={errors.clampVoltage?.message}
-              {...register("clampVoltage")}
-            />
-          )}
-          <UnitField
-            id="seq-restarts"
-            label="Restarts"
-            inputMode="numeric"
-            hint="0 to 100; each holds and turns off again"
-            error={errors.restarts?.message}
-            {...register("restarts")}
-          />
-          <UnitField
-            id="seq-pause"
-            label="Pause before each restart"
-            unit="s"
-            placeholder="100m"
-            error={errors.pause?.message}
-            {...register("pause")}
-          />
-        </div>
+              ),
+              unit: "V",
+              inputMode: "decimal",
+              placeholder: "54.6",
+              hint: "Across the transistor while it holds the short",
+            },
+            {
+              name: "limitCurrent",
+              id: "seq-limit",
+              label: (
+                <>
+                  Limit current <Sym main="I" sub="lim" />
+                </>
+              ),
+              unit: "A",
+              inputMode: "decimal",
+              placeholder: "8",
+            },
+            {
+              name: "holdTime",
+              id: "seq-hold",
+              label: "Fault timer",
+              unit: "s",
+              placeholder: "2m",
+              hint: "How long each attempt holds the limit",
+            },
+            { name: "inductance", id: "seq-l", label: "Loop inductance L", unit: "H", placeholder: "1µ" },
+            <TurnOffChoice key="clamp" registration={form.register("clamp")} className="sm:col-span-2" />,
+            unclamped
+              ? {
+                  name: "breakdown",
+                  id: "seq-vbr",
+                  label: <Sym main="V" sub="BR" />,
+                  unit: "V",
+                  inputMode: "decimal",
+                  hint: "Lowest of the candidates by default: the longest, most energetic avalanche",
+                }
+              : {
+                  name: "clampVoltage",
+                  id: "seq-vcl",
+                  label: (
+                    <>
+                      Clamp <Sym main="V" sub="cl" />
+                    </>
+                  ),
+                  unit: "V",
+                  inputMode: "decimal",
+                  hint: "Above the supply",
+                },
+            {
+              name: "restarts",
+              id: "seq-restarts",
+              label: "Restarts",
+              inputMode: "numeric",
+              hint: "0 to 100; each holds and turns off again",
+            },
+            {
+              name: "pause",
+              id: "seq-pause",
+              label: "Pause before each restart",
+              unit: "s",
+              placeholder: "100m",
+            },
+          ]}
+        />
       }
-      figures={built?.ok ? built.figures : null}
-      reason={built && !built.ok ? built.reason : null}
-      result={built?.ok ? <PulseSummary pulse={built.pulse} /> : null}
       below={
         panels && samples ? (
           <div className="mt-4" data-testid="sequence-traces">
@@ -319,18 +288,7 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
           </div>
         ) : null
       }
-      footer={
-        <UnitField
-          id="seq-name"
-          label="Fault case name"
-          className="max-w-sm"
-          error={errors.name?.message}
-          {...register("name")}
-        />
-      }
-      error={errors.root?.server?.message}
-      pending={isSubmitting}
-      onSubmit={onSubmit}
+      {...frame}
     />
   );
 }
