@@ -23,21 +23,31 @@
 //   continuous train; without period or frequency a row is a single pulse (a count above 1 is then an error);
 // - values that cannot be read are NaN in the row, which carries the reason in `errors`;
 // - at most MAX_MEASUREMENT_ROWS pulse rows are read; beyond, a file-level error says which rows were left out.
+// About 540 lines on purpose: the rules above are one reader, applied in turn to the header (the names table is a
+// third of the file), the layout and each row; the cell readers (./measurement-cells.ts) and the save route's row
+// schema (./measurement-row.ts) stand apart, and splitting the rest would put one rule's halves in two files.
 import { z } from "zod";
-import { type SaneQuantity, saneValue } from "@/lib/soa/sanity";
 import type { Repeat } from "@/lib/soa/types";
-import { formatQuantity, parseQuantity } from "@/lib/soa/units";
-import { type CellValue, decimalPoint, readNumber, readWidth } from "./cell";
-import { splitHeader, unitScale } from "./header";
+import { formatQuantity } from "@/lib/soa/units";
+import { type CellValue, readNumber } from "./cell";
+import { splitHeader } from "./header";
 import { type CsvIssue, columnLetter, createIssueList, csvIssue, type IssueList } from "./issues";
+import {
+  columnScale,
+  exactly,
+  MAX_LABEL_LENGTH,
+  readCount,
+  readFrequency,
+  readTime,
+  sane,
+} from "./measurement-cells";
 import { type Delimiter, readTable } from "./text";
+
+export { type MeasurementInput, measurementRowSchema } from "./measurement-row";
 
 /** Most pulse rows read from one paste. */
 export const MAX_MEASUREMENT_ROWS = 1000;
 
-const MAX_LABEL_LENGTH = 80;
-/** Largest count a database integer holds; longer trains are continuous in all but name. */
-const MAX_PULSE_COUNT = 2_147_483_647;
 /** Relative disagreement allowed between a period and 1/frequency given on the same row (display rounding). */
 const PERIOD_AGREEMENT = 0.01;
 
@@ -205,8 +215,6 @@ const SHAPES: Readonly<Record<string, "rect" | "triangle">> = {
   triangular: "triangle",
   ramp: "triangle",
 };
-const CONTINUOUS = new Set(["cont", "continuous", "inf", "∞"]);
-const BARE = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 const NUMERIC_START = /^[+-]?(?:\d|[.,]\d)/;
 
 interface Column {
@@ -234,29 +242,6 @@ function fieldOfName(name: string, unit: string | null): MeasurementField | "id"
   if (bare === "id" || NAMES.current.includes(bare)) return "current";
   if (NAMES.voltage.includes(bare)) return "voltage";
   return null;
-}
-
-/** "khz" → "kHz", "HZ" → "Hz": people write hertz in any case; the prefix m stays milli. */
-function normaliseHertz(text: string): string {
-  return text.replace(/([kK]?)hz$/i, (_, prefix: string) => `${prefix.toLowerCase()}Hz`);
-}
-
-function columnScale(field: MeasurementField, unit: string | null): CellValue<number> {
-  if (unit === null) return { ok: true, value: 1 };
-  if (field === "voltage" || field === "current") {
-    const scaled = unitScale(unit, field);
-    return scaled.ok ? { ok: true, value: scaled.scale } : scaled;
-  }
-  if (field === "width" || field === "period") {
-    const scaled = unitScale(unit, "width");
-    return scaled.ok ? { ok: true, value: scaled.scale } : scaled;
-  }
-  if (field === "frequency") {
-    const parsed = parseQuantity(`1 ${normaliseHertz(unit.trim())}`, "Hz");
-    if (parsed.ok && typeof parsed.value === "number") return { ok: true, value: parsed.value };
-    return { ok: false, reason: `unit '${unit}' is not understood (expected Hz, with a prefix if needed)` };
-  }
-  return { ok: true, value: 1 };
 }
 
 /** Words in a header that suggest a column holds repetition (a period, frequency or count of pulses). */
@@ -314,87 +299,6 @@ function readHeader(cells: readonly string[], row: number, errors: IssueList, ma
     errors.add(row, null, `no ${field} column: name one ${EXAMPLES[field]}${period}`);
   }
   return { layout, ignored, unnamed };
-}
-
-/**
- * A bare number times a power-of-ten header scale, with one exponent as the engine's parser does, so that "80" in
- * a "[us]" column is the double nearest 8e-5 rather than 80 × 1e-6; other readings are returned as they are.
- */
-function exactly(
-  read: CellValue<number>,
-  cell: string,
-  scale: number,
-  delimiter: Delimiter,
-): CellValue<number> {
-  const text = decimalPoint(cell, delimiter);
-  if (!read.ok || scale === 1 || text === null || !BARE.test(text)) return read;
-  const exponent = Math.round(Math.log10(scale));
-  if (Number(`1e${exponent}`) !== scale) return read;
-  const [mantissa, own = "0"] = text.split(/[eE]/);
-  return { ok: true, value: Number(`${mantissa}e${Number(own) + exponent}`) };
-}
-
-function readTime(cell: string, scale: number, delimiter: Delimiter): CellValue<number> {
-  const read = readWidth(cell, scale, delimiter);
-  if (read.ok) {
-    return read.value === "DC"
-      ? { ok: false, reason: `'${cell}': a measured pulse needs a time, not DC` }
-      : exactly({ ok: true, value: read.value }, cell, scale, delimiter);
-  }
-  if (!read.reason.startsWith(`'${cell}' is not a pulse width`)) return read;
-  return { ok: false, reason: `'${cell}' is not a time (write for example 150 µs, 2.5 ms or 1e-3)` };
-}
-
-function positive(cell: string, value: number): CellValue<number> {
-  if (!Number.isFinite(value)) return { ok: false, reason: `'${cell}' is not a finite number` };
-  if (!(value > 0)) return { ok: false, reason: `'${cell}' must be greater than 0` };
-  return { ok: true, value };
-}
-
-function readFrequency(cell: string, scale: number, delimiter: Delimiter): CellValue<number> {
-  const text = decimalPoint(cell, delimiter);
-  if (text === null) return { ok: false, reason: `'${cell}' is not a number (use '.' for decimals)` };
-  if (BARE.test(text)) return exactly(positive(cell, Number(text) * scale), cell, scale, delimiter);
-  const parsed = parseQuantity(normaliseHertz(text), "Hz");
-  if (!parsed.ok) {
-    return {
-      ok: false,
-      reason:
-        parsed.reason === "expected a number"
-          ? `'${cell}' is not a frequency`
-          : `'${cell}': ${parsed.reason}`,
-    };
-  }
-  return positive(cell, parsed.value as number);
-}
-
-type Count = { ok: true; value: number | "continuous" | null } | { ok: false; reason: string };
-
-function readCount(cell: string): Count {
-  if (cell === "") return { ok: true, value: null };
-  if (CONTINUOUS.has(cell.toLowerCase())) return { ok: true, value: "continuous" };
-  const value = BARE.test(cell) ? Number(cell) : Number.NaN;
-  if (!Number.isInteger(value)) {
-    return {
-      ok: false,
-      reason: `'${cell}' is not a whole number of pulses (or 'cont' for a continuous train)`,
-    };
-  }
-  if (value < 1) return { ok: false, reason: `'${cell}': the count must be 1 or more` };
-  if (value > MAX_PULSE_COUNT) {
-    return {
-      ok: false,
-      reason: `'${cell}' is too many pulses to store; leave the cell empty for a continuous train`,
-    };
-  }
-  return { ok: true, value };
-}
-
-/** A reading within the physical sanity limits (src/lib/soa/sanity.ts), or the reason it is refused. */
-function sane(read: CellValue<number>, cell: string, quantity: SaneQuantity): CellValue<number> {
-  if (!read.ok) return read;
-  const reason = saneValue(read.value, quantity);
-  return reason === null ? read : { ok: false, reason: `'${cell}': ${reason}` };
 }
 
 function readRow(
@@ -634,67 +538,3 @@ function columnsOf(
   }
   return columns;
 }
-
-const measuredValue = (what: string, quantity: SaneQuantity) =>
-  z
-    .number({ error: `${what} must be a finite number` })
-    .gt(0, { error: `${what} must be greater than 0` })
-    .check((ctx) => {
-      const reason = saneValue(ctx.value, quantity);
-      if (reason !== null)
-        ctx.issues.push({ code: "custom", input: ctx.value, message: `${what}: ${reason}` });
-    });
-
-/** Keys a bench script may mean as repetition but which the schema does not read (repetition is `repeat`). */
-const STRAY_REPETITION = /^(?!repeat$).*(rep|period|freq|rate|count|cycle|train|burst|interval)/i;
-
-/**
- * One measured pulse as the save route accepts it: SI units within the sanity limits, a period longer than the
- * pulse. Unknown keys are dropped, except ones that look like repetition ("period", "count", "frequency" beside
- * `repeat`): those are refused, so that a train is never checked as a single pulse because of a key's name.
- */
-export const measurementRowSchema = z
-  .looseObject({
-    label: z
-      .string({ error: "the label must be text" })
-      .trim()
-      .min(1, { error: "the label must not be empty" })
-      .max(MAX_LABEL_LENGTH, { error: `the label must be at most ${MAX_LABEL_LENGTH} characters` }),
-    kind: z.enum(["rect", "triangle"], { error: 'the shape must be "rect" or "triangle"' }),
-    v: measuredValue("the voltage", "voltage"),
-    i: measuredValue("the current", "current"),
-    duration: measuredValue("the pulse width", "time"),
-    repeat: z
-      .object({
-        period: measuredValue("the period", "time"),
-        count: z
-          .int({ error: "the count must be a whole number" })
-          .min(1, { error: "the count must be 1 or more" })
-          .max(MAX_PULSE_COUNT, { error: "the count is too large; leave it out for a continuous train" })
-          .optional(),
-      })
-      .optional(),
-  })
-  .refine((row) => row.repeat === undefined || row.repeat.period > row.duration, {
-    path: ["repeat", "period"],
-    error: "the period must be longer than the pulse width",
-  })
-  .superRefine((row, ctx) => {
-    for (const key of Object.keys(row).filter((k) => STRAY_REPETITION.test(k))) {
-      ctx.addIssue({
-        code: "custom",
-        path: [key],
-        message: `'${key}' is not read: give repetition as repeat: { period, count } (seconds; count optional)`,
-      });
-    }
-  })
-  .transform(({ label, kind, v, i, duration, repeat }) => ({
-    label,
-    kind,
-    v,
-    i,
-    duration,
-    ...(repeat === undefined ? {} : { repeat }),
-  }));
-
-export type MeasurementInput = z.infer<typeof measurementRowSchema>;
