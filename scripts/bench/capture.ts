@@ -10,12 +10,8 @@ import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { captureMappingSchema } from "../../src/lib/capture/parse";
 import { parseCaptureStream, parseCaptureText } from "../../src/lib/capture/parse-stream";
-import {
-  decodeSamplesStream,
-  encodeSamplesParts,
-  junctionTrace,
-  processCapture,
-} from "../../src/lib/capture/process";
+import { junctionTrace, processCapture } from "../../src/lib/capture/process";
+import { decodeSamplesStream, encodeSamplesParts } from "../../src/lib/capture/samples-binary";
 import { checkPulse, prepareCheck } from "../../src/lib/soa/check";
 import type { FosterTerm } from "../../src/lib/soa/foster";
 import type { PartLimits, WaveformPulse } from "../../src/lib/soa/types";

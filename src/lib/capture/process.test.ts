@@ -5,15 +5,12 @@ import {
   captureTrace,
   caseTrace,
   decimateMinMax,
-  decodeSamples,
-  decodeSamplesStream,
-  encodeSamples,
-  encodeSamplesParts,
   junctionTrace,
   processCapture,
   summariseCapture,
   TRACE_BUCKETS,
 } from "./process";
+import { decodeSamples, decodeSamplesStream, encodeSamples, encodeSamplesParts } from "./samples-binary";
 
 const f64 = (values: number[]) => Float64Array.from(values);
 

@@ -13,7 +13,7 @@ import type { Storage } from "@/lib/storage";
 import { isUuid } from "@/lib/uuid";
 import { type CaptureMapping, MAX_CAPTURE_BYTES } from "./parse";
 import type { CaptureSamples } from "./parse-stream";
-import { decodeSamplesStream, encodeSamplesParts } from "./process";
+import { decodeSamplesStream, encodeSamplesParts } from "./samples-binary";
 
 // A capture lives in four places: the uploaded CSV and its parsed samples (binary) in object storage, its row, and
 // its results per candidate (capture_results, src/lib/capture/results.ts).
