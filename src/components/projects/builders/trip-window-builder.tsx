@@ -4,10 +4,10 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/form";
-import { UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
 import { tripWindow } from "@/lib/soa/builders";
 import { formatQuantity } from "@/lib/soa/units";
+import { BuilderFields, type FieldSpec } from "./builder-form";
 import { BuilderLayout } from "./builder-layout";
 import { tripWindowForm } from "./builder-schemas";
 
@@ -26,6 +26,14 @@ function build(input: Input) {
   });
 }
 
+/** A "± tolerance" field in percent. */
+function tolerance(
+  name: "shuntTolerance" | "referenceTolerance" | "dividerTolerance",
+  id: string,
+): FieldSpec<Values> {
+  return { name, id, label: "± tolerance", unit: "%", inputMode: "decimal" };
+}
+
 /**
  * The over-current trip window from component tolerances, worst case. It makes no pulse by itself: its maximum
  * is the current the other builders start from, and one click carries it over.
@@ -35,11 +43,7 @@ export function TripWindowBuilder({
 }: {
   onUse: (target: "current-limit" | "clamp", amps: string) => void;
 }) {
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = useForm<Values, unknown, Input>({
+  const form = useForm<Values, unknown, Input>({
     resolver: zodResolver(tripWindowForm),
     mode: "onTouched",
     defaultValues: {
@@ -54,7 +58,7 @@ export function TripWindowBuilder({
       offset: "",
     },
   });
-  const values = useWatch({ control });
+  const values = useWatch({ control: form.control });
   const parsed = tripWindowForm.safeParse(values);
   const built = parsed.success ? build(parsed.data) : null;
   const max = built?.ok ? formatQuantity(built.figures.max, "", 6).replace("\u2009", "") : null;
@@ -70,93 +74,59 @@ export function TripWindowBuilder({
         </>
       }
       fields={
-        <div className="grid gap-4 sm:grid-cols-4">
-          <UnitField
-            id="tw-shunt"
-            label={
-              <>
-                Shunt <Sym main="R" sub="sh" />
-              </>
-            }
-            unit="Ω"
-            placeholder="2m"
-            error={errors.shunt?.message}
-            {...register("shunt")}
-          />
-          <UnitField
-            id="tw-shunt-tol"
-            label="± tolerance"
-            unit="%"
-            inputMode="decimal"
-            error={errors.shuntTolerance?.message}
-            {...register("shuntTolerance")}
-          />
-          <UnitField
-            id="tw-ref"
-            label={
-              <>
-                Reference <Sym main="V" sub="ref" />
-              </>
-            }
-            unit="V"
-            inputMode="decimal"
-            error={errors.reference?.message}
-            {...register("reference")}
-          />
-          <UnitField
-            id="tw-ref-tol"
-            label="± tolerance"
-            unit="%"
-            inputMode="decimal"
-            error={errors.referenceTolerance?.message}
-            {...register("referenceTolerance")}
-          />
-          <label className="flex items-center gap-2 text-sm sm:col-span-4">
-            <input type="checkbox" {...register("divider")} className="accent-[var(--color-accent)]" />
-            The reference is divided down: k = R2/(R1 + R2)
-          </label>
-          {values.divider ? (
-            <>
-              <UnitField
-                id="tw-r1"
-                label="R1 (top)"
-                unit="Ω"
-                placeholder="23k"
-                error={errors.r1?.message}
-                {...register("r1")}
-              />
-              <UnitField
-                id="tw-r2"
-                label="R2 (bottom)"
-                unit="Ω"
-                placeholder="1k"
-                error={errors.r2?.message}
-                {...register("r2")}
-              />
-              <UnitField
-                id="tw-div-tol"
-                label="± tolerance"
-                unit="%"
-                inputMode="decimal"
-                error={errors.dividerTolerance?.message}
-                {...register("dividerTolerance")}
-              />
-            </>
-          ) : null}
-          <UnitField
-            id="tw-offset"
-            label={
-              <>
-                Offset ±<Sym main="V" sub="os" />
-              </>
-            }
-            unit="V"
-            placeholder="2m"
-            hint="Optional"
-            error={errors.offset?.message}
-            {...register("offset")}
-          />
-        </div>
+        <BuilderFields
+          form={form}
+          className="grid gap-4 sm:grid-cols-4"
+          items={[
+            {
+              name: "shunt",
+              id: "tw-shunt",
+              label: (
+                <>
+                  Shunt <Sym main="R" sub="sh" />
+                </>
+              ),
+              unit: "Ω",
+              placeholder: "2m",
+            },
+            tolerance("shuntTolerance", "tw-shunt-tol"),
+            {
+              name: "reference",
+              id: "tw-ref",
+              label: (
+                <>
+                  Reference <Sym main="V" sub="ref" />
+                </>
+              ),
+              unit: "V",
+              inputMode: "decimal",
+            },
+            tolerance("referenceTolerance", "tw-ref-tol"),
+            <label key="divider" className="flex items-center gap-2 text-sm sm:col-span-4">
+              <input type="checkbox" {...form.register("divider")} className="accent-[var(--color-accent)]" />
+              The reference is divided down: k = R2/(R1 + R2)
+            </label>,
+            values.divider
+              ? { name: "r1", id: "tw-r1", label: "R1 (top)", unit: "Ω", placeholder: "23k" }
+              : null,
+            values.divider
+              ? { name: "r2", id: "tw-r2", label: "R2 (bottom)", unit: "Ω", placeholder: "1k" }
+              : null,
+            values.divider ? tolerance("dividerTolerance", "tw-div-tol") : null,
+            {
+              name: "offset",
+              id: "tw-offset",
+              label: (
+                <>
+                  Offset ±<Sym main="V" sub="os" />
+                </>
+              ),
+              unit: "V",
+              placeholder: "2m",
+              hint: "Optional",
+            },
+          ]}
+        />
       }
       figures={built?.ok ? built.figures : null}
       reason={built && !built.ok ? built.reason : null}
