@@ -83,6 +83,26 @@ export function ColumnPicker({
   );
 }
 
+/** The two channels' scale and offset fields: a probe factor times the unit, and an offset in V or A. */
+const CHANNELS = [
+  {
+    symbol: { main: "V", sub: "DS" },
+    unit: "V",
+    scale: "vScale",
+    offset: "vOffset",
+    ids: ["cap-v-scale", "cap-v-offset"],
+    hint: "Probe factor × unit: 10 for 10:1",
+  },
+  {
+    symbol: { main: "I", sub: "D" },
+    unit: "A",
+    scale: "iScale",
+    offset: "iOffset",
+    ids: ["cap-i-scale", "cap-i-offset"],
+    hint: "A per reading: 0.1 for 100 mV/A ÷ 1 V",
+  },
+] as const;
+
 /** Which columns are time, voltage and current, the time unit, and each channel's scale and offset. */
 function ChannelFields({ form, preview }: { form: PickerForm; preview: CapturePreview }) {
   const { register } = form;
@@ -97,11 +117,14 @@ function ChannelFields({ form, preview }: { form: PickerForm; preview: CapturePr
       </option>
     )),
   ];
+  const column = (name: "time" | "voltage" | "current", label: string) => (
+    <SelectField id={`cap-${name}`} label={label} error={errors[name]?.message} {...register(name)}>
+      {options}
+    </SelectField>
+  );
   return (
     <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-      <SelectField id="cap-time" label="Time column" error={errors.time?.message} {...register("time")}>
-        {options}
-      </SelectField>
+      {column("time", "Time column")}
       <SelectField id="cap-time-unit" label="Time unit" {...register("timeScale")}>
         {timeUnits.map((u) => (
           <option key={u.value} value={u.value}>
@@ -109,72 +132,37 @@ function ChannelFields({ form, preview }: { form: PickerForm; preview: CapturePr
           </option>
         ))}
       </SelectField>
-      <SelectField
-        id="cap-voltage"
-        label="Voltage column"
-        error={errors.voltage?.message}
-        {...register("voltage")}
-      >
-        {options}
-      </SelectField>
-      <SelectField
-        id="cap-current"
-        label="Current column"
-        error={errors.current?.message}
-        {...register("current")}
-      >
-        {options}
-      </SelectField>
-      <UnitField
-        id="cap-v-scale"
-        label={
-          <>
-            Scale, <Sym main="V" sub="DS" />
-          </>
-        }
-        unit="×"
-        inputMode="decimal"
-        hint="Probe factor × unit: 10 for 10:1"
-        error={errors.vScale?.message}
-        {...register("vScale")}
-      />
-      <UnitField
-        id="cap-v-offset"
-        label={
-          <>
-            Offset, <Sym main="V" sub="DS" />
-          </>
-        }
-        unit="V"
-        inputMode="decimal"
-        error={errors.vOffset?.message}
-        {...register("vOffset")}
-      />
-      <UnitField
-        id="cap-i-scale"
-        label={
-          <>
-            Scale, <Sym main="I" sub="D" />
-          </>
-        }
-        unit="×"
-        inputMode="decimal"
-        hint="A per reading: 0.1 for 100 mV/A ÷ 1 V"
-        error={errors.iScale?.message}
-        {...register("iScale")}
-      />
-      <UnitField
-        id="cap-i-offset"
-        label={
-          <>
-            Offset, <Sym main="I" sub="D" />
-          </>
-        }
-        unit="A"
-        inputMode="decimal"
-        error={errors.iOffset?.message}
-        {...register("iOffset")}
-      />
+      {column("voltage", "Voltage column")}
+      {column("current", "Current column")}
+      {CHANNELS.map((c) => [
+        <UnitField
+          key={c.scale}
+          id={c.ids[0]}
+          label={
+            <>
+              Scale, <Sym {...c.symbol} />
+            </>
+          }
+          unit="×"
+          inputMode="decimal"
+          hint={c.hint}
+          error={errors[c.scale]?.message}
+          {...register(c.scale)}
+        />,
+        <UnitField
+          key={c.offset}
+          id={c.ids[1]}
+          label={
+            <>
+              Offset, <Sym {...c.symbol} />
+            </>
+          }
+          unit={c.unit}
+          inputMode="decimal"
+          error={errors[c.offset]?.message}
+          {...register(c.offset)}
+        />,
+      ])}
     </div>
   );
 }
