@@ -18,7 +18,8 @@ function* sources(dir: string): Generator<string> {
 }
 
 function nameOf(node: ts.Node): string {
-  if ((ts.isFunctionDeclaration(node) || ts.isMethodDeclaration(node)) && node.name) return node.name.getText();
+  if ((ts.isFunctionDeclaration(node) || ts.isMethodDeclaration(node)) && node.name)
+    return node.name.getText();
   const parent = node.parent;
   if (parent && ts.isVariableDeclaration(parent)) return parent.name.getText();
   if (parent && ts.isPropertyAssignment(parent)) return parent.name.getText();
