@@ -1,4 +1,12 @@
-import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
+import {
+  type FieldErrors,
+  type FieldValues,
+  get,
+  type Path,
+  type UseFormRegister,
+  type UseFormRegisterReturn,
+  type UseFormSetError,
+} from "react-hook-form";
 import { ApiError, messageOf } from "./api-client";
 
 /**
@@ -28,4 +36,24 @@ export function applyServerErrors<T extends FieldValues>(
     if (placed) return;
   }
   setError("root.server", { type: "server", message: messageOf(error) });
+}
+
+/** What a field takes from its form: the registration and the error message under it. */
+export type FieldBinding<T extends FieldValues> = UseFormRegisterReturn<Path<T>> & {
+  error: string | undefined;
+};
+
+/** Binds fields by name, `<UnitField {...bind("v")} />`; nested paths ("repeat.period") read nested errors. */
+export type Bind<T extends FieldValues> = (name: Path<T>) => FieldBinding<T>;
+
+export function fieldBinder<T extends FieldValues>(
+  register: UseFormRegister<T>,
+  errors: FieldErrors<T>,
+): Bind<T> {
+  return (name) => ({ ...register(name), error: errorAt(errors, name) });
+}
+
+/** The message of the error at a path of the form's error tree, if any. */
+export function errorAt<T extends FieldValues>(errors: FieldErrors<T>, path: string): string | undefined {
+  return get<FieldErrors<T>, { message?: string } | undefined>(errors, path)?.message;
 }

@@ -11,6 +11,7 @@ import { Button, FormActions, FormMessage, SelectField } from "@/components/form
 import { applyServerErrors } from "@/components/form-errors";
 import { TextAreaField } from "@/components/library/fields";
 import type { MatrixRow } from "@/lib/projects/matrix";
+import { CandidateLibraryStatus } from "./candidate-status";
 import { percent, verdictWords } from "./format";
 import { bestPassing } from "./matrix-model";
 import { type CheckedCandidate, decisionKeys } from "./types";
@@ -54,7 +55,6 @@ export function DecisionForm({
   // Signing on an unverified draft is allowed, but only after the lead has read the warning and said so.
   const [acknowledged, setAcknowledged] = useState(false);
   const chosenDraft = chosen ? byId.get(chosen.partId)?.status !== "verified" : false;
-  const drafts = candidates.filter((c) => c.status !== "verified");
   // Opened from the title bar: bring the form into view and put the caret in the rationale.
   useEffect(() => {
     frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
@@ -96,17 +96,7 @@ export function DecisionForm({
           id="decision-part"
           label="Chosen candidate"
           error={errors.partId?.message}
-          hint={
-            chosen
-              ? `${byId.get(chosen.partId)?.maker ?? ""}. ${
-                  chosen.passesAll
-                    ? `Passes every pulse, worst utilisation ${percent(chosen.worstUtilisation)}.`
-                    : `Worst verdict ${verdictWords[chosen.worstVerdict]}: say in the rationale why it is still the choice.`
-                }`
-              : ranking.some((r) => r.passesAll)
-                ? undefined
-                : "No candidate passes every pulse."
-          }
+          hint={choiceHint(chosen, byId, ranking)}
           {...form.register("partId")}
         >
           <option value="">Choose…</option>
@@ -130,49 +120,12 @@ export function DecisionForm({
           {...form.register("rationale")}
         />
       </div>
-      <div className="mt-4 text-sm">
-        <h3 className="text-xs font-medium text-ink-muted">Library status of the candidates</h3>
-        <ul className="mt-1 flex flex-wrap gap-x-4 gap-y-1" data-testid="candidate-library-status">
-          {candidates.map((c) => (
-            <li key={c.partId}>
-              <span className="font-medium">{c.partNumber}</span>{" "}
-              {c.status === "verified" ? (
-                <span className="text-ink-muted">
-                  verified{c.verifiedByName ? ` by ${c.verifiedByName}` : ""}
-                </span>
-              ) : (
-                <span className="text-marginal">draft, unverified</span>
-              )}
-            </li>
-          ))}
-        </ul>
-        {drafts.length > 0 ? (
-          <div
-            role="note"
-            className="mt-3 rounded-md border border-line border-l-2 border-l-marginal bg-sunken px-3 py-2"
-          >
-            <p>
-              {drafts.length === candidates.length
-                ? "Every candidate is still an unverified library draft"
-                : `${drafts.map((c) => c.partNumber).join(", ")} ${drafts.length === 1 ? "is" : "are"} still unverified library ${drafts.length === 1 ? "draft" : "drafts"}`}
-              : no one has checked {drafts.length === 1 ? "its" : "their"} curves against the datasheet a
-              second time. The record and the PDF will say so. Verify the parts in the library first, or sign
-              knowingly.
-            </p>
-            {chosenDraft ? (
-              <label className="mt-2 flex items-center gap-2 max-md:min-h-11">
-                <input
-                  type="checkbox"
-                  checked={acknowledged}
-                  onChange={(e) => setAcknowledged(e.target.checked)}
-                  className="size-4 accent-[var(--color-accent)]"
-                />
-                I sign on an unverified part knowingly
-              </label>
-            ) : null}
-          </div>
-        ) : null}
-      </div>
+      <CandidateLibraryStatus
+        candidates={candidates}
+        chosenDraft={chosenDraft}
+        acknowledged={acknowledged}
+        onAcknowledge={setAcknowledged}
+      />
       <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
       <FormActions aside="Signing is final: a later decision supersedes this one, nothing edits it.">
         <Button variant="quiet" onClick={onCancel} disabled={isSubmitting}>
@@ -189,4 +142,20 @@ export function DecisionForm({
       </FormActions>
     </form>
   );
+}
+
+/** Under the choice: the chosen part's maker and how it fared, or that no candidate passes every pulse. */
+function choiceHint(
+  chosen: MatrixRow | undefined,
+  byId: Map<string, CheckedCandidate>,
+  ranking: MatrixRow[],
+): string | undefined {
+  if (chosen) {
+    return `${byId.get(chosen.partId)?.maker ?? ""}. ${
+      chosen.passesAll
+        ? `Passes every pulse, worst utilisation ${percent(chosen.worstUtilisation)}.`
+        : `Worst verdict ${verdictWords[chosen.worstVerdict]}: say in the rationale why it is still the choice.`
+    }`;
+  }
+  return ranking.some((r) => r.passesAll) ? undefined : "No candidate passes every pulse.";
 }

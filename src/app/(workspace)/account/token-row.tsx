@@ -4,8 +4,8 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { ConfirmStep } from "@/components/confirm-step";
 import { DateText } from "@/components/date-text";
-import { Button } from "@/components/form";
 import { Td, Tr } from "@/components/table";
 
 interface Token {
@@ -57,30 +57,17 @@ export function TokenRow({ token, workspaceName }: { token: Token; workspaceName
         <Td className="text-right whitespace-nowrap">
           {token.revokedAt ? (
             <DateText value={token.revokedAt} />
-          ) : confirming ? (
-            <span className="inline-flex items-center gap-1">
-              <Button size="sm" variant="quiet" onClick={() => setConfirming(false)}>
-                Keep
-              </Button>
-              <Button
-                size="sm"
-                variant="danger"
-                pending={revoke.isPending || refreshing}
-                onClick={() => revoke.mutate()}
-                aria-label={`Confirm revoking ${token.name}`}
-              >
-                Revoke
-              </Button>
-            </span>
           ) : (
-            <Button
-              size="sm"
-              variant="quiet"
-              onClick={() => setConfirming(true)}
-              aria-label={`Revoke the token ${token.name}`}
-            >
-              Revoke…
-            </Button>
+            <ConfirmStep
+              verb="Revoke"
+              askLabel={`Revoke the token ${token.name}`}
+              confirmLabel={`Confirm revoking ${token.name}`}
+              confirming={confirming}
+              pending={revoke.isPending || refreshing}
+              onAsk={() => setConfirming(true)}
+              onConfirm={() => revoke.mutate()}
+              onKeep={() => setConfirming(false)}
+            />
           )}
         </Td>
       </Tr>

@@ -4,11 +4,19 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { ConfirmStep } from "@/components/confirm-step";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
 import { Td, Tr } from "@/components/table";
 import type { Role } from "@/db/schema";
-import { roleLabels } from "@/lib/auth/permissions";
+import {
+  type Access,
+  describeChange,
+  ProposedChange,
+  RoleControls,
+  RoleText,
+  UnderRow,
+} from "./member-row-parts";
 
 interface Member {
   userId: string;
@@ -17,11 +25,6 @@ interface Member {
   role: Role;
   leadRights: boolean;
   joinedAt: Date;
-}
-
-interface Access {
-  role: Role;
-  leadRights: boolean;
 }
 
 interface Saved {
@@ -82,53 +85,29 @@ export function MemberRow({
         <Td className="text-ink-muted">{member.email}</Td>
         <Td>
           {mayManage ? (
-            <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
-              <select
-                aria-label={`Role of ${member.name}`}
-                aria-describedby={failed ? errorId : undefined}
-                aria-invalid={changeAccess.isError || undefined}
-                value={proposed?.role ?? member.role}
-                disabled={busy}
-                onChange={(event) => {
-                  remove.reset();
-                  changeAccess.reset();
-                  setSaved(null);
-                  const role = event.target.value as Role;
-                  setProposed(role === member.role ? null : { role, leadRights: member.leadRights });
-                }}
-                className="h-7 min-w-28 rounded border border-line bg-panel px-1.5 text-sm hover:border-line-strong disabled:opacity-60 max-md:min-h-11 pointer-coarse:min-h-11"
-              >
-                {options.map((role) => (
-                  <option key={role} value={role}>
-                    {roleLabels[role]}
-                  </option>
-                ))}
-              </select>
-              {member.role === "lead" ? null : (
-                <label className="inline-flex items-center gap-1.5 text-xs text-ink-muted max-md:min-h-11 pointer-coarse:min-h-11">
-                  <input
-                    type="checkbox"
-                    checked={member.leadRights}
-                    disabled={busy}
-                    onChange={(event) => {
-                      remove.reset();
-                      setSaved(null);
-                      setProposed(null);
-                      changeAccess.mutate({ role: member.role, leadRights: event.target.checked });
-                    }}
-                    className="size-4 accent-[var(--color-accent)]"
-                  />
-                  Lead rights
-                </label>
-              )}
-            </div>
+            <RoleControls
+              name={member.name}
+              access={current}
+              options={options}
+              proposedRole={proposed?.role}
+              busy={busy}
+              invalid={changeAccess.isError}
+              errorId={failed ? errorId : undefined}
+              onPropose={(role) => {
+                remove.reset();
+                changeAccess.reset();
+                setSaved(null);
+                setProposed(role === member.role ? null : { role, leadRights: member.leadRights });
+              }}
+              onLeadRights={(leadRights) => {
+                remove.reset();
+                setSaved(null);
+                setProposed(null);
+                changeAccess.mutate({ role: member.role, leadRights });
+              }}
+            />
           ) : (
-            <>
-              {roleLabels[member.role]}
-              {member.leadRights && member.role !== "lead" ? (
-                <span className="ml-1.5 text-xs text-ink-muted">with lead rights</span>
-              ) : null}
-            </>
+            <RoleText access={current} />
           )}
         </Td>
         <Td numeric>
@@ -136,99 +115,60 @@ export function MemberRow({
         </Td>
         {mayManage ? (
           <Td className="text-right whitespace-nowrap">
-            {isSelf ? null : confirming ? (
-              <span className="inline-flex items-center gap-1.5">
-                <span className="text-xs text-ink-muted">Remove?</span>
-                <Button size="sm" variant="quiet" onClick={() => setConfirming(false)}>
-                  Keep
-                </Button>
-                <Button
-                  size="sm"
-                  variant="danger"
-                  pending={remove.isPending || refreshing}
-                  onClick={() => {
-                    changeAccess.reset();
-                    remove.mutate(undefined, { onSettled: () => setConfirming(false) });
-                  }}
-                  aria-label={`Confirm removing ${member.name}`}
-                >
-                  Remove
-                </Button>
-              </span>
-            ) : (
-              <Button
-                size="sm"
-                variant="quiet"
-                onClick={() => setConfirming(true)}
-                aria-label={`Remove ${member.name} from the workspace`}
-              >
-                Remove…
-              </Button>
+            {isSelf ? null : (
+              <ConfirmStep
+                verb="Remove"
+                prompt="Remove?"
+                askLabel={`Remove ${member.name} from the workspace`}
+                confirmLabel={`Confirm removing ${member.name}`}
+                confirming={confirming}
+                pending={remove.isPending || refreshing}
+                onAsk={() => setConfirming(true)}
+                onConfirm={() => {
+                  changeAccess.reset();
+                  remove.mutate(undefined, { onSettled: () => setConfirming(false) });
+                }}
+                onKeep={() => setConfirming(false)}
+              />
             )}
           </Td>
         ) : null}
       </Tr>
       {proposed ? (
-        <tr>
-          <td colSpan={cols} className="border-b border-line bg-accent-soft px-3 py-2">
-            <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
-              <p>
-                Change {member.name} from {roleLabels[member.role].toLowerCase()} to{" "}
-                <span className="font-medium">{roleLabels[proposed.role].toLowerCase()}</span>?
-                {isSelf && proposed.role !== "admin" ? " You will no longer manage this team." : ""}
-              </p>
-              <span className="flex gap-2">
-                <Button size="sm" variant="quiet" onClick={() => setProposed(null)} disabled={busy}>
-                  Cancel
-                </Button>
-                <Button
-                  size="sm"
-                  variant="primary"
-                  pending={busy}
-                  onClick={() => changeAccess.mutate(proposed)}
-                >
-                  Change role
-                </Button>
-              </span>
-            </div>
-          </td>
-        </tr>
+        <UnderRow cols={cols} className="bg-accent-soft px-3 py-2">
+          <ProposedChange
+            name={member.name}
+            from={member.role}
+            to={proposed.role}
+            leavesTeam={isSelf && proposed.role !== "admin"}
+            busy={busy}
+            onCancel={() => setProposed(null)}
+            onConfirm={() => changeAccess.mutate(proposed)}
+          />
+        </UnderRow>
       ) : null}
       {saved && !failed ? (
-        <tr>
-          <td colSpan={cols} className="border-b border-line bg-sunken px-3 py-1.5">
-            <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
-              <p role="status">Saved: {saved.message}</p>
-              <Button
-                size="sm"
-                variant="quiet"
-                pending={busy}
-                onClick={() => changeAccess.mutate({ ...saved.previous, undo: true })}
-              >
-                Undo
-              </Button>
-            </div>
-          </td>
-        </tr>
+        <UnderRow cols={cols} className="bg-sunken px-3 py-1.5">
+          <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+            <p role="status">Saved: {saved.message}</p>
+            <Button
+              size="sm"
+              variant="quiet"
+              pending={busy}
+              onClick={() => changeAccess.mutate({ ...saved.previous, undo: true })}
+            >
+              Undo
+            </Button>
+          </div>
+        </UnderRow>
       ) : null}
       {failed ? (
-        <tr>
-          <td colSpan={cols} className="border-b border-line bg-sunken px-3 py-1.5">
-            <p id={errorId} role="alert" className="text-xs text-fail">
-              {messageOf(failed)}
-            </p>
-          </td>
-        </tr>
+        <UnderRow cols={cols} className="bg-sunken px-3 py-1.5">
+          <p id={errorId} role="alert" className="text-xs text-fail">
+            {messageOf(failed)}
+          </p>
+        </UnderRow>
       ) : null}
     </>
   );
-}
-
-/** What a saved change did, in words. */
-function describeChange(name: string, before: Access, after: Access): string {
-  const parts: string[] = [];
-  if (before.role !== after.role) parts.push(`${name} is now ${roleLabels[after.role].toLowerCase()}`);
-  if (before.leadRights !== after.leadRights)
-    parts.push(after.leadRights ? `${name} holds lead rights` : `${name} no longer holds lead rights`);
-  return `${parts.join("; ") || "nothing changed"}.`;
 }

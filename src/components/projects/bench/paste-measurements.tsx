@@ -2,22 +2,15 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { useForm } from "react-hook-form";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { Button, FormMessage } from "@/components/form";
-import { UnitField } from "@/components/library/fields";
 import { IssueTable } from "@/components/library/upload-progress";
 import type { ColumnMapping } from "@/lib/csv/measurements";
 import { invalidateProject, type MeasurementPreview } from "../api";
 import { ColumnMappingTable } from "./column-mapping";
 import { PreviewTable } from "./preview-table";
-
-interface SaveFields {
-  note: string;
-  boardSerial: string;
-  probe: string;
-}
+import { type SaveFields, SaveMeasuredForm } from "./save-measured-form";
 
 const example = [
   "label\tV_DS [V]\tI_D [A]\twidth\tshape\tperiod\tcount",
@@ -39,9 +32,6 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
     preview: MeasurementPreview;
   } | null>(null);
   const [saved, setSaved] = useState<{ count: number; notified: number } | null>(null);
-  const { register, handleSubmit, reset } = useForm<SaveFields>({
-    defaultValues: { note: "", boardSerial: "", probe: "" },
-  });
 
   const preview = useMutation({
     mutationFn: (body: { text: string; mapping: ColumnMapping }) =>
@@ -71,7 +61,6 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
       setSaved({ count: data.saved.length, notified: data.notified });
       setPreviewed(null);
       setText("");
-      reset();
       await invalidateProject(queryClient, projectId);
     },
   });
@@ -110,20 +99,7 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
             </Button>
           </div>
         </div>
-        <div id={`${id}-help`} className="space-y-2 text-sm text-ink-muted">
-          <p className="font-medium text-ink">What to paste</p>
-          <p>
-            One pulse per row, copied from a spreadsheet or a scope&apos;s measurement table: tabs, commas or
-            semicolons; decimal commas are fine. A header row is optional; without one the columns are V, I,
-            width, shape, period, count.
-          </p>
-          <p>
-            Units may sit in the header (<span className="font-mono">I_D [A]</span>,{" "}
-            <span className="font-mono">width [us]</span>) or in the values (
-            <span className="font-mono">150 µs</span>). Repetition: a period or a frequency, and a count or
-            &ldquo;cont&rdquo;.
-          </p>
-        </div>
+        <PasteHelp id={`${id}-help`} />
       </div>
 
       {preview.isError ? <FormMessage tone="error">{messageOf(preview.error)}</FormMessage> : null}
@@ -156,44 +132,36 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
           {previewed.preview.rows.length ? <PreviewTable preview={previewed.preview} /> : null}
           <Caution />
           {valid.length ? (
-            <form
-              noValidate
-              aria-label="Save the measured pulses"
-              onSubmit={handleSubmit((fields) => save.mutate(fields))}
-              className="rounded-md border border-line bg-panel p-4"
-            >
-              <div className="grid gap-4 sm:grid-cols-3">
-                <UnitField
-                  id={`${id}-board`}
-                  label="Board serial"
-                  hint="Optional"
-                  {...register("boardSerial")}
-                />
-                <UnitField
-                  id={`${id}-probe`}
-                  label="Probe"
-                  hint="Optional: current probe or shunt"
-                  {...register("probe")}
-                />
-                <UnitField id={`${id}-note`} label="Note" hint="Optional" {...register("note")} />
-              </div>
-              {save.isError ? <FormMessage tone="error">{messageOf(save.error)}</FormMessage> : null}
-              <div className="mt-4 flex items-center justify-between gap-3">
-                <p className="text-sm text-ink-muted">
-                  {blocked
-                    ? "Saving waits until every column is read or left out and the paste has no problems."
-                    : withProblems > 0
-                      ? `${withProblems} ${withProblems === 1 ? "row has" : "rows have"} problems and will be left out.`
-                      : "Every row can be saved."}
-                </p>
-                <Button type="submit" variant="primary" pending={save.isPending} disabled={stale || blocked}>
-                  Save {valid.length} {valid.length === 1 ? "row" : "rows"}
-                </Button>
-              </div>
-            </form>
+            <SaveMeasuredForm
+              rows={valid.length}
+              withProblems={withProblems}
+              blocked={blocked}
+              stale={stale}
+              save={save}
+            />
           ) : null}
         </div>
       ) : null}
+    </div>
+  );
+}
+
+/** What the paste box reads, beside it. */
+function PasteHelp({ id }: { id: string }) {
+  return (
+    <div id={id} className="space-y-2 text-sm text-ink-muted">
+      <p className="font-medium text-ink">What to paste</p>
+      <p>
+        One pulse per row, copied from a spreadsheet or a scope&apos;s measurement table: tabs, commas or
+        semicolons; decimal commas are fine. A header row is optional; without one the columns are V, I,
+        width, shape, period, count.
+      </p>
+      <p>
+        Units may sit in the header (<span className="font-mono">I_D [A]</span>,{" "}
+        <span className="font-mono">width [us]</span>) or in the values (
+        <span className="font-mono">150 µs</span>). Repetition: a period or a frequency, and a count or
+        &ldquo;cont&rdquo;.
+      </p>
     </div>
   );
 }

@@ -1,9 +1,10 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { type KeyboardEvent, useEffect, useId, useState } from "react";
+import { type KeyboardEvent, useId, useState } from "react";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
+import { useDebounced } from "@/components/use-debounced";
 import { q } from "../format";
 
 interface PartOption {
@@ -14,15 +15,6 @@ interface PartOption {
   vdsMax: number;
   rdsOn: number | null;
   status: "draft" | "verified";
-}
-
-function useDebounced<T>(value: T, ms: number): T {
-  const [debounced, setDebounced] = useState(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setDebounced(value), ms);
-    return () => clearTimeout(timer);
-  }, [value, ms]);
-  return debounced;
 }
 
 /**

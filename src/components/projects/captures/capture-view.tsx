@@ -1,43 +1,14 @@
 "use client";
 
-import type { ReactNode } from "react";
 import { messageOf } from "@/components/api-client";
-import { Caution } from "@/components/caution";
-import { Sym } from "@/components/library/symbols";
 import { UploadProgress } from "@/components/library/upload-progress";
 import { LoadingBox } from "@/components/loading-box";
-import { Table, Td, Th, Tr } from "@/components/table";
-import { VerdictBadge } from "@/components/verdict-shape";
-import { explainFlag } from "@/lib/soa/explain";
-import type { PulseResult } from "@/lib/soa/types";
 import type { ProjectCheck } from "../api";
-import { q } from "../format";
-import { UtilisationBar } from "../results/utilisation-bar";
 import { type CaptureStatus, useCapture } from "./capture-api";
-import { TraceCharts, type TracePanel } from "./trace-charts";
-
-const junctionStyles = [
-  { stroke: "var(--color-accent)", dash: undefined },
-  { stroke: "var(--color-ink)", dash: "6 3" },
-  { stroke: "var(--color-ink-muted)", dash: "2 2" },
-  { stroke: "var(--color-accent-strong)", dash: "9 3 2 3" },
-];
-
-function startWords(start: "rest" | "steady" | null): string {
-  if (start === "rest") return "rest (as stated at upload)";
-  if (start === "steady") return "the first sample's level, settled (as stated at upload)";
-  return "rest, or from the first sample's level where the record begins mid-pulse";
-}
-
-function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
-  return (
-    <div className="rounded-md border border-line bg-panel px-3 py-2">
-      <dt className="text-xs text-ink-muted">{label}</dt>
-      <dd className="num mt-0.5 font-mono text-sm">{value}</dd>
-      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
-    </div>
-  );
-}
+import { CaptureFigures } from "./capture-figures";
+import { bindingMarks, tracePanels, type VerdictOf } from "./capture-traces";
+import { CaptureVerdicts } from "./capture-verdicts";
+import { TraceCharts } from "./trace-charts";
 
 /** A capture on its way to results: queued or being processed, and why the last try failed when it is retried. */
 function CaptureProgress({ status, error }: { status: "queued" | "processing"; error?: string | null }) {
@@ -85,7 +56,7 @@ export function CaptureView({
       </p>
     );
   }
-  const { capture, candidates, caseTemp } = detail.data;
+  const { capture, candidates } = detail.data;
   const { summary, trace } = capture;
   if (capture.status === "failed") {
     return (
@@ -106,69 +77,11 @@ export function CaptureView({
       />
     );
   }
-  const eq = summary.equivalent;
   const byPart = new Map(candidates.map((c) => [c.partId, c]));
-  /** The stored result; undefined while it is being rechecked. */
-  const verdictOf = (partId: string): PulseResult | null | undefined => {
+  const verdictOf: VerdictOf = (partId) => {
     const c = byPart.get(partId);
     return c?.stale ? undefined : (c?.result ?? null);
   };
-
-  const panels: TracePanel[] = [
-    {
-      key: "v",
-      symbol: { main: "V", sub: "DS" },
-      name: "V_DS",
-      unit: "V",
-      series: [{ key: "v", label: "V_DS", t: trace.t, y: trace.v, stroke: "var(--color-accent)" }],
-    },
-    {
-      key: "i",
-      symbol: { main: "I", sub: "D" },
-      name: "I_D",
-      unit: "A",
-      series: [{ key: "i", label: "I_D", t: trace.t, y: trace.i, stroke: "var(--color-accent)" }],
-    },
-    {
-      key: "p",
-      symbol: { main: "P" },
-      name: "P",
-      unit: "W",
-      series: [{ key: "p", label: "P", t: trace.t, y: trace.p, stroke: "var(--color-accent)" }],
-    },
-  ];
-  const junctions = candidates.filter((c) => c.junction !== null);
-  const heatedCase = detail.data.case ?? null;
-  if (junctions.length) {
-    panels.push({
-      key: "tj",
-      symbol: { main: "T", sub: "j" },
-      name: heatedCase ? "T_j and the case T_C" : "T_j",
-      unit: "°C",
-      series: [
-        ...junctions.map((c, k) => ({
-          key: `tj-${c.partId}`,
-          label: c.partNumber,
-          t: c.junction!.trace.t,
-          y: c.junction!.trace.y,
-          ...junctionStyles[k % junctionStyles.length],
-        })),
-        // The case heated through the project's case path: the junction traces above include its rise.
-        ...(heatedCase
-          ? [
-              {
-                key: "case",
-                label: "T_C, case path",
-                t: heatedCase.trace.t,
-                y: heatedCase.trace.y,
-                stroke: "var(--color-marginal)",
-                dash: "4 2",
-              },
-            ]
-          : []),
-      ],
-    });
-  }
 
   return (
     <div className="space-y-5" data-testid="capture-view" data-status="done">
@@ -177,148 +90,17 @@ export function CaptureView({
           {capture.error}
         </p>
       ) : null}
-      <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
-        <Figure
-          label="Samples"
-          value={summary.samples.toLocaleString("en-GB")}
-          note={summary.uniform ? "uniform time step" : "uneven time step"}
-        />
-        <Figure label="Length" value={q(summary.tEnd - summary.tStart, "s")} />
-        <Figure
-          label={
-            <>
-              Highest <Sym main="V" sub="DS" />
-            </>
-          }
-          value={q(summary.vMax, "V")}
-        />
-        <Figure
-          label={
-            <>
-              Highest |<Sym main="I" sub="D" />|
-            </>
-          }
-          value={q(summary.iMaxAbs, "A")}
-        />
-        <Figure label="Peak power" value={q(summary.pPeak, "W")} note={`at ${q(summary.tPeak, "s")}`} />
-        <Figure label="Energy" value={q(summary.energy, "J")} />
-        <Figure
-          label="Equal-energy rectangle"
-          value={eq.ok ? q(eq.duration, "s") : "none"}
-          note={
-            eq.ok
-              ? `at ${q(eq.v, "V")} × ${q(eq.i, "A")}`
-              : explainFlag(eq.flag as Parameters<typeof explainFlag>[0])
-          }
-        />
-      </dl>
-
-      <div>
-        <Table label={`Verdicts for ${capture.name}`}>
-          <thead>
-            <tr>
-              <Th>Candidate</Th>
-              <Th>Verdict</Th>
-              <Th numeric>Utilisation</Th>
-              <Th numeric>
-                Allowed <Sym main="I" sub="D" />
-              </Th>
-              <Th numeric>
-                <Sym main="T" sub="j,peak" />
-              </Th>
-              <Th>Binding sample</Th>
-              <Th>How it was read</Th>
-            </tr>
-          </thead>
-          <tbody>
-            {candidates.map((c) => {
-              const result = verdictOf(c.partId);
-              return (
-                <Tr key={c.partId}>
-                  <Td className="font-medium">{c.partNumber}</Td>
-                  <Td data-verdict={result?.verdict ?? "no-data"}>
-                    {result === undefined ? (
-                      <span className="text-ink-faint">being rechecked…</span>
-                    ) : (
-                      <VerdictBadge verdict={result?.verdict ?? "no-data"} />
-                    )}
-                  </Td>
-                  <Td className="text-right">
-                    {result ? (
-                      <UtilisationBar
-                        utilisation={result.utilisation}
-                        limit={check?.policy.utilisationLimit ?? 0.8}
-                        verdict={result.verdict}
-                      />
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                  <Td numeric>{q(result?.allowedCurrent, "A")}</Td>
-                  <Td numeric>
-                    {q(result?.tjPeak ?? c.junction?.tjPeak, "°C")}
-                    {c.junction ? <span className="text-ink-faint"> / {q(c.tjMax, "°C")}</span> : null}
-                  </Td>
-                  <Td className="text-xs whitespace-nowrap" data-testid="binding-cell">
-                    {result?.at ? (
-                      <>
-                        <span className="num font-mono">
-                          {q(result.at.v, "V")} × {q(result.at.i, "A")}
-                        </span>
-                        <span className="block text-ink-faint">
-                          at {q(result.at.t, "s")}, read at{" "}
-                          {result.at.width === null ? "unlimited width" : q(result.at.width, "s")}
-                        </span>
-                      </>
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                  <Td className="max-w-md py-1.5 text-xs whitespace-normal text-ink-muted">
-                    {result?.flags.length ? (
-                      <ul className="min-w-72 space-y-0.5 whitespace-normal">
-                        {result.flags.map((f) => (
-                          <li key={f}>{explainFlag(f)}</li>
-                        ))}
-                      </ul>
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                </Tr>
-              );
-            })}
-          </tbody>
-        </Table>
-        <p className="mt-2 text-xs text-ink-muted">
-          Every sample is read on the curves at its own voltage and at its own width (the record&apos;s energy
-          over its power, at most the record&apos;s length); the binding sample, marked on the traces, decided
-          the curve verdict. The junction temperature runs from {startWords(capture.start)} at{" "}
-          {q(caseTemp, "°C")} case through every sample, between samples included, where the part has a
-          thermal model.
-          {heatedCase
-            ? ` The project's case path heats the case from the same power (dashed T_C, up to ${q(heatedCase.tjPeak, "°C")}); each junction trace includes that rise. Driving the case path with the full power overstates the case rise, so this is conservative.`
-            : null}
-        </p>
-        <Caution className="mt-2" />
-      </div>
-
+      <CaptureFigures summary={summary} />
+      <CaptureVerdicts
+        detail={detail.data}
+        verdictOf={verdictOf}
+        utilisationLimit={check?.policy.utilisationLimit ?? 0.8}
+      />
       <TraceCharts
         key={capture.id}
-        panels={panels}
+        panels={tracePanels(trace, candidates, detail.data.case ?? null)}
         span={[summary.tStart, summary.tEnd]}
-        marks={candidates.flatMap((c) => {
-          const result = verdictOf(c.partId);
-          if (!result?.at) return [];
-          return [
-            {
-              key: c.partId,
-              t: result.at.t,
-              verdict: result.verdict,
-              label: `${c.partNumber}: binding sample, ${q(result.at.v, "V")} × ${q(result.at.i, "A")}`,
-            },
-          ];
-        })}
+        marks={bindingMarks(candidates, verdictOf)}
       />
     </div>
   );

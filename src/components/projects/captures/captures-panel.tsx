@@ -5,16 +5,10 @@ import { usePathname, useSearchParams } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
-import { ConfirmDelete } from "@/components/confirm-delete";
-import { DateText } from "@/components/date-text";
 import { FormMessage } from "@/components/form";
-import { sizeText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
-import { VerdictBadge } from "@/components/verdict-shape";
 import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
-import { q } from "../format";
 import type { PanelProps } from "../project-workspace";
 import {
   type CaptureListItem,
@@ -25,6 +19,7 @@ import {
 } from "./capture-api";
 import { CaptureUpload } from "./capture-upload";
 import { CaptureView } from "./capture-view";
+import { CapturesTable } from "./captures-table";
 
 /** The captures tab: upload a scope waveform (technicians and up), the list of captures, and the one opened. */
 export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: PanelProps) {
@@ -36,19 +31,8 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   const [confirming, setConfirming] = useState<string | null>(null);
   const captures = list.data?.captures ?? [];
   const selected = params.get("capture") ?? captures[0]?.id ?? null;
-  // When a capture's job finishes, the project's check (results, charts, comparison) has new evidence.
-  const pendingIds = captures
-    .filter((c) => inProgress(c.status))
-    .map((c) => c.id)
-    .join(",");
-  const following = useRef(pendingIds);
-  useEffect(() => {
-    if (following.current !== pendingIds && following.current !== "")
-      void invalidateProject(queryClient, projectId);
-    following.current = pendingIds;
-  }, [pendingIds, queryClient, projectId]);
+  useRecheckWhenJobsFinish(projectId, captures);
   const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = can(viewer.role, "measurement.manage");
 
   function open(id: string) {
     const next = new URLSearchParams(params);
@@ -67,7 +51,6 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ]);
     },
   });
-  const columns = canMeasure ? 9 : 8;
 
   return (
     <div className="space-y-8">
@@ -95,99 +78,23 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ) : null}
 
       <Section id="captures" title="Captures" description="Open one to see its traces and its verdicts.">
-        <Table label="Captures">
-          <thead>
-            <tr>
-              <Th>Name</Th>
-              <Th numeric>Samples</Th>
-              <Th numeric>Peak power</Th>
-              <Th numeric>Energy</Th>
-              <Th numeric>Equal-energy rectangle</Th>
-              <Th>Worst verdict</Th>
-              <Th>Uploaded by</Th>
-              <Th numeric>When (UTC)</Th>
-              {canMeasure ? (
-                <Th className="w-32">
-                  <span className="sr-only">Actions</span>
-                </Th>
-              ) : null}
-            </tr>
-          </thead>
-          <tbody>
-            {list.isPending ? <EmptyRow colSpan={columns}>Loading captures…</EmptyRow> : null}
-            {list.isError ? (
-              <EmptyRow colSpan={columns}>
-                <span role="alert" className="text-fail">
-                  {messageOf(list.error)}
-                </span>
-              </EmptyRow>
-            ) : null}
-            {list.isSuccess && captures.length === 0 ? (
-              <EmptyRow colSpan={columns}>
-                {canMeasure
-                  ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
-                  : "No captures yet. Technicians upload scope waveforms here."}
-              </EmptyRow>
-            ) : null}
-            {captures.map((c) => {
-              const eq = c.summary?.equivalent;
-              const worst = check?.worstByPulse[c.id];
-              const mine = c.createdBy === viewer.id;
-              return (
-                <Tr key={c.id} className={c.id === selected ? "bg-accent-soft" : ""}>
-                  <Td>
-                    <button
-                      type="button"
-                      aria-current={c.id === selected ? "true" : undefined}
-                      onClick={() => open(c.id)}
-                      className="font-medium hover:text-accent hover:underline"
-                    >
-                      {c.name}
-                    </button>
-                    <span className="ml-2 text-xs text-ink-faint">
-                      {c.fileName}, {sizeText(c.size)}
-                    </span>
-                  </Td>
-                  <Td numeric>{c.summary ? c.summary.samples.toLocaleString("en-GB") : "—"}</Td>
-                  <Td numeric>{c.summary ? q(c.summary.pPeak, "W") : "—"}</Td>
-                  <Td numeric>{c.summary ? q(c.summary.energy, "J") : "—"}</Td>
-                  <Td numeric>
-                    {!eq ? "—" : eq.ok ? `${q(eq.v, "V")} × ${q(eq.i, "A")}, ${q(eq.duration, "s")}` : "none"}
-                  </Td>
-                  <Td>
-                    {c.status !== "done" ? (
-                      <StatusWord status={c.status} />
-                    ) : worst ? (
-                      <VerdictBadge verdict={worst} />
-                    ) : (
-                      <span className="text-ink-faint">—</span>
-                    )}
-                  </Td>
-                  <Td className="text-ink-muted">
-                    {c.createdBy ? (mine ? "you" : (names.get(c.createdBy) ?? "a former member")) : "—"}
-                  </Td>
-                  <Td numeric>
-                    <DateText value={c.createdAt} withTime />
-                  </Td>
-                  {canMeasure ? (
-                    <Td className="text-right">
-                      {mine || mayDeleteAny ? (
-                        <ConfirmDelete
-                          label={c.name}
-                          confirming={confirming === c.id}
-                          pending={remove.isPending}
-                          onAsk={() => setConfirming(c.id)}
-                          onConfirm={() => remove.mutate(c.id)}
-                          onKeep={() => setConfirming(null)}
-                        />
-                      ) : null}
-                    </Td>
-                  ) : null}
-                </Tr>
-              );
-            })}
-          </tbody>
-        </Table>
+        <CapturesTable
+          list={list}
+          selected={selected}
+          canMeasure={canMeasure}
+          viewerId={viewer.id}
+          worstByPulse={check?.worstByPulse}
+          names={names}
+          onOpen={open}
+          actions={{
+            mayDeleteAny: can(viewer.role, "measurement.manage"),
+            confirming,
+            removing: remove.isPending,
+            onAsk: setConfirming,
+            onConfirm: (id) => remove.mutate(id),
+            onKeep: () => setConfirming(null),
+          }}
+        />
         {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
         <Caution className="mt-3" />
       </Section>
@@ -209,12 +116,17 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   );
 }
 
-/** A capture not (yet) done, in words. */
-function StatusWord({ status }: { status: CaptureListItem["status"] }) {
-  const words = { queued: "queued", processing: "processing…", failed: "failed", done: "done" } as const;
-  return (
-    <span className={status === "failed" ? "text-fail" : "text-ink-muted"} data-capture-status={status}>
-      {words[status]}
-    </span>
-  );
+/** When a capture's job finishes, the project's check (results, charts, comparison) has new evidence. */
+function useRecheckWhenJobsFinish(projectId: string, captures: CaptureListItem[]) {
+  const queryClient = useQueryClient();
+  const pendingIds = captures
+    .filter((c) => inProgress(c.status))
+    .map((c) => c.id)
+    .join(",");
+  const following = useRef(pendingIds);
+  useEffect(() => {
+    if (following.current !== pendingIds && following.current !== "")
+      void invalidateProject(queryClient, projectId);
+    following.current = pendingIds;
+  }, [pendingIds, queryClient, projectId]);
 }

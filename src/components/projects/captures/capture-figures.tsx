@@ -1,0 +1,57 @@
+import type { ReactNode } from "react";
+import { Sym } from "@/components/library/symbols";
+import type { CaptureSummary } from "@/db/schema";
+import { explainFlag } from "@/lib/soa/explain";
+import { q } from "../format";
+
+function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
+  return (
+    <div className="rounded-md border border-line bg-panel px-3 py-2">
+      <dt className="text-xs text-ink-muted">{label}</dt>
+      <dd className="num mt-0.5 font-mono text-sm">{value}</dd>
+      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
+    </div>
+  );
+}
+
+/** A processed capture's key figures: samples, length, peaks, energy and its equal-energy rectangle. */
+export function CaptureFigures({ summary }: { summary: CaptureSummary }) {
+  const eq = summary.equivalent;
+  return (
+    <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
+      <Figure
+        label="Samples"
+        value={summary.samples.toLocaleString("en-GB")}
+        note={summary.uniform ? "uniform time step" : "uneven time step"}
+      />
+      <Figure label="Length" value={q(summary.tEnd - summary.tStart, "s")} />
+      <Figure
+        label={
+          <>
+            Highest <Sym main="V" sub="DS" />
+          </>
+        }
+        value={q(summary.vMax, "V")}
+      />
+      <Figure
+        label={
+          <>
+            Highest |<Sym main="I" sub="D" />|
+          </>
+        }
+        value={q(summary.iMaxAbs, "A")}
+      />
+      <Figure label="Peak power" value={q(summary.pPeak, "W")} note={`at ${q(summary.tPeak, "s")}`} />
+      <Figure label="Energy" value={q(summary.energy, "J")} />
+      <Figure
+        label="Equal-energy rectangle"
+        value={eq.ok ? q(eq.duration, "s") : "none"}
+        note={
+          eq.ok
+            ? `at ${q(eq.v, "V")} × ${q(eq.i, "A")}`
+            : explainFlag(eq.flag as Parameters<typeof explainFlag>[0])
+        }
+      />
+    </dl>
+  );
+}
