@@ -7,6 +7,7 @@ import { Caution } from "@/components/caution";
 import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
+import { useUrlState } from "@/components/use-url-state";
 import { CellDetails } from "./cell-details";
 import { DecisionForm } from "./decision-form";
 import { money, percent, plural, q } from "./format";
@@ -23,7 +24,6 @@ import { type CellRef, MatrixTable } from "./matrix-table";
 import { OverlayPanel } from "./overlay-panel";
 import { useCheck, useDecisions } from "./queries";
 import type { DecisionSummary, ProjectCheck } from "./types";
-import { useUrlState } from "./use-url-state";
 
 /**
  * The lead's comparison: key figures, the decision form when asked for (leads only), the ranked matrix with its

@@ -1,7 +1,6 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { usePathname, useSearchParams } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
@@ -11,6 +10,7 @@ import { FormMessage } from "@/components/form";
 import { sizeText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
+import { useUrlState } from "@/components/use-url-state";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
@@ -28,8 +28,7 @@ import { CaptureView } from "./capture-view";
 
 /** The captures tab: upload a scope waveform (technicians and up), the list of captures, and the one opened. */
 export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: PanelProps) {
-  const params = useSearchParams();
-  const pathname = usePathname();
+  const [params, setParams] = useUrlState();
   const queryClient = useQueryClient();
   const list = useCaptures(projectId);
   const [fresh, setFresh] = useState<RegisteredCapture | null>(null);
@@ -51,10 +50,7 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   const mayDeleteAny = can(viewer.role, "measurement.manage");
 
   function open(id: string) {
-    const next = new URLSearchParams(params);
-    next.set("tab", "captures");
-    next.set("capture", id);
-    window.history.pushState(null, "", `${pathname}?${next}`);
+    setParams({ tab: "captures", capture: id }, { push: true });
   }
 
   const remove = useMutation({
