@@ -37,6 +37,8 @@ declare module "@tanstack/react-table" {
     rowHeader?: boolean;
     /** Attributes on each body cell (data-* for tests and styling, a title). */
     cellProps?: (row: TData) => TdHTMLAttributes<HTMLTableCellElement> & Record<`data-${string}`, unknown>;
+    /** How many columns the body cell spans in this row: 0 when an earlier cell already covers it. */
+    span?: (row: TData) => number;
   }
 }
 
@@ -308,17 +310,21 @@ function BodyRow<T>({
 function BodyCell<T>({ cell, density }: { cell: Cell<T, unknown>; density: Density }) {
   const meta = cell.column.columnDef.meta;
   const pinnedLeft = cell.column.getIsPinned() === "left";
+  const span = meta?.span?.(cell.row.original) ?? 1;
+  if (span === 0) return null;
   const Tag = meta?.rowHeader ? "th" : "td";
   // A pinned cell covers what scrolls under it, so it takes the row's colour (a highlight or the hover).
   const pin = pinnedLeft
     ? "sticky z-[5] bg-panel group-hover/row:bg-surface group-data-highlighted/row:bg-accent-soft"
     : "";
+  const { className: extra = "", ...props } = meta?.cellProps?.(cell.row.original) ?? {};
   return (
     <Tag
       scope={meta?.rowHeader ? "row" : undefined}
+      colSpan={span > 1 ? span : undefined}
       style={pinStyle(cell.column)}
-      className={`${cellClass(density, Boolean(meta?.numeric))} ${meta?.rowHeader ? "text-left font-normal" : ""} ${pin} ${meta?.className ?? ""}`}
-      {...meta?.cellProps?.(cell.row.original)}
+      className={`${cellClass(density, Boolean(meta?.numeric))} ${meta?.rowHeader ? "text-left font-normal" : ""} ${pin} ${meta?.className ?? ""} ${extra}`}
+      {...props}
     >
       {flexRender(cell.column.columnDef.cell, cell.getContext())}
     </Tag>

@@ -6,14 +6,11 @@ import { Caution } from "@/components/caution";
 import { Sym } from "@/components/library/symbols";
 import { UploadProgress } from "@/components/library/upload-progress";
 import { LoadingBox } from "@/components/loading-box";
-import { Table, Td, Th, Tr } from "@/components/table";
-import { VerdictBadge } from "@/components/verdict-shape";
 import { explainFlag } from "@/lib/soa/explain";
-import type { PulseResult } from "@/lib/soa/types";
 import type { ProjectCheck } from "../api";
 import { q } from "../format";
-import { UtilisationBar } from "../results/utilisation-bar";
 import { type CaptureStatus, useCapture } from "./capture-api";
+import { CaptureVerdicts, verdictOf } from "./capture-verdicts";
 import { TraceCharts, type TracePanel } from "./trace-charts";
 
 const junctionStyles = [
@@ -108,11 +105,7 @@ export function CaptureView({
   }
   const eq = summary.equivalent;
   const byPart = new Map(candidates.map((c) => [c.partId, c]));
-  /** The stored result; undefined while it is being rechecked. */
-  const verdictOf = (partId: string): PulseResult | null | undefined => {
-    const c = byPart.get(partId);
-    return c?.stale ? undefined : (c?.result ?? null);
-  };
+  const resultOf = (partId: string) => verdictOf(byPart.get(partId));
 
   const panels: TracePanel[] = [
     {
@@ -214,82 +207,11 @@ export function CaptureView({
       </dl>
 
       <div>
-        <Table label={`Verdicts for ${capture.name}`}>
-          <thead>
-            <tr>
-              <Th>Candidate</Th>
-              <Th>Verdict</Th>
-              <Th numeric>Utilisation</Th>
-              <Th numeric>
-                Allowed <Sym main="I" sub="D" />
-              </Th>
-              <Th numeric>
-                <Sym main="T" sub="j,peak" />
-              </Th>
-              <Th>Binding sample</Th>
-              <Th>How it was read</Th>
-            </tr>
-          </thead>
-          <tbody>
-            {candidates.map((c) => {
-              const result = verdictOf(c.partId);
-              return (
-                <Tr key={c.partId}>
-                  <Td className="font-medium">{c.partNumber}</Td>
-                  <Td data-verdict={result?.verdict ?? "no-data"}>
-                    {result === undefined ? (
-                      <span className="text-ink-faint">being rechecked…</span>
-                    ) : (
-                      <VerdictBadge verdict={result?.verdict ?? "no-data"} />
-                    )}
-                  </Td>
-                  <Td className="text-right">
-                    {result ? (
-                      <UtilisationBar
-                        utilisation={result.utilisation}
-                        limit={check?.policy.utilisationLimit ?? 0.8}
-                        verdict={result.verdict}
-                      />
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                  <Td numeric>{q(result?.allowedCurrent, "A")}</Td>
-                  <Td numeric>
-                    {q(result?.tjPeak ?? c.junction?.tjPeak, "°C")}
-                    {c.junction ? <span className="text-ink-faint"> / {q(c.tjMax, "°C")}</span> : null}
-                  </Td>
-                  <Td className="text-xs whitespace-nowrap" data-testid="binding-cell">
-                    {result?.at ? (
-                      <>
-                        <span className="num font-mono">
-                          {q(result.at.v, "V")} × {q(result.at.i, "A")}
-                        </span>
-                        <span className="block text-ink-faint">
-                          at {q(result.at.t, "s")}, read at{" "}
-                          {result.at.width === null ? "unlimited width" : q(result.at.width, "s")}
-                        </span>
-                      </>
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                  <Td className="max-w-md py-1.5 text-xs whitespace-normal text-ink-muted">
-                    {result?.flags.length ? (
-                      <ul className="min-w-72 space-y-0.5 whitespace-normal">
-                        {result.flags.map((f) => (
-                          <li key={f}>{explainFlag(f)}</li>
-                        ))}
-                      </ul>
-                    ) : (
-                      "—"
-                    )}
-                  </Td>
-                </Tr>
-              );
-            })}
-          </tbody>
-        </Table>
+        <CaptureVerdicts
+          name={capture.name}
+          candidates={candidates}
+          limit={check?.policy.utilisationLimit ?? 0.8}
+        />
         <p className="mt-2 text-xs text-ink-muted">
           Every sample is read on the curves at its own voltage and at its own width (the record&apos;s energy
           over its power, at most the record&apos;s length); the binding sample, marked on the traces, decided
@@ -308,7 +230,7 @@ export function CaptureView({
         panels={panels}
         span={[summary.tStart, summary.tEnd]}
         marks={candidates.flatMap((c) => {
-          const result = verdictOf(c.partId);
+          const result = resultOf(c.partId);
           if (!result?.at) return [];
           return [
             {

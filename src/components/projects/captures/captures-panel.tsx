@@ -1,7 +1,8 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useRef, useState } from "react";
+import type { ColumnDef } from "@tanstack/react-table";
+import { type ReactNode, useEffect, useRef, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { ConfirmDelete } from "@/components/confirm-delete";
@@ -9,7 +10,7 @@ import { DateText } from "@/components/date-text";
 import { FormMessage } from "@/components/form";
 import { sizeText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
+import { DataTable } from "@/components/table";
 import { useUrlState } from "@/components/use-url-state";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { can } from "@/lib/auth/permissions";
@@ -63,7 +64,6 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ]);
     },
   });
-  const columns = canMeasure ? 9 : 8;
 
   return (
     <div className="space-y-8">
@@ -91,99 +91,50 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ) : null}
 
       <Section id="captures" title="Captures" description="Open one to see its traces and its verdicts.">
-        <Table label="Captures">
-          <thead>
-            <tr>
-              <Th>Name</Th>
-              <Th numeric>Samples</Th>
-              <Th numeric>Peak power</Th>
-              <Th numeric>Energy</Th>
-              <Th numeric>Equal-energy rectangle</Th>
-              <Th>Worst verdict</Th>
-              <Th>Uploaded by</Th>
-              <Th numeric>When (UTC)</Th>
-              {canMeasure ? (
-                <Th className="w-32">
-                  <span className="sr-only">Actions</span>
-                </Th>
-              ) : null}
-            </tr>
-          </thead>
-          <tbody>
-            {list.isPending ? <EmptyRow colSpan={columns}>Loading captures…</EmptyRow> : null}
-            {list.isError ? (
-              <EmptyRow colSpan={columns}>
-                <span role="alert" className="text-fail">
-                  {messageOf(list.error)}
-                </span>
-              </EmptyRow>
-            ) : null}
-            {list.isSuccess && captures.length === 0 ? (
-              <EmptyRow colSpan={columns}>
-                {canMeasure
-                  ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
-                  : "No captures yet. Technicians upload scope waveforms here."}
-              </EmptyRow>
-            ) : null}
-            {captures.map((c) => {
-              const eq = c.summary?.equivalent;
-              const worst = check?.worstByPulse[c.id];
-              const mine = c.createdBy === viewer.id;
-              return (
-                <Tr key={c.id} className={c.id === selected ? "bg-accent-soft" : ""}>
-                  <Td>
-                    <button
-                      type="button"
-                      aria-current={c.id === selected ? "true" : undefined}
-                      onClick={() => open(c.id)}
-                      className="font-medium hover:text-accent hover:underline"
-                    >
-                      {c.name}
-                    </button>
-                    <span className="ml-2 text-xs text-ink-faint">
-                      {c.fileName}, {sizeText(c.size)}
-                    </span>
-                  </Td>
-                  <Td numeric>{c.summary ? c.summary.samples.toLocaleString("en-GB") : "—"}</Td>
-                  <Td numeric>{c.summary ? q(c.summary.pPeak, "W") : "—"}</Td>
-                  <Td numeric>{c.summary ? q(c.summary.energy, "J") : "—"}</Td>
-                  <Td numeric>
-                    {!eq ? "—" : eq.ok ? `${q(eq.v, "V")} × ${q(eq.i, "A")}, ${q(eq.duration, "s")}` : "none"}
-                  </Td>
-                  <Td>
-                    {c.status !== "done" ? (
-                      <StatusWord status={c.status} />
-                    ) : worst ? (
-                      <VerdictBadge verdict={worst} />
-                    ) : (
-                      <span className="text-ink-faint">—</span>
-                    )}
-                  </Td>
-                  <Td className="text-ink-muted">
-                    {c.createdBy ? (mine ? "you" : (names.get(c.createdBy) ?? "a former member")) : "—"}
-                  </Td>
-                  <Td numeric>
-                    <DateText value={c.createdAt} withTime />
-                  </Td>
-                  {canMeasure ? (
-                    <Td className="text-right">
-                      {mine || mayDeleteAny ? (
-                        <ConfirmDelete
-                          label={c.name}
-                          confirming={confirming === c.id}
-                          pending={remove.isPending}
-                          onAsk={() => setConfirming(c.id)}
-                          onConfirm={() => remove.mutate(c.id)}
-                          onKeep={() => setConfirming(null)}
-                        />
-                      ) : null}
-                    </Td>
-                  ) : null}
-                </Tr>
-              );
-            })}
-          </tbody>
-        </Table>
+        <DataTable
+          label="Captures"
+          columns={captureColumns({
+            check,
+            selected,
+            open,
+            who: (c) =>
+              c.createdBy
+                ? c.createdBy === viewer.id
+                  ? "you"
+                  : (names.get(c.createdBy) ?? "a former member")
+                : "—",
+            actions: canMeasure
+              ? (c) =>
+                  c.createdBy === viewer.id || mayDeleteAny ? (
+                    <ConfirmDelete
+                      label={c.name}
+                      confirming={confirming === c.id}
+                      pending={remove.isPending}
+                      onAsk={() => setConfirming(c.id)}
+                      onConfirm={() => remove.mutate(c.id)}
+                      onKeep={() => setConfirming(null)}
+                    />
+                  ) : null
+              : null,
+          })}
+          data={captures}
+          getRowId={(c) => c.id}
+          rowProps={(c) => ({ className: c.id === selected ? "bg-accent-soft" : "hover:bg-surface" })}
+          status={
+            list.isPending ? (
+              "Loading captures…"
+            ) : list.isError ? (
+              <span role="alert" className="text-fail">
+                {messageOf(list.error)}
+              </span>
+            ) : null
+          }
+          empty={
+            canMeasure
+              ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
+              : "No captures yet. Technicians upload scope waveforms here."
+          }
+        />
         {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
         <Caution className="mt-3" />
       </Section>
@@ -203,6 +154,106 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ) : null}
     </div>
   );
+}
+
+const num = { numeric: true };
+
+function captureColumns({
+  check,
+  selected,
+  open,
+  who,
+  actions,
+}: {
+  check: PanelProps["check"];
+  selected: string | null;
+  open: (id: string) => void;
+  who: (c: CaptureListItem) => string;
+  actions: ((c: CaptureListItem) => ReactNode) | null;
+}): ColumnDef<CaptureListItem>[] {
+  const columns: ColumnDef<CaptureListItem>[] = [
+    {
+      id: "name",
+      header: "Name",
+      cell: ({ row: { original: c } }) => (
+        <>
+          <button
+            type="button"
+            aria-current={c.id === selected ? "true" : undefined}
+            onClick={() => open(c.id)}
+            className="font-medium hover:text-accent hover:underline"
+          >
+            {c.name}
+          </button>
+          <span className="ml-2 text-xs text-ink-faint">
+            {c.fileName}, {sizeText(c.size)}
+          </span>
+        </>
+      ),
+    },
+    {
+      id: "samples",
+      header: "Samples",
+      cell: ({ row: { original: c } }) => (c.summary ? c.summary.samples.toLocaleString("en-GB") : "—"),
+      meta: num,
+    },
+    {
+      id: "peak",
+      header: "Peak power",
+      cell: ({ row: { original: c } }) => (c.summary ? q(c.summary.pPeak, "W") : "—"),
+      meta: num,
+    },
+    {
+      id: "energy",
+      header: "Energy",
+      cell: ({ row: { original: c } }) => (c.summary ? q(c.summary.energy, "J") : "—"),
+      meta: num,
+    },
+    {
+      id: "equivalent",
+      header: "Equal-energy rectangle",
+      cell: ({ row: { original: c } }) => {
+        const eq = c.summary?.equivalent;
+        return !eq ? "—" : eq.ok ? `${q(eq.v, "V")} × ${q(eq.i, "A")}, ${q(eq.duration, "s")}` : "none";
+      },
+      meta: num,
+    },
+    {
+      id: "worst",
+      header: "Worst verdict",
+      cell: ({ row: { original: c } }) => {
+        const worst = check?.worstByPulse[c.id];
+        return c.status !== "done" ? (
+          <StatusWord status={c.status} />
+        ) : worst ? (
+          <VerdictBadge verdict={worst} />
+        ) : (
+          <span className="text-ink-faint">—</span>
+        );
+      },
+    },
+    {
+      id: "who",
+      header: "Uploaded by",
+      cell: ({ row }) => who(row.original),
+      meta: { className: "text-ink-muted", headerClassName: "" },
+    },
+    {
+      id: "when",
+      header: "When (UTC)",
+      cell: ({ row }) => <DateText value={row.original.createdAt} withTime />,
+      meta: num,
+    },
+  ];
+  if (actions) {
+    columns.push({
+      id: "actions",
+      header: () => <span className="sr-only">Actions</span>,
+      cell: ({ row }) => actions(row.original),
+      meta: { className: "text-right", headerClassName: "w-32" },
+    });
+  }
+  return columns;
 }
 
 /** A capture not (yet) done, in words. */
