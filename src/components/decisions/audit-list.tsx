@@ -3,9 +3,9 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { messageOf } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { LoadingBox } from "@/components/loading-box";
-import { DataTable } from "@/components/table";
 import { auditWords } from "./audit-words";
 import { useAudit } from "./queries";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import type { ColumnDef } from "@tanstack/react-table";
-import { DataTable } from "@/components/table";
+import { DataTable } from "@/components/data-table";
 import type { Verdict } from "@/lib/soa/types";
 import { percent } from "./format";
 import type { Drift } from "./types";

@@ -1,8 +1,8 @@
 "use client";
 
 import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { DataTable } from "@/components/table";
 import { money, q } from "./format";
 import type { DecisionSnapshot } from "./types";
 

@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import { type MouseEvent, useCallback, useEffect, useMemo, useRef } from "react";
-import { DataTable } from "@/components/table";
+import { DataTable } from "@/components/data-table";
 import type { MatrixRow } from "@/lib/projects/matrix";
 import { money, percent, pulseLine, resultLine, verdictWords } from "./format";
 import type { CheckedPulse, MatrixData } from "./types";

@@ -5,9 +5,9 @@ import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
 import { type ReactNode, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
-import { DataTable } from "@/components/table";
 import { CURVE_FORMS } from "@/lib/vocabulary";
 import { sizeText } from "./format";
 

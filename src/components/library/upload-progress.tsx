@@ -1,5 +1,5 @@
 import type { ColumnDef } from "@tanstack/react-table";
-import { DataTable } from "@/components/table";
+import { DataTable } from "@/components/data-table";
 import type { CsvIssue } from "@/lib/csv/issues";
 
 /** Long work in words with a bar: "Uploading… 45 %", then "Checking the curves…". */

@@ -2,8 +2,8 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { DataTable } from "@/components/table";
 import { q } from "./format";
 
 export interface ProjectRow {

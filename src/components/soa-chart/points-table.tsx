@@ -1,6 +1,6 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
-import { DataTable } from "@/components/table";
+import { DataTable } from "@/components/data-table";
 import { formatQuantity } from "@/lib/soa/units";
 import { durationName, sortByDuration } from "./chart-model";
 import type { ChartCurve, SoaChartProps } from "./types";

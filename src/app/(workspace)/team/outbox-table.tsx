@@ -1,8 +1,8 @@
 "use client";
 
 import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { DataTable } from "@/components/table";
 
 export interface OutboxRow {
   id: string;

@@ -1,6 +1,6 @@
 import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { DataTable } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
 import type { MeasurementPreview } from "../api";
 import { percent, q, repeatText } from "../format";

@@ -1,8 +1,8 @@
 "use client";
 
 import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { DataTable } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { explainFlag } from "@/lib/soa/explain";
 import type { PulseResult } from "@/lib/soa/types";

@@ -2,8 +2,8 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import { useEffect, useRef, useState } from "react";
+import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { DataTable } from "@/components/table";
 import { VerdictBadge } from "@/components/verdict-shape";
 import type { CheckedPulse, ProjectCheck } from "../api";
 import { pulseShape, q, repeatText, shapeWords } from "../format";
