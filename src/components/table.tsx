@@ -1,12 +1,42 @@
 import type { ReactNode, TdHTMLAttributes, ThHTMLAttributes } from "react";
 import { ScrollRegion } from "./scroll-region";
 
-// Dense tables (DESIGN.md): 36 px rows, a sticky header, numeric columns right-aligned.
+// The parts of every table (DESIGN.md): 32–36 px rows, a sticky header, numeric columns right-aligned in tabular
+// figures, an empty state that says what to do next. `DataTable` (data-table.tsx) draws data tables with them;
+// the server-rendered team and account pages still compose them by hand around their editable rows.
 
-export function Table({ label, children }: { label: string; children: ReactNode }) {
+/** Row height: `compact` for a table inside a disclosure (text-xs), `tall` for two-line cells. */
+export type Density = "compact" | "normal" | "tall";
+
+const heights: Record<Density, string> = {
+  compact: "h-7 px-2 text-xs",
+  normal: "h-9 px-3",
+  tall: "h-11 px-3",
+};
+
+const scrollBox = "overflow-auto rounded-md border border-line bg-panel";
+
+export function Table({
+  label,
+  children,
+  className = "max-h-[min(34rem,70vh)]",
+  tableClassName = "w-full",
+  busy = false,
+}: {
+  label: string;
+  children: ReactNode;
+  /** The scroll box's size. */
+  className?: string;
+  tableClassName?: string;
+  /** The rows are about to change: dimmed and marked busy until they do. */
+  busy?: boolean;
+}) {
   return (
-    <ScrollRegion className="max-h-[min(34rem,70vh)] overflow-auto rounded-md border border-line bg-panel">
-      <table aria-label={label} className="w-full border-separate border-spacing-0 text-sm">
+    <ScrollRegion
+      aria-busy={busy || undefined}
+      className={`${scrollBox} transition-opacity ${busy ? "opacity-60" : ""} ${className}`}
+    >
+      <table aria-label={label} className={`border-separate border-spacing-0 text-sm ${tableClassName}`}>
         {children}
       </table>
     </ScrollRegion>
@@ -37,13 +67,14 @@ export function Td({
   ...rest
 }: TdHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
   return (
-    <td
-      className={`h-9 border-b border-line px-3 align-middle whitespace-nowrap group-last/row:border-b-0 ${numeric ? "num text-right font-mono text-xs" : ""} ${className}`}
-      {...rest}
-    >
+    <td className={`${cellClass("normal", numeric)} ${className}`} {...rest}>
       {children}
     </td>
   );
+}
+
+export function cellClass(density: Density, numeric: boolean): string {
+  return `${heights[density]} border-b border-line align-middle whitespace-nowrap group-last/row:border-b-0 ${numeric ? "num text-right font-mono text-xs" : ""}`;
 }
 
 /** A body row; hover lightens it, and its row actions stay visible for keyboard users. */

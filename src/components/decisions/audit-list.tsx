@@ -1,10 +1,11 @@
 "use client";
 
+import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { messageOf } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { LoadingBox } from "@/components/loading-box";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { auditWords } from "./audit-words";
 import { useAudit } from "./queries";
 
@@ -19,48 +20,56 @@ export function AuditList({ projectId }: { projectId: string }) {
       </p>
     );
   }
-  const events = audit.data.events;
   return (
-    <Table label="Project history">
-      <thead>
-        <tr>
-          <Th className="w-40">When (UTC)</Th>
-          <Th className="w-48">Who</Th>
-          <Th>What</Th>
-        </tr>
-      </thead>
-      <tbody>
-        {events.length === 0 ? (
-          <EmptyRow colSpan={3}>Nothing recorded for this project yet.</EmptyRow>
-        ) : (
-          events.map((event) => {
-            const decisionId =
-              typeof event.details?.decisionId === "string" ? event.details.decisionId : null;
-            return (
-              <Tr key={event.id}>
-                <Td>
-                  <DateText value={event.createdAt} withTime />
-                </Td>
-                <Td>{event.actor ?? <span className="text-ink-faint">removed account</span>}</Td>
-                <Td className="whitespace-normal">
-                  {auditWords(event)}
-                  {decisionId ? (
-                    <>
-                      {" · "}
-                      <Link
-                        href={`/projects/${projectId}/decisions/${decisionId}`}
-                        className="text-accent underline underline-offset-2"
-                      >
-                        open the record
-                      </Link>
-                    </>
-                  ) : null}
-                </Td>
-              </Tr>
-            );
-          })
-        )}
-      </tbody>
-    </Table>
+    <DataTable
+      label="Project history"
+      columns={columnsFor(projectId)}
+      data={audit.data.events}
+      getRowId={(event) => event.id}
+      empty="Nothing recorded for this project yet."
+    />
   );
+}
+
+type AuditEvent = NonNullable<ReturnType<typeof useAudit>["data"]>["events"][number];
+
+function columnsFor(projectId: string): ColumnDef<AuditEvent>[] {
+  return [
+    {
+      id: "when",
+      header: "When (UTC)",
+      cell: ({ row }) => <DateText value={row.original.createdAt} withTime />,
+      meta: { headerClassName: "w-40" },
+    },
+    {
+      id: "who",
+      header: "Who",
+      cell: ({ row }) => row.original.actor ?? <span className="text-ink-faint">removed account</span>,
+      meta: { headerClassName: "w-48" },
+    },
+    {
+      id: "what",
+      header: "What",
+      cell: ({ row: { original: event } }) => {
+        const decisionId = typeof event.details?.decisionId === "string" ? event.details.decisionId : null;
+        return (
+          <>
+            {auditWords(event)}
+            {decisionId ? (
+              <>
+                {" · "}
+                <Link
+                  href={`/projects/${projectId}/decisions/${decisionId}`}
+                  className="text-accent underline underline-offset-2"
+                >
+                  open the record
+                </Link>
+              </>
+            ) : null}
+          </>
+        );
+      },
+      meta: { className: "whitespace-normal", headerClassName: "" },
+    },
+  ];
 }

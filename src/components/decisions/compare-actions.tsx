@@ -1,7 +1,7 @@
 "use client";
 
 import { Button } from "@/components/form";
-import { useUrlState } from "./use-url-state";
+import { useUrlState } from "@/components/use-url-state";
 
 const link =
   "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";

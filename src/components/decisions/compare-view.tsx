@@ -5,6 +5,7 @@ import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
+import { useUrlState } from "@/components/use-url-state";
 import { ComparisonStats } from "./comparison-stats";
 import { DecisionForm } from "./decision-form";
 import { filterFrom, type MatrixFilter, rankAll } from "./matrix-model";
@@ -12,7 +13,6 @@ import { MatrixSection } from "./matrix-section";
 import { OverlayPanel } from "./overlay-panel";
 import { useCheck } from "./queries";
 import type { ProjectCheck } from "./types";
-import { useUrlState } from "./use-url-state";
 
 /**
  * The lead's comparison: key figures, the decision form when asked for (leads only), the ranked matrix with its

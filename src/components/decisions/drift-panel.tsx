@@ -1,8 +1,6 @@
-import { ScrollRegion } from "@/components/scroll-region";
-import type { Verdict } from "@/lib/soa/types";
+import { DriftResults } from "./drift-results";
 import { percent, q } from "./format";
 import type { DecisionSnapshot, Drift } from "./types";
-import { VerdictMark } from "./verdict-mark";
 
 type Policy = DecisionSnapshot["policy"];
 
@@ -15,16 +13,6 @@ const betweenWords = {
 function policyText(p: Policy): string {
   const voltage = p.voltageLimit === undefined ? "" : `, voltage limit ${percent(p.voltageLimit)} of V_DSS`;
   return `utilisation limit ${percent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K${voltage}, between curves: ${betweenWords[p.betweenCurves]}`;
-}
-
-function Outcome({ value }: { value: { verdict: Verdict; utilisation: number | null } | null }) {
-  if (!value) return <span className="text-ink-faint">not checked</span>;
-  return (
-    <span className="inline-flex items-center gap-2">
-      <span className="font-mono num">{percent(value.utilisation)}</span>
-      {VerdictMark({ verdict: value.verdict })}
-    </span>
-  );
 }
 
 /** True when checking again would give exactly what was frozen. */
@@ -112,43 +100,7 @@ export function DriftPanel({ drift, frozen, now }: { drift: Drift; frozen: Polic
           ))}
         </dl>
       ) : null}
-      {drift.results.length ? (
-        <ScrollRegion className="max-h-80 overflow-auto rounded-md border border-line">
-          <table
-            aria-label="Results that changed"
-            className="w-full border-separate border-spacing-0 text-sm"
-          >
-            <thead>
-              <tr>
-                {["Candidate × pulse", "Frozen", "Now"].map((h) => (
-                  <th
-                    key={h}
-                    scope="col"
-                    className="sticky top-0 h-8 border-b border-line bg-sunken px-3 text-left text-xs font-medium text-ink-muted"
-                  >
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {drift.results.map((r) => (
-                <tr key={`${r.partId}-${r.pulseId}`}>
-                  <th scope="row" className="h-9 border-b border-line px-3 text-left font-normal">
-                    {r.label}
-                  </th>
-                  <td className="h-9 border-b border-line px-3 text-xs">
-                    <Outcome value={r.frozen} />
-                  </td>
-                  <td className="h-9 border-b border-line px-3 text-xs">
-                    <Outcome value={r.now} />
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </ScrollRegion>
-      ) : null}
+      {drift.results.length ? <DriftResults results={drift.results} /> : null}
     </div>
   );
 }

@@ -1,7 +1,89 @@
+"use client";
+
+import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { Table, Td, Th, Tr } from "@/components/table";
 import { money, q } from "./format";
 import type { DecisionSnapshot } from "./types";
+
+type Frozen = DecisionSnapshot["candidates"][number];
+
+const none = (text: string) => <span className="text-ink-faint">{text}</span>;
+
+const columns: ColumnDef<Frozen>[] = [
+  {
+    id: "part",
+    header: "Part",
+    cell: ({ row: { original: c } }) => (
+      <>
+        <span className="font-medium">{c.partNumber}</span>{" "}
+        <span className="text-xs text-ink-muted">{c.maker}</span>
+      </>
+    ),
+  },
+  { id: "package", header: "Package", cell: ({ row }) => row.original.part.package },
+  {
+    id: "vdsMax",
+    header: () => (
+      <>
+        <Sym main="V" sub="DSS" /> (V)
+      </>
+    ),
+    cell: ({ row }) => q(row.original.part.vdsMax, "V"),
+    meta: { numeric: true },
+  },
+  {
+    id: "rdsOn",
+    header: () => (
+      <>
+        <Sym main="R" sub="DS(on)" /> (Ω)
+      </>
+    ),
+    cell: ({ row }) => q(row.original.part.rdsOn, "Ω"),
+    meta: { numeric: true },
+  },
+  {
+    id: "tjMax",
+    header: () => (
+      <>
+        <Sym main="T" sub="j,max" /> (°C)
+      </>
+    ),
+    cell: ({ row }) => q(row.original.part.tjMax, "°C"),
+    meta: { numeric: true },
+  },
+  {
+    id: "unitCost",
+    header: "Unit cost",
+    cell: ({ row }) => money(row.original.unitCost, row.original.currency),
+    meta: { numeric: true },
+  },
+  {
+    id: "datasheet",
+    header: "Datasheet",
+    cell: ({ row }) => row.original.part.datasheetRevision ?? none("—"),
+  },
+  {
+    id: "status",
+    header: "Library status",
+    cell: ({ row: { original: c } }) =>
+      c.status === "verified"
+        ? `verified${c.verifiedByName ? ` by ${c.verifiedByName}` : ""}`
+        : "draft (unverified)",
+  },
+  {
+    id: "curveSet",
+    header: "Curve set",
+    cell: ({ row: { original: c } }) =>
+      c.curveSetId ? (
+        <span className="font-mono text-xs" title={c.curveSetId}>
+          {c.curveSetId.slice(0, 8)}
+        </span>
+      ) : (
+        none("no curves")
+      ),
+  },
+];
 
 /** The candidates' data as the decision froze them: ratings, datasheet revision, curve set and status. */
 export function FrozenCandidates({ snapshot }: { snapshot: DecisionSnapshot }) {
@@ -10,56 +92,6 @@ export function FrozenCandidates({ snapshot }: { snapshot: DecisionSnapshot }) {
     (a, b) => (rankOf.get(a.partId) ?? 0) - (rankOf.get(b.partId) ?? 0),
   );
   return (
-    <Table label="Candidates as frozen">
-      <thead>
-        <tr>
-          <Th>Part</Th>
-          <Th>Package</Th>
-          <Th numeric>
-            <Sym main="V" sub="DSS" /> (V)
-          </Th>
-          <Th numeric>
-            <Sym main="R" sub="DS(on)" /> (Ω)
-          </Th>
-          <Th numeric>
-            <Sym main="T" sub="j,max" /> (°C)
-          </Th>
-          <Th numeric>Unit cost</Th>
-          <Th>Datasheet</Th>
-          <Th>Library status</Th>
-          <Th>Curve set</Th>
-        </tr>
-      </thead>
-      <tbody>
-        {candidates.map((c) => (
-          <Tr key={c.partId}>
-            <Td>
-              <span className="font-medium">{c.partNumber}</span>{" "}
-              <span className="text-xs text-ink-muted">{c.maker}</span>
-            </Td>
-            <Td>{c.part.package}</Td>
-            <Td numeric>{q(c.part.vdsMax, "V")}</Td>
-            <Td numeric>{q(c.part.rdsOn, "Ω")}</Td>
-            <Td numeric>{q(c.part.tjMax, "°C")}</Td>
-            <Td numeric>{money(c.unitCost, c.currency)}</Td>
-            <Td>{c.part.datasheetRevision ?? <span className="text-ink-faint">—</span>}</Td>
-            <Td>
-              {c.status === "verified"
-                ? `verified${c.verifiedByName ? ` by ${c.verifiedByName}` : ""}`
-                : "draft (unverified)"}
-            </Td>
-            <Td>
-              {c.curveSetId ? (
-                <span className="font-mono text-xs" title={c.curveSetId}>
-                  {c.curveSetId.slice(0, 8)}
-                </span>
-              ) : (
-                <span className="text-ink-faint">no curves</span>
-              )}
-            </Td>
-          </Tr>
-        ))}
-      </tbody>
-    </Table>
+    <DataTable label="Candidates as frozen" columns={columns} data={candidates} getRowId={(c) => c.partId} />
   );
 }

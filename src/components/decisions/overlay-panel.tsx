@@ -1,8 +1,10 @@
 "use client";
 
 import { useQueries } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
 import { type ReactNode, useMemo, useState } from "react";
 import { messageOf } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { callJson } from "@/components/library/api";
 import { LoadingBox } from "@/components/loading-box";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
@@ -145,61 +147,58 @@ function Empty({ children }: { children: ReactNode }) {
   return <p className="rounded-md bg-sunken px-4 py-10 text-center text-sm text-ink-muted">{children}</p>;
 }
 
+type Marker = ReturnType<typeof overlayMarkers>[number];
+type MarkerRow = Marker["byCandidate"][number] & { marker: Marker; first: boolean };
+
+const overlayColumns: ColumnDef<MarkerRow>[] = [
+  {
+    id: "pulse",
+    header: "Pulse",
+    cell: ({ row: { original: r } }) =>
+      r.first ? (
+        `${r.marker.name} (${q(r.marker.v, "V")}, ${q(r.marker.i, "A")})`
+      ) : (
+        <span className="sr-only">{r.marker.name}</span>
+      ),
+    meta: { rowHeader: true },
+  },
+  { id: "candidate", header: "Candidate", cell: ({ row }) => row.original.partNumber },
+  {
+    id: "allowed",
+    header: "Allowed current",
+    cell: ({ row }) => q(row.original.allowed, "A"),
+    meta: { numeric: true },
+  },
+  {
+    id: "utilisation",
+    header: "Utilisation",
+    cell: ({ row }) => percent(row.original.utilisation),
+    meta: { numeric: true },
+  },
+  { id: "verdict", header: "Verdict", cell: ({ row }) => verdictWords[row.original.verdict] },
+];
+
 /** The chart's text alternative: each chosen pulse against each candidate's allowed current. */
-function OverlayTable({
-  check,
-  markers,
-}: {
-  check: ProjectCheck;
-  markers: ReturnType<typeof overlayMarkers>;
-}) {
+function OverlayTable({ check, markers }: { check: ProjectCheck; markers: Marker[] }) {
+  const rows = markers.flatMap((marker) =>
+    marker.byCandidate.map((b, k) => ({ ...b, marker, first: k === 0 })),
+  );
   return (
-    <details className="mt-2 overflow-x-auto text-sm">
+    <details className="mt-2 text-sm">
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the chart as a table ({markers.length} {markers.length === 1 ? "pulse" : "pulses"} ×{" "}
         {check.candidates.length} candidates)
       </summary>
-      <table
-        className="mt-2 w-full border-separate border-spacing-0 text-xs"
-        aria-label="Chosen pulses by candidate"
-      >
-        <thead>
-          <tr className="text-ink-muted">
-            {["Pulse", "Candidate", "Allowed current", "Utilisation", "Verdict"].map((h, k) => (
-              <th
-                key={h}
-                scope="col"
-                className={`border-b border-line bg-sunken px-2 py-1.5 font-medium ${k >= 2 && k <= 3 ? "text-right" : "text-left"}`}
-              >
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {markers.flatMap((m) =>
-            m.byCandidate.map((b, k) => (
-              <tr key={`${m.id}-${b.partNumber}`}>
-                <th scope="row" className="border-b border-line px-2 py-1 text-left font-normal">
-                  {k === 0 ? (
-                    `${m.name} (${q(m.v, "V")}, ${q(m.i, "A")})`
-                  ) : (
-                    <span className="sr-only">{m.name}</span>
-                  )}
-                </th>
-                <td className="border-b border-line px-2 py-1">{b.partNumber}</td>
-                <td className="border-b border-line px-2 py-1 text-right font-mono num">
-                  {q(b.allowed, "A")}
-                </td>
-                <td className="border-b border-line px-2 py-1 text-right font-mono num">
-                  {percent(b.utilisation)}
-                </td>
-                <td className="border-b border-line px-2 py-1">{verdictWords[b.verdict]}</td>
-              </tr>
-            )),
-          )}
-        </tbody>
-      </table>
+      <div className="mt-2">
+        <DataTable
+          label="Chosen pulses by candidate"
+          columns={overlayColumns}
+          data={rows}
+          getRowId={(r) => `${r.marker.id}-${r.partNumber}`}
+          density="compact"
+          className="max-h-80"
+        />
+      </div>
     </details>
   );
 }

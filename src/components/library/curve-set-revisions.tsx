@@ -1,12 +1,13 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
-import { useTransition } from "react";
+import { type ReactNode, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { CURVE_FORMS } from "@/lib/vocabulary";
 import { sizeText } from "./format";
 
@@ -18,6 +19,74 @@ export interface CurveSetRow {
   active: boolean;
   createdAt: Date | string;
   uploadedBy: string | null;
+}
+
+function revisionColumns(
+  partId: string,
+  activate: (set: CurveSetRow) => ReactNode,
+): ColumnDef<CurveSetRow>[] {
+  return [
+    {
+      id: "file",
+      header: "File",
+      cell: ({ row }) => row.original.fileName,
+      meta: {
+        className: "max-w-64 truncate font-medium",
+        headerClassName: "",
+        cellProps: (set) => ({ title: set.fileName }),
+      },
+    },
+    {
+      id: "form",
+      header: "Form",
+      cell: ({ row }) => (row.original.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long),
+      meta: { className: "text-ink-muted", headerClassName: "" },
+    },
+    { id: "size", header: "Size", cell: ({ row }) => sizeText(row.original.size), meta: { numeric: true } },
+    {
+      id: "uploadedBy",
+      header: "Uploaded by",
+      cell: ({ row }) => row.original.uploadedBy ?? <span className="text-ink-faint">—</span>,
+    },
+    {
+      id: "uploaded",
+      header: "Uploaded (UTC)",
+      cell: ({ row }) => <DateText value={row.original.createdAt} withTime />,
+      meta: { numeric: true },
+    },
+    {
+      id: "state",
+      header: "State",
+      cell: ({ row }) =>
+        row.original.active ? (
+          <span className="inline-flex items-center gap-1.5 text-accent">
+            <svg width="8" height="8" viewBox="0 0 8 8" aria-hidden="true">
+              <circle cx="4" cy="4" r="3.5" fill="currentColor" />
+            </svg>
+            active
+          </span>
+        ) : (
+          <span className="text-ink-faint">earlier</span>
+        ),
+    },
+    {
+      id: "actions",
+      header: () => <span className="sr-only">Actions</span>,
+      cell: ({ row: { original: set } }) => (
+        <span className="inline-flex items-center gap-2">
+          <a
+            href={`/api/parts/${partId}/curve-sets/${set.id}/file`}
+            className="text-sm text-accent hover:underline"
+            aria-label={`Download the original ${set.fileName}`}
+          >
+            Download original
+          </a>
+          {activate(set)}
+        </span>
+      ),
+      meta: { className: "text-right", headerClassName: "" },
+    },
+  ];
 }
 
 /** Every curve set the part has had (datasheet revisions), newest first; one is active. */
@@ -42,74 +111,23 @@ export function CurveSetRevisions({
   });
   return (
     <div className="space-y-2">
-      <Table label="Curve-set revisions">
-        <thead>
-          <tr>
-            <Th>File</Th>
-            <Th>Form</Th>
-            <Th numeric>Size</Th>
-            <Th>Uploaded by</Th>
-            <Th numeric>Uploaded (UTC)</Th>
-            <Th>State</Th>
-            <Th>
-              <span className="sr-only">Actions</span>
-            </Th>
-          </tr>
-        </thead>
-        <tbody>
-          {sets.length === 0 ? (
-            <EmptyRow colSpan={7}>No curve sets yet.</EmptyRow>
-          ) : (
-            sets.map((set) => (
-              <Tr key={set.id}>
-                <Td className="max-w-64 truncate font-medium" title={set.fileName}>
-                  {set.fileName}
-                </Td>
-                <Td className="text-ink-muted">
-                  {set.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long}
-                </Td>
-                <Td numeric>{sizeText(set.size)}</Td>
-                <Td>{set.uploadedBy ?? <span className="text-ink-faint">—</span>}</Td>
-                <Td numeric>
-                  <DateText value={set.createdAt} withTime />
-                </Td>
-                <Td>
-                  {set.active ? (
-                    <span className="inline-flex items-center gap-1.5 text-accent">
-                      <svg width="8" height="8" viewBox="0 0 8 8" aria-hidden="true">
-                        <circle cx="4" cy="4" r="3.5" fill="currentColor" />
-                      </svg>
-                      active
-                    </span>
-                  ) : (
-                    <span className="text-ink-faint">earlier</span>
-                  )}
-                </Td>
-                <Td className="text-right">
-                  <span className="inline-flex items-center gap-2">
-                    <a
-                      href={`/api/parts/${partId}/curve-sets/${set.id}/file`}
-                      className="text-sm text-accent hover:underline"
-                      aria-label={`Download the original ${set.fileName}`}
-                    >
-                      Download original
-                    </a>
-                    {canWrite && !set.active ? (
-                      <Button
-                        size="sm"
-                        pending={(activate.isPending && activate.variables === set.id) || refreshing}
-                        onClick={() => activate.mutate(set.id)}
-                      >
-                        Make active
-                      </Button>
-                    ) : null}
-                  </span>
-                </Td>
-              </Tr>
-            ))
-          )}
-        </tbody>
-      </Table>
+      <DataTable
+        label="Curve-set revisions"
+        columns={revisionColumns(partId, (set) =>
+          canWrite && !set.active ? (
+            <Button
+              size="sm"
+              pending={(activate.isPending && activate.variables === set.id) || refreshing}
+              onClick={() => activate.mutate(set.id)}
+            >
+              Make active
+            </Button>
+          ) : null,
+        )}
+        data={sets}
+        getRowId={(set) => set.id}
+        empty="No curve sets yet."
+      />
       {activate.isError ? (
         <p role="alert" className="text-sm text-fail">
           {messageOf(activate.error)}

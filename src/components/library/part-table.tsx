@@ -1,19 +1,13 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import {
-  type ColumnDef,
-  flexRender,
-  getCoreRowModel,
-  type SortingState,
-  useReactTable,
-} from "@tanstack/react-table";
+import type { ColumnDef, SortingState } from "@tanstack/react-table";
 import Link from "next/link";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import type { ReactNode } from "react";
 import { messageOf } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
+import { useUrlState } from "@/components/use-url-state";
 import { technologyLabels } from "@/lib/library/part-schema";
 import { callJson } from "./api";
 import { costText, inUnit } from "./format";
@@ -36,11 +30,6 @@ import { Sym } from "./symbols";
 // Eleven columns fit the content width with a little less side padding than the shared table's.
 const dense = "px-2.5!";
 
-interface ColumnMeta {
-  numeric?: boolean;
-  className?: string;
-}
-
 const columns: ColumnDef<PartRow>[] = [
   {
     id: "partNumber",
@@ -54,55 +43,65 @@ const columns: ColumnDef<PartRow>[] = [
         {row.original.partNumber}
       </Link>
     ),
-    meta: { className: "max-w-40 truncate" },
+    meta: { className: `${dense} max-w-40 truncate`, headerClassName: dense },
   },
   {
     id: "maker",
     header: "Maker",
     cell: ({ row }) => <span title={row.original.maker}>{row.original.maker}</span>,
-    meta: { className: "max-w-32 truncate" },
+    meta: { className: `${dense} max-w-32 truncate`, headerClassName: dense },
   },
-  { id: "technology", header: "Technology", cell: ({ row }) => technologyLabels[row.original.technology] },
-  { id: "package", header: "Package", cell: ({ row }) => row.original.package },
+  {
+    id: "technology",
+    header: "Technology",
+    cell: ({ row }) => technologyLabels[row.original.technology],
+    meta: { className: dense },
+  },
+  { id: "package", header: "Package", cell: ({ row }) => row.original.package, meta: { className: dense } },
   {
     id: "vdsMax",
     header: () => <HeaderUnit symbol={<Sym main="V" sub="DSS" />} unit="V" />,
     cell: ({ row }) => inUnit(row.original.vdsMax),
-    meta: { numeric: true },
+    meta: { numeric: true, className: dense },
   },
   {
     id: "rdsOn",
     header: () => <HeaderUnit symbol={<Sym main="R" sub="DS(on)" />} unit="mΩ" />,
     cell: ({ row }) => inUnit(row.original.rdsOn, 1e-3),
-    meta: { numeric: true },
+    meta: { numeric: true, className: dense },
   },
   {
     id: "idMax",
     header: () => <HeaderUnit symbol={<Sym main="I" sub="D" />} unit="A" />,
     cell: ({ row }) => inUnit(row.original.idMax),
-    meta: { numeric: true },
+    meta: { numeric: true, className: dense },
     enableSorting: false,
   },
   {
     id: "tjMax",
     header: () => <HeaderUnit symbol={<Sym main="T" sub="j,max" />} unit="°C" />,
     cell: ({ row }) => inUnit(row.original.tjMax),
-    meta: { numeric: true },
+    meta: { numeric: true, className: dense },
     enableSorting: false,
   },
   {
     id: "thermal",
     header: "Thermal model",
-    meta: { className: "text-ink-muted" },
+    meta: { className: `${dense} text-ink-muted`, headerClassName: dense },
     cell: ({ row }) => (row.original.hasThermalModel ? "yes" : <span className="text-ink-faint">no</span>),
     enableSorting: false,
   },
-  { id: "status", header: "Status", cell: ({ row }) => <PartStatus status={row.original.status} /> },
+  {
+    id: "status",
+    header: "Status",
+    cell: ({ row }) => <PartStatus status={row.original.status} />,
+    meta: { className: dense },
+  },
   {
     id: "unitCost",
     header: "Unit cost",
     cell: ({ row }) => costText(row.original.unitCost, row.original.currency),
-    meta: { numeric: true },
+    meta: { numeric: true, className: dense },
     enableSorting: false,
   },
 ];
@@ -117,9 +116,7 @@ function HeaderUnit({ symbol, unit }: { symbol: ReactNode; unit: string }) {
 
 /** The library: one page of parts from the server, sorted, searched and filtered, with all of it in the URL. */
 export function PartTable({ canWrite }: { canWrite: boolean }) {
-  const router = useRouter();
-  const pathname = usePathname();
-  const params = useSearchParams();
+  const [params, setParams] = useUrlState();
   const state = readState(params);
   const query = useQuery({
     queryKey: ["parts", apiQuery(state)],
@@ -129,28 +126,10 @@ export function PartTable({ canWrite }: { canWrite: boolean }) {
 
   function update(change: Partial<LibraryState>) {
     const next = { ...state, page: 1, ...change };
-    const search = writeState(next).toString();
-    router.replace(search ? `${pathname}?${search}` : pathname, { scroll: false });
+    setParams(writeState(next));
   }
 
   const sorting: SortingState = [{ id: state.sort, desc: state.dir === "desc" }];
-  const table = useReactTable({
-    data: query.data?.rows ?? [],
-    columns,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    enableSortingRemoval: false,
-    sortDescFirst: false,
-    state: { sorting },
-    onSortingChange: (updater) => {
-      const [first] = typeof updater === "function" ? updater(sorting) : updater;
-      if (first && sortKeys.includes(first.id as SortKey)) {
-        update({ sort: first.id as SortKey, dir: first.desc ? "desc" : "asc" });
-      }
-    },
-  });
-
   const data = query.data;
   const total = data?.total ?? 0;
   const first = total === 0 ? 0 : (state.page - 1) * PAGE_SIZE + 1;
@@ -160,87 +139,50 @@ export function PartTable({ canWrite }: { canWrite: boolean }) {
   return (
     <div className="space-y-3">
       <PartFilters state={state} facets={data?.facets} onChange={update} />
-      <Table label="Parts">
-        <thead>
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const meta = header.column.columnDef.meta as ColumnMeta | undefined;
-                const sorted = header.column.getIsSorted();
-                const content = flexRender(header.column.columnDef.header, header.getContext());
-                return (
-                  <Th
-                    key={header.id}
-                    numeric={meta?.numeric}
-                    className={dense}
-                    aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}
-                  >
-                    {header.column.getCanSort() ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={`inline-flex items-center gap-1 hover:text-ink ${sorted ? "text-ink" : ""}`}
-                      >
-                        {content}
-                        <SortMark sorted={sorted} />
-                      </button>
-                    ) : (
-                      content
-                    )}
-                  </Th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {query.isPending ? (
-            <EmptyRow colSpan={columns.length}>Loading parts…</EmptyRow>
+      <DataTable
+        label="Parts"
+        columns={columns}
+        data={data?.rows ?? []}
+        getRowId={(row) => row.id}
+        sorting={sorting}
+        onSortingChange={([next]) => {
+          if (next && sortKeys.includes(next.id as SortKey)) {
+            update({ sort: next.id as SortKey, dir: next.desc ? "desc" : "asc" });
+          }
+        }}
+        rowProps={() => ({ className: `hover:bg-surface ${query.isPlaceholderData ? "opacity-60" : ""}` })}
+        status={
+          query.isPending ? (
+            "Loading parts…"
           ) : query.isError ? (
-            <EmptyRow colSpan={columns.length}>
-              <span role="alert" className="text-fail">
-                {messageOf(query.error)}
-              </span>
-            </EmptyRow>
-          ) : total === 0 ? (
-            <EmptyRow colSpan={columns.length}>
-              {filtered ? (
-                <span className="inline-flex items-center gap-3">
-                  No parts match these filters.
-                  <Button size="sm" onClick={() => router.replace(pathname, { scroll: false })}>
-                    Clear filters
-                  </Button>
-                </span>
-              ) : (
-                <span className="flex flex-col items-center gap-3">
-                  <span className="text-base font-medium text-ink">No parts yet</span>
-                  {canWrite ? (
-                    <>
-                      <span>Add a transistor with its ratings, then upload its SOA curves.</span>
-                      <NewPartLink />
-                    </>
-                  ) : (
-                    <span>An engineer adds parts to the library; they appear here.</span>
-                  )}
-                </span>
-              )}
-            </EmptyRow>
+            <span role="alert" className="text-fail">
+              {messageOf(query.error)}
+            </span>
+          ) : null
+        }
+        empty={
+          filtered ? (
+            <span className="inline-flex items-center gap-3">
+              No parts match these filters.
+              <Button size="sm" onClick={() => setParams(new URLSearchParams())}>
+                Clear filters
+              </Button>
+            </span>
           ) : (
-            table.getRowModel().rows.map((row) => (
-              <Tr key={row.id} className={query.isPlaceholderData ? "opacity-60" : ""}>
-                {row.getVisibleCells().map((cell) => {
-                  const meta = cell.column.columnDef.meta as ColumnMeta | undefined;
-                  return (
-                    <Td key={cell.id} numeric={meta?.numeric} className={`${dense} ${meta?.className ?? ""}`}>
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </Td>
-                  );
-                })}
-              </Tr>
-            ))
-          )}
-        </tbody>
-      </Table>
+            <span className="flex flex-col items-center gap-3">
+              <span className="text-base font-medium text-ink">No parts yet</span>
+              {canWrite ? (
+                <>
+                  <span>Add a transistor with its ratings, then upload its SOA curves.</span>
+                  <NewPartLink />
+                </>
+              ) : (
+                <span>An engineer adds parts to the library; they appear here.</span>
+              )}
+            </span>
+          )
+        }
+      />
       <nav aria-label="Pages" className="flex items-center justify-between gap-3 text-sm text-ink-muted">
         <p className="num">
           {total === 0 ? "No parts" : `${first}–${last} of ${total} parts`}
@@ -256,15 +198,6 @@ export function PartTable({ canWrite }: { canWrite: boolean }) {
         </div>
       </nav>
     </div>
-  );
-}
-
-function SortMark({ sorted }: { sorted: false | "asc" | "desc" }) {
-  return (
-    <svg width="8" height="10" viewBox="0 0 8 10" aria-hidden="true" className={sorted ? "" : "opacity-30"}>
-      <path d="M4 1l3 3.2H1z" fill={sorted === "asc" || !sorted ? "currentColor" : "none"} />
-      <path d="M4 9L1 5.8h6z" fill={sorted === "desc" || !sorted ? "currentColor" : "none"} />
-    </svg>
   );
 }
 

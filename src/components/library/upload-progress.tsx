@@ -1,4 +1,5 @@
-import { ScrollRegion } from "@/components/scroll-region";
+import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import type { CsvIssue } from "@/lib/csv/issues";
 
 /** Long work in words with a bar: "Uploading… 45 %", then "Checking the curves…". */
@@ -27,37 +28,33 @@ export function UploadProgress({ label, fraction }: { label: string; fraction: n
   );
 }
 
+const issueColumns: ColumnDef<CsvIssue & { key: number }>[] = [
+  {
+    id: "row",
+    header: "Row",
+    cell: ({ row }) => row.original.row ?? "—",
+    meta: { numeric: true, headerClassName: "w-16" },
+  },
+  {
+    id: "column",
+    header: "Column",
+    cell: ({ row }) => row.original.column ?? "—",
+    meta: { className: "font-mono text-xs", headerClassName: "" },
+  },
+  { id: "reason", header: "Reason", cell: ({ row }) => row.original.reason },
+];
+
 /** The rows a CSV was rejected for: row, column and reason, as a spreadsheet would point at them. */
 export function IssueTable({ issues, label }: { issues: CsvIssue[]; label: string }) {
+  // The server's list, shown once and never reordered: its position is its key.
+  const rows = issues.map((issue, key) => ({ ...issue, key }));
   return (
-    <ScrollRegion className="max-h-72 overflow-auto rounded-md border border-line bg-panel">
-      <table aria-label={label} className="w-full border-separate border-spacing-0 text-sm">
-        <thead>
-          <tr>
-            {["Row", "Column", "Reason"].map((h) => (
-              <th
-                key={h}
-                scope="col"
-                className={`sticky top-0 h-8 border-b border-line bg-sunken px-3 text-xs font-medium text-ink-muted ${h === "Row" ? "w-16 text-right" : "text-left"}`}
-              >
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {issues.map((issue, k) => (
-            // biome-ignore lint/suspicious/noArrayIndexKey: the server's list, shown once and never reordered
-            <tr key={k}>
-              <td className="num h-8 border-b border-line px-3 text-right font-mono text-xs">
-                {issue.row ?? "—"}
-              </td>
-              <td className="h-8 border-b border-line px-3 font-mono text-xs">{issue.column ?? "—"}</td>
-              <td className="h-8 border-b border-line px-3">{issue.reason}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </ScrollRegion>
+    <DataTable
+      label={label}
+      columns={issueColumns}
+      data={rows}
+      getRowId={(issue) => String(issue.key)}
+      className="max-h-72"
+    />
   );
 }

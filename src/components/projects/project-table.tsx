@@ -1,6 +1,9 @@
+"use client";
+
+import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
+import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { q } from "./format";
 
 export interface ProjectRow {
@@ -14,6 +17,56 @@ export interface ProjectRow {
   updatedAt: Date | string;
 }
 
+const columns: ColumnDef<ProjectRow>[] = [
+  {
+    id: "name",
+    header: "Project",
+    cell: ({ row: { original: row } }) => (
+      <>
+        <Link href={`/projects/${row.id}`} className="font-medium text-ink hover:text-accent hover:underline">
+          {row.name}
+        </Link>
+        {row.description ? (
+          <span className="ml-2 inline-block max-w-80 truncate align-bottom text-xs text-ink-faint">
+            {row.description.split("\n")[0]}
+          </span>
+        ) : null}
+      </>
+    ),
+    meta: { className: "max-w-96", headerClassName: "" },
+  },
+  {
+    id: "caseTemp",
+    header: "Case temperature",
+    cell: ({ row }) => q(row.original.caseTemp, "°C"),
+    meta: { numeric: true, headerClassName: "w-32" },
+  },
+  {
+    id: "utilisationLimit",
+    header: "Utilisation limit",
+    cell: ({ row }) => <>{Math.round(row.original.utilisationLimit * 100)}&thinsp;%</>,
+    meta: { numeric: true, headerClassName: "w-28" },
+  },
+  {
+    id: "candidates",
+    header: "Candidates",
+    cell: ({ row }) => row.original.candidates,
+    meta: { numeric: true, headerClassName: "w-24" },
+  },
+  {
+    id: "owner",
+    header: "Owner",
+    cell: ({ row }) => row.original.owner ?? "—",
+    meta: { className: "text-ink-muted", headerClassName: "w-48" },
+  },
+  {
+    id: "updatedAt",
+    header: "Updated (UTC)",
+    cell: ({ row }) => <DateText value={row.original.updatedAt} />,
+    meta: { numeric: true, headerClassName: "w-28" },
+  },
+];
+
 /** The projects list: each name opens the project; an empty list says what to do next. */
 export function ProjectTable({
   rows,
@@ -25,74 +78,31 @@ export function ProjectTable({
   archived: boolean;
 }) {
   return (
-    <Table label={archived ? "Archived projects" : "Projects"}>
-      <thead>
-        <tr>
-          <Th>Project</Th>
-          <Th numeric className="w-32">
-            Case temperature
-          </Th>
-          <Th numeric className="w-28">
-            Utilisation limit
-          </Th>
-          <Th numeric className="w-24">
-            Candidates
-          </Th>
-          <Th className="w-48">Owner</Th>
-          <Th numeric className="w-28">
-            Updated (UTC)
-          </Th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.length === 0 ? (
-          <EmptyRow colSpan={6}>
-            {archived ? (
-              "No archived projects."
-            ) : (
-              <span className="flex flex-col items-center gap-3">
-                <span className="text-base font-medium text-ink">No projects yet</span>
-                {canWrite ? (
-                  <>
-                    <span>
-                      Start one for the design you are reviewing, then add candidate parts and fault cases.
-                    </span>
-                    <NewProjectLink />
-                  </>
-                ) : (
-                  <span>An engineer starts a project; you can then log bench measurements in it.</span>
-                )}
-              </span>
-            )}
-          </EmptyRow>
+    <DataTable
+      label={archived ? "Archived projects" : "Projects"}
+      columns={columns}
+      data={rows}
+      getRowId={(row) => row.id}
+      empty={
+        archived ? (
+          "No archived projects."
         ) : (
-          rows.map((row) => (
-            <Tr key={row.id}>
-              <Td className="max-w-96">
-                <Link
-                  href={`/projects/${row.id}`}
-                  className="font-medium text-ink hover:text-accent hover:underline"
-                >
-                  {row.name}
-                </Link>
-                {row.description ? (
-                  <span className="ml-2 inline-block max-w-80 truncate align-bottom text-xs text-ink-faint">
-                    {row.description.split("\n")[0]}
-                  </span>
-                ) : null}
-              </Td>
-              <Td numeric>{q(row.caseTemp, "°C")}</Td>
-              <Td numeric>{Math.round(row.utilisationLimit * 100)}&thinsp;%</Td>
-              <Td numeric>{row.candidates}</Td>
-              <Td className="text-ink-muted">{row.owner ?? "—"}</Td>
-              <Td numeric>
-                <DateText value={row.updatedAt} />
-              </Td>
-            </Tr>
-          ))
-        )}
-      </tbody>
-    </Table>
+          <span className="flex flex-col items-center gap-3">
+            <span className="text-base font-medium text-ink">No projects yet</span>
+            {canWrite ? (
+              <>
+                <span>
+                  Start one for the design you are reviewing, then add candidate parts and fault cases.
+                </span>
+                <NewProjectLink />
+              </>
+            ) : (
+              <span>An engineer starts a project; you can then log bench measurements in it.</span>
+            )}
+          </span>
+        )
+      }
+    />
   );
 }
 

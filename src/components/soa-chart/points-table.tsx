@@ -1,9 +1,42 @@
-import { ScrollRegion } from "@/components/scroll-region";
+import type { ColumnDef } from "@tanstack/react-table";
+import type { ReactNode } from "react";
+import { DataTable } from "@/components/data-table";
 import { formatQuantity } from "@/lib/soa/units";
 import { durationName, sortByDuration } from "./chart-model";
 import type { ChartCurve, SoaChartProps } from "./types";
 
 const verdictWords = { pass: "pass", marginal: "marginal", fail: "fail", "no-data": "no data" } as const;
+
+interface PointRow {
+  id: string;
+  line: ReactNode;
+  v: number;
+  i: number;
+}
+
+const figure = (value: number) => Number(value.toPrecision(4));
+
+const pointColumns: ColumnDef<PointRow>[] = [
+  { id: "line", header: "Line", cell: ({ row }) => row.original.line, meta: { rowHeader: true } },
+  {
+    id: "v",
+    header: () => <HeaderSymbol text="V_DS (V)" />,
+    cell: ({ row }) => figure(row.original.v),
+    meta: { numeric: true },
+  },
+  {
+    id: "i",
+    header: () => <HeaderSymbol text="I_D (A)" />,
+    cell: ({ row }) => figure(row.original.i),
+    meta: { numeric: true },
+  },
+  {
+    id: "p",
+    header: "P (W)",
+    cell: ({ row }) => figure(row.original.v * row.original.i),
+    meta: { numeric: true },
+  },
+];
 
 interface Group {
   name: string;
@@ -27,65 +60,39 @@ export function PointsTable({ title, curves, derated, interpolated, pulses }: So
       curve: { duration: interpolated.width, points: interpolated.points },
     });
   }
+  const rows: PointRow[] = [
+    ...groups.flatMap((g) =>
+      g.curve.points.map(([v, i], k) => ({
+        id: `${g.name}-${v}`,
+        line: k === 0 ? g.name : <span className="sr-only">{g.name}</span>,
+        v,
+        i,
+      })),
+    ),
+    ...(pulses ?? []).map((p) => ({
+      id: p.id,
+      line: `${p.label} (${verdictWords[p.verdict]})`,
+      v: p.v,
+      i: p.i,
+    })),
+  ];
   return (
     <details className="group min-w-0 flex-1 text-sm">
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the chart as a table ({groups.length} lines
         {pulses?.length ? `, ${pulses.length} pulses` : ""})
       </summary>
-      <ScrollRegion className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
-        <table
-          className="w-full border-separate border-spacing-0 text-xs"
-          aria-label={`SOA points of ${title}`}
-        >
-          <thead>
-            <tr>
-              {["Line", "V_DS (V)", "I_D (A)", "P (W)"].map((h, k) => (
-                <th
-                  key={h}
-                  scope="col"
-                  className={`sticky top-0 border-b border-line bg-sunken px-2 py-1.5 font-medium text-ink-muted ${k ? "text-right" : "text-left"}`}
-                >
-                  {h === "Line" ? h : <HeaderSymbol text={h} />}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {groups.flatMap((g) =>
-              g.curve.points.map(([v, i], k) => (
-                <tr key={`${g.name}-${v}`}>
-                  <th scope="row" className="border-b border-line px-2 py-1 text-left font-normal">
-                    {k === 0 ? g.name : <span className="sr-only">{g.name}</span>}
-                  </th>
-                  <Num value={v} />
-                  <Num value={i} />
-                  <Num value={v * i} />
-                </tr>
-              )),
-            )}
-            {(pulses ?? []).map((p) => (
-              <tr key={p.id}>
-                <th scope="row" className="border-b border-line px-2 py-1 text-left font-normal">
-                  {p.label} ({verdictWords[p.verdict]})
-                </th>
-                <Num value={p.v} />
-                <Num value={p.i} />
-                <Num value={p.v * p.i} />
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </ScrollRegion>
+      <div className="mt-2">
+        <DataTable
+          label={`SOA points of ${title}`}
+          columns={pointColumns}
+          data={rows}
+          getRowId={(row) => row.id}
+          density="compact"
+          className="max-h-80"
+        />
+      </div>
     </details>
-  );
-}
-
-function Num({ value }: { value: number }) {
-  return (
-    <td className="num border-b border-line px-2 py-1 text-right font-mono">
-      {Number(value.toPrecision(4))}
-    </td>
   );
 }
 

@@ -1,16 +1,75 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { useState } from "react";
+import { type ReactNode, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
+import { DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { costText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { invalidateProject, type ProjectDetail } from "../api";
 import { q } from "../format";
 import { PartPicker } from "./part-picker";
+
+type Candidate = ProjectDetail["candidates"][number];
+
+const muted = { className: "text-ink-muted", headerClassName: "" };
+
+function candidateColumns(action: ((part: Candidate["part"]) => ReactNode) | null): ColumnDef<Candidate>[] {
+  const columns: ColumnDef<Candidate>[] = [
+    {
+      id: "part",
+      header: "Part",
+      cell: ({ row: { original: c } }) => (
+        <Link href={`/library/${c.part.id}`} className="font-medium hover:text-accent hover:underline">
+          {c.part.partNumber}
+        </Link>
+      ),
+    },
+    { id: "maker", header: "Maker", cell: ({ row }) => row.original.part.maker, meta: muted },
+    { id: "package", header: "Package", cell: ({ row }) => row.original.part.package, meta: muted },
+    {
+      id: "vdsMax",
+      header: () => (
+        <>
+          V<sub>DSS</sub>
+        </>
+      ),
+      cell: ({ row }) => q(row.original.part.vdsMax, "V"),
+      meta: { numeric: true },
+    },
+    {
+      id: "status",
+      header: "Library status",
+      cell: ({ row: { original: c } }) => `${c.part.status}${c.part.archivedAt ? ", archived" : ""}`,
+      meta: muted,
+    },
+    {
+      id: "data",
+      header: "Data",
+      cell: ({ row: { original: c } }) =>
+        `${c.hasCurves ? "SOA curves" : "no SOA curves yet"}${c.part.foster?.length ? " · thermal model" : ""}`,
+      meta: muted,
+    },
+    {
+      id: "unitCost",
+      header: "Unit cost",
+      cell: ({ row: { original: c } }) => costText(c.part.unitCost, c.part.currency),
+      meta: { numeric: true },
+    },
+  ];
+  if (action) {
+    columns.push({
+      id: "actions",
+      header: () => <span className="sr-only">Actions</span>,
+      cell: ({ row }) => action(row.original.part),
+      meta: { className: "text-right", headerClassName: "w-28" },
+    });
+  }
+  return columns;
+}
 
 /** The parts this project compares: a list with remove, and the library search to add one (project.write). */
 export function CandidatesPanel({
@@ -41,7 +100,6 @@ export function CandidatesPanel({
     },
   });
   const error = add.error ?? remove.error;
-  const columns = canWrite ? 8 : 7;
 
   return (
     <Section
@@ -61,76 +119,34 @@ export function CandidatesPanel({
         ) : null
       }
     >
-      <Table label="Candidates">
-        <thead>
-          <tr>
-            <Th>Part</Th>
-            <Th>Maker</Th>
-            <Th>Package</Th>
-            <Th numeric>
-              V<sub>DSS</sub>
-            </Th>
-            <Th>Library status</Th>
-            <Th>Data</Th>
-            <Th numeric>Unit cost</Th>
-            {canWrite ? (
-              <Th className="w-28">
-                <span className="sr-only">Actions</span>
-              </Th>
-            ) : null}
-          </tr>
-        </thead>
-        <tbody>
-          {candidates.length === 0 ? (
-            <EmptyRow colSpan={columns}>
-              {canWrite
-                ? "No candidates yet. Search the library at the right and add the parts to compare."
-                : "No candidates yet. An engineer adds the parts to compare."}
-            </EmptyRow>
-          ) : (
-            candidates.map(({ part, hasCurves }) => (
-              <Tr key={part.id}>
-                <Td>
-                  <Link
-                    href={`/library/${part.id}`}
-                    className="font-medium hover:text-accent hover:underline"
-                  >
-                    {part.partNumber}
-                  </Link>
-                </Td>
-                <Td className="text-ink-muted">{part.maker}</Td>
-                <Td className="text-ink-muted">{part.package}</Td>
-                <Td numeric>{q(part.vdsMax, "V")}</Td>
-                <Td className="text-ink-muted">
-                  {part.status}
-                  {part.archivedAt ? ", archived" : ""}
-                </Td>
-                <Td className="text-ink-muted">
-                  {hasCurves ? "SOA curves" : "no SOA curves yet"}
-                  {part.foster?.length ? " · thermal model" : ""}
-                </Td>
-                <Td numeric>{costText(part.unitCost, part.currency)}</Td>
-                {canWrite ? (
-                  <Td className="text-right">
-                    <Button
-                      size="sm"
-                      variant="quiet"
-                      pending={remove.isPending && remove.variables?.id === part.id}
-                      onClick={() => {
-                        setDone(null);
-                        remove.mutate({ id: part.id, partNumber: part.partNumber });
-                      }}
-                      aria-label={`Remove ${part.partNumber}`}
-                    >
-                      Remove
-                    </Button>
-                  </Td>
-                ) : null}
-              </Tr>
-            ))
-          )}
-        </tbody>
-      </Table>
+      <DataTable
+        label="Candidates"
+        columns={candidateColumns(
+          canWrite
+            ? (part) => (
+                <Button
+                  size="sm"
+                  variant="quiet"
+                  pending={remove.isPending && remove.variables?.id === part.id}
+                  onClick={() => {
+                    setDone(null);
+                    remove.mutate({ id: part.id, partNumber: part.partNumber });
+                  }}
+                  aria-label={`Remove ${part.partNumber}`}
+                >
+                  Remove
+                </Button>
+              )
+            : null,
+        )}
+        data={candidates}
+        getRowId={(c) => c.part.id}
+        empty={
+          canWrite
+            ? "No candidates yet. Search the library at the right and add the parts to compare."
+            : "No candidates yet. An engineer adds the parts to compare."
+        }
+      />
       {error ? <FormMessage tone="error">{messageOf(error)}</FormMessage> : null}
       {done && !error ? (
         <p role="status" className="mt-2 text-xs text-ink-muted">

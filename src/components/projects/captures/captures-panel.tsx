@@ -1,44 +1,47 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { usePathname, useSearchParams } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
+import { ConfirmDelete } from "@/components/confirm-delete";
+import { DataTable } from "@/components/data-table";
 import { FormMessage } from "@/components/form";
 import { Section } from "@/components/page-header";
+import { useUrlState } from "@/components/use-url-state";
 import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
 import type { PanelProps } from "../project-workspace";
-import {
-  type CaptureListItem,
-  captureKeys,
-  inProgress,
-  type RegisteredCapture,
-  useCaptures,
-} from "./capture-api";
+import { captureKeys, inProgress, type RegisteredCapture, useCaptures } from "./capture-api";
 import { CaptureUpload } from "./capture-upload";
 import { CaptureView } from "./capture-view";
-import { CapturesTable } from "./captures-table";
+import { captureColumns } from "./captures-table";
 
 /** The captures tab: upload a scope waveform (technicians and up), the list of captures, and the one opened. */
 export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: PanelProps) {
-  const params = useSearchParams();
-  const pathname = usePathname();
+  const [params, setParams] = useUrlState();
   const queryClient = useQueryClient();
   const list = useCaptures(projectId);
   const [fresh, setFresh] = useState<RegisteredCapture | null>(null);
   const [confirming, setConfirming] = useState<string | null>(null);
   const captures = list.data?.captures ?? [];
   const selected = params.get("capture") ?? captures[0]?.id ?? null;
-  useRecheckWhenJobsFinish(projectId, captures);
+  // When a capture's job finishes, the project's check (results, charts, comparison) has new evidence.
+  const pendingIds = captures
+    .filter((c) => inProgress(c.status))
+    .map((c) => c.id)
+    .join(",");
+  const following = useRef(pendingIds);
+  useEffect(() => {
+    if (following.current !== pendingIds && following.current !== "")
+      void invalidateProject(queryClient, projectId);
+    following.current = pendingIds;
+  }, [pendingIds, queryClient, projectId]);
   const names = new Map(people.map((p) => [p.id, p.name]));
+  const mayDeleteAny = can(viewer.role, "measurement.manage");
 
   function open(id: string) {
-    const next = new URLSearchParams(params);
-    next.set("tab", "captures");
-    next.set("capture", id);
-    window.history.pushState(null, "", `${pathname}?${next}`);
+    setParams({ tab: "captures", capture: id }, { push: true });
   }
 
   const remove = useMutation({
@@ -78,22 +81,49 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ) : null}
 
       <Section id="captures" title="Captures" description="Open one to see its traces and its verdicts.">
-        <CapturesTable
-          list={list}
-          selected={selected}
-          canMeasure={canMeasure}
-          viewerId={viewer.id}
-          worstByPulse={check?.worstByPulse}
-          names={names}
-          onOpen={open}
-          actions={{
-            mayDeleteAny: can(viewer.role, "measurement.manage"),
-            confirming,
-            removing: remove.isPending,
-            onAsk: setConfirming,
-            onConfirm: (id) => remove.mutate(id),
-            onKeep: () => setConfirming(null),
-          }}
+        <DataTable
+          label="Captures"
+          columns={captureColumns({
+            check,
+            selected,
+            open,
+            who: (c) =>
+              c.createdBy
+                ? c.createdBy === viewer.id
+                  ? "you"
+                  : (names.get(c.createdBy) ?? "a former member")
+                : "—",
+            actions: canMeasure
+              ? (c) =>
+                  c.createdBy === viewer.id || mayDeleteAny ? (
+                    <ConfirmDelete
+                      label={c.name}
+                      confirming={confirming === c.id}
+                      pending={remove.isPending}
+                      onAsk={() => setConfirming(c.id)}
+                      onConfirm={() => remove.mutate(c.id)}
+                      onKeep={() => setConfirming(null)}
+                    />
+                  ) : null
+              : null,
+          })}
+          data={captures}
+          getRowId={(c) => c.id}
+          rowProps={(c) => ({ className: c.id === selected ? "bg-accent-soft" : "hover:bg-surface" })}
+          status={
+            list.isPending ? (
+              "Loading captures…"
+            ) : list.isError ? (
+              <span role="alert" className="text-fail">
+                {messageOf(list.error)}
+              </span>
+            ) : null
+          }
+          empty={
+            canMeasure
+              ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
+              : "No captures yet. Technicians upload scope waveforms here."
+          }
         />
         {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
         <Caution className="mt-3" />
@@ -114,19 +144,4 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       ) : null}
     </div>
   );
-}
-
-/** When a capture's job finishes, the project's check (results, charts, comparison) has new evidence. */
-function useRecheckWhenJobsFinish(projectId: string, captures: CaptureListItem[]) {
-  const queryClient = useQueryClient();
-  const pendingIds = captures
-    .filter((c) => inProgress(c.status))
-    .map((c) => c.id)
-    .join(",");
-  const following = useRef(pendingIds);
-  useEffect(() => {
-    if (following.current !== pendingIds && following.current !== "")
-      void invalidateProject(queryClient, projectId);
-    following.current = pendingIds;
-  }, [pendingIds, queryClient, projectId]);
 }

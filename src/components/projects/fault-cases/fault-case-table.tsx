@@ -1,12 +1,13 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { Fragment, useState } from "react";
+import type { ColumnDef } from "@tanstack/react-table";
+import { Fragment, type ReactNode, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { ConfirmDelete } from "@/components/confirm-delete";
+import { DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
-import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
 import { type FaultCaseRecord, invalidateProject } from "../api";
 import { builderNames, figureLines } from "../builders/figures";
 import { q, repeatOf, repeatText, shapeWords } from "../format";
@@ -35,123 +36,45 @@ export function FaultCaseTable({
       await invalidateProject(queryClient, projectId);
     },
   });
-  const columns = canWrite ? 8 : 7;
+  const columns = faultCaseColumns({
+    open,
+    toggle: (id) => setOpen(open === id ? null : id),
+    projectCaseTemp,
+    actions: canWrite
+      ? (row) => (
+          <ConfirmDelete
+            label={row.name}
+            confirming={confirming === row.id}
+            pending={remove.isPending}
+            onAsk={() => setConfirming(row.id)}
+            onConfirm={() => remove.mutate(row.id)}
+            onKeep={() => setConfirming(null)}
+            before={
+              row.kind === "rect" || row.kind === "triangle" ? (
+                <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
+                  Edit
+                </Button>
+              ) : null
+            }
+          />
+        )
+      : null,
+  });
 
   return (
     <>
-      <Table label="Fault cases">
-        <thead>
-          <tr>
-            <Th>Name</Th>
-            <Th>Shape</Th>
-            <Th numeric>
-              <Sym main="V" sub="DS" />
-            </Th>
-            <Th numeric>
-              <Sym main="I" sub="D" /> (peak)
-            </Th>
-            <Th numeric>Width</Th>
-            <Th>Repetition</Th>
-            <Th numeric>
-              <Sym main="T" sub="C" />
-            </Th>
-            {canWrite ? (
-              <Th className="w-40">
-                <span className="sr-only">Actions</span>
-              </Th>
-            ) : null}
-          </tr>
-        </thead>
-        <tbody>
-          {faultCases.length === 0 ? (
-            <EmptyRow colSpan={columns}>
-              {canWrite
-                ? "No fault cases yet. Build one from the circuit with a pulse builder below, or type it."
-                : "No fault cases yet. An engineer adds the pulses the design must survive."}
-            </EmptyRow>
-          ) : null}
-          {faultCases.map((row) => (
-            <Fragment key={row.id}>
-              <Tr>
-                <Td>
-                  <button
-                    type="button"
-                    aria-expanded={open === row.id}
-                    onClick={() => setOpen(open === row.id ? null : row.id)}
-                    className="inline-flex items-center gap-1.5 text-left font-medium hover:text-accent"
-                  >
-                    <svg
-                      width="10"
-                      height="10"
-                      viewBox="0 0 10 10"
-                      aria-hidden="true"
-                      className={`text-ink-faint transition-transform ${open === row.id ? "rotate-90" : ""}`}
-                    >
-                      <path d="M3 1.5 6.5 5 3 8.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
-                    </svg>
-                    {row.name}
-                  </button>
-                  {row.origin ? (
-                    <span className="ml-2 text-xs text-ink-faint">
-                      from the {builderNames[row.origin.builder] ?? row.origin.builder} builder
-                    </span>
-                  ) : null}
-                </Td>
-                <Td className="text-ink-muted">
-                  {row.kind === "waveform" ? "fault sequence" : shapeWords[row.kind]}
-                </Td>
-                <Td numeric>
-                  {row.kind === "avalanche" ? (
-                    <span title="The supply; the drain rises to each candidate's breakdown voltage">
-                      {q(row.v, "V")} supply
-                    </span>
-                  ) : (
-                    q(row.v, "V")
-                  )}
-                </Td>
-                <Td numeric>{q(row.i, "A")}</Td>
-                <Td numeric>{widthText(row)}</Td>
-                <Td className="text-ink-muted">{repeatText(repeatOf(row)) ?? "single pulse"}</Td>
-                <Td numeric>
-                  {row.caseTemp === null ? (
-                    <span className="text-ink-faint" title="The project's case temperature">
-                      {q(projectCaseTemp, "°C")}
-                    </span>
-                  ) : (
-                    q(row.caseTemp, "°C")
-                  )}
-                </Td>
-                {canWrite ? (
-                  <Td className="text-right">
-                    <ConfirmDelete
-                      label={row.name}
-                      confirming={confirming === row.id}
-                      pending={remove.isPending}
-                      onAsk={() => setConfirming(row.id)}
-                      onConfirm={() => remove.mutate(row.id)}
-                      onKeep={() => setConfirming(null)}
-                      before={
-                        row.kind === "rect" || row.kind === "triangle" ? (
-                          <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
-                            Edit
-                          </Button>
-                        ) : null
-                      }
-                    />
-                  </Td>
-                ) : null}
-              </Tr>
-              {open === row.id ? (
-                <tr>
-                  <td colSpan={columns} className="border-b border-line bg-surface px-3 py-3 text-sm">
-                    <FaultCaseOrigin row={row} />
-                  </td>
-                </tr>
-              ) : null}
-            </Fragment>
-          ))}
-        </tbody>
-      </Table>
+      <DataTable
+        label="Fault cases"
+        columns={columns}
+        data={faultCases}
+        getRowId={(row) => row.id}
+        detail={(row) => (open === row.id ? <FaultCaseOrigin row={row} /> : null)}
+        empty={
+          canWrite
+            ? "No fault cases yet. Build one from the circuit with a pulse builder below, or type it."
+            : "No fault cases yet. An engineer adds the pulses the design must survive."
+        }
+      />
       {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
       {editing ? (
         <div className="mt-4">
@@ -168,6 +91,112 @@ export function FaultCaseTable({
       ) : null}
     </>
   );
+}
+
+const num = { numeric: true };
+
+function faultCaseColumns({
+  open,
+  toggle,
+  projectCaseTemp,
+  actions,
+}: {
+  open: string | null;
+  toggle: (id: string) => void;
+  projectCaseTemp: number;
+  actions: ((row: FaultCaseRecord) => ReactNode) | null;
+}): ColumnDef<FaultCaseRecord>[] {
+  const columns: ColumnDef<FaultCaseRecord>[] = [
+    {
+      id: "name",
+      header: "Name",
+      cell: ({ row: { original: row } }) => (
+        <>
+          <button
+            type="button"
+            aria-expanded={open === row.id}
+            onClick={() => toggle(row.id)}
+            className="inline-flex items-center gap-1.5 text-left font-medium hover:text-accent"
+          >
+            <svg
+              width="10"
+              height="10"
+              viewBox="0 0 10 10"
+              aria-hidden="true"
+              className={`text-ink-faint transition-transform ${open === row.id ? "rotate-90" : ""}`}
+            >
+              <path d="M3 1.5 6.5 5 3 8.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
+            </svg>
+            {row.name}
+          </button>
+          {row.origin ? (
+            <span className="ml-2 text-xs text-ink-faint">
+              from the {builderNames[row.origin.builder] ?? row.origin.builder} builder
+            </span>
+          ) : null}
+        </>
+      ),
+    },
+    {
+      id: "shape",
+      header: "Shape",
+      cell: ({ row }) =>
+        row.original.kind === "waveform" ? "fault sequence" : shapeWords[row.original.kind],
+      meta: { className: "text-ink-muted", headerClassName: "" },
+    },
+    {
+      id: "v",
+      header: () => <Sym main="V" sub="DS" />,
+      cell: ({ row: { original: row } }) =>
+        row.kind === "avalanche" ? (
+          <span title="The supply; the drain rises to each candidate's breakdown voltage">
+            {q(row.v, "V")} supply
+          </span>
+        ) : (
+          q(row.v, "V")
+        ),
+      meta: num,
+    },
+    {
+      id: "i",
+      header: () => (
+        <>
+          <Sym main="I" sub="D" /> (peak)
+        </>
+      ),
+      cell: ({ row }) => q(row.original.i, "A"),
+      meta: num,
+    },
+    { id: "width", header: "Width", cell: ({ row }) => widthText(row.original), meta: num },
+    {
+      id: "repeat",
+      header: "Repetition",
+      cell: ({ row }) => repeatText(repeatOf(row.original)) ?? "single pulse",
+      meta: { className: "text-ink-muted", headerClassName: "" },
+    },
+    {
+      id: "caseTemp",
+      header: () => <Sym main="T" sub="C" />,
+      cell: ({ row: { original: row } }) =>
+        row.caseTemp === null ? (
+          <span className="text-ink-faint" title="The project's case temperature">
+            {q(projectCaseTemp, "°C")}
+          </span>
+        ) : (
+          q(row.caseTemp, "°C")
+        ),
+      meta: num,
+    },
+  ];
+  if (actions) {
+    columns.push({
+      id: "actions",
+      header: () => <span className="sr-only">Actions</span>,
+      cell: ({ row }) => actions(row.original),
+      meta: { className: "text-right", headerClassName: "w-40" },
+    });
+  }
+  return columns;
 }
 
 /** The width column: a pulse's width, an unclamped turn-off's inductance, a sequence's length. */

@@ -1,9 +1,9 @@
 "use client";
 
-import { useSearchParams } from "next/navigation";
 import { Caution } from "@/components/caution";
 import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
+import { useUrlState } from "@/components/use-url-state";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { CandidatesPanel } from "../candidates/candidates-panel";
 import type { PanelProps } from "../project-workspace";
@@ -13,7 +13,8 @@ import { ResultsTable } from "./results-table";
 /** The results tab: the candidates, every pulse against each of them, and each candidate's SOA chart. */
 export function ResultsPanel(props: PanelProps & { checkError: string | null }) {
   const { check, checkError, detail, canWrite, projectId } = props;
-  const highlight = useSearchParams().get("pulse");
+  const [params] = useUrlState();
+  const highlight = params.get("pulse");
   return (
     <div className="space-y-8">
       <CandidatesPanel projectId={projectId} candidates={detail.candidates} canWrite={canWrite} />
