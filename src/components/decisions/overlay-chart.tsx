@@ -1,14 +1,14 @@
 "use client";
 
 import { type PointerEvent, useMemo, useState } from "react";
-import { SubscriptLabel } from "@/components/soa-chart/chart-axes";
+import { idTitle, vdsTitle } from "@/components/soa-chart/chart-axes";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "@/components/soa-chart/chart-frame";
 import { EndLabels, LimitLines, PulseMarks } from "@/components/soa-chart/chart-layers";
 import type { LegendRow } from "@/components/soa-chart/chart-legend";
 import { chartDomains, chartLayout, textWidth } from "@/components/soa-chart/chart-model";
-import { type Readout, Sym } from "@/components/soa-chart/chart-readout";
-import { plotAxes, snapToLine } from "@/components/soa-chart/frame-model";
+import { limitReadout, type Readout, Sym } from "@/components/soa-chart/chart-readout";
+import { plotAxes } from "@/components/soa-chart/frame-model";
 import { formatQuantity } from "@/lib/soa/units";
 import { verdictWords } from "./format";
 import type { OverlayLine, OverlayMarker } from "./overlay-model";
@@ -86,21 +86,8 @@ function OverlayPlot({
   const { plot } = layout;
   const { x, y } = plotAxes(plot, { kind: "log", domain: domains.x }, { kind: "log", domain: domains.y });
 
-  function onMove(event: PointerEvent<SVGRectElement>) {
-    const { px, py } = pointerAt(event);
-    const v = x.scale.invert(px);
-    const nearest = snapToLine(lines, v, py, y.scale);
-    const i = nearest ? nearest.current : y.scale.invert(py);
-    setReadout({
-      left: px,
-      top: nearest ? y.scale(nearest.current) : py,
-      title: nearest ? `${nearest.line.name} limit` : undefined,
-      rows: [
-        { label: Sym.vds, value: formatQuantity(v, "V") },
-        { label: Sym.id, value: formatQuantity(i, "A") },
-      ],
-    });
-  }
+  const onMove = (event: PointerEvent<SVGRectElement>) =>
+    setReadout(limitReadout(lines, pointerAt(event), x, y, false));
 
   return (
     <ChartFrame
@@ -108,16 +95,15 @@ function OverlayPlot({
       height={layout.height}
       label={`Limit lines of ${lines.length} candidate${lines.length === 1 ? "" : "s"} with the chosen pulses: drain current against drain-source voltage, log-log`}
       title={title}
-      legend={{ rows: legend, x: layout.legend.x, y: layout.legend.y, colours }}
+      legend={{ rows: legend, x: layout.legend.x, y: layout.legend.y }}
       readout={readout}
     >
       <PlotArea
         plot={plot}
         x={x}
         y={y}
-        colours={colours}
-        xTitle={<SubscriptLabel main="V" sub="DS" unit="V" />}
-        yTitle={<SubscriptLabel main="I" sub="D" unit="A" />}
+        xTitle={vdsTitle}
+        yTitle={idTitle}
         clipped={
           <LimitLines lines={lines} x={x} y={y} attributes={(line) => ({ "data-candidate": line.partId })} />
         }

@@ -15,6 +15,10 @@ export function SubscriptLabel({ main, sub, unit }: { main: string; sub: string;
   );
 }
 
+/** The axis titles of every SOA chart: V_DS across, I_D up. */
+export const vdsTitle = <SubscriptLabel main="V" sub="DS" unit="V" />;
+export const idTitle = <SubscriptLabel main="I" sub="D" unit="A" />;
+
 /**
  * The frame's axes: the plot's panel, faint minor grid (2…9 of each decade on a log axis, every tick on a linear
  * one), strong major grid at decades with ticks outside, the tick labels (engineering notation on log axes) and the

@@ -2,7 +2,7 @@
 
 import { type PointerEvent, type ReactNode, useId } from "react";
 import { ChartAxes } from "./chart-axes";
-import type { ChartColours } from "./chart-colours";
+import { useChartColours } from "./chart-colours";
 import { ChartExport } from "./chart-export-buttons";
 import { ChartLegend, type LegendRow } from "./chart-legend";
 import { type Readout, ReadoutBox } from "./chart-readout";
@@ -78,17 +78,11 @@ export function ChartFrame({
   /** Shrinks with its container (a viewBox) instead of scrolling. */
   scalable?: boolean;
   className?: string;
-  legend?: {
-    rows: LegendRow[];
-    x: number;
-    y: number;
-    colours: ChartColours;
-    columns?: number;
-    columnWidth?: number;
-  };
+  legend?: { rows: LegendRow[]; x: number; y: number; columns?: number; columnWidth?: number };
   readout?: Readout | null;
   children: ReactNode;
 }) {
+  const colours = useChartColours();
   return (
     <>
       <svg
@@ -103,7 +97,7 @@ export function ChartFrame({
       >
         {title ? <title>{title}</title> : null}
         {children}
-        {legend ? <ChartLegend {...legend} /> : null}
+        {legend ? <ChartLegend {...legend} colours={colours} /> : null}
       </svg>
       {readout ? <ReadoutBox readout={readout} frameWidth={width} /> : null}
     </>
@@ -133,7 +127,6 @@ export function PlotArea({
   plot,
   x,
   y,
-  colours,
   xTitle,
   yTitle,
   clipped,
@@ -145,7 +138,6 @@ export function PlotArea({
   plot: PlotBox;
   x: Axis;
   y: Axis;
-  colours: ChartColours;
   xTitle?: ReactNode;
   yTitle?: ReactNode;
   clipped?: ReactNode;
@@ -154,6 +146,7 @@ export function PlotArea({
   crosshair?: { left: number; top: number } | null;
   front?: ReactNode;
 }) {
+  const colours = useChartColours();
   const clipId = `plot-clip-${useId().replace(/[^a-zA-Z0-9]/g, "")}`;
   const { className, ...handlers } = pointer ?? {};
   return (

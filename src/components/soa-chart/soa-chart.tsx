@@ -3,14 +3,14 @@
 import { type PointerEvent, useMemo, useState } from "react";
 import { interpolateCurve } from "@/lib/soa/interpolate-curve";
 import { formatQuantity } from "@/lib/soa/units";
-import { SubscriptLabel } from "./chart-axes";
+import { idTitle, vdsTitle } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
 import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "./chart-frame";
 import { EndLabels, LimitLines, PulseMarks } from "./chart-layers";
 import { FindingMark, legendRows } from "./chart-legend";
 import { buildLines, type ChartLine, chartDomains, chartLayout, textWidth } from "./chart-model";
-import { type Readout, Sym } from "./chart-readout";
-import { type Axis, plotAxes, snapToLine } from "./frame-model";
+import { limitReadout, type Readout, Sym } from "./chart-readout";
+import { type Axis, plotAxes } from "./frame-model";
 import { PointsTable } from "./points-table";
 import type { ChartFinding, SoaChartProps } from "./types";
 
@@ -68,22 +68,8 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
   const { x, y } = plotAxes(plot, { kind: "log", domain: domains.x }, { kind: "log", domain: domains.y });
   const readable = lines.filter((l) => l.kind !== "instability");
 
-  function onMove(event: PointerEvent<SVGRectElement>) {
-    const { px, py } = pointerAt(event);
-    const v = x.scale.invert(px);
-    const nearest = snapToLine(readable, v, py, y.scale);
-    const i = nearest ? nearest.current : y.scale.invert(py);
-    setReadout({
-      left: px,
-      top: nearest ? y.scale(nearest.current) : py,
-      title: nearest ? `${nearest.line.name} limit` : undefined,
-      rows: [
-        { label: Sym.vds, value: formatQuantity(v, "V") },
-        { label: Sym.id, value: formatQuantity(i, "A") },
-        { label: Sym.p, value: formatQuantity(v * i, "W") },
-      ],
-    });
-  }
+  const onMove = (event: PointerEvent<SVGRectElement>) =>
+    setReadout(limitReadout(readable, pointerAt(event), x, y, true));
 
   return (
     <ChartFrame
@@ -91,16 +77,15 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
       height={layout.height}
       label={`Safe operating area of ${title}: drain current against drain-source voltage, log-log`}
       title={`SOA of ${title}`}
-      legend={{ rows, ...layout.legend, colours, columnWidth: legendWidth }}
+      legend={{ rows, ...layout.legend, columnWidth: legendWidth }}
       readout={readout}
     >
       <PlotArea
         plot={plot}
         x={x}
         y={y}
-        colours={colours}
-        xTitle={<SubscriptLabel main="V" sub="DS" unit="V" />}
-        yTitle={<SubscriptLabel main="I" sub="D" unit="A" />}
+        xTitle={vdsTitle}
+        yTitle={idTitle}
         clipped={
           <LimitLines
             lines={lines}

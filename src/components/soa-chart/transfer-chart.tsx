@@ -70,7 +70,6 @@ export function TransferChart({
           plot={plot}
           x={x}
           y={y}
-          colours={colours}
           xTitle={<SubscriptLabel main="V" sub="GS" unit="V" />}
           yTitle={<SubscriptLabel main="I" sub="D" unit="A" />}
           above={

@@ -68,7 +68,6 @@ export function ZthChart({
         plot={plot}
         x={x}
         y={y}
-        colours={colours}
         xTitle="t (s)"
         yTitle={
           <>

@@ -155,7 +155,6 @@ function TraceFrame({
               plot={plot}
               x={px}
               y={py}
-              colours={colours}
               xTitle={last ? "time" : undefined}
               clipped={panel.series.map((s) => (
                 <Envelope key={s.key} series={s} window={domain} x={px} y={py} />
