@@ -1,6 +1,6 @@
 import { type Verdict, VerdictGlyph } from "@/components/verdict-shape";
 import type { ChartColours } from "./chart-colours";
-import { placePulse, textWidth } from "./chart-model";
+import { type LimitLine, placePulse, textWidth } from "./chart-model";
 import type { Readout } from "./chart-readout";
 import { type Axis, linePath, type PlotBox } from "./frame-model";
 import { placeLabels } from "./label-layout";
@@ -8,16 +8,6 @@ import { OffScaleMark } from "./off-scale-mark";
 
 // Layers that the SOA chart and the overlay chart both lay on the frame: limit lines, their labels at their ends,
 // and pulses as verdict-shaped markers held at the edge when off scale.
-
-export interface LimitLine {
-  key: string;
-  points: [number, number][];
-  label: string;
-  stroke: string;
-  text: string;
-  dash?: string;
-  strokeWidth?: number;
-}
 
 /** The limit lines as paths (drawn inside the plot's clip); `attributes` adds a line's data attributes. */
 export function LimitLines<L extends LimitLine>({
