@@ -9,20 +9,25 @@ import { OffScaleMark } from "./off-scale-mark";
 // Layers that the SOA chart and the overlay chart both lay on the frame: limit lines, their labels at their ends,
 // and pulses as verdict-shaped markers held at the edge when off scale.
 
-/** The limit lines as paths (drawn inside the plot's clip); `attributes` adds a line's data attributes. */
+/**
+ * The limit lines as paths (drawn inside the plot's clip); `attributes` adds a line's data attributes. Round caps
+ * make the SOA chart's dotted instability boundary a row of dots.
+ */
 export function LimitLines<L extends LimitLine>({
   lines,
   x,
   y,
+  caps = "butt",
   attributes,
 }: {
   lines: readonly L[];
   x: Axis;
   y: Axis;
+  caps?: "butt" | "round";
   attributes?: (line: L) => Record<`data-${string}`, string | undefined>;
 }) {
   return (
-    <g fill="none" strokeLinejoin="round">
+    <g fill="none" strokeLinejoin="round" strokeLinecap={caps}>
       {lines.map((line) => (
         <path
           key={line.key}

@@ -91,6 +91,7 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
             lines={lines}
             x={x}
             y={y}
+            caps="round"
             attributes={(line) => ({ "data-series": line.kind, "data-name": line.name })}
           />
         }
