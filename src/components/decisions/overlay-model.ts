@@ -1,4 +1,5 @@
 import { mix } from "@/components/soa-chart/chart-colours";
+import type { LimitLine } from "@/components/soa-chart/chart-model";
 import type { Verdict } from "@/lib/soa/types";
 import { worseVerdict } from "@/lib/soa/verdict";
 import { q, readWidth } from "./format";
@@ -17,17 +18,9 @@ export interface LineGroup {
   caseTemp: number;
 }
 
-export interface OverlayLine {
-  key: string;
+/** name: legend words, "QM-80T16 (Quillmere Semiconductor), 24 ms"; label at the line's end, "QM-80T16 24 ms". */
+export interface OverlayLine extends LimitLine {
   partId: string;
-  /** Legend words: "QM-80T16 (Quillmere Semiconductor), 24 ms". */
-  name: string;
-  /** Short label at the line's end: "QM-80T16 24 ms". */
-  label: string;
-  points: [number, number][];
-  stroke: string;
-  text: string;
-  dash?: string;
 }
 
 export interface OverlayMarker {

@@ -8,18 +8,25 @@ import type { ChartCurve, ChartDuration, SoaChartProps } from "./types";
 
 export type LineKind = "curve" | "derated" | "interpolated" | "instability";
 
-export interface ChartLine {
+/** A limit line as the SOA frame's layers draw it (the SOA chart's curves, the overlay's candidates). */
+export interface LimitLine {
   key: string;
-  kind: LineKind;
-  duration: ChartDuration;
-  /** Its name in the legend and the tooltip ("1 ms", "DC", "2 ms, interpolated"). */
+  /** Its name in the legend and the readout ("1 ms", "DC", "2 ms, interpolated"). */
   name: string;
   /** Its label at the line's end, kept short ("1 ms", "2 ms interp."). */
   label: string;
+  /** [V, I] in SI units, sorted by V. */
   points: [number, number][];
   stroke: string;
+  /** The label's colour. */
   text: string;
   dash?: string;
+  strokeWidth?: number;
+}
+
+export interface ChartLine extends LimitLine {
+  kind: LineKind;
+  duration: ChartDuration;
   strokeWidth: number;
 }
 

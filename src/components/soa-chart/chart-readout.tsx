@@ -1,4 +1,6 @@
 import type { ReactNode } from "react";
+import { formatQuantity } from "@/lib/soa/units";
+import { type Axis, snapToLine } from "./frame-model";
 
 export interface Readout {
   /** Pointer position inside the chart's frame, in px. */
@@ -50,3 +52,29 @@ export const Sym = {
   ),
   p: <>P = V·I</>,
 };
+
+/**
+ * The readout at pixel (px, py) of a chart of drain current against drain-source voltage: V and I there, the
+ * current read off the limit line within snapping distance (named in the title), and with `power` their product.
+ */
+export function limitReadout<L extends { name: string; points: [number, number][] }>(
+  lines: readonly L[],
+  { px, py }: { px: number; py: number },
+  x: Axis,
+  y: Axis,
+  power: boolean,
+): Readout {
+  const v = x.scale.invert(px);
+  const nearest = snapToLine(lines, v, py, y.scale);
+  const i = nearest ? nearest.current : y.scale.invert(py);
+  return {
+    left: px,
+    top: nearest ? y.scale(nearest.current) : py,
+    title: nearest ? `${nearest.line.name} limit` : undefined,
+    rows: [
+      { label: Sym.vds, value: formatQuantity(v, "V") },
+      { label: Sym.id, value: formatQuantity(i, "A") },
+      ...(power ? [{ label: Sym.p, value: formatQuantity(v * i, "W") }] : []),
+    ],
+  };
+}

@@ -1,9 +1,11 @@
 "use client";
 
-import { scaleLinear, scaleLog } from "d3-scale";
 import { useMemo } from "react";
-import { decadeDomain, decadeTicks, engineeringTick, minorTicks } from "@/lib/chart/log-axis";
+import { decadeDomain } from "@/lib/chart/log-axis";
+import { SubscriptLabel } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
+import { ChartFrame, PlotArea } from "./chart-frame";
+import { linePath, plotAxes } from "./frame-model";
 
 const margin = { top: 10, left: 52, bottom: 44, right: 16 };
 
@@ -46,131 +48,60 @@ export function TransferChart({
     width: width - margin.left - margin.right,
     height: Math.min(320, decades * 56),
   };
-  const x = scaleLinear()
-    .domain(gDomain)
-    .range([plot.left, plot.left + plot.width])
-    .nice();
-  const y = scaleLog()
-    .domain(iDomain)
-    .range([plot.top + plot.height, plot.top])
-    .clamp(true);
-  const height = plot.top + plot.height + margin.bottom;
-  const bottom = plot.top + plot.height;
+  const { x, y } = plotAxes(
+    plot,
+    { kind: "linear", domain: gDomain, nice: true, count: 6 },
+    { kind: "log", domain: iDomain, clamp: true },
+  );
+  const style = (k: number) => ({
+    stroke: k === 0 ? colours.accentStrong : colours.ink,
+    dash: k === 0 ? undefined : "6 3",
+  });
   return (
     <figure className="space-y-2">
-      <svg
+      <ChartFrame
         width={width}
-        height={height}
-        viewBox={`0 0 ${width} ${height}`}
-        className="h-auto max-w-full"
-        role="img"
-        aria-label="Transfer characteristics: I_D against V_GS at two junction temperatures"
-        data-testid="transfer-chart"
+        height={plot.top + plot.height + margin.bottom}
+        label="Transfer characteristics: I_D against V_GS at two junction temperatures"
+        testId="transfer-chart"
+        scalable
       >
-        {minorTicks(iDomain).map((i) => (
-          <line
-            key={`m${i}`}
-            x1={plot.left}
-            x2={plot.left + plot.width}
-            y1={y(i)}
-            y2={y(i)}
-            stroke={colours.line}
-            strokeWidth={0.5}
-          />
-        ))}
-        {decadeTicks(iDomain).map((i) => (
-          <g key={`d${i}`}>
-            <line
-              x1={plot.left}
-              x2={plot.left + plot.width}
-              y1={y(i)}
-              y2={y(i)}
-              stroke={colours.lineStrong}
-            />
-            <text
-              x={plot.left - 6}
-              y={y(i)}
-              dy="0.32em"
-              textAnchor="end"
-              fontSize={11}
-              fill={colours.inkMuted}
-            >
-              {engineeringTick(i)}
-            </text>
-          </g>
-        ))}
-        {x.ticks(6).map((g) => (
-          <g key={`g${g}`}>
-            <line x1={x(g)} x2={x(g)} y1={plot.top} y2={bottom} stroke={colours.line} strokeWidth={0.5} />
-            <text x={x(g)} y={bottom + 16} textAnchor="middle" fontSize={11} fill={colours.inkMuted}>
-              {g}
-            </text>
-          </g>
-        ))}
-        <text
-          x={plot.left + plot.width / 2}
-          y={bottom + 36}
-          textAnchor="middle"
-          fontSize={12}
-          fill={colours.ink}
-        >
-          V
-          <tspan dy={3} fontSize="0.78em">
-            GS
-          </tspan>
-          <tspan dy={-3}> (V)</tspan>
-        </text>
-        <text
-          transform={`translate(14 ${plot.top + plot.height / 2}) rotate(-90)`}
-          textAnchor="middle"
-          fontSize={12}
-          fill={colours.ink}
-        >
-          I
-          <tspan dy={3} fontSize="0.78em">
-            D
-          </tspan>
-          <tspan dy={-3}> (A)</tspan>
-        </text>
-        {curves.map((curve, k) => (
-          <g key={curve.temp} data-series={`transfer-${curve.temp}`}>
-            <path
-              d={curve.points
-                .map(([g, i], n) => `${n ? "L" : "M"}${x(g).toFixed(1)},${y(i).toFixed(1)}`)
-                .join("")}
-              fill="none"
-              stroke={k === 0 ? colours.accentStrong : colours.ink}
-              strokeWidth={1.75}
-              strokeDasharray={k === 0 ? undefined : "6 3"}
-            />
-            {curve.points.map(([g, i]) => (
-              <circle
-                key={`${g}-${i}`}
-                cx={x(g)}
-                cy={y(i)}
-                r={2.5}
-                fill={colours.panel}
-                stroke={k === 0 ? colours.accentStrong : colours.ink}
-              />
-            ))}
-          </g>
-        ))}
-        {zeroTc ? (
-          <g data-testid="zero-tc-point">
-            <circle
-              cx={x(zeroTc.gate)}
-              cy={y(zeroTc.current)}
-              r={6}
-              fill="none"
-              stroke={colours.ink}
-              strokeWidth={1.5}
-            />
-            <text x={x(zeroTc.gate) + 9} y={y(zeroTc.current) + 14} fontSize={11} fill={colours.ink}>
-              zero TC
-            </text>
-          </g>
-        ) : null}
-      </svg>
+        <PlotArea
+          plot={plot}
+          x={x}
+          y={y}
+          xTitle={<SubscriptLabel main="V" sub="GS" unit="V" />}
+          yTitle={<SubscriptLabel main="I" sub="D" unit="A" />}
+          above={
+            <>
+              {curves.map((curve, k) => (
+                <g key={curve.temp} data-series={`transfer-${curve.temp}`}>
+                  <path
+                    d={linePath(curve.points, x.scale, y.scale)}
+                    fill="none"
+                    stroke={style(k).stroke}
+                    strokeWidth={1.75}
+                    strokeDasharray={style(k).dash}
+                  />
+                  {curve.points.map(([g, i]) => (
+                    <circle
+                      key={`${g}-${i}`}
+                      cx={x.scale(g)}
+                      cy={y.scale(i)}
+                      r={2.5}
+                      fill={colours.panel}
+                      stroke={style(k).stroke}
+                    />
+                  ))}
+                </g>
+              ))}
+              {zeroTc ? (
+                <ZeroTcMark x={x.scale(zeroTc.gate)} y={y.scale(zeroTc.current)} colour={colours.ink} />
+              ) : null}
+            </>
+          }
+        />
+      </ChartFrame>
       <figcaption className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-muted">
         {curves.map((curve, k) => (
           <span key={curve.temp} className="inline-flex items-center gap-1.5">
@@ -180,9 +111,9 @@ export function TransferChart({
                 x2="22"
                 y1="3"
                 y2="3"
-                stroke={k === 0 ? colours.accentStrong : colours.ink}
+                stroke={style(k).stroke}
                 strokeWidth={1.75}
-                strokeDasharray={k === 0 ? undefined : "6 3"}
+                strokeDasharray={style(k).dash}
               />
             </svg>
             <span className="num">
@@ -198,5 +129,17 @@ export function TransferChart({
         ) : null}
       </figcaption>
     </figure>
+  );
+}
+
+/** The zero-temperature-coefficient point: a ring where the two curves cross, named beside it. */
+function ZeroTcMark({ x, y, colour }: { x: number; y: number; colour: string }) {
+  return (
+    <g data-testid="zero-tc-point">
+      <circle cx={x} cy={y} r={6} fill="none" stroke={colour} strokeWidth={1.5} />
+      <text x={x + 9} y={y + 14} fontSize={11} fill={colour}>
+        zero TC
+      </text>
+    </g>
   );
 }
