@@ -2,10 +2,14 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { TitleBar } from "@/components/library/title-bar";
+import { Prefetched } from "@/components/prefetched";
+import { projectKeys } from "@/components/projects/api";
 import { ProjectWorkspace } from "@/components/projects/project-workspace";
 import { listMembers } from "@/db/queries/members";
 import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
+import { checkProject } from "@/lib/projects/check";
+import { projectDetail } from "@/lib/projects/detail";
 import { loadProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Project" };
@@ -20,7 +24,13 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
     if (error instanceof AppError) notFound();
     throw error;
   });
-  const members = await listMembers({ workspaceId: member.workspace.id });
+  // The project and its check, loaded here as their routes load them and rendered at once: no fetch chain after
+  // hydration.
+  const [members, { detail, candidates }] = await Promise.all([
+    listMembers({ workspaceId: member.workspace.id }),
+    projectDetail(project),
+  ]);
+  const check = await checkProject(project, { candidates });
   const owner = members.find((m) => m.userId === project.ownerId);
   const canWrite = member.can("project.write");
 
@@ -60,13 +70,20 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
       {project.description ? (
         <p className="max-w-3xl text-sm whitespace-pre-line text-ink-muted">{project.description}</p>
       ) : null}
-      <ProjectWorkspace
-        projectId={project.id}
-        viewer={{ id: member.user.id, role: member.role }}
-        canWrite={canWrite}
-        canMeasure={member.can("measurement.write")}
-        people={members.map((m) => ({ id: m.userId, name: m.name }))}
-      />
+      <Prefetched
+        queries={[
+          [projectKeys.detail(project.id), detail],
+          [projectKeys.check(project.id), check],
+        ]}
+      >
+        <ProjectWorkspace
+          projectId={project.id}
+          viewer={{ id: member.user.id, role: member.role }}
+          canWrite={canWrite}
+          canMeasure={member.can("measurement.write")}
+          people={members.map((m) => ({ id: m.userId, name: m.name }))}
+        />
+      </Prefetched>
     </div>
   );
 }

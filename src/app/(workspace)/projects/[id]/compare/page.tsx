@@ -3,9 +3,13 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CompareActions } from "@/components/decisions/compare-actions";
 import { CompareView } from "@/components/decisions/compare-view";
+import { decisionKeys } from "@/components/decisions/types";
 import { TitleBar } from "@/components/library/title-bar";
+import { Prefetched } from "@/components/prefetched";
 import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
+import { checkProject } from "@/lib/projects/check";
+import { listDecisions } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Compare and decide" };
@@ -18,6 +22,9 @@ export default async function ComparePage({ params }: { params: Promise<{ id: st
     throw error;
   });
   const canSign = member.can("decision.sign");
+  // The check and the decisions, loaded here as their routes load them and rendered at once: no fetch chain after
+  // hydration.
+  const [check, decisions] = await Promise.all([checkProject(project), listDecisions(project.id)]);
 
   return (
     <div className="space-y-6">
@@ -40,7 +47,14 @@ export default async function ComparePage({ params }: { params: Promise<{ id: st
         }
         actions={<CompareActions projectId={project.id} canSign={canSign} />}
       />
-      <CompareView projectId={project.id} projectName={project.name} canSign={canSign} />
+      <Prefetched
+        queries={[
+          [decisionKeys.check(project.id), check],
+          [decisionKeys.decisions(project.id), { decisions }],
+        ]}
+      >
+        <CompareView projectId={project.id} projectName={project.name} canSign={canSign} />
+      </Prefetched>
     </div>
   );
 }
