@@ -14,7 +14,7 @@ import type { ReactNode } from "react";
 import { messageOf } from "@/components/api-client";
 import { Button } from "@/components/form";
 import { EmptyRow, Table, Td, Th, Tr } from "@/components/table";
-import { technologyLabels } from "@/lib/library/part-schema";
+import { technologyLabels } from "@/lib/library/technologies";
 import { callJson } from "./api";
 import { costText, inUnit } from "./format";
 import {
