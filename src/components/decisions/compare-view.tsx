@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useMemo } from "react";
 import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
@@ -7,12 +8,16 @@ import { LoadingBox } from "@/components/loading-box";
 import { Section } from "@/components/page-header";
 import { useUrlState } from "@/components/use-url-state";
 import { ComparisonStats } from "./comparison-stats";
-import { DecisionForm } from "./decision-form";
 import { filterFrom, type MatrixFilter, rankAll } from "./matrix-model";
 import { MatrixSection } from "./matrix-section";
 import { OverlayPanel } from "./overlay-panel";
 import { useCheck } from "./queries";
 import type { ProjectCheck } from "./types";
+
+// The decision form (with its zod schema) loads when a lead opens it.
+const DecisionForm = dynamic(() => import("./decision-form").then((m) => m.DecisionForm), {
+  loading: () => <LoadingBox className="h-48">Loading the decision form…</LoadingBox>,
+});
 
 /**
  * The lead's comparison: key figures, the decision form when asked for (leads only), the ranked matrix with its

@@ -2,17 +2,26 @@
 
 import { useQueries } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
+import dynamic from "next/dynamic";
 import { type ReactNode, useMemo, useState } from "react";
+import { AfterLoad } from "@/components/after-load";
 import { messageOf } from "@/components/api-client";
 import { DataTable } from "@/components/data-table";
 import { callJson } from "@/components/library/api";
 import { LoadingBox } from "@/components/loading-box";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { percent, pulseLine, q, readWidth, verdictWords } from "./format";
-import { OverlayChart } from "./overlay-chart";
 import { type LineGroup, lineGroups, MAX_CHOSEN, overlayLines, overlayMarkers } from "./overlay-model";
 import { decisionKeys, type LimitsAnswer, type ProjectCheck } from "./types";
 import { VerdictMark } from "./verdict-mark";
+
+// The chart loads after the page has loaded (it sits below the matrix), in the browser only (it measures its width
+// there).
+const drawing = () => <LoadingBox className="h-[28rem]">Drawing the limit lines…</LoadingBox>;
+const OverlayChart = dynamic(() => import("./overlay-chart").then((m) => m.OverlayChart), {
+  ssr: false,
+  loading: drawing,
+});
 
 /** The first pulse any candidate fails, else the first pulse: what the overlay opens with. */
 function firstChoice(check: ProjectCheck): string[] {
@@ -118,7 +127,7 @@ export function OverlayPanel({ check, title }: { check: ProjectCheck; title: str
             {messageOf(failed.error)}
           </p>
         ) : pending ? (
-          <LoadingBox className="h-[28rem]">Drawing the limit lines…</LoadingBox>
+          drawing()
         ) : (
           <>
             <p className="mb-3 text-xs text-ink-muted">
@@ -129,12 +138,14 @@ export function OverlayPanel({ check, title }: { check: ProjectCheck; title: str
                 ? " A repeated pulse is judged against a lower limit than the single-pulse line drawn here."
                 : ""}
             </p>
-            <OverlayChart
-              title={title}
-              heading={`Derated limits, ${temps.map((t) => q(t, "°C")).join(" / ")} case`}
-              lines={lines}
-              markers={markers}
-            />
+            <AfterLoad fallback={drawing()}>
+              <OverlayChart
+                title={title}
+                heading={`Derated limits, ${temps.map((t) => q(t, "°C")).join(" / ")} case`}
+                lines={lines}
+                markers={markers}
+              />
+            </AfterLoad>
             <OverlayTable check={check} markers={markers} />
           </>
         )}

@@ -2,14 +2,18 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { callJson } from "@/components/library/api";
+import { checkFreshFor } from "@/components/projects/api";
 import { type AuditEvent, type DecisionSummary, decisionKeys, type ProjectCheck } from "./types";
 
-/** The project checked now: always fetched fresh on mount, since the library may have changed. */
+/**
+ * The project checked now: the library may have changed, so a check is fresh only for a few seconds (the page's
+ * server render is used at hydration; an older one is fetched again on mount).
+ */
 export function useCheck(projectId: string) {
   return useQuery({
     queryKey: decisionKeys.check(projectId),
     queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
-    staleTime: 0,
+    staleTime: checkFreshFor,
   });
 }
 

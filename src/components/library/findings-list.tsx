@@ -1,5 +1,11 @@
-import { type ChartFinding, durationName } from "@/components/soa-chart";
-import { findingKey } from "@/lib/library/acceptance";
+import type { ChartDuration, ChartFinding } from "@/components/soa-chart";
+import { findingKey } from "@/lib/library/finding-key";
+import { formatQuantity } from "@/lib/soa/units";
+
+/** A curve's width as the chart's legend names it; written here so the list does not load the chart's code. */
+function curveName(duration: ChartDuration): string {
+  return duration === "DC" ? "DC" : formatQuantity(duration, "s");
+}
 
 const kindWords: Record<string, string> = {
   "invalid-point": "Invalid point",
@@ -46,7 +52,7 @@ export function FindingsList({
                 <span className="sr-only">Finding {k + 1}: </span>
                 {kindWords[finding.kind] ?? finding.kind}
                 <span className="font-normal text-ink-muted">
-                  {finding.curve ? ` · ${durationName(finding.curve.duration)} curve` : " · part"}
+                  {finding.curve ? ` · ${curveName(finding.curve.duration)} curve` : " · part"}
                   {finding.size ? ` · ${finding.size}` : ""}
                 </span>
               </p>

@@ -1,5 +1,5 @@
 import type { ReadonlyURLSearchParams } from "next/navigation";
-import type { technologies } from "@/lib/library/part-schema";
+import type { technologies } from "@/lib/library/technologies";
 
 // The library list's state lives in the URL: these are its keys, their defaults, and the query the list sends.
 

@@ -1,11 +1,24 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useId } from "react";
+import { AfterLoad } from "@/components/after-load";
 import { messageOf } from "@/components/api-client";
-import { type ChartCurve, type ChartFinding, InstabilityNote, SoaChart } from "@/components/soa-chart";
+import { LoadingBox } from "@/components/loading-box";
+import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
+import { InstabilityNote } from "@/components/soa-chart/instability-note";
 import { FindingsList } from "./findings-list";
 import { CaseTempControl, WidthControl, WidthExplanation } from "./limits-controls";
 import { usePartLimits } from "./use-part-limits";
+
+// The chart stack (about a sixth of the page's script) loads once the page has loaded, in the browser only (it
+// measures its width there): the page's figures and controls come first, the chart a moment later in a box of its
+// height.
+const drawing = () => <LoadingBox className="h-[26rem]">Drawing the SOA curves…</LoadingBox>;
+const SoaChart = dynamic(() => import("@/components/soa-chart").then((m) => m.SoaChart), {
+  ssr: false,
+  loading: drawing,
+});
 
 export interface ActiveCurveSet {
   id: string;
@@ -66,19 +79,21 @@ export function LimitsPanel({
           />
         </div>
 
-        <SoaChart
-          title={partNumber}
-          curves={data?.curves ?? curveSet.curves}
-          refCaseTemp={ref}
-          derated={
-            data && data.derating < 1
-              ? { caseTemp: data.caseTemp, factor: data.derating, curves: data.derated }
-              : null
-          }
-          interpolated={state.interpolated}
-          instability={width && data?.instability ? data.instability : null}
-          findings={curveSet.findings}
-        />
+        <AfterLoad fallback={drawing()}>
+          <SoaChart
+            title={partNumber}
+            curves={data?.curves ?? curveSet.curves}
+            refCaseTemp={ref}
+            derated={
+              data && data.derating < 1
+                ? { caseTemp: data.caseTemp, factor: data.derating, curves: data.derated }
+                : null
+            }
+            interpolated={state.interpolated}
+            instability={width && data?.instability ? data.instability : null}
+            findings={curveSet.findings}
+          />
+        </AfterLoad>
         <InstabilityNote
           width={width && data?.instability ? data.instability.width : null}
           zth={data?.instability?.zth}

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useId, useRef, useState } from "react";
-import { technologies, technologyLabels } from "@/lib/library/part-schema";
+import { technologies, technologyLabels } from "@/lib/library/technologies";
 import { parseQuantity } from "@/lib/soa/units";
 import type { LibraryState } from "./library-query";
 import { Sym } from "./symbols";

@@ -8,7 +8,7 @@ import { messageOf } from "@/components/api-client";
 import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
 import { useUrlState } from "@/components/use-url-state";
-import { technologyLabels } from "@/lib/library/part-schema";
+import { technologyLabels } from "@/lib/library/technologies";
 import { callJson } from "./api";
 import { costText, inUnit } from "./format";
 import {

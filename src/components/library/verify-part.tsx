@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { Button } from "@/components/form";
-import { type FindingLike, findingKey } from "@/lib/library/acceptance";
+import { type FindingLike, findingKey } from "@/lib/library/finding-key";
 
 export interface OpenFinding extends FindingLike {
   size?: string;

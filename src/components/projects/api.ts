@@ -170,6 +170,9 @@ export const projectKeys = {
     ["project-limits", partId, curveSetId, caseTemp, policy] as const,
 };
 
+/** How long a check stays fresh: long enough for the server's answer to be used at hydration, no longer. */
+export const checkFreshFor = 10_000;
+
 export function useProject(projectId: string) {
   return useQuery({
     queryKey: projectKeys.detail(projectId),
@@ -178,14 +181,16 @@ export function useProject(projectId: string) {
 }
 
 /**
- * The check is always fetched fresh on mount: the library may have changed since it was last seen. Captures still
- * processed or rechecked are named in `pendingCaptures`, and the check is fetched again until there are none.
+ * The check is fresh for a few seconds only: the library may have changed since it was last seen. The page renders
+ * it on the server, so it is not fetched again at hydration; a check older than that is fetched again on mount.
+ * Captures still processed or rechecked are named in `pendingCaptures`, and the check is fetched again until there
+ * are none.
  */
 export function useProjectCheck(projectId: string) {
   return useQuery({
     queryKey: projectKeys.check(projectId),
     queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
-    staleTime: 0,
+    staleTime: checkFreshFor,
     // While a capture's job runs, ask again until its results are in.
     refetchInterval: (query) => (query.state.data?.pendingCaptures?.length ? 1500 : false),
   });

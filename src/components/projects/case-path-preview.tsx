@@ -1,9 +1,16 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { Sym } from "@/components/library/symbols";
-import { ZthChart } from "@/components/soa-chart";
+import { LoadingBox } from "@/components/loading-box";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { formatQuantity } from "@/lib/soa/units";
+
+// The chart stack loads only once a case path is typed, in the browser only (it measures its width there).
+const ZthChart = dynamic(() => import("@/components/soa-chart").then((m) => m.ZthChart), {
+  ssr: false,
+  loading: () => <LoadingBox className="h-48 max-w-[380px]">Drawing the case path…</LoadingBox>,
+});
 
 /**
  * The case path's Z_th(t) as typed, and what applying it means (METHODS.md §14): the case rise is that network's

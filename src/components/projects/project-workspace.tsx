@@ -1,15 +1,29 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { usePathname, useSearchParams } from "next/navigation";
 import { type KeyboardEvent, type ReactNode, useRef } from "react";
 import { messageOf } from "@/components/api-client";
 import { LoadingBox } from "@/components/loading-box";
 import { type ProjectCheck, type ProjectDetail, useProject, useProjectCheck } from "./api";
-import { BenchPanel } from "./bench/bench-panel";
-import { CapturesPanel } from "./captures/captures-panel";
-import { FaultCasesPanel } from "./fault-cases/fault-cases-panel";
 import { ProjectStats } from "./project-stats";
 import { ResultsPanel } from "./results/results-panel";
+
+// The tabs not shown at first load with their code when opened: their forms (and zod), the dropzone and the
+// trace charts stay out of the page's first load.
+const tabLoading = (what: string) => () => <LoadingBox className="h-64">Loading the {what}…</LoadingBox>;
+const FaultCasesPanel = dynamic(
+  () => import("./fault-cases/fault-cases-panel").then((m) => m.FaultCasesPanel),
+  {
+    loading: tabLoading("fault cases"),
+  },
+);
+const BenchPanel = dynamic(() => import("./bench/bench-panel").then((m) => m.BenchPanel), {
+  loading: tabLoading("bench measurements"),
+});
+const CapturesPanel = dynamic(() => import("./captures/captures-panel").then((m) => m.CapturesPanel), {
+  loading: tabLoading("captures"),
+});
 
 export interface Viewer {
   id: string;

@@ -1,6 +1,9 @@
 // Accepting a part's findings when verifying it: every open finding needs a reason (issue 12: a part marked
 // verified in one click over ten open findings hid them). Shared by the verify form and its route.
 import { z } from "zod";
+import { type FindingLike, findingKey } from "./finding-key";
+
+export { type FindingLike, findingKey };
 
 export const verifySchema = z.object({
   acceptances: z
@@ -14,12 +17,6 @@ export const verifySchema = z.object({
     .default([]),
 });
 
-/** What a stored finding is known by: its key, or its message for findings stored before keys existed. */
-export interface FindingLike {
-  key?: string;
-  message: string;
-}
-
 export type AcceptanceInput = z.infer<typeof verifySchema>["acceptances"][number];
 
 /**
@@ -32,9 +29,4 @@ export function unaccepted<F extends FindingLike>(
 ): F[] {
   const accepted = new Set(acceptances.filter((a) => a.reason.trim().length > 0).map((a) => a.key));
   return findings.filter((f) => !accepted.has(findingKey(f)));
-}
-
-/** A finding's key, or its message for findings stored before keys existed. */
-export function findingKey(f: FindingLike): string {
-  return f.key ?? f.message;
 }

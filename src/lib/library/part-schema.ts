@@ -1,17 +1,12 @@
 import { z } from "zod";
 import { type SaneQuantity, saneValue } from "@/lib/soa/sanity";
 import { parseQuantity, type Unit } from "@/lib/soa/units";
+import { technologies } from "./technologies";
 
 // One schema for the part form and the route handlers. Numbers may come typed in engineering notation
 // ("4.2m", "4.2 mΩ", "80 V") and are stored in SI units.
 
-export const technologies = ["si-mosfet", "sic-mosfet", "gan-hemt", "igbt"] as const;
-export const technologyLabels: Record<(typeof technologies)[number], string> = {
-  "si-mosfet": "Si MOSFET",
-  "sic-mosfet": "SiC MOSFET",
-  "gan-hemt": "GaN HEMT",
-  igbt: "IGBT",
-};
+export { technologies, technologyLabels } from "./technologies";
 
 /** A typical value of each unit, for the examples in messages: the unit and its size as the field expects. */
 export const UNIT_EXAMPLES: Readonly<Partial<Record<Unit, string>>> = {

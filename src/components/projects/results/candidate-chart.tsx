@@ -1,12 +1,23 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import dynamic from "next/dynamic";
+import { AfterLoad } from "@/components/after-load";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
 import { LoadingBox } from "@/components/loading-box";
-import { type ChartPulse, InstabilityNote, SoaChart } from "@/components/soa-chart";
+import type { ChartPulse } from "@/components/soa-chart";
+import { InstabilityNote } from "@/components/soa-chart/instability-note";
 import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
 import { percent, q, repeatText, shapeWords } from "../format";
+
+// The chart stack loads after the page has loaded (the charts sit below the results table), in the browser only
+// (it measures its width there).
+const drawing = () => <LoadingBox className="h-[26rem]">Drawing the limit lines…</LoadingBox>;
+const SoaChart = dynamic(() => import("@/components/soa-chart").then((m) => m.SoaChart), {
+  ssr: false,
+  loading: drawing,
+});
 
 /**
  * The chart's markers for one candidate: every pulse with a point, in its verdict's shape, labelled by width; a
@@ -98,20 +109,22 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
           {messageOf(limits.error)}
         </p>
       ) : !data ? (
-        <LoadingBox className="h-[26rem]">Drawing the limit lines…</LoadingBox>
+        drawing()
       ) : (
-        <SoaChart
-          title={candidate.partNumber}
-          curves={data.curves}
-          refCaseTemp={data.refCaseTemp}
-          derated={
-            data.derating < 1
-              ? { caseTemp: data.caseTemp, factor: data.derating, curves: data.derated }
-              : null
-          }
-          pulses={chartPulses(check, candidate.partId)}
-          instability={data.instability}
-        />
+        <AfterLoad fallback={drawing()}>
+          <SoaChart
+            title={candidate.partNumber}
+            curves={data.curves}
+            refCaseTemp={data.refCaseTemp}
+            derated={
+              data.derating < 1
+                ? { caseTemp: data.caseTemp, factor: data.derating, curves: data.derated }
+                : null
+            }
+            pulses={chartPulses(check, candidate.partId)}
+            instability={data.instability}
+          />
+        </AfterLoad>
       )}
       {focus && data?.instability ? (
         <div className="mt-2 space-y-1">

@@ -3,18 +3,16 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Caution } from "@/components/caution";
 import { CurveSetRevisions } from "@/components/library/curve-set-revisions";
-import { CurveUpload } from "@/components/library/curve-upload";
 import { LimitsPanel } from "@/components/library/limits-panel";
 import { PartActions } from "@/components/library/part-actions";
+import { LazyCurveUpload, LazyThermalEditor, LazyTransferEditor } from "@/components/library/part-page-lazy";
 import { PartStats } from "@/components/library/part-stats";
-import { ThermalEditor } from "@/components/library/thermal-editor";
 import { TitleBar } from "@/components/library/title-bar";
-import { TransferEditor } from "@/components/library/transfer-editor";
 import { Section } from "@/components/page-header";
 import type { ChartFinding } from "@/components/soa-chart";
 import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
 import { requireMember } from "@/lib/auth/page";
-import { technologyLabels } from "@/lib/library/part-schema";
+import { technologyLabels } from "@/lib/library/technologies";
 
 export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
   const member = await requireMember();
@@ -117,7 +115,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           title="Upload a curve set"
           description="Trace the datasheet's SOA figure into V_DS, I_D points and upload them as CSV: a table or paired columns."
         >
-          <CurveUpload partId={part.id} />
+          <LazyCurveUpload partId={part.id} />
         </Section>
       ) : null}
 
@@ -142,7 +140,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           </>
         }
       >
-        <ThermalEditor
+        <LazyThermalEditor
           partId={part.id}
           canWrite={canWrite}
           model={{ foster: part.foster, thermalSource: part.thermalSource }}
@@ -159,7 +157,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           </>
         }
       >
-        <TransferEditor partId={part.id} canWrite={canWrite} transfer={part.transfer} />
+        <LazyTransferEditor partId={part.id} canWrite={canWrite} transfer={part.transfer} />
       </Section>
 
       <Caution className="border-t border-line pt-4" />

@@ -1,11 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { type ComponentProps, Suspense } from "react";
 import { TitleBar } from "@/components/library/title-bar";
+import { LoadingBox } from "@/components/loading-box";
+import { Prefetched } from "@/components/prefetched";
+import { projectKeys } from "@/components/projects/api";
 import { ProjectWorkspace } from "@/components/projects/project-workspace";
 import { listMembers } from "@/db/queries/members";
+import type { Project } from "@/db/schema";
 import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
+import { checkProject } from "@/lib/projects/check";
+import { projectDetail } from "@/lib/projects/detail";
 import { loadProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Project" };
@@ -60,13 +67,43 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
       {project.description ? (
         <p className="max-w-3xl text-sm whitespace-pre-line text-ink-muted">{project.description}</p>
       ) : null}
-      <ProjectWorkspace
-        projectId={project.id}
-        viewer={{ id: member.user.id, role: member.role }}
-        canWrite={canWrite}
-        canMeasure={member.can("measurement.write")}
-        people={members.map((m) => ({ id: m.userId, name: m.name }))}
-      />
+      <Suspense
+        fallback={
+          <LoadingBox className="h-64">
+            Loading the project: candidates, fault cases and measured pulses…
+          </LoadingBox>
+        }
+      >
+        <ProjectData
+          project={project}
+          viewer={{ id: member.user.id, role: member.role }}
+          canWrite={canWrite}
+          canMeasure={member.can("measurement.write")}
+          people={members.map((m) => ({ id: m.userId, name: m.name }))}
+        />
+      </Suspense>
     </div>
+  );
+}
+
+/**
+ * The project and its check, loaded as their routes load them and handed to the client's queries, so nothing is
+ * fetched after hydration. Streamed in the page's response below its title, which is sent before the check is done.
+ */
+async function ProjectData({
+  project,
+  ...props
+}: { project: Project } & Omit<ComponentProps<typeof ProjectWorkspace>, "projectId">) {
+  const { detail, candidates } = await projectDetail(project);
+  const check = await checkProject(project, { candidates });
+  return (
+    <Prefetched
+      queries={[
+        [projectKeys.detail(project.id), detail],
+        [projectKeys.check(project.id), check],
+      ]}
+    >
+      <ProjectWorkspace projectId={project.id} {...props} />
+    </Prefetched>
   );
 }

@@ -1,11 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
 import { CompareActions } from "@/components/decisions/compare-actions";
 import { CompareView } from "@/components/decisions/compare-view";
+import { decisionKeys } from "@/components/decisions/types";
 import { TitleBar } from "@/components/library/title-bar";
+import { LoadingBox } from "@/components/loading-box";
+import { Prefetched } from "@/components/prefetched";
+import type { Project } from "@/db/schema";
 import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
+import { checkProject } from "@/lib/projects/check";
+import { listDecisions } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Compare and decide" };
@@ -40,7 +47,31 @@ export default async function ComparePage({ params }: { params: Promise<{ id: st
         }
         actions={<CompareActions projectId={project.id} canSign={canSign} />}
       />
-      <CompareView projectId={project.id} projectName={project.name} canSign={canSign} />
+      <Suspense
+        fallback={
+          <LoadingBox className="h-96">Checking the project: every pulse against every candidate…</LoadingBox>
+        }
+      >
+        <CompareData project={project} canSign={canSign} />
+      </Suspense>
     </div>
+  );
+}
+
+/**
+ * The check and the decisions, loaded as their routes load them and handed to the client's queries, so nothing is
+ * fetched after hydration. Streamed in the page's response below its title, which is sent before the check is done.
+ */
+async function CompareData({ project, canSign }: { project: Project; canSign: boolean }) {
+  const [check, decisions] = await Promise.all([checkProject(project), listDecisions(project.id)]);
+  return (
+    <Prefetched
+      queries={[
+        [decisionKeys.check(project.id), check],
+        [decisionKeys.decisions(project.id), { decisions }],
+      ]}
+    >
+      <CompareView projectId={project.id} projectName={project.name} canSign={canSign} />
+    </Prefetched>
   );
 }
