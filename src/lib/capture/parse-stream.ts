@@ -8,7 +8,7 @@
 // The capture target is ≤ 5 s from "upload finished" to verdicts (issue 6); papaparse alone would take a third of
 // it, and it makes a string per cell and an array per row (about 8 M strings here) where this scanner makes none.
 // The preview and the separator and header detection this parser starts from are papaparse's (./parse.ts).
-// One file of about 500 lines on purpose: the parser's state lives in one class so that its hot loop (`lines`)
+// Long file: about 500 lines on purpose: the parser's state lives in one class so that its hot loop (`lines`)
 // keeps everything in locals, and readNumber hands its end position back through a module variable; split
 // across modules, both would turn into property reads and calls per cell.
 //

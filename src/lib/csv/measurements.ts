@@ -23,7 +23,7 @@
 //   continuous train; without period or frequency a row is a single pulse (a count above 1 is then an error);
 // - values that cannot be read are NaN in the row, which carries the reason in `errors`;
 // - at most MAX_MEASUREMENT_ROWS pulse rows are read; beyond, a file-level error says which rows were left out.
-// About 540 lines on purpose: the rules above are one reader, applied in turn to the header (the names table is a
+// Long file: about 540 lines on purpose: the rules above are one reader, applied in turn to the header (the names table is a
 // third of the file), the layout and each row; the cell readers (./measurement-cells.ts) and the save route's row
 // schema (./measurement-row.ts) stand apart, and splitting the rest would put one rule's halves in two files.
 import { z } from "zod";
