@@ -1,10 +1,10 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { usePathname, useSearchParams } from "next/navigation";
 import { type KeyboardEvent, type ReactNode, useRef } from "react";
 import { messageOf } from "@/components/api-client";
 import { LoadingBox } from "@/components/loading-box";
+import { useUrlState } from "@/components/use-url-state";
 import { type ProjectCheck, type ProjectDetail, useProject, useProjectCheck } from "./api";
 import { ProjectStats } from "./project-stats";
 import { ResultsPanel } from "./results/results-panel";
@@ -59,8 +59,7 @@ export interface PanelProps {
  * TanStack Query; every change invalidates both.
  */
 export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
-  const params = useSearchParams();
-  const pathname = usePathname();
+  const [params, setParams] = useUrlState();
   const requested = params.get("tab");
   const tab: TabKey = tabs.some((t) => t.key === requested) ? (requested as TabKey) : "results";
   const detail = useProject(props.projectId);
@@ -68,12 +67,7 @@ export function ProjectWorkspace(props: Omit<PanelProps, "detail" | "check">) {
   const tabRefs = useRef<Record<string, HTMLButtonElement | null>>({});
 
   function select(key: TabKey) {
-    const next = new URLSearchParams(params);
-    if (key === "results") next.delete("tab");
-    else next.set("tab", key);
-    if (key !== "results") next.delete("pulse");
-    const search = next.toString();
-    window.history.pushState(null, "", search ? `${pathname}?${search}` : pathname);
+    setParams(key === "results" ? { tab: null } : { tab: key, pulse: null }, { push: true });
   }
 
   function onKeyDown(event: KeyboardEvent<HTMLDivElement>) {
