@@ -117,8 +117,12 @@ const routes = [
   `/projects/${ids.project}`,
   `/projects/${ids.project}/compare`,
   `/projects/${ids.project}/decisions`,
+  "/projects/new",
+  `/projects/${ids.project}/settings`,
   "/library",
   `/library/${ids.part}`,
+  `/library/${ids.part}/edit`,
+  "/library/new",
   "/team",
   "/account",
 ];
