@@ -3,36 +3,8 @@ import { parsePastedRows } from "@/components/library/paste-rows";
 import { quantity } from "@/lib/library/part-schema";
 import { projectSchema } from "@/lib/projects/schema";
 
-// The project form's values as typed, and the schema that checks them and turns them into the request body.
-
-export interface ProjectFormValues {
-  name: string;
-  description: string;
-  caseTemp: string;
-  /** In percent on the form; the schema takes a fraction. */
-  utilisationLimit: string;
-  tjGuard: string;
-  /** In percent of V_DSS on the form; the schema takes a fraction. */
-  voltageLimit: string;
-  betweenCurves: "loglog" | "next-longer" | "thermal";
-  ownerId: string;
-  /** The case path's Foster terms as typed or pasted: one "R τ" per line. */
-  caseNetwork: string;
-  applyCaseNetwork: boolean;
-}
-
-export const emptyProject: ProjectFormValues = {
-  name: "",
-  description: "",
-  caseTemp: "25",
-  utilisationLimit: "80",
-  tjGuard: "25",
-  voltageLimit: "80",
-  betweenCurves: "loglog",
-  ownerId: "",
-  caseNetwork: "",
-  applyCaseNetwork: false,
-};
+// The schema that checks the project form's values (project-form-values.ts) and turns them into the request body.
+// It holds zod: the form loads it when it first validates, so zod is not in the form pages' first load.
 
 const termsSchema = z
   .array(z.object({ r: quantity("K/W"), tau: quantity("s") }))
@@ -94,8 +66,6 @@ export const projectFormSchema = z
     };
   })
   .pipe(projectSchema);
-
-export const projectFields = Object.keys(emptyProject) as (keyof ProjectFormValues)[];
 
 /** A percentage as typed ("80", "80 %", "80,5"); NaN when empty or not a number. */
 function percentOf(text: string): number {

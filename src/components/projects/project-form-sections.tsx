@@ -1,10 +1,12 @@
+import { useEffect, useState } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
 import { SelectField } from "@/components/form";
 import type { Bind } from "@/components/form-errors";
 import { TextAreaField, UnitField } from "@/components/library/fields";
 import { Sym } from "@/components/library/symbols";
+import type { FosterTerm } from "@/lib/soa/foster";
 import { CasePathPreview } from "./case-path-preview";
-import { caseTerms, type ProjectFormValues } from "./project-form-schema";
+import type { ProjectFormValues } from "./project-form-values";
 
 // The project form's fieldsets, each bound to the form by field name.
 
@@ -157,6 +159,7 @@ export function CasePathFields({
   apply: UseFormRegisterReturn;
   text: string;
 }) {
+  const parse = useCaseTermsParser(text);
   return (
     <fieldset className="grid gap-4 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]" data-testid="case-path">
       <legend className="mb-1 text-sm font-semibold">Case path</legend>
@@ -179,7 +182,27 @@ export function CasePathFields({
           <span>Heat the case through this path in every check of the project</span>
         </label>
       </div>
-      <CasePathPreview text={text} parse={(t) => caseTerms(t).terms} />
+      <CasePathPreview text={text} parse={parse} />
     </fieldset>
   );
+}
+
+type TermsParser = (text: string) => FosterTerm[] | null;
+const nothingYet: TermsParser = () => null;
+
+/** The case path's parser, loaded (with zod) once a case path is typed, so the form's pages load without it. */
+function useCaseTermsParser(text: string): TermsParser {
+  const [parser, setParser] = useState<TermsParser | null>(null);
+  const typed = text.trim() !== "";
+  useEffect(() => {
+    if (!typed || parser) return;
+    let live = true;
+    void import("./project-form-schema").then(({ caseTerms }) => {
+      if (live) setParser(() => (t: string) => caseTerms(t).terms ?? null);
+    });
+    return () => {
+      live = false;
+    };
+  }, [typed, parser]);
+  return parser ?? nothingYet;
 }

@@ -1,20 +1,31 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
-import { useForm } from "react-hook-form";
+import { type Resolver, useForm } from "react-hook-form";
 import type { z } from "zod";
 import { sendJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage } from "@/components/form";
 import { applyServerErrors, fieldBinder } from "@/components/form-errors";
 import { invalidateProject } from "./api";
-import { type ProjectFormValues, projectFields, projectFormSchema } from "./project-form-schema";
+import type { projectFormSchema } from "./project-form-schema";
 import { CasePathFields, DesignFields, type OwnerChoice, PolicyFields } from "./project-form-sections";
+import { type ProjectFormValues, projectFields } from "./project-form-values";
 
-export { emptyProject, type ProjectFormValues } from "./project-form-schema";
+export { emptyProject, type ProjectFormValues } from "./project-form-values";
+
+type ProjectBody = z.output<typeof projectFormSchema>;
+
+/** The form's resolver: the schema (and zod with it) is loaded at the first validation, not with the page. */
+const checkValues: Resolver<ProjectFormValues, unknown, ProjectBody> = async (values, context, options) => {
+  const [{ zodResolver }, { projectFormSchema }] = await Promise.all([
+    import("@hookform/resolvers/zod"),
+    import("./project-form-schema"),
+  ]);
+  return zodResolver(projectFormSchema)(values, context, options);
+};
 
 /**
  * A project's settings: new (POST /api/projects) or edited (PATCH /api/projects/:id). The margin policy is the
@@ -38,8 +49,8 @@ export function ProjectForm({
     setError,
     watch,
     formState: { errors, isSubmitting },
-  } = useForm<ProjectFormValues, unknown, z.output<typeof projectFormSchema>>({
-    resolver: zodResolver(projectFormSchema),
+  } = useForm<ProjectFormValues, unknown, ProjectBody>({
+    resolver: checkValues,
     defaultValues: defaults,
   });
 
