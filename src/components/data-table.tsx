@@ -74,6 +74,19 @@ export interface DataTableProps<T> {
   bodyRef?: Ref<HTMLTableSectionElement>;
 }
 
+/**
+ * The row actions column every table ends with: a hidden "Actions" header, the cell right-aligned, `headerWidth` a
+ * width class for the header ("" for none).
+ */
+export function actionsColumn<T>(cell: (row: T) => ReactNode, headerWidth: string): ColumnDef<T> {
+  return {
+    id: "actions",
+    header: () => <span className="sr-only">Actions</span>,
+    cell: ({ row }) => cell(row.original),
+    meta: { className: "text-right", headerClassName: headerWidth },
+  };
+}
+
 /** A data table: the columns are TanStack column definitions, drawn one way everywhere. */
 export function DataTable<T>({
   label,

@@ -5,7 +5,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
 import { type ReactNode, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
-import { DataTable } from "@/components/data-table";
+import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
 import { CURVE_FORMS } from "@/lib/vocabulary";
@@ -69,10 +69,8 @@ function revisionColumns(
           <span className="text-ink-faint">earlier</span>
         ),
     },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row: { original: set } }) => (
+    actionsColumn(
+      (set) => (
         <span className="inline-flex items-center gap-2">
           <a
             href={`/api/parts/${partId}/curve-sets/${set.id}/file`}
@@ -84,8 +82,8 @@ function revisionColumns(
           {activate(set)}
         </span>
       ),
-      meta: { className: "text-right", headerClassName: "" },
-    },
+      "",
+    ),
   ];
 }
 

@@ -6,7 +6,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { ConfirmDelete } from "@/components/confirm-delete";
-import { DataTable } from "@/components/data-table";
+import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
@@ -116,22 +116,22 @@ export function MeasuredTable({
     },
   ];
   if (canMeasure) {
-    columns.push({
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row: { original: row } }) =>
-        row.createdBy === viewer.id || mayDeleteAny ? (
-          <ConfirmDelete
-            label={row.label}
-            confirming={confirming === row.id}
-            pending={remove.isPending}
-            onAsk={() => setConfirming(row.id)}
-            onConfirm={() => remove.mutate(row.id)}
-            onKeep={() => setConfirming(null)}
-          />
-        ) : null,
-      meta: { className: "text-right", headerClassName: "w-32" },
-    });
+    columns.push(
+      actionsColumn(
+        (row) =>
+          row.createdBy === viewer.id || mayDeleteAny ? (
+            <ConfirmDelete
+              label={row.label}
+              confirming={confirming === row.id}
+              pending={remove.isPending}
+              onAsk={() => setConfirming(row.id)}
+              onConfirm={() => remove.mutate(row.id)}
+              onKeep={() => setConfirming(null)}
+            />
+          ) : null,
+        "w-32",
+      ),
+    );
   }
 
   return (

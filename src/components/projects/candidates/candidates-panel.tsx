@@ -5,7 +5,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { type ReactNode, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
-import { DataTable } from "@/components/data-table";
+import { actionsColumn, DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { costText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
@@ -61,12 +61,7 @@ function candidateColumns(action: ((part: Candidate["part"]) => ReactNode) | nul
     },
   ];
   if (action) {
-    columns.push({
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row }) => action(row.original.part),
-      meta: { className: "text-right", headerClassName: "w-28" },
-    });
+    columns.push(actionsColumn((row) => action(row.part), "w-28"));
   }
   return columns;
 }

@@ -1,5 +1,6 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
+import { actionsColumn } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { sizeText } from "@/components/library/format";
 import { VerdictBadge } from "@/components/verdict-shape";
@@ -100,12 +101,7 @@ export function captureColumns({
     },
   ];
   if (actions) {
-    columns.push({
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row }) => actions(row.original),
-      meta: { className: "text-right", headerClassName: "w-32" },
-    });
+    columns.push(actionsColumn(actions, "w-32"));
   }
   return columns;
 }

@@ -5,7 +5,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import { Fragment, type ReactNode, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { ConfirmDelete } from "@/components/confirm-delete";
-import { DataTable } from "@/components/data-table";
+import { actionsColumn, DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { type FaultCaseRecord, invalidateProject } from "../api";
@@ -189,12 +189,7 @@ function faultCaseColumns({
     },
   ];
   if (actions) {
-    columns.push({
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      cell: ({ row }) => actions(row.original),
-      meta: { className: "text-right", headerClassName: "w-40" },
-    });
+    columns.push(actionsColumn(actions, "w-40"));
   }
   return columns;
 }
