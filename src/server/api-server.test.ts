@@ -4,8 +4,8 @@ import type { AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, memberships } from "@/db/schema";
+import { whenListening } from "@/lib/auth/auth-memory";
 import type { GuardedHandler } from "@/lib/auth/guard";
-import { whenListening } from "@/lib/auth/token-auth";
 import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
 import {
   addMember,

@@ -28,6 +28,7 @@ import type { Access, GuardedHandler } from "@/lib/auth/guard";
 import { type Action, can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
+import { nextAuthClear } from "@/test/auth-clear";
 import {
   addMember,
   type CallOptions,
@@ -738,9 +739,12 @@ describe("sessions and workspaces", () => {
     const lead = await addMember(a.id, "lead");
     const cookie = await sessionCookie(lead.id, a.id);
     expect((await dispatch("/api/team/invitations", "GET", { cookie })).status).toBe(200);
+    // Removed through another connection, as another app process would: heard here through NOTIFY.
+    const heard = nextAuthClear();
     await testDb.db
       .delete(memberships)
       .where(and(eq(memberships.userId, lead.id), eq(memberships.workspaceId, a.id)));
+    await heard;
     expect((await dispatch("/api/team/invitations", "GET", { cookie })).status).toBe(403);
   });
 });

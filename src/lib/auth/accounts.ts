@@ -24,9 +24,9 @@ import {
   signUpConfirmMail,
   signUpExistingAccountMail,
 } from "@/lib/mail/templates";
+import { forgetCachedAuth } from "./auth-memory";
 import { dummyPasswordHash, hashPassword, verifyPassword } from "./password";
 import { endOtherSessions } from "./session";
-import { forgetCachedAuth } from "./token-auth";
 import { hashToken, randomToken } from "./tokens";
 
 /** How long an invitation link works. */

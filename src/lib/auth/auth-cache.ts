@@ -1,16 +1,18 @@
-// A short-lived, in-process memory of API-token authentications and of the memberships they act in, so that the
-// check API does not ask the database three times per request (issue: fast under load).
+// A short-lived, in-process memory of who a request is: API tokens, sessions, the memberships they act in and the
+// switcher's list of a user's workspaces, so that an API call or a page does not ask the database the same three
+// questions at every request (issue: fast under load).
 //
 // Rules that keep it safe:
 // - an entry lives at most AUTH_CACHE_TTL_MS (5 s) after it was read from the database: a change that reached no
 //   process's notice (a notification lost while the listening connection was down) is seen within that bound;
 // - every change that can end or narrow an access (token revoked or expired, password reset or changed, sign-out
-//   everywhere, a membership added, changed or removed, an account or workspace deleted) fires a PostgreSQL
-//   NOTIFY from a trigger (drizzle/0011), and every app process clears its whole memory when it hears one;
+//   everywhere, a session ended, expired, renewed or moved to another workspace, a membership added, changed or
+//   removed, a workspace renamed, an account or workspace deleted) fires a PostgreSQL NOTIFY from a trigger
+//   (drizzle/0011, 0014), and every app process clears its whole memory when it hears one;
 //   the process that made the change also clears its own at once (`forgetCachedAuth`);
 // - a database read that started before a clear is not remembered after it (a generation counter), so a
 //   revocation racing a lookup cannot leave the old answer behind;
-// - only bearer-token requests use it; sessions keep their per-request lookups.
+// - a remembered session is still refused once past its expiry or its maximum age (session.ts checks both).
 import { LRUCache } from "lru-cache";
 import type { Role } from "@/db/schema";
 
@@ -30,6 +32,23 @@ export interface CachedToken {
 export interface CachedMembership {
   role: Role;
   leadRights: boolean;
+  workspaceName: string;
+}
+
+/** A valid session as read from the database (times in ms since the epoch). */
+export interface CachedSession {
+  userId: string;
+  workspaceId: string | null;
+  expiresAt: number;
+  createdAt: number;
+  user: { id: string; email: string; name: string };
+}
+
+/** One of a user's workspaces, for the switcher. */
+export interface CachedWorkspace {
+  id: string;
+  name: string;
+  role: Role;
 }
 
 /** A clock in ms (performance.now() in the app; a test may pass its own). */
@@ -43,6 +62,10 @@ export class AuthCache {
   /** Token hash → the live token, or null for a hash that matched no live token. */
   private readonly tokens: LRUCache<string, { value: CachedToken | null }>;
   private readonly memberships: LRUCache<string, CachedMembership>;
+  /** Session id (the token's hash) → the valid session. */
+  private readonly sessions: LRUCache<string, CachedSession>;
+  /** User id → the workspaces they belong to. */
+  private readonly workspaceLists: LRUCache<string, CachedWorkspace[]>;
   /** Token id → when this process last wrote its last_used_at (clock ms). Survives clears: it is not access. */
   private readonly lastUsed: LRUCache<string, number>;
   private generationCount = 0;
@@ -56,14 +79,11 @@ export class AuthCache {
   ) {
     const ttl = options.ttlMs ?? AUTH_CACHE_TTL_MS;
     this.enabled = options.enabled ?? true;
-    this.tokens = new LRUCache({ max: MAX_ENTRIES, ttl, ttlResolution: 0, perf: clock, ttlAutopurge: false });
-    this.memberships = new LRUCache({
-      max: MAX_ENTRIES,
-      ttl,
-      ttlResolution: 0,
-      perf: clock,
-      ttlAutopurge: false,
-    });
+    const lru = { max: MAX_ENTRIES, ttl, ttlResolution: 0, perf: clock, ttlAutopurge: false } as const;
+    this.tokens = new LRUCache(lru);
+    this.memberships = new LRUCache(lru);
+    this.sessions = new LRUCache(lru);
+    this.workspaceLists = new LRUCache(lru);
     this.lastUsed = new LRUCache({ max: MAX_ENTRIES });
   }
 
@@ -90,6 +110,22 @@ export class AuthCache {
     }
   }
 
+  session(id: string): CachedSession | undefined {
+    return this.enabled ? this.sessions.get(id) : undefined;
+  }
+
+  rememberSession(id: string, value: CachedSession, generation: number): void {
+    if (this.enabled && generation === this.generationCount) this.sessions.set(id, value);
+  }
+
+  workspaces(userId: string): CachedWorkspace[] | undefined {
+    return this.enabled ? this.workspaceLists.get(userId) : undefined;
+  }
+
+  rememberWorkspaces(userId: string, value: CachedWorkspace[], generation: number): void {
+    if (this.enabled && generation === this.generationCount) this.workspaceLists.set(userId, value);
+  }
+
   /**
    * True when this token's last_used_at is due a write (none by this process within LAST_USED_INTERVAL_MS), and
    * marks it written; the caller then writes it off the response path.
@@ -102,11 +138,13 @@ export class AuthCache {
     return true;
   }
 
-  /** Forgets every token and membership (a change was made or heard of). */
+  /** Forgets everything remembered (a change was made or heard of). */
   clear(): void {
     this.generationCount++;
     this.tokens.clear();
     this.memberships.clear();
+    this.sessions.clear();
+    this.workspaceLists.clear();
     for (const listener of this.clearedListeners) listener();
   }
 

@@ -1,11 +1,11 @@
 import "server-only";
-import { getMembership } from "@/db/queries/members";
 import type { Role } from "@/db/schema";
 import { env } from "@/lib/env";
 import { AppError, errorResponse } from "@/lib/errors";
+import { rememberedMembership } from "./auth-memory";
 import { type Action, can } from "./permissions";
 import { type SessionUser, validateSessionCookie } from "./session";
-import { authenticateToken, tokenMembership } from "./token-auth";
+import { authenticateToken } from "./token-auth";
 
 /**
  * Who may call a route handler. Every exported handler is wrapped by `route` or `publicRoute`, and a test
@@ -81,11 +81,8 @@ export function route<P = Params>(
       let member: MemberCaller | null = null;
       if ("action" in access) {
         if (!auth.workspaceId) throw new AppError("forbidden:no-workspace", "Choose a workspace first.");
-        // A token's membership is remembered as briefly as the token itself (token-auth.ts); a session's is read.
-        const membership =
-          caller.via === "token"
-            ? await tokenMembership(auth.workspaceId, caller.user.id)
-            : await getMembership({ workspaceId: auth.workspaceId, userId: caller.user.id });
+        // Remembered as briefly as the token or session itself (auth-cache.ts).
+        const membership = await rememberedMembership(auth.workspaceId, caller.user.id);
         if (!membership)
           throw new AppError("forbidden:not-a-member", "You are not a member of this workspace.");
         if (!can(membership.role, access.action, membership.leadRights)) {

@@ -2,8 +2,8 @@ import "server-only";
 import { cookies, headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
-import { getMembership, listUserWorkspaces } from "@/db/queries/members";
 import type { Role } from "@/db/schema";
+import { rememberedMembership, rememberedWorkspaces } from "./auth-memory";
 import { type Action, can } from "./permissions";
 import { sessionCookieName, validateSessionCookie } from "./session";
 
@@ -31,13 +31,13 @@ export interface PageMember {
 export const requireMember = cache(async (): Promise<PageMember> => {
   const session = await getPageSession();
   if (!session) redirect(`/sign-in?next=${encodeURIComponent(await currentPath())}`);
-  const workspaces = await listUserWorkspaces({ userId: session.user.id });
+  const workspaces = await rememberedWorkspaces(session.user.id);
   const workspaceId = session.workspaceId ?? workspaces[0]?.id;
-  const membership = workspaceId ? await getMembership({ workspaceId, userId: session.user.id }) : null;
-  if (!membership) redirect("/no-workspace");
+  const membership = workspaceId ? await rememberedMembership(workspaceId, session.user.id) : null;
+  if (!workspaceId || !membership) redirect("/no-workspace");
   return {
     user: session.user,
-    workspace: { id: membership.workspaceId, name: membership.workspaceName },
+    workspace: { id: workspaceId, name: membership.workspaceName },
     role: membership.role,
     leadRights: membership.leadRights,
     workspaces,

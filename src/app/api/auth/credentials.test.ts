@@ -4,6 +4,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, passwordResets, sessions } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
+import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
@@ -131,10 +132,13 @@ describe("sessions", () => {
     const user = await addMember(ws.id, "lead");
     const cookie = await sessionCookie(user.id, ws.id);
     expect((await call(h(listTokens), "GET", { cookie })).status).toBe(200);
+    // Changed through another connection, as another app process would: heard here through NOTIFY.
+    const heard = nextAuthClear();
     await testDb.db
       .update(sessions)
       .set({ createdAt: new Date(Date.now() - 31 * 24 * 3600 * 1000) })
       .where(eq(sessions.userId, user.id));
+    await heard;
     expect((await call(h(listTokens), "GET", { cookie })).status).toBe(401);
   });
 });

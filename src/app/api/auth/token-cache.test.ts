@@ -5,9 +5,10 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, memberships, projects } from "@/db/schema";
-import { AUTH_CACHE_TTL_MS } from "@/lib/auth/auth-cache";
+import { authCache, whenListening } from "@/lib/auth/auth-memory";
 import type { GuardedHandler } from "@/lib/auth/guard";
-import { authCache, settleTokenWrites, whenListening } from "@/lib/auth/token-auth";
+import { settleTokenWrites } from "@/lib/auth/token-auth";
+import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
@@ -47,21 +48,6 @@ async function newToken(userId: string) {
 
 const check = (secret: string) => call(h(checkPost), "POST", { bearer: secret, body: checkRequest });
 
-/** Resolves at this process's next clear of its memory (a notification heard), or rejects after the TTL. */
-function nextClear(): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => {
-      stop();
-      reject(new Error(`no change was heard within the ${AUTH_CACHE_TTL_MS} ms TTL`));
-    }, AUTH_CACHE_TTL_MS);
-    const stop = authCache.onClear(() => {
-      clearTimeout(timer);
-      stop();
-      resolve();
-    });
-  });
-}
-
 describe("remembered API tokens", () => {
   it("listen for changes, so they are remembered at all", () => {
     expect(authCache.enabled).toBe(true);
@@ -73,7 +59,7 @@ describe("remembered API tokens", () => {
     expect((await check(token.secret)).status).toBe(200);
     // Remembered now: the second answer needs no database.
     expect((await check(token.secret)).status).toBe(200);
-    const heard = nextClear();
+    const heard = nextAuthClear();
     // Another connection, as another app process would: this process's routes do not clear anything.
     await testDb.db.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, token.id));
     await heard;
@@ -84,7 +70,7 @@ describe("remembered API tokens", () => {
     const user = await addMember(ws.id, "engineer");
     const token = await newToken(user.id);
     expect((await check(token.secret)).status).toBe(200);
-    const heard = nextClear();
+    const heard = nextAuthClear();
     await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
     await heard;
     expect((await check(token.secret)).status).toBe(403);
@@ -97,7 +83,7 @@ describe("remembered API tokens", () => {
     const stop = authCache.onClear(() => cleared++);
     await testDb.db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, token.id));
     // A statement that does notify, after it: once it is heard, the earlier write would have been too.
-    const heard = nextClear();
+    const heard = nextAuthClear();
     await testDb.db.update(apiTokens).set({ revokedAt: null }).where(eq(apiTokens.id, token.id));
     await heard;
     stop();

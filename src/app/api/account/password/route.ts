@@ -1,11 +1,11 @@
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { users } from "@/db/schema";
+import { forgetCachedAuth } from "@/lib/auth/auth-memory";
 import { route } from "@/lib/auth/guard";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { changePasswordSchema } from "@/lib/auth/schemas";
 import { endOtherSessions } from "@/lib/auth/session";
-import { forgetCachedAuth } from "@/lib/auth/token-auth";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 

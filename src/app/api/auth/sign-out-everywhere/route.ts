@@ -1,9 +1,9 @@
 import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { apiTokens } from "@/db/schema";
+import { forgetCachedAuth } from "@/lib/auth/auth-memory";
 import { route } from "@/lib/auth/guard";
 import { blankSessionCookie, endAllSessions } from "@/lib/auth/session";
-import { forgetCachedAuth } from "@/lib/auth/token-auth";
 import { json } from "@/lib/http";
 
 /** POST /api/auth/sign-out-everywhere: ends every session of the signed-in user, this one too, and every API token. */

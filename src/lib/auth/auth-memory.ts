@@ -1,0 +1,83 @@
+import "server-only";
+import { dbSql } from "@/db";
+import { getMembership, listUserWorkspaces } from "@/db/queries/members";
+import { logError } from "@/lib/log";
+import { AUTH_CHANNEL, AuthCache, type CachedMembership, type CachedWorkspace } from "./auth-cache";
+
+// This process's memory of who a request is (rules in auth-cache.ts): the listening that keeps it true, and the
+// membership and workspace-list lookups that go through it. Tokens (token-auth.ts) and sessions (session.ts) use it.
+
+interface State {
+  cache: AuthCache;
+  listening: Promise<void> | null;
+}
+const globalForAuth = globalThis as unknown as { pulsefenceAuth?: State };
+globalForAuth.pulsefenceAuth ??= { cache: new AuthCache(performance, { enabled: false }), listening: null };
+const state: State = globalForAuth.pulsefenceAuth;
+
+/** This process's memory of tokens, sessions and memberships (exported for tests). */
+export const authCache = state.cache;
+
+/**
+ * Listens for the triggers' notifications (drizzle/0011, 0014): each clears this process's memory. The memory is
+ * used only once listening; at every (re)connect it is cleared, since notifications may have been missed meanwhile.
+ */
+export function listenForAuthChanges(): void {
+  state.listening ??= dbSql
+    .listen(
+      AUTH_CHANNEL,
+      () => authCache.clear(),
+      () => {
+        authCache.clear();
+        authCache.enabled = true;
+      },
+    )
+    .then(() => {})
+    .catch((error) => {
+      // Without notifications nothing is remembered: every request asks the database, as before.
+      authCache.enabled = false;
+      state.listening = null;
+      logError("auth cache: could not listen for changes", error);
+    });
+}
+
+/** Resolves once this process listens for changes (or gave up trying; then nothing is remembered). Tests. */
+export async function whenListening(): Promise<void> {
+  listenForAuthChanges();
+  await state.listening;
+}
+
+/** A member's role in a workspace, remembered as briefly as the rest; null when not a member. */
+export async function rememberedMembership(
+  workspaceId: string,
+  userId: string,
+): Promise<CachedMembership | null> {
+  listenForAuthChanges();
+  const cached = authCache.membership(workspaceId, userId);
+  if (cached) return cached;
+  const generation = authCache.generation();
+  const row = await getMembership({ workspaceId, userId });
+  if (!row) return null;
+  const membership = { role: row.role, leadRights: row.leadRights, workspaceName: row.workspaceName };
+  authCache.rememberMembership(workspaceId, userId, membership, generation);
+  return membership;
+}
+
+/** The workspaces a user belongs to (the switcher's list), remembered as briefly as the rest. */
+export async function rememberedWorkspaces(userId: string): Promise<CachedWorkspace[]> {
+  listenForAuthChanges();
+  const cached = authCache.workspaces(userId);
+  if (cached) return cached;
+  const generation = authCache.generation();
+  const rows = await listUserWorkspaces({ userId });
+  authCache.rememberWorkspaces(userId, rows, generation);
+  return rows;
+}
+
+/**
+ * Forgets everything remembered in this process at once; called after a change that ends or narrows an access,
+ * beside the trigger's notification that reaches every process (this one a moment later).
+ */
+export function forgetCachedAuth(): void {
+  authCache.clear();
+}
