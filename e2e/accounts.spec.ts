@@ -24,6 +24,7 @@ const technician = {
   email: `kofi.${stamp}@pulsefence.test`,
   password: "long-enough-bench-pass",
 };
+const stray = `stray.${stamp}@pulsefence.test`;
 
 test("an admin invites a technician by e-mail, who joins with the technician's reduced menu", async ({
   page,
@@ -49,6 +50,22 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     expectNoSecrets(await page.content());
   });
 
+  await test.step("the admin resends an invitation, then revokes it", async () => {
+    const team = new TeamPage(page);
+    await team.invite(stray, "Engineer");
+    const outbox = page
+      .getByRole("table", { name: "E-mail outbox" })
+      .getByRole("row")
+      .filter({ hasText: stray });
+    await expect(outbox).toHaveCount(1);
+    await page.getByRole("button", { name: `Resend the invitation to ${stray}` }).click();
+    await expect(outbox).toHaveCount(2);
+    await expect(team.invitations.getByRole("alert")).toHaveCount(0);
+    await page.getByRole("button", { name: `Revoke the invitation to ${stray}` }).click();
+    await expect(team.invitationRow(stray)).toHaveCount(0);
+    await expect(team.invitationRow(technician.email)).toContainText("Technician");
+  });
+
   await test.step("the admin creates an API token on the Account page", async () => {
     await shell.open("Account");
     const secret = await new AccountPage(page).createToken("Bench 2 pulse rig");
@@ -60,6 +77,18 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
     const html = await page.content();
     expectNoSecrets(html);
     expect(html).not.toContain(sessionId!);
+  });
+
+  await test.step("the admin revokes the token after a confirm step", async () => {
+    const account = new AccountPage(page);
+    const row = account.tokens.getByRole("row").filter({ hasText: "Bench 2 pulse rig" });
+    await row.getByRole("button", { name: "Revoke the token Bench 2 pulse rig" }).click();
+    await row.getByRole("button", { name: "Keep" }).click();
+    await expect(row).toContainText("Active");
+    await row.getByRole("button", { name: "Revoke the token Bench 2 pulse rig" }).click();
+    await row.getByRole("button", { name: "Confirm revoking Bench 2 pulse rig" }).click();
+    await expect(row).toContainText("Revoked");
+    await expect(row.getByRole("button")).toHaveCount(0);
     await shell.signOut();
   });
 
@@ -93,5 +122,36 @@ test("an admin invites a technician by e-mail, who joins with the technician's r
   await test.step("the used link does not work a second time", async () => {
     await page.goto(link);
     await expect(page.getByRole("heading", { level: 1 })).toHaveText("This invitation link cannot be used");
+  });
+
+  await test.step("the admin changes the technician's role, undoes it, and removes them after a confirm step", async () => {
+    await page.goto("/app"); // the technician is still signed in
+    await shell.signOut();
+    await signIn(page, admin);
+    await shell.open("Team");
+    const team = new TeamPage(page);
+    const role = page.getByLabel(`Role of ${technician.name}`);
+    await expect(role).toHaveValue("technician");
+    await role.selectOption({ label: "Engineer" });
+    await page.getByRole("button", { name: "Change role" }).click();
+    await expect(page.getByRole("status").filter({ hasText: "Saved:" })).toHaveText(
+      `Saved: ${technician.name} is now engineer.`,
+    );
+    await expect(role).toHaveValue("engineer");
+    await page.getByRole("button", { name: "Undo" }).click();
+    await expect(role).toHaveValue("technician");
+    await expect(page.getByRole("status").filter({ hasText: "Saved:" })).toHaveCount(0);
+
+    const row = team.memberRow(technician.email);
+    await row.getByRole("button", { name: `Remove ${technician.name} from the workspace` }).click();
+    await expect(row).toContainText("Remove?");
+    await row.getByRole("button", { name: "Keep" }).click();
+    await expect(row).not.toContainText("Remove?");
+    await row.getByRole("button", { name: `Remove ${technician.name} from the workspace` }).click();
+    await row.getByRole("button", { name: `Confirm removing ${technician.name}` }).click();
+    await expect(team.memberRow(technician.email)).toHaveCount(0);
+    await expect(team.memberRow(admin.email)).toContainText(admin.name);
+    // The admin's own row has no remove action.
+    await expect(team.members.getByRole("button", { name: /^Remove / })).toHaveCount(0);
   });
 });

@@ -17,6 +17,10 @@ export class TeamPage {
     await expect(form.getByRole("status")).toHaveText(`Invitation sent to ${email}.`);
   }
 
+  memberRow(name: string): Locator {
+    return this.members.getByRole("row").filter({ hasText: name });
+  }
+
   invitationRow(email: string): Locator {
     return this.invitations.getByRole("row").filter({ hasText: email });
   }

@@ -2,6 +2,7 @@ import {
   type Cell,
   type Column,
   type ColumnDef,
+  type ColumnMeta,
   flexRender,
   getCoreRowModel,
   type Header,
@@ -18,6 +19,7 @@ import {
   type Ref,
   type TdHTMLAttributes,
 } from "react";
+import { DateText } from "./date-text";
 import { cellClass, type Density, EmptyRow, Table, Th } from "./table";
 
 // Every data table: TanStack Table for the columns and rows, drawn one way (the parts in table.tsx), with sorting
@@ -67,6 +69,8 @@ export interface DataTableProps<T> {
   detail?: (row: T) => ReactNode;
   /** The detail row's id, for the button that opens it (aria-controls). */
   detailId?: (row: T) => string;
+  /** The detail cell's background and padding (a note or an error under the row sets its own). */
+  detailClassName?: string;
   /** The scroll box's size and the table's width (`w-max min-w-full` for a wide one). */
   className?: string;
   tableClassName?: string;
@@ -87,6 +91,34 @@ export function actionsColumn<T>(cell: (row: T) => ReactNode, headerWidth: strin
   };
 }
 
+/** A column of plain cells: `text` of each row; the header takes only `headerClassName` (no width by default). */
+export function textColumn<T>(
+  id: string,
+  header: string,
+  text: (row: T) => ReactNode,
+  meta: ColumnMeta<T, unknown> = {},
+): ColumnDef<T> {
+  return {
+    id,
+    header,
+    cell: ({ row }) => text(row.original),
+    meta: { ...meta, headerClassName: meta.headerClassName ?? "" },
+  };
+}
+
+/** A column of dates (UTC, tabular, right-aligned), with the time of day where `withTime`. */
+export function dateColumn<T>(
+  id: string,
+  header: string,
+  date: (row: T) => Date | string | null,
+  { withTime = false, width = "w-28" }: { withTime?: boolean; width?: string } = {},
+): ColumnDef<T> {
+  return textColumn(id, header, (row) => <DateText value={date(row)} withTime={withTime} />, {
+    numeric: true,
+    headerClassName: width,
+  });
+}
+
 /** A data table: the columns are TanStack column definitions, drawn one way everywhere. */
 export function DataTable<T>({
   label,
@@ -103,6 +135,7 @@ export function DataTable<T>({
   sectionOf,
   detail,
   detailId,
+  detailClassName = "bg-surface px-3 py-3 text-sm",
   className,
   tableClassName,
   busy,
@@ -163,7 +196,7 @@ export function DataTable<T>({
                 <BodyRow row={row} density={density} attributes={rowProps?.(row.original)} />
                 {opened ? (
                   <tr id={detailId?.(row.original)}>
-                    <td colSpan={width} className="border-b border-line bg-surface px-3 py-3 text-sm">
+                    <td colSpan={width} className={`border-b border-line ${detailClassName}`}>
                       {opened}
                     </td>
                   </tr>

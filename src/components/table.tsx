@@ -1,9 +1,9 @@
-import type { ReactNode, TdHTMLAttributes, ThHTMLAttributes } from "react";
+import type { ReactNode, ThHTMLAttributes } from "react";
+import { messageOf } from "./api-client";
 import { ScrollRegion } from "./scroll-region";
 
 // The parts of every table (DESIGN.md): 32–36 px rows, a sticky header, numeric columns right-aligned in tabular
-// figures, an empty state that says what to do next. `DataTable` (data-table.tsx) draws data tables with them;
-// the server-rendered team and account pages still compose them by hand around their editable rows.
+// figures, an empty state that says what to do next. `DataTable` (data-table.tsx) draws every data table with them.
 
 /** Row height: `compact` for a table inside a disclosure (text-xs), `tall` for two-line cells. */
 export type Density = "compact" | "normal" | "tall";
@@ -60,26 +60,8 @@ export function Th({
   );
 }
 
-export function Td({
-  numeric = false,
-  className = "",
-  children,
-  ...rest
-}: TdHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
-  return (
-    <td className={`${cellClass("normal", numeric)} ${className}`} {...rest}>
-      {children}
-    </td>
-  );
-}
-
 export function cellClass(density: Density, numeric: boolean): string {
   return `${heights[density]} border-b border-line align-middle whitespace-nowrap group-last/row:border-b-0 ${numeric ? "num text-right font-mono text-xs" : ""}`;
-}
-
-/** A body row; hover lightens it, and its row actions stay visible for keyboard users. */
-export function Tr({ children, className = "" }: { children: ReactNode; className?: string }) {
-  return <tr className={`group/row hover:bg-surface ${className}`}>{children}</tr>;
 }
 
 /** What to show when a table has no rows: say what to do next. */
@@ -90,5 +72,15 @@ export function EmptyRow({ colSpan, children }: { colSpan: number; children: Rea
         {children}
       </td>
     </tr>
+  );
+}
+
+/** A row's failed action said under it (a data table's detail, with `detailClassName="p-0"`); null with none. */
+export function rowAlert(error: unknown, id?: string): ReactNode {
+  if (!error) return null;
+  return (
+    <p id={id} role="alert" className="bg-sunken px-3 py-1.5 text-xs text-fail">
+      {messageOf(error)}
+    </p>
   );
 }

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import { PageHeader, Section } from "@/components/page-header";
-import { EmptyRow, Table, Th } from "@/components/table";
 import { listApiTokens } from "@/db/queries/api-tokens";
 import { getNoticePreferences } from "@/lib/auth/notice-preferences";
 import { requireMember } from "@/lib/auth/page";
@@ -9,7 +8,7 @@ import { NoticePreferencesForm } from "./notice-preferences-form";
 import { PasswordForm } from "./password-form";
 import { ProfileForm } from "./profile-form";
 import { SignOutEverywhere } from "./sign-out-everywhere";
-import { TokenRow } from "./token-row";
+import { TokensTable } from "./tokens-table";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -60,40 +59,9 @@ export default async function AccountPage() {
       >
         <CreateTokenForm workspaceName={member.workspace.name} />
         <div className="mt-4">
-          <Table label="API tokens">
-            <thead>
-              <tr>
-                <Th>Name</Th>
-                <Th className="w-28">Token</Th>
-                <Th>Workspace</Th>
-                <Th numeric className="w-28">
-                  Created (UTC)
-                </Th>
-                <Th numeric className="w-36">
-                  Last used (UTC)
-                </Th>
-                <Th className="w-28">Status</Th>
-                <Th className="w-24">
-                  <span className="sr-only">Actions</span>
-                </Th>
-              </tr>
-            </thead>
-            <tbody>
-              {tokens.length === 0 ? (
-                <EmptyRow colSpan={7}>
-                  No tokens yet. Name one above for each bench script that posts to Pulsefence.
-                </EmptyRow>
-              ) : (
-                tokens.map((token) => (
-                  <TokenRow
-                    key={token.id}
-                    token={token}
-                    workspaceName={workspaceNames.get(token.workspaceId) ?? null}
-                  />
-                ))
-              )}
-            </tbody>
-          </Table>
+          <TokensTable
+            tokens={tokens.map((t) => ({ ...t, workspaceName: workspaceNames.get(t.workspaceId) ?? null }))}
+          />
         </div>
       </Section>
 

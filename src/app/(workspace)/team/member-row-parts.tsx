@@ -1,11 +1,10 @@
 "use client";
 
-import type { ReactNode } from "react";
 import { Button } from "@/components/form";
 import type { Role } from "@/db/schema";
 import { roleLabels } from "@/lib/auth/permissions";
 
-// The pieces of a member's row on the Team page: the role controls and the rows that open under it.
+// The pieces of a member's row on the Team page: the role controls and the notes that open under the row.
 
 export interface Access {
   role: Role;
@@ -80,26 +79,7 @@ export function RoleText({ access }: { access: Access }) {
   );
 }
 
-/** A full-width row under the member's row. */
-export function UnderRow({
-  cols,
-  className,
-  children,
-}: {
-  cols: number;
-  className: string;
-  children: ReactNode;
-}) {
-  return (
-    <tr>
-      <td colSpan={cols} className={`border-b border-line ${className}`}>
-        {children}
-      </td>
-    </tr>
-  );
-}
-
-/** The proposed role change, to confirm or cancel. */
+/** The proposed role change, to confirm or cancel (under the row). */
 export function ProposedChange({
   name,
   from,
@@ -119,7 +99,7 @@ export function ProposedChange({
   onConfirm: () => void;
 }) {
   return (
-    <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+    <div className="flex flex-wrap items-center justify-between gap-2 bg-accent-soft px-3 py-2 text-sm">
       <p>
         Change {name} from {roleLabels[from].toLowerCase()} to{" "}
         <span className="font-medium">{roleLabels[to].toLowerCase()}</span>?
@@ -133,6 +113,26 @@ export function ProposedChange({
           Change role
         </Button>
       </span>
+    </div>
+  );
+}
+
+/** A saved change in words, with its undo (under the row). */
+export function SavedChange({
+  message,
+  busy,
+  onUndo,
+}: {
+  message: string;
+  busy: boolean;
+  onUndo: () => void;
+}) {
+  return (
+    <div className="flex flex-wrap items-center justify-between gap-2 bg-sunken px-3 py-1.5 text-sm">
+      <p role="status">Saved: {message}</p>
+      <Button size="sm" variant="quiet" pending={busy} onClick={onUndo}>
+        Undo
+      </Button>
     </div>
   );
 }

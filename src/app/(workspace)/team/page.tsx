@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
 import { PageHeader, Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
-import { EmptyRow, Table, Th } from "@/components/table";
 import { listPendingInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/members";
 import { requireAction } from "@/lib/auth/page";
 import { assignableRoles } from "@/lib/auth/permissions";
-import { InvitationRow } from "./invitation-row";
+import { InvitationsTable } from "./invitations-table";
 import { InviteForm } from "./invite-form";
-import { MemberRow } from "./member-row";
+import { MembersTable } from "./members-table";
 import { OutboxSection } from "./outbox-section";
 
 export const metadata: Metadata = { title: "Team" };
@@ -44,34 +43,12 @@ export default async function TeamPage() {
             : "Only an admin changes roles or removes members."
         }
       >
-        <Table label="Members">
-          <thead>
-            <tr>
-              <Th>Name</Th>
-              <Th>E-mail</Th>
-              <Th className="w-40">Role</Th>
-              <Th numeric className="w-28">
-                Joined (UTC)
-              </Th>
-              {mayManage ? (
-                <Th className="w-56">
-                  <span className="sr-only">Actions</span>
-                </Th>
-              ) : null}
-            </tr>
-          </thead>
-          <tbody>
-            {members.map((m) => (
-              <MemberRow
-                key={m.userId}
-                member={m}
-                isSelf={m.userId === member.user.id}
-                mayManage={mayManage}
-                roleOptions={grantable}
-              />
-            ))}
-          </tbody>
-        </Table>
+        <MembersTable
+          members={members}
+          selfId={member.user.id}
+          mayManage={mayManage}
+          roleOptions={grantable}
+        />
       </Section>
 
       <Section
@@ -87,31 +64,7 @@ export default async function TeamPage() {
         title="Pending invitations"
         description="Each link works once and expires 7 days after it was sent. Resending makes a new link."
       >
-        <Table label="Pending invitations">
-          <thead>
-            <tr>
-              <Th>E-mail</Th>
-              <Th className="w-40">Role</Th>
-              <Th className="w-48">Invited by</Th>
-              <Th numeric className="w-28">
-                Sent (UTC)
-              </Th>
-              <Th numeric className="w-28">
-                Expires (UTC)
-              </Th>
-              <Th className="w-44">
-                <span className="sr-only">Actions</span>
-              </Th>
-            </tr>
-          </thead>
-          <tbody>
-            {invitations.length === 0 ? (
-              <EmptyRow colSpan={6}>No pending invitations. Invite someone with the form above.</EmptyRow>
-            ) : (
-              invitations.map((invitation) => <InvitationRow key={invitation.id} invitation={invitation} />)
-            )}
-          </tbody>
-        </Table>
+        <InvitationsTable invitations={invitations} />
       </Section>
 
       {mayManage ? <OutboxSection workspaceId={workspaceId} /> : null}
