@@ -1,5 +1,5 @@
-// A short-lived, in-process memory of who a request is: API tokens, sessions, the memberships they act in and the
-// switcher's list of a user's workspaces, so that an API call or a page does not ask the database the same three
+// A short-lived, in-process memory of who a request is: API tokens, sessions, the memberships they act in, the
+// switcher's list of a user's workspaces and a workspace's list of members, so that an API call or a page does not ask the database the same three
 // questions at every request (issue: fast under load).
 //
 // Rules that keep it safe:
@@ -44,6 +44,16 @@ export interface CachedSession {
   user: { id: string; email: string; name: string };
 }
 
+/** A member of a workspace, as pages list them (owners, pickers, the team). */
+export interface CachedMember {
+  userId: string;
+  name: string;
+  email: string;
+  role: Role;
+  leadRights: boolean;
+  joinedAt: Date;
+}
+
 /** One of a user's workspaces, for the switcher. */
 export interface CachedWorkspace {
   id: string;
@@ -65,7 +75,9 @@ export class AuthCache {
   /** Session id (the token's hash) → the valid session. */
   private readonly sessions: LRUCache<string, CachedSession>;
   /** User id → the workspaces they belong to. */
-  private readonly workspaceLists: LRUCache<string, CachedWorkspace[]>;
+  private readonly workspaceLists: LRUCache<string, readonly CachedWorkspace[]>;
+  /** Workspace id → its members. */
+  private readonly memberLists: LRUCache<string, readonly CachedMember[]>;
   /** Token id → when this process last wrote its last_used_at (clock ms). Survives clears: it is not access. */
   private readonly lastUsed: LRUCache<string, number>;
   private generationCount = 0;
@@ -84,6 +96,7 @@ export class AuthCache {
     this.memberships = new LRUCache(lru);
     this.sessions = new LRUCache(lru);
     this.workspaceLists = new LRUCache(lru);
+    this.memberLists = new LRUCache(lru);
     this.lastUsed = new LRUCache({ max: MAX_ENTRIES });
   }
 
@@ -118,12 +131,21 @@ export class AuthCache {
     if (this.enabled && generation === this.generationCount) this.sessions.set(id, value);
   }
 
-  workspaces(userId: string): CachedWorkspace[] | undefined {
+  workspaces(userId: string): readonly CachedWorkspace[] | undefined {
     return this.enabled ? this.workspaceLists.get(userId) : undefined;
   }
 
-  rememberWorkspaces(userId: string, value: CachedWorkspace[], generation: number): void {
-    if (this.enabled && generation === this.generationCount) this.workspaceLists.set(userId, value);
+  /** Lists are shared by every request that reads them until a clear: they are frozen, rows included. */
+  rememberWorkspaces(userId: string, value: readonly CachedWorkspace[], generation: number): void {
+    if (this.enabled && generation === this.generationCount) this.workspaceLists.set(userId, frozen(value));
+  }
+
+  members(workspaceId: string): readonly CachedMember[] | undefined {
+    return this.enabled ? this.memberLists.get(workspaceId) : undefined;
+  }
+
+  rememberMembers(workspaceId: string, value: readonly CachedMember[], generation: number): void {
+    if (this.enabled && generation === this.generationCount) this.memberLists.set(workspaceId, frozen(value));
   }
 
   /**
@@ -145,6 +167,7 @@ export class AuthCache {
     this.memberships.clear();
     this.sessions.clear();
     this.workspaceLists.clear();
+    this.memberLists.clear();
     for (const listener of this.clearedListeners) listener();
   }
 
@@ -153,4 +176,9 @@ export class AuthCache {
     this.clearedListeners.add(listener);
     return () => this.clearedListeners.delete(listener);
   }
+}
+
+function frozen<T extends object>(rows: readonly T[]): readonly T[] {
+  for (const row of rows) Object.freeze(row);
+  return Object.freeze(rows);
 }

@@ -1,8 +1,14 @@
 import "server-only";
 import { dbSql } from "@/db";
-import { getMembership, listUserWorkspaces } from "@/db/queries/members";
+import { getMembership, listMembers, listUserWorkspaces } from "@/db/queries/members";
 import { logError } from "@/lib/log";
-import { AUTH_CHANNEL, AuthCache, type CachedMembership, type CachedWorkspace } from "./auth-cache";
+import {
+  AUTH_CHANNEL,
+  AuthCache,
+  type CachedMember,
+  type CachedMembership,
+  type CachedWorkspace,
+} from "./auth-cache";
 
 // This process's memory of who a request is (rules in auth-cache.ts): the listening that keeps it true, and the
 // membership and workspace-list lookups that go through it. Tokens (token-auth.ts) and sessions (session.ts) use it.
@@ -64,13 +70,24 @@ export async function rememberedMembership(
 }
 
 /** The workspaces a user belongs to (the switcher's list), remembered as briefly as the rest. */
-export async function rememberedWorkspaces(userId: string): Promise<CachedWorkspace[]> {
+export async function rememberedWorkspaces(userId: string): Promise<readonly CachedWorkspace[]> {
   listenForAuthChanges();
   const cached = authCache.workspaces(userId);
   if (cached) return cached;
   const generation = authCache.generation();
   const rows = await listUserWorkspaces({ userId });
   authCache.rememberWorkspaces(userId, rows, generation);
+  return rows;
+}
+
+/** A workspace's members (owners, pickers, the team page), remembered as briefly as the rest. */
+export async function rememberedMembers(workspaceId: string): Promise<readonly CachedMember[]> {
+  listenForAuthChanges();
+  const cached = authCache.members(workspaceId);
+  if (cached) return cached;
+  const generation = authCache.generation();
+  const rows = await listMembers({ workspaceId });
+  authCache.rememberMembers(workspaceId, rows, generation);
   return rows;
 }
 

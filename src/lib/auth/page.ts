@@ -23,7 +23,7 @@ export interface PageMember {
   workspace: { id: string; name: string };
   role: Role;
   leadRights: boolean;
-  workspaces: { id: string; name: string; role: Role }[];
+  workspaces: readonly { id: string; name: string; role: Role }[];
   can: (action: Action) => boolean;
 }
 

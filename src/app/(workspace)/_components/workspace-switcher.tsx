@@ -22,7 +22,7 @@ export function WorkspaceSwitcher({
   workspaces,
 }: {
   current: string;
-  workspaces: WorkspaceOption[];
+  workspaces: readonly WorkspaceOption[];
 }) {
   const router = useRouter();
   const [navigating, startTransition] = useTransition();

@@ -5,8 +5,8 @@ import { PageHeader, Section } from "@/components/page-header";
 import { roleSummaries } from "@/components/role-text";
 import { StatBlocks } from "@/components/stat-blocks";
 import { listPendingInvitations } from "@/db/queries/invitations";
-import { listMembers } from "@/db/queries/members";
 import { listPartsAwaitingVerification, listRecentProjects } from "@/db/queries/overview";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
 import { roleLabels } from "@/lib/auth/permissions";
 import { nextStep } from "./next-step";
@@ -21,7 +21,7 @@ export default async function OverviewPage() {
   const workspaceId = member.workspace.id;
   const mayInvite = member.can("member.invite");
   const [members, invitations, recent, awaiting] = await Promise.all([
-    listMembers({ workspaceId }),
+    rememberedMembers(workspaceId),
     mayInvite ? listPendingInvitations({ workspaceId }) : Promise.resolve(null),
     listRecentProjects({ workspaceId }),
     listPartsAwaitingVerification({ workspaceId }),

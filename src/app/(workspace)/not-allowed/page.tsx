@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader } from "@/components/page-header";
 import { actionDescriptions } from "@/components/role-text";
-import { listMembers } from "@/db/queries/members";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
 import { type Action, actions, grantedByLeadRights, roleLabels, rolesAllowed } from "@/lib/auth/permissions";
 
@@ -20,7 +20,7 @@ export default async function NotAllowedPage({
   const member = await requireMember();
   const { action: raw } = await searchParams;
   const action = (actions as readonly string[]).includes(raw ?? "") ? (raw as Action) : null;
-  const admins = (await listMembers({ workspaceId: member.workspace.id })).filter((m) => m.role === "admin");
+  const admins = (await rememberedMembers(member.workspace.id)).filter((m) => m.role === "admin");
   const allowed = action ? rolesAllowed(action).map((r) => roleLabels[r].toLowerCase()) : [];
   const byLeadRights = action ? grantedByLeadRights(action) : false;
 

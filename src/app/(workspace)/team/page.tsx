@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { PageHeader, Section } from "@/components/page-header";
 import { StatBlocks } from "@/components/stat-blocks";
 import { listPendingInvitations } from "@/db/queries/invitations";
-import { listMembers } from "@/db/queries/members";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
 import { assignableRoles } from "@/lib/auth/permissions";
 import { InvitationsTable } from "./invitations-table";
@@ -16,7 +16,7 @@ export default async function TeamPage() {
   const member = await requireAction("member.invite");
   const workspaceId = member.workspace.id;
   const [members, invitations] = await Promise.all([
-    listMembers({ workspaceId }),
+    rememberedMembers(workspaceId),
     listPendingInvitations({ workspaceId }),
   ]);
   const mayManage = member.can("member.manage");
@@ -44,7 +44,7 @@ export default async function TeamPage() {
         }
       >
         <MembersTable
-          members={members}
+          members={[...members]}
           selfId={member.user.id}
           mayManage={mayManage}
           roleOptions={grantable}

@@ -5,9 +5,14 @@
 // session past its expiry is read again, and the database's answer stands.
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { sessions, workspaces } from "@/db/schema";
+import { memberships, sessions, users, workspaces } from "@/db/schema";
 import { AUTH_CHANNEL } from "@/lib/auth/auth-cache";
-import { rememberedMembership, rememberedWorkspaces, whenListening } from "@/lib/auth/auth-memory";
+import {
+  rememberedMembers,
+  rememberedMembership,
+  rememberedWorkspaces,
+  whenListening,
+} from "@/lib/auth/auth-memory";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { lucia } from "@/lib/auth/lucia";
 import { validateSessionCookie } from "@/lib/auth/session";
@@ -146,6 +151,25 @@ describe("remembered memberships and workspace lists", () => {
     expect((await rememberedMembership(ws.id, user.id))?.workspaceName).toBe(renamed);
     expect((await rememberedWorkspaces(user.id)).map((w) => w.name)).toEqual([renamed]);
     await testDb.db.update(workspaces).set({ name: ws.name }).where(eq(workspaces.id, ws.id));
+  });
+
+  it("list a workspace's members as another process changes a role, a name or removes one", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const find = async () => (await rememberedMembers(ws.id)).find((m) => m.userId === user.id);
+    expect((await find())?.role).toBe("engineer");
+    expect(Object.isFrozen(await rememberedMembers(ws.id))).toBe(true);
+    let heard = nextAuthClear();
+    await testDb.db.update(memberships).set({ role: "lead" }).where(eq(memberships.userId, user.id));
+    await heard;
+    expect((await find())?.role).toBe("lead");
+    heard = nextAuthClear();
+    await testDb.db.update(users).set({ name: "Renamed Member" }).where(eq(users.id, user.id));
+    await heard;
+    expect((await find())?.name).toBe("Renamed Member");
+    heard = nextAuthClear();
+    await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
+    await heard;
+    expect(await find()).toBeUndefined();
   });
 
   it("are not cleared by a new session (a sign-in notifies nothing)", async () => {

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { TitleBar } from "@/components/library/title-bar";
 import { NewProjectLink, ProjectTable } from "@/components/projects/project-table";
-import { listMembers } from "@/db/queries/members";
 import { listProjectRows } from "@/db/queries/projects";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
 
 export const metadata: Metadata = { title: "Projects" };
@@ -17,7 +17,7 @@ export default async function ProjectsPage({
   const showArchived = (await searchParams).archived === "true";
   const [rows, members] = await Promise.all([
     listProjectRows(member.workspace.id),
-    listMembers({ workspaceId: member.workspace.id }),
+    rememberedMembers(member.workspace.id),
   ]);
   const names = new Map(members.map((m) => [m.userId, m.name]));
   const canWrite = member.can("project.write");

@@ -7,8 +7,8 @@ import { LoadingBox } from "@/components/loading-box";
 import { Prefetched } from "@/components/prefetched";
 import { projectKeys } from "@/components/projects/api";
 import { ProjectWorkspace } from "@/components/projects/project-workspace";
-import { listMembers } from "@/db/queries/members";
 import type { Project } from "@/db/schema";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
 import { checkProject } from "@/lib/projects/check";
@@ -27,7 +27,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
     if (error instanceof AppError) notFound();
     throw error;
   });
-  const members = await listMembers({ workspaceId: member.workspace.id });
+  const members = await rememberedMembers(member.workspace.id);
   const owner = members.find((m) => m.userId === project.ownerId);
   const canWrite = member.can("project.write");
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { TitleBar } from "@/components/library/title-bar";
 import { emptyProject, ProjectForm } from "@/components/projects/project-form";
-import { listMembers } from "@/db/queries/members";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
 import { roleLabels } from "@/lib/auth/permissions";
 
@@ -10,7 +10,7 @@ export const metadata: Metadata = { title: "New project" };
 
 export default async function NewProjectPage() {
   const member = await requireAction("project.write");
-  const members = await listMembers({ workspaceId: member.workspace.id });
+  const members = await rememberedMembers(member.workspace.id);
   const owners = members
     .filter((m) => m.role !== "technician" && m.userId !== member.user.id)
     .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));

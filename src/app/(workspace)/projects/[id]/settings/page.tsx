@@ -5,7 +5,7 @@ import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { ArchiveProject } from "@/components/projects/archive-project";
 import { ProjectForm } from "@/components/projects/project-form";
-import { listMembers } from "@/db/queries/members";
+import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
 import { roleLabels } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
@@ -21,7 +21,7 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
     if (error instanceof AppError) notFound();
     throw error;
   });
-  const members = await listMembers({ workspaceId: member.workspace.id });
+  const members = await rememberedMembers(member.workspace.id);
   const owners = members
     .filter((m) => m.role !== "technician")
     .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));
