@@ -9,14 +9,22 @@ import { type Candidate, loadCandidates } from "./projects";
 import { faultCasePulse, listFaultCases, listMeasuredPulses, measuredPulse } from "./pulses";
 
 /** Every pulse of the project: fault cases first, then measured pulses, then the processed captures. */
+/** What a caller has loaded already and passes on, so it is not read twice; and how stale captures are handled. */
+interface LoadedAlready {
+  captures?: () => Promise<ProjectPulse[]>;
+  staleCaptures?: StaleCaptures;
+  faultCases?: Awaited<ReturnType<typeof listFaultCases>>;
+  measured?: Awaited<ReturnType<typeof listMeasuredPulses>>;
+}
+
 export async function loadProjectPulses(
   project: Project,
   candidates: Candidate[],
-  extra: { captures?: () => Promise<ProjectPulse[]>; staleCaptures?: StaleCaptures } = {},
+  extra: LoadedAlready = {},
 ): Promise<{ pulses: ProjectPulse[]; pendingCaptures: string[] }> {
   const [cases, measured, captured] = await Promise.all([
-    listFaultCases(project.id),
-    listMeasuredPulses(project.id),
+    extra.faultCases ?? listFaultCases(project.id),
+    extra.measured ?? listMeasuredPulses(project.id),
     extra.captures
       ? extra.captures().then((pulses) => ({ pulses, pending: [] as string[] }))
       : currentCaptures(project, candidates, extra.staleCaptures ?? "queue"),
@@ -55,11 +63,7 @@ async function currentCaptures(project: Project, candidates: Candidate[], stale:
  */
 export async function checkProject(
   project: Project,
-  extra: {
-    captures?: () => Promise<ProjectPulse[]>;
-    candidates?: Candidate[];
-    staleCaptures?: StaleCaptures;
-  } = {},
+  extra: LoadedAlready & { candidates?: Candidate[] } = {},
 ) {
   const candidates = extra.candidates ?? (await loadCandidates(project.id));
   const { pulses, pendingCaptures } = await loadProjectPulses(project, candidates, extra);

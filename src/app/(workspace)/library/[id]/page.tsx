@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { cache } from "react";
 import { Caution } from "@/components/caution";
 import { CurveSetRevisions } from "@/components/library/curve-set-revisions";
 import { LimitsPanel } from "@/components/library/limits-panel";
@@ -14,16 +15,19 @@ import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
 import { requireMember } from "@/lib/auth/page";
 import { technologyLabels } from "@/lib/library/technologies";
 
-export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
+/** The part, read once per request for both the title and the page. */
+const pageOf = cache(async (partId: string) => {
   const member = await requireMember();
-  const part = await getPart({ workspaceId: member.workspace.id, partId: (await params).id });
+  return { member, part: await getPart({ workspaceId: member.workspace.id, partId }) };
+});
+
+export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
+  const { part } = await pageOf((await params).id);
   return { title: part ? `${part.partNumber} · Library` : "Part" };
 }
 
 export default async function PartPage({ params }: { params: Promise<{ id: string }> }) {
-  const member = await requireMember();
-  const { id } = await params;
-  const part = await getPart({ workspaceId: member.workspace.id, partId: id });
+  const { member, part } = await pageOf((await params).id);
   if (!part) notFound();
   const [sets, active] = await Promise.all([
     listCurveSets({ partId: part.id }),

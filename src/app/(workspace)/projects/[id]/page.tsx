@@ -95,7 +95,11 @@ async function ProjectData({
   ...props
 }: { project: Project } & Omit<ComponentProps<typeof ProjectWorkspace>, "projectId">) {
   const { detail, candidates } = await projectDetail(project);
-  const check = await checkProject(project, { candidates });
+  const check = await checkProject(project, {
+    candidates,
+    faultCases: detail.faultCases,
+    measured: detail.measuredPulses,
+  });
   return (
     <Prefetched
       queries={[
