@@ -1,29 +1,20 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage, TextField } from "@/components/form";
-import { applyServerErrors } from "@/components/form-errors";
+import { ApiFormShell, EmailField, useApiForm } from "@/components/api-form";
+import { FormMessage } from "@/components/form";
 import { forgotPasswordSchema } from "@/lib/auth/schemas";
 
 export function ForgotPasswordForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm({ resolver: zodResolver(forgotPasswordSchema), defaultValues: { email: "" } });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
+  const { onSubmit, bind, formState } = useApiForm({
+    schema: forgotPasswordSchema,
+    defaultValues: { email: "" },
+    send: async (values) => {
       await sendJson("POST", "/api/auth/forgot-password", values);
       setSentTo(values.email);
-    } catch (error) {
-      applyServerErrors(error, setError, ["email"]);
-    }
+    },
   });
 
   if (sentTo) {
@@ -35,21 +26,14 @@ export function ForgotPasswordForm() {
     );
   }
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
-      <TextField
-        id="forgot-email"
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        error={errors.email?.message}
-        {...register("email")}
-      />
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      <FormActions>
-        <Button type="submit" variant="primary" pending={isSubmitting}>
-          {isSubmitting ? "Sending…" : "Send reset link"}
-        </Button>
-      </FormActions>
-    </form>
+    <ApiFormShell
+      onSubmit={onSubmit}
+      error={formState.errors.root?.server?.message}
+      label="Send reset link"
+      pendingLabel="Sending…"
+      pending={formState.isSubmitting}
+    >
+      <EmailField id="forgot-email" {...bind("email")} />
+    </ApiFormShell>
   );
 }

@@ -1,14 +1,12 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage, TextField } from "@/components/form";
-import { applyServerErrors } from "@/components/form-errors";
+import { AccountHint, ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
+import { TextField } from "@/components/form";
 import { password, profileSchema } from "@/lib/auth/schemas";
 import { linkClass } from "../../_components/auth-heading";
 
@@ -35,18 +33,10 @@ export function AcceptInvitationForm({
 }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<Values>({
-    resolver: zodResolver(existing ? existingAccountSchema : newAccountSchema),
+  const { onSubmit, bind, formState } = useApiForm<Values>({
+    schema: existing ? existingAccountSchema : newAccountSchema,
     defaultValues: { name: "", password: "" },
-  });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
+    send: async (values) => {
       await sendJson("POST", "/api/invitations/accept", {
         token,
         password: values.password,
@@ -55,46 +45,37 @@ export function AcceptInvitationForm({
       setLeaving(true);
       router.replace("/app");
       router.refresh();
-    } catch (error) {
-      applyServerErrors(error, setError, ["name", "password"]);
-    }
+    },
   });
+  const passwordField = { id: "invite-password", ...bind("password") };
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
-      {/* Lets password managers file the new password under the right account. */}
-      <input type="hidden" name="username" autoComplete="username" value={email} readOnly />
+    <ApiFormShell
+      onSubmit={onSubmit}
+      error={formState.errors.root?.server?.message}
+      label="Accept and join"
+      pendingLabel="Joining…"
+      pending={formState.isSubmitting || leaving}
+    >
+      <AccountHint email={email} />
       {existing ? null : (
-        <TextField
-          id="invite-name"
-          label="Your name"
-          autoComplete="name"
-          error={errors.name?.message}
-          {...register("name")}
-        />
+        <TextField id="invite-name" label="Your name" autoComplete="name" {...bind("name")} />
       )}
-      <TextField
-        id="invite-password"
-        label={existing ? "Password" : "Choose a password"}
-        type="password"
-        autoComplete={existing ? "current-password" : "new-password"}
-        hint={existing ? undefined : "At least 10 characters."}
-        labelAside={
-          existing ? (
+      {existing ? (
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          labelAside={
             <Link href="/forgot-password" className={`text-xs ${linkClass}`}>
               Forgot password?
             </Link>
-          ) : undefined
-        }
-        error={errors.password?.message}
-        {...register("password")}
-      />
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      <FormActions>
-        <Button type="submit" variant="primary" pending={isSubmitting || leaving}>
-          {isSubmitting || leaving ? "Joining…" : "Accept and join"}
-        </Button>
-      </FormActions>
-    </form>
+          }
+          {...passwordField}
+        />
+      ) : (
+        <NewPasswordField label="Choose a password" {...passwordField} />
+      )}
+    </ApiFormShell>
   );
 }

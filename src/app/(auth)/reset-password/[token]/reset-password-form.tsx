@@ -1,13 +1,10 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { ApiError, sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage, TextField } from "@/components/form";
-import { applyServerErrors } from "@/components/form-errors";
+import { ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { resetPasswordSchema } from "@/lib/auth/schemas";
 import { linkClass } from "../../_components/auth-heading";
 
@@ -17,57 +14,47 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
   const [deadLink, setDeadLink] = useState(false);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm({ resolver: zodResolver(formSchema), defaultValues: { password: "" } });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
+  const { onSubmit, bind, formState } = useApiForm({
+    schema: formSchema,
+    defaultValues: { password: "" },
+    send: async (values) => {
       await sendJson("POST", "/api/auth/reset-password", { token, password: values.password });
       setLeaving(true);
       router.replace("/sign-in?reset=done");
-    } catch (error) {
-      if (error instanceof ApiError && (error.status === 404 || error.fieldErrors.token)) {
-        setDeadLink(true);
-        setError("root.server", { type: "server", message: "This reset link is not valid any more." });
-        return;
-      }
-      applyServerErrors(error, setError, ["password"]);
-    }
+    },
+    onError: (error, setError) => {
+      if (!(error instanceof ApiError && (error.status === 404 || error.fieldErrors.token))) return false;
+      setDeadLink(true);
+      setError("root.server", { type: "server", message: "This reset link is not valid any more." });
+      return true;
+    },
   });
+  const serverError = formState.errors.root?.server;
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
-      <TextField
-        id="reset-password"
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters."
-        error={errors.password?.message}
-        {...register("password")}
-      />
-      {errors.root?.server ? (
-        <FormMessage tone="error">
-          {errors.root.server.message}
-          {deadLink ? (
-            <>
-              {" "}
-              <Link href="/forgot-password" className={linkClass}>
-                Ask for a new link
-              </Link>
-            </>
-          ) : null}
-        </FormMessage>
-      ) : null}
-      <FormActions>
-        <Button type="submit" variant="primary" pending={isSubmitting || leaving} disabled={deadLink}>
-          {isSubmitting || leaving ? "Saving…" : "Save password"}
-        </Button>
-      </FormActions>
-    </form>
+    <ApiFormShell
+      onSubmit={onSubmit}
+      error={
+        serverError ? (
+          <>
+            {serverError.message}
+            {deadLink ? (
+              <>
+                {" "}
+                <Link href="/forgot-password" className={linkClass}>
+                  Ask for a new link
+                </Link>
+              </>
+            ) : null}
+          </>
+        ) : null
+      }
+      label="Save password"
+      pendingLabel="Saving…"
+      pending={formState.isSubmitting || leaving}
+      disabled={deadLink}
+    >
+      <NewPasswordField id="reset-password" label="New password" {...bind("password")} />
+    </ApiFormShell>
   );
 }
