@@ -1,3 +1,5 @@
+import type { ReactNode } from "react";
+import type { Path } from "react-hook-form";
 import { SelectField } from "@/components/form";
 import type { Bind } from "@/components/form-errors";
 import { type PartInput, technologies, technologyLabels } from "@/lib/library/part-schema";
@@ -51,6 +53,65 @@ export function IdentityFields({
   );
 }
 
+/** A unit field of the part form: what differs from one to the next. */
+interface UnitSpec {
+  name: Path<PartInput>;
+  id: string;
+  label: ReactNode;
+  unit: string;
+  hint?: string;
+  /** Shows the notation where a value is usually small; the fields without one open the decimal keypad. */
+  placeholder?: string;
+}
+
+const optional = "Optional";
+
+const ratings: UnitSpec[] = [
+  { name: "vdsMax", id: "part-vds", label: <Sym main="V" sub="DSS" />, unit: "V" },
+  { name: "idMax", id: "part-id", label: <Sym main="I" sub="D" />, unit: "A", hint: optional },
+  {
+    name: "idPulseMax",
+    id: "part-idm",
+    label: <Sym main="I" sub="DM" />,
+    unit: "A",
+    hint: "Optional, pulsed",
+  },
+  {
+    name: "rdsOn",
+    id: "part-rds",
+    label: <Sym main="R" sub="DS(on)" />,
+    unit: "Ω",
+    placeholder: "4.2m",
+    hint: optional,
+  },
+  { name: "tjMax", id: "part-tj", label: <Sym main="T" sub="j,max" />, unit: "°C" },
+  { name: "rthJc", id: "part-rth", label: <Sym main="R" sub="th(j-c)" />, unit: "K/W", hint: optional },
+];
+
+const avalanche: UnitSpec[] = [
+  {
+    name: "avalancheEnergy",
+    id: "part-eas",
+    label: <Sym main="E" sub="AS" />,
+    unit: "J",
+    placeholder: "250m",
+    hint: optional,
+  },
+  { name: "avalancheCurrent", id: "part-ias", label: <Sym main="I" sub="AS" />, unit: "A", hint: optional },
+  { name: "avalancheBreakdown", id: "part-vbr", label: <Sym main="V" sub="BR" />, unit: "V", hint: optional },
+];
+
+function UnitFields({ specs, bind }: { specs: UnitSpec[]; bind: PartBind }) {
+  return specs.map(({ name, placeholder, ...field }) => (
+    <UnitField
+      key={name}
+      {...field}
+      {...(placeholder ? { placeholder } : { inputMode: "decimal" as const })}
+      {...bind(name)}
+    />
+  ));
+}
+
 /** The datasheet's absolute ratings. */
 export function RatingFields({ bind }: { bind: PartBind }) {
   return (
@@ -59,52 +120,7 @@ export function RatingFields({ bind }: { bind: PartBind }) {
       <p className="col-span-full -mt-1 mb-1 text-xs text-ink-muted">
         From the datasheet, at 25&nbsp;°C unless it says otherwise. {notation}
       </p>
-      <UnitField
-        id="part-vds"
-        label={<Sym main="V" sub="DSS" />}
-        unit="V"
-        inputMode="decimal"
-        {...bind("vdsMax")}
-      />
-      <UnitField
-        id="part-id"
-        label={<Sym main="I" sub="D" />}
-        unit="A"
-        inputMode="decimal"
-        hint="Optional"
-        {...bind("idMax")}
-      />
-      <UnitField
-        id="part-idm"
-        label={<Sym main="I" sub="DM" />}
-        unit="A"
-        inputMode="decimal"
-        hint="Optional, pulsed"
-        {...bind("idPulseMax")}
-      />
-      <UnitField
-        id="part-rds"
-        label={<Sym main="R" sub="DS(on)" />}
-        unit="Ω"
-        placeholder="4.2m"
-        hint="Optional"
-        {...bind("rdsOn")}
-      />
-      <UnitField
-        id="part-tj"
-        label={<Sym main="T" sub="j,max" />}
-        unit="°C"
-        inputMode="decimal"
-        {...bind("tjMax")}
-      />
-      <UnitField
-        id="part-rth"
-        label={<Sym main="R" sub="th(j-c)" />}
-        unit="K/W"
-        inputMode="decimal"
-        hint="Optional"
-        {...bind("rthJc")}
-      />
+      <UnitFields specs={ratings} bind={bind} />
     </fieldset>
   );
 }
@@ -120,30 +136,7 @@ export function AvalancheFields({ bind }: { bind: PartBind }) {
         Without <Sym main="V" sub="BR" /> the check takes <Sym main="V" sub="DSS" />, which overstates the
         energy (conservative).
       </p>
-      <UnitField
-        id="part-eas"
-        label={<Sym main="E" sub="AS" />}
-        unit="J"
-        placeholder="250m"
-        hint="Optional"
-        {...bind("avalancheEnergy")}
-      />
-      <UnitField
-        id="part-ias"
-        label={<Sym main="I" sub="AS" />}
-        unit="A"
-        inputMode="decimal"
-        hint="Optional"
-        {...bind("avalancheCurrent")}
-      />
-      <UnitField
-        id="part-vbr"
-        label={<Sym main="V" sub="BR" />}
-        unit="V"
-        inputMode="decimal"
-        hint="Optional"
-        {...bind("avalancheBreakdown")}
-      />
+      <UnitFields specs={avalanche} bind={bind} />
     </fieldset>
   );
 }
