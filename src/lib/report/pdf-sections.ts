@@ -35,8 +35,8 @@ export function candidatesTable(doc: Doc, snapshot: DecisionSnapshot): void {
     byRank(snapshot).map((c) => {
       const r = rankOf(c.partId);
       const verdict = r?.worstVerdict ?? "no-data";
-      return {
-        cells: [
+      return verdictRow(
+        [
           String(r?.rank ?? "—"),
           c.partNumber,
           c.maker,
@@ -45,36 +45,30 @@ export function candidatesTable(doc: Doc, snapshot: DecisionSnapshot): void {
           q(c.part.tjMax, "°C"),
           c.unitCost === null ? "—" : `${c.unitCost.toFixed(2)} ${c.currency ?? ""}`,
           pct(r?.worstUtilisation ?? null),
-          verdictWord[verdict],
         ],
-        colours: [
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          verdictColour[verdict],
-        ],
-        verdicts: [
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          undefined,
-          verdict,
-        ],
-      };
+        [{ text: verdictWord[verdict], colour: verdictColour[verdict], verdict }],
+      );
     }),
   );
 }
 
-function cell(result: PulseResult | undefined): { text: string; colour: string; verdict: Verdict } {
+interface VerdictCell {
+  text: string;
+  colour: string;
+  verdict: Verdict;
+}
+
+/** A table row: plain cells first, then cells that carry a verdict (its colour and its marker). */
+function verdictRow(plain: string[], verdicts: VerdictCell[]) {
+  const none = plain.map(() => undefined);
+  return {
+    cells: [...plain, ...verdicts.map((x) => x.text)],
+    colours: [...none, ...verdicts.map((x) => x.colour)],
+    verdicts: [...none, ...verdicts.map((x) => x.verdict)],
+  };
+}
+
+function cell(result: PulseResult | undefined): VerdictCell {
   if (!result) return { text: "no data", colour: verdictColour["no-data"], verdict: "no-data" };
   const u = result.utilisation === null ? "" : ` ${pct(result.utilisation)}`;
   return {
@@ -91,14 +85,15 @@ function byRank(snapshot: DecisionSnapshot) {
   return [...snapshot.candidates].sort((a, b) => rank(a.partId) - rank(b.partId));
 }
 
+/** A muted line where a table has nothing to show. */
+function note(doc: Doc, text: string): void {
+  doc.font("regular").fontSize(9).fillColor(muted).text(text);
+}
+
 export function matrix(doc: Doc, snapshot: DecisionSnapshot): void {
   const perTable = 5;
   if (snapshot.pulses.length === 0) {
-    doc
-      .font("regular")
-      .fontSize(9)
-      .fillColor(muted)
-      .text("The project had no pulses when the decision was signed.");
+    note(doc, "The project had no pulses when the decision was signed.");
     return;
   }
   for (let start = 0; start < snapshot.pulses.length; start += perTable) {
@@ -108,12 +103,10 @@ export function matrix(doc: Doc, snapshot: DecisionSnapshot): void {
       doc,
       [{ title: "Candidate", width: 100 }, ...pulses.map((p) => ({ title: p.name, width }))],
       byRank(snapshot).map((c) => {
-        const cells = pulses.map((p) => cell(snapshot.results[c.partId]?.[p.id]));
-        return {
-          cells: [c.partNumber, ...cells.map((x) => x.text)],
-          colours: [undefined, ...cells.map((x) => x.colour)],
-          verdicts: [undefined, ...cells.map((x) => x.verdict)],
-        };
+        return verdictRow(
+          [c.partNumber],
+          pulses.map((p) => cell(snapshot.results[c.partId]?.[p.id])),
+        );
       }),
     );
     doc.moveDown(0.6);
@@ -141,12 +134,7 @@ export function pulseDetails(
 ): void {
   const pulses = snapshot.pulses.filter((p) => p.source === source);
   if (pulses.length === 0) {
-    if (source !== "capture")
-      doc
-        .font("regular")
-        .fontSize(9)
-        .fillColor(muted)
-        .text(source === "fault-case" ? "No fault cases." : "No measured pulses.");
+    if (source !== "capture") note(doc, source === "fault-case" ? "No fault cases." : "No measured pulses.");
     return;
   }
   for (const p of pulses) {
