@@ -1,7 +1,26 @@
 import { explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
 import { percent, q, readWidth, shapeWords, sourceWords } from "./format";
+import type { CellRef } from "./matrix-table";
 import type { MatrixData } from "./types";
 import { VerdictMark } from "./verdict-mark";
+
+/** The details of the matrix cell picked, under the matrix; nothing while none is. */
+export function SelectedCellDetails({
+  data,
+  selected,
+  onClose,
+}: {
+  data: MatrixData;
+  selected: CellRef | null;
+  onClose: () => void;
+}) {
+  if (!selected) return null;
+  return (
+    <div className="mt-3">
+      <CellDetails data={data} partId={selected.partId} pulseId={selected.pulseId} onClose={onClose} />
+    </div>
+  );
+}
 
 /** How one cell of the matrix was found: the figures behind the verdict and the words for each flag. */
 export function CellDetails({

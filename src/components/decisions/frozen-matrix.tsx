@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { CellDetails } from "./cell-details";
+import { SelectedCellDetails } from "./cell-details";
 import { type CellRef, MatrixTable } from "./matrix-table";
 import type { MatrixData, MatrixRow } from "./types";
 
@@ -18,16 +18,7 @@ export function FrozenMatrix({ data, ranking }: { data: MatrixData; ranking: Mat
         selected={selected}
         onSelect={setSelected}
       />
-      {selected ? (
-        <div className="mt-3">
-          <CellDetails
-            data={data}
-            partId={selected.partId}
-            pulseId={selected.pulseId}
-            onClose={() => setSelected(null)}
-          />
-        </div>
-      ) : null}
+      <SelectedCellDetails data={data} selected={selected} onClose={() => setSelected(null)} />
     </>
   );
 }

@@ -5,7 +5,7 @@ import { useDeferredValue, useMemo, useState } from "react";
 import { Caution } from "@/components/caution";
 import { Section } from "@/components/page-header";
 import type { MatrixRow } from "@/lib/projects/matrix";
-import { CellDetails } from "./cell-details";
+import { SelectedCellDetails } from "./cell-details";
 import { plural } from "./format";
 import { MatrixFilters } from "./matrix-filters";
 import { type MatrixFilter, pulseCounts, visiblePulses } from "./matrix-model";
@@ -92,16 +92,7 @@ export function MatrixSection({
               weigh them all.
             </p>
           )}
-          {selected ? (
-            <div className="mt-3">
-              <CellDetails
-                data={check}
-                partId={selected.partId}
-                pulseId={selected.pulseId}
-                onClose={() => setSelected(null)}
-              />
-            </div>
-          ) : null}
+          <SelectedCellDetails data={check} selected={selected} onClose={() => setSelected(null)} />
         </>
       )}
       <Caution className="mt-3" />
