@@ -1,48 +1,11 @@
 import { describe, expect, it } from "vitest";
-import type { PulseResult, Verdict } from "@/lib/soa/types";
+import {
+  matrixCandidate as candidate,
+  checkedPulse as pulse,
+  cellResult as result,
+} from "@/test/matrix-data";
 import { bestPassing, filterFrom, pulseCounts, rankAll, visiblePulses } from "./matrix-model";
-import type { CheckedPulse, MatrixData } from "./types";
-
-const pulse = (
-  id: string,
-  source: CheckedPulse["source"],
-  extra: Partial<CheckedPulse> = {},
-): CheckedPulse => ({
-  id,
-  source,
-  name: id,
-  caseTemp: 85,
-  v: 48,
-  i: 2,
-  duration: 0.01,
-  kind: "rect",
-  ...extra,
-});
-
-const result = (verdict: Verdict, utilisation: number | null): PulseResult => ({
-  id: "",
-  allowedCurrent: 1,
-  utilisation,
-  tjPeak: null,
-  derating: 0.6,
-  verdict,
-  flags: [],
-  curveVerdict: verdict,
-  thermalVerdict: null,
-  stabilityVerdict: null,
-  stability: null,
-  equivalentWidth: 0.01,
-  repetitionScale: null,
-});
-
-const candidate = (partId: string, unitCost: number | null = null) => ({
-  partId,
-  partNumber: partId.toUpperCase(),
-  maker: "Invented",
-  unitCost,
-  currency: "EUR",
-  hasCurves: true,
-});
+import type { MatrixData } from "./types";
 
 const data: MatrixData = {
   candidates: [candidate("a", 1), candidate("b", 2)],

@@ -1,22 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { checkedPulse as pulse } from "@/test/matrix-data";
 import { lineGroups } from "./overlay-model";
-import type { CheckedPulse } from "./types";
-
-const pulse = (
-  id: string,
-  source: CheckedPulse["source"],
-  extra: Partial<CheckedPulse> = {},
-): CheckedPulse => ({
-  id,
-  source,
-  name: id,
-  caseTemp: 85,
-  v: 48,
-  i: 2,
-  duration: 0.01,
-  kind: "rect",
-  ...extra,
-});
 
 describe("overlay lines", () => {
   it("lineGroups(pulses) reads a triangle at half its width and merges pulses read alike", () => {

@@ -1,30 +1,6 @@
 import { describe, expect, it } from "vitest";
-import type { PulseResult, Verdict } from "@/lib/soa/types";
+import { matrixCandidate as candidate, cellResult as result } from "@/test/matrix-data";
 import { rankCandidates } from "./matrix";
-
-const result = (verdict: Verdict, utilisation: number | null): PulseResult => ({
-  id: "x",
-  allowedCurrent: utilisation === null ? null : 1,
-  utilisation,
-  tjPeak: null,
-  derating: 1,
-  verdict,
-  flags: [],
-  curveVerdict: verdict,
-  thermalVerdict: null,
-  stabilityVerdict: null,
-  stability: null,
-  equivalentWidth: 0.01,
-  repetitionScale: null,
-});
-const candidate = (partId: string, unitCost: number | null = null) => ({
-  partId,
-  partNumber: partId,
-  maker: "M",
-  unitCost,
-  currency: "EUR",
-  hasCurves: true,
-});
 
 describe("rankCandidates", () => {
   it("puts parts that pass everything first, by worst-case utilisation, then by cost", () => {
