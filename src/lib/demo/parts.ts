@@ -53,11 +53,27 @@ export interface DemoPart {
 
 const INVENTED = "Invented for the Pulsefence demo; not a real product.";
 
+/** What differs between demo parts; the transfer characteristics as I_D at 25 °C and at 150 °C per V_GS. */
+type DemoSpec = Omit<DemoPart, "technology" | "currency" | "transfer"> & {
+  transfer: { gate: number[]; at25: number[]; at150: number[] };
+};
+
+/** A demo part: a Si MOSFET priced in euros, its note marked as invented, its transfer curves as point lists. */
+function demoPart({ transfer, notes, ...spec }: DemoSpec): DemoPart {
+  const points = (current: number[]) => transfer.gate.map((v, k): [number, number] => [v, current[k]]);
+  return {
+    ...spec,
+    technology: "Si MOSFET",
+    currency: "EUR",
+    notes: `${notes} ${INVENTED}`,
+    transfer: { temps: [25, 150], curves: [points(transfer.at25), points(transfer.at150)] },
+  };
+}
+
 export const DEMO_PARTS: readonly DemoPart[] = [
-  {
+  demoPart({
     partNumber: "QM-80T16",
     maker: "Quillmere Semiconductor",
-    technology: "Si MOSFET",
     package: "DFN 5×6",
     vdsMax: 80,
     idContinuous: 150,
@@ -72,29 +88,12 @@ export const DEMO_PARTS: readonly DemoPart[] = [
       { r: 0.36, tau: 25e-3 },
     ],
     unitCost: 1.1,
-    currency: "EUR",
     datasheetRevision: "Rev. 1.2, 2024-03",
-    notes: `Lowest R_DS(on) of the three; switching-optimised trench, not rated for linear mode. ${INVENTED}`,
+    notes: "Lowest R_DS(on) of the three; switching-optimised trench, not rated for linear mode.",
     transfer: {
-      temps: [25, 150],
-      curves: [
-        [
-          [1.6, 0.01],
-          [2.6, 1],
-          [3.1, 15],
-          [3.8, 100],
-          [5, 500],
-          [7, 2000],
-        ],
-        [
-          [1.6, 0.3],
-          [2.6, 9],
-          [3.1, 30],
-          [3.8, 110],
-          [5, 400],
-          [7, 1500],
-        ],
-      ],
+      gate: [1.6, 2.6, 3.1, 3.8, 5, 7],
+      at25: [0.01, 1, 15, 100, 500, 2000],
+      at150: [0.3, 9, 30, 110, 400, 1500],
     },
     avalanche: { energy: 0.35, current: 60 },
     model: {
@@ -108,11 +107,10 @@ export const DEMO_PARTS: readonly DemoPart[] = [
         ],
       },
     },
-  },
-  {
+  }),
+  demoPart({
     partNumber: "QM-100G28",
     maker: "Quillmere Semiconductor",
-    technology: "Si MOSFET",
     package: "TO-263-7",
     vdsMax: 100,
     idContinuous: 180,
@@ -127,38 +125,21 @@ export const DEMO_PARTS: readonly DemoPart[] = [
       { r: 0.3, tau: 30e-3 },
     ],
     unitCost: 1.45,
-    currency: "EUR",
     datasheetRevision: "Rev. 2.0, 2023-11",
-    notes: `General-purpose trench part. Its SOA figure is calculated from the thermal model alone; its transfer characteristics show the hot curve carrying several times the cold current below the zero-temperature-coefficient point (about 23 A), so a slow linear-mode pulse such as a pre-charge can run away while lying under the curves. ${INVENTED}`,
+    notes:
+      "General-purpose trench part. Its SOA figure is calculated from the thermal model alone; its transfer characteristics show the hot curve carrying several times the cold current below the zero-temperature-coefficient point (about 23 A), so a slow linear-mode pulse such as a pre-charge can run away while lying under the curves.",
     transfer: {
-      temps: [25, 150],
-      curves: [
-        [
-          [1.8, 0.01],
-          [2.8, 1],
-          [3.3, 10],
-          [4, 60],
-          [5, 250],
-          [7, 1000],
-        ],
-        [
-          [1.8, 0.2],
-          [2.8, 7],
-          [3.3, 13],
-          [4, 45],
-          [5, 180],
-          [7, 700],
-        ],
-      ],
+      gate: [1.8, 2.8, 3.3, 4, 5, 7],
+      at25: [0.01, 1, 10, 60, 250, 1000],
+      at150: [0.2, 7, 13, 45, 180, 700],
     },
     avalanche: { energy: 0.6, current: 80 },
     // Its SOA figure is calculated from Z_th alone: no instability segment, although the part has one.
     model: { rdsOnHotFactor: 1.9 },
-  },
-  {
+  }),
+  demoPart({
     partNumber: "BFL-100L55",
     maker: "Brackenford Devices",
-    technology: "Si MOSFET",
     package: "TO-247-3",
     vdsMax: 100,
     idContinuous: 120,
@@ -173,33 +154,16 @@ export const DEMO_PARTS: readonly DemoPart[] = [
       { r: 0.105, tau: 90e-3 },
     ],
     unitCost: 3.8,
-    currency: "EUR",
     datasheetRevision: "Rev. 1.0, 2024-06",
-    notes: `Planar cell, rated for linear mode: SOA without a thermal-instability region. ${INVENTED}`,
+    notes: "Planar cell, rated for linear mode: SOA without a thermal-instability region.",
     transfer: {
-      temps: [25, 150],
-      curves: [
-        [
-          [1.5, 0.01],
-          [2.5, 0.5],
-          [3.2, 3],
-          [4, 20],
-          [5.5, 150],
-          [8, 1000],
-        ],
-        [
-          [1.5, 0.05],
-          [2.5, 0.9],
-          [3.2, 3.1],
-          [4, 16],
-          [5.5, 110],
-          [8, 800],
-        ],
-      ],
+      gate: [1.5, 2.5, 3.2, 4, 5.5, 8],
+      at25: [0.01, 0.5, 3, 20, 150, 1000],
+      at150: [0.05, 0.9, 3.1, 16, 110, 800],
     },
     avalanche: { energy: 1.2, current: 100, breakdown: 110 },
     model: { rdsOnHotFactor: 2.2 },
-  },
+  }),
 ];
 
 /**
