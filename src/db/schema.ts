@@ -20,14 +20,19 @@ import type { DecisionSnapshot } from "@/lib/projects/decisions";
 
 // Tables ----------------------------------------------------------------------------------------------------
 
+// Columns that many tables share, spread into them; drizzle builds each table's own column, named by the key.
+const rowId = { id: uuid().primaryKey().defaultRandom() };
+const created = { createdAt: timestamp({ withTimezone: true }).notNull().defaultNow() };
+const updated = { updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow() };
+
 export const roleEnum = pgEnum("member_role", ["admin", "lead", "engineer", "technician"]);
 
 /** A team. Every row of every later table hangs off a workspace. */
 export const workspaces = pgTable("workspaces", {
-  id: uuid().primaryKey().defaultRandom(),
+  ...rowId,
   name: text().notNull(),
   slug: text().notNull().unique(),
-  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  ...created,
 });
 
 /**
@@ -35,7 +40,7 @@ export const workspaces = pgTable("workspaces", {
  * e-mails (account mail such as invitations and reset links is always sent); all are on for a new account.
  */
 export const users = pgTable("users", {
-  id: uuid().primaryKey().defaultRandom(),
+  ...rowId,
   email: text().notNull().unique(),
   name: text().notNull(),
   passwordHash: text().notNull(),
@@ -45,8 +50,17 @@ export const users = pgTable("users", {
   noticeDecisionDrift: boolean().notNull().default(true),
   /** A part the person verified returns to draft because its data changed. */
   noticeVerificationLapsed: boolean().notNull().default(true),
-  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  ...created,
 });
+
+/** The workspace a row belongs to; deleting the workspace deletes the row. */
+const inWorkspace = {
+  workspaceId: uuid()
+    .notNull()
+    .references(() => workspaces.id, { onDelete: "cascade" }),
+};
+/** Who made a row (kept when that person's account goes) and when. */
+const authored = { createdBy: uuid().references(() => users.id, { onDelete: "set null" }), ...created };
 
 /**
  * A sign-up waiting for its address to be confirmed: the account and its workspace are created only when the link
@@ -56,14 +70,14 @@ export const users = pgTable("users", {
 export const pendingSignUps = pgTable(
   "pending_sign_ups",
   {
-    id: uuid().primaryKey().defaultRandom(),
+    ...rowId,
     email: text().notNull(),
     name: text().notNull(),
     passwordHash: text().notNull(),
     workspaceName: text().notNull(),
     tokenHash: text().notNull().unique(),
     expiresAt: timestamp({ withTimezone: true }).notNull(),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.expiresAt)],
 );
@@ -89,16 +103,14 @@ export const sessions = pgTable(
 export const memberships = pgTable(
   "memberships",
   {
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...inWorkspace,
     userId: uuid()
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
     role: roleEnum().notNull(),
     /** Lead rights beside the role (src/lib/auth/permissions.ts), granted by an admin: one-person teams. */
     leadRights: boolean().notNull().default(false),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [primaryKey({ columns: [t.workspaceId, t.userId] }), index().on(t.userId)],
 );
@@ -107,10 +119,8 @@ export const memberships = pgTable(
 export const invitations = pgTable(
   "invitations",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     email: text().notNull(),
     role: roleEnum().notNull(),
     tokenHash: text().notNull().unique(),
@@ -118,34 +128,32 @@ export const invitations = pgTable(
     expiresAt: timestamp({ withTimezone: true }).notNull(),
     acceptedAt: timestamp({ withTimezone: true }),
     revokedAt: timestamp({ withTimezone: true }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.workspaceId)],
 );
 
 /** A password-reset request; same token rules as invitations. */
 export const passwordResets = pgTable("password_resets", {
-  id: uuid().primaryKey().defaultRandom(),
+  ...rowId,
   userId: uuid()
     .notNull()
     .references(() => users.id, { onDelete: "cascade" }),
   tokenHash: text().notNull().unique(),
   expiresAt: timestamp({ withTimezone: true }).notNull(),
   usedAt: timestamp({ withTimezone: true }),
-  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  ...created,
 });
 
 /** A bearer token for bench scripts, acting as its user in one workspace. Stored hashed; shown once. */
 export const apiTokens = pgTable(
   "api_tokens",
   {
-    id: uuid().primaryKey().defaultRandom(),
+    ...rowId,
     userId: uuid()
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...inWorkspace,
     name: text().notNull(),
     tokenHash: text().notNull().unique(),
     prefix: text().notNull(),
@@ -153,7 +161,7 @@ export const apiTokens = pgTable(
     expiresAt: timestamp({ withTimezone: true }).notNull().default(sql`now() + interval '90 days'`),
     lastUsedAt: timestamp({ withTimezone: true }),
     revokedAt: timestamp({ withTimezone: true }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.userId)],
 );
@@ -162,10 +170,10 @@ export const apiTokens = pgTable(
 export const authAttempts = pgTable(
   "auth_attempts",
   {
-    id: uuid().primaryKey().defaultRandom(),
+    ...rowId,
     kind: text({ enum: ["sign-in", "reset", "reset-use", "sign-up"] }).notNull(),
     key: text().notNull(),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.kind, t.key, t.createdAt)],
 );
@@ -174,16 +182,14 @@ export const authAttempts = pgTable(
 export const auditEvents = pgTable(
   "audit_events",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     actorId: uuid().references(() => users.id, { onDelete: "set null" }),
     action: text().notNull(),
     subjectType: text().notNull(),
     subjectId: text(),
     details: jsonb().$type<Record<string, unknown>>().notNull().default({}),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.workspaceId, t.createdAt)],
 );
@@ -226,10 +232,8 @@ export interface FindingAcceptance {
 export const parts = pgTable(
   "parts",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     partNumber: text().notNull(),
     maker: text().notNull(),
     technology: technologyEnum().notNull(),
@@ -258,9 +262,8 @@ export const parts = pgTable(
     /** The findings the verifier accepted, each with a reason; cleared when the part returns to draft. */
     acceptedFindings: jsonb().$type<FindingAcceptance[]>().notNull().default([]),
     archivedAt: timestamp({ withTimezone: true }),
-    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...authored,
+    ...updated,
   },
   (t) => [uniqueIndex().on(t.workspaceId, t.maker, t.partNumber), index().on(t.workspaceId, t.partNumber)],
 );
@@ -269,10 +272,8 @@ export const parts = pgTable(
 export const curveSets = pgTable(
   "curve_sets",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     partId: uuid()
       .notNull()
       .references(() => parts.id, { onDelete: "cascade" }),
@@ -285,7 +286,7 @@ export const curveSets = pgTable(
     active: boolean().notNull().default(false),
     findings: jsonb().$type<unknown[]>().notNull().default([]),
     uploadedBy: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.partId)],
 );
@@ -294,7 +295,7 @@ export const curveSets = pgTable(
 export const curves = pgTable(
   "curves",
   {
-    id: uuid().primaryKey().defaultRandom(),
+    ...rowId,
     curveSetId: uuid()
       .notNull()
       .references(() => curveSets.id, { onDelete: "cascade" }),
@@ -307,15 +308,13 @@ export const curves = pgTable(
 
 /** A presigned upload not yet registered; a cleanup step removes the objects of stale ones. */
 export const pendingUploads = pgTable("pending_uploads", {
-  id: uuid().primaryKey().defaultRandom(),
-  workspaceId: uuid()
-    .notNull()
-    .references(() => workspaces.id, { onDelete: "cascade" }),
+  ...rowId,
+  ...inWorkspace,
   userId: uuid().references(() => users.id, { onDelete: "set null" }),
   objectKey: text().notNull().unique(),
   fileName: text().notNull(),
   purpose: text().notNull(),
-  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  ...created,
 });
 
 // Projects ----------------------------------------------------------------------------------------------------
@@ -331,10 +330,8 @@ export const recordStartEnum = pgEnum("record_start", ["rest", "steady"]);
 export const projects = pgTable(
   "projects",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     name: text().notNull(),
     description: text(),
     caseTemp: doublePrecision().notNull().default(25),
@@ -347,18 +344,23 @@ export const projects = pgTable(
     applyCaseNetwork: boolean().notNull().default(false),
     ownerId: uuid().references(() => users.id, { onDelete: "set null" }),
     archivedAt: timestamp({ withTimezone: true }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
+    ...updated,
   },
   (t) => [index().on(t.workspaceId)],
 );
 
+/** The project a row belongs to; deleting the project deletes the row. */
+const inProject = {
+  projectId: uuid()
+    .notNull()
+    .references(() => projects.id, { onDelete: "cascade" }),
+};
+
 export const projectCandidates = pgTable(
   "project_candidates",
   {
-    projectId: uuid()
-      .notNull()
-      .references(() => projects.id, { onDelete: "cascade" }),
+    ...inProject,
     partId: uuid()
       .notNull()
       .references(() => parts.id, { onDelete: "cascade" }),
@@ -390,10 +392,8 @@ export interface FaultCaseSamples {
 export const faultCases = pgTable(
   "fault_cases",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    projectId: uuid()
-      .notNull()
-      .references(() => projects.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inProject,
     name: text().notNull(),
     kind: faultCaseKindEnum().notNull(),
     v: doublePrecision().notNull(),
@@ -406,9 +406,8 @@ export const faultCases = pgTable(
     caseTemp: doublePrecision(),
     origin: jsonb().$type<PulseOrigin>(),
     notes: text(),
-    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...authored,
+    ...updated,
   },
   (t) => [
     index().on(t.projectId),
@@ -425,10 +424,8 @@ export const faultCases = pgTable(
 export const measuredPulses = pgTable(
   "measured_pulses",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    projectId: uuid()
-      .notNull()
-      .references(() => projects.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inProject,
     label: text().notNull(),
     kind: pulseKindEnum().notNull(),
     v: doublePrecision().notNull(),
@@ -439,8 +436,7 @@ export const measuredPulses = pgTable(
     note: text(),
     boardSerial: text(),
     probe: text(),
-    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...authored,
   },
   (t) => [index().on(t.projectId)],
 );
@@ -480,10 +476,8 @@ export const captureStatusEnum = pgEnum("capture_status", ["queued", "processing
 export const captures = pgTable(
   "captures",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    projectId: uuid()
-      .notNull()
-      .references(() => projects.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inProject,
     name: text().notNull(),
     objectKey: text().notNull().unique(),
     samplesKey: text().notNull().unique(),
@@ -502,8 +496,7 @@ export const captures = pgTable(
     note: text(),
     boardSerial: text(),
     probe: text(),
-    createdBy: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...authored,
   },
   (t) => [index().on(t.projectId)],
 );
@@ -550,10 +543,8 @@ export const captureResults = pgTable(
 export const notices = pgTable(
   "notices",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
     subjectType: text().notNull(),
     subjectId: uuid().notNull(),
     /**
@@ -562,7 +553,7 @@ export const notices = pgTable(
      */
     fingerprint: text().notNull().default(""),
     recipientId: uuid().references(() => users.id, { onDelete: "set null" }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [uniqueIndex("notices_subject_fingerprint_idx").on(t.subjectType, t.subjectId, t.fingerprint)],
 );
@@ -575,7 +566,7 @@ export const notices = pgTable(
 export const mailOutbox = pgTable(
   "mail_outbox",
   {
-    id: uuid().primaryKey().defaultRandom(),
+    ...rowId,
     workspaceId: uuid().references(() => workspaces.id, { onDelete: "cascade" }),
     kind: text().notNull(),
     to: text().notNull(),
@@ -589,7 +580,7 @@ export const mailOutbox = pgTable(
     nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     lastError: text(),
     sentAt: timestamp({ withTimezone: true }),
-    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    ...created,
   },
   (t) => [index().on(t.status, t.nextAttemptAt), index().on(t.workspaceId, t.createdAt)],
 );
@@ -604,13 +595,9 @@ export const mailOutbox = pgTable(
 export const decisions = pgTable(
   "decisions",
   {
-    id: uuid().primaryKey().defaultRandom(),
-    workspaceId: uuid()
-      .notNull()
-      .references(() => workspaces.id, { onDelete: "cascade" }),
-    projectId: uuid()
-      .notNull()
-      .references(() => projects.id, { onDelete: "cascade" }),
+    ...rowId,
+    ...inWorkspace,
+    ...inProject,
     chosenPartId: uuid().references(() => parts.id, { onDelete: "set null" }),
     chosenLabel: text().notNull(),
     rationale: text().notNull(),
