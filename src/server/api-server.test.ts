@@ -5,30 +5,18 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, memberships } from "@/db/schema";
 import { whenListening } from "@/lib/auth/auth-memory";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
-import {
-  addMember,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addMember, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { POST as createToken } from "../app/api/account/tokens/route";
 import { POST as checkPost } from "../app/api/v1/check/route";
 import { createApiServer } from "./api-server";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-
 const body = smallCheckRequest([insidePulse, overVoltagePulse]);
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Lean API");
 let server: ReturnType<typeof createApiServer>;
 let base: string;
 beforeAll(async () => {
-  ws = await createTestWorkspace("Lean API");
   await whenListening();
   server = createApiServer();
   await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
@@ -36,13 +24,11 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await new Promise((resolve) => server.close(resolve));
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 async function newToken(userId: string) {
   const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(h(createToken), "POST", { cookie, body: { name: "lean" } });
+  const res = await call(createToken, "POST", { cookie, body: { name: "lean" } });
   return (await res.json()).token as { id: string; secret: string };
 }
 
@@ -60,7 +46,7 @@ describe("the lean API server", () => {
     const res = await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(body));
     expect(res.status).toBe(200);
     const lean = await res.json();
-    const viaRoute = await (await call(h(checkPost), "POST", { bearer: token.secret, body })).json();
+    const viaRoute = await (await call(checkPost, "POST", { bearer: token.secret, body })).json();
     expect(lean).toEqual(viaRoute);
     expect(lean.results.map((r: { verdict: string }) => r.verdict)).toEqual(["pass", "fail"]);
   });

@@ -1,5 +1,6 @@
 // Fixtures for integration tests of route handlers: real database rows, real sessions, direct handler calls.
 import { eq } from "drizzle-orm";
+import { afterAll, beforeAll } from "vitest";
 import { createDb } from "@/db/client";
 import {
   curveSets,
@@ -59,6 +60,22 @@ export async function createTestWorkspace(label = "Bench"): Promise<TestWorkspac
   return { id: workspace.id, name: workspace.name, members };
 }
 
+/**
+ * The test file's workspace (one member per role): made before the file's own beforeAll hooks, deleted after its
+ * afterAll hooks, and then the file's database pool is closed. The object is filled in before the tests run.
+ */
+export function workspaceForFile(label: string): TestWorkspace {
+  const ws = {} as TestWorkspace;
+  beforeAll(async () => {
+    Object.assign(ws, await createTestWorkspace(label));
+  });
+  afterAll(async () => {
+    await deleteWorkspace(ws.id);
+    await testDb.sql.end();
+  });
+  return ws;
+}
+
 export async function addMember(workspaceId: string, role: Role): Promise<TestUser> {
   const { db } = testDb;
   passwordHash ??= hashPassword(testPassword);
@@ -80,7 +97,8 @@ export function cookiePair(setCookie: string): string {
   return setCookie.split(";")[0];
 }
 
-type Handler = (req: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+/** Any route handler: `never` params accept a handler typed for its own route's params. */
+export type RouteHandler = (req: Request, context: { params: Promise<never> }) => Promise<Response>;
 
 export interface CallOptions {
   cookie?: string;
@@ -92,7 +110,11 @@ export interface CallOptions {
 }
 
 /** Calls a route handler the way Next.js does, with a same-origin browser's headers. */
-export async function call(handler: Handler, method: string, options: CallOptions = {}): Promise<Response> {
+export async function call(
+  handler: RouteHandler,
+  method: string,
+  options: CallOptions = {},
+): Promise<Response> {
   const headers = new Headers({
     origin: new URL(appUrl).origin,
     host: new URL(appUrl).host,
@@ -106,7 +128,7 @@ export async function call(handler: Handler, method: string, options: CallOption
     body = typeof options.body === "string" ? options.body : JSON.stringify(options.body);
   }
   const req = new Request(new URL(options.path ?? "/api/test", appUrl), { method, headers, body });
-  return handler(req, { params: Promise.resolve(options.params ?? {}) });
+  return handler(req, { params: Promise.resolve(options.params ?? {}) as Promise<never> });
 }
 
 export async function deleteWorkspace(id: string): Promise<void> {

@@ -1,5 +1,5 @@
 // Bad input answers 4xx, never 5xx: NUL characters, deep nesting and oversized bodies, through real route handlers.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { POST as tokenPost } from "@/app/api/account/tokens/route";
 import { POST as signUp } from "@/app/api/auth/sign-up/route";
 import { POST as partPost } from "@/app/api/parts/route";
@@ -8,33 +8,18 @@ import { POST as projectPost } from "@/app/api/projects/route";
 import { POST as invitePost } from "@/app/api/team/invitations/route";
 import { POST as checkPost } from "@/app/api/v1/check/route";
 import { projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
-import {
-  appUrl,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { appUrl, call, type RouteHandler, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Fuzz");
 let admin: string;
 let projectId: string;
 beforeAll(async () => {
-  ws = await createTestWorkspace("Fuzz");
   admin = await sessionCookie(ws.members.admin.id, ws.id);
   const [project] = await testDb.db
     .insert(projects)
     .values({ workspaceId: ws.id, name: "Fuzz board", caseTemp: 25 })
     .returning();
   projectId = project.id;
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 const nul = "bad\u0000value";
@@ -51,7 +36,7 @@ const faultCase = { name: "Short", kind: "rect", v: "48", i: "10", duration: "1 
 // Every text field of these forms, each with a NUL character in turn.
 const cases: {
   name: string;
-  handler: unknown;
+  handler: RouteHandler;
   params?: Record<string, string>;
   body: Record<string, unknown>;
   field: string;
@@ -101,7 +86,7 @@ describe("a NUL character in a text field", () => {
   for (const c of cases) {
     it(`${c.name}: 400, never 500`, async () => {
       const params = c.params ? { id: projectId } : undefined;
-      const res = await call(h(c.handler), "POST", {
+      const res = await call(c.handler, "POST", {
         cookie: c.cookie === false ? undefined : admin,
         params,
         body: { ...c.body, [c.field]: nul },
@@ -114,14 +99,14 @@ describe("a NUL character in a text field", () => {
 describe("oversized or deeply nested bodies", () => {
   it("a JSON body nested 5,000 deep answers 400", async () => {
     const deep = `${"[".repeat(5000)}${"]".repeat(5000)}`;
-    const res = await call(h(projectPost), "POST", { cookie: admin, body: deep });
+    const res = await call(projectPost, "POST", { cookie: admin, body: deep });
     expect(res.status).toBe(400);
-    const check = await call(h(checkPost), "POST", { cookie: admin, body: `{"part":${deep}}` });
+    const check = await call(checkPost, "POST", { cookie: admin, body: `{"part":${deep}}` });
     expect(check.status).toBe(400);
   });
 
   it("a fault case with a 20 MB origin.input answers 413", async () => {
-    const res = await call(h(faultCasePost), "POST", {
+    const res = await call(faultCasePost, "POST", {
       cookie: admin,
       params: { id: projectId },
       body: {
@@ -148,7 +133,7 @@ describe("oversized or deeply nested bodies", () => {
       body,
       duplex: "half",
     } as RequestInit);
-    const res = await h(projectPost)(req, { params: Promise.resolve({}) });
+    const res = await projectPost(req, { params: Promise.resolve({}) });
     expect(res.status).toBe(413);
     expect(pulled).toBeLessThan(5_000_000);
   });

@@ -1,31 +1,14 @@
 // Double submissions through the real route handlers: parallel identical decisions and parts.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { PATCH as partPatch } from "@/app/api/parts/[id]/route";
 import { POST as partPost } from "@/app/api/parts/route";
 import { POST as signPost } from "@/app/api/projects/[id]/decisions/route";
 import { decisions, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
-import {
-  addDemoCandidate,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Twice");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Twice");
 
 /** A project with one candidate; each test takes another demo part (one workspace holds each part once). */
 async function projectWithCandidate(demo: number) {
@@ -50,7 +33,7 @@ describe("decisions", () => {
     const statuses = (
       await Promise.all(
         Array.from({ length: 5 }, () =>
-          call(h(signPost), "POST", { cookie: lead, params: { id: projectId }, body }),
+          call(signPost, "POST", { cookie: lead, params: { id: projectId }, body }),
         ),
       )
     ).map((r) => r.status);
@@ -65,7 +48,7 @@ describe("decisions", () => {
     const statuses = (
       await Promise.all(
         Array.from({ length: 4 }, (_, k) =>
-          call(h(signPost), "POST", {
+          call(signPost, "POST", {
             cookie: lead,
             params: { id: projectId },
             body: { partId, rationale: `Reason number ${k}, stated in a sentence.` },
@@ -85,7 +68,7 @@ describe("decisions", () => {
       rationale: "Chosen for its linear-mode rating.",
       idempotencyKey: crypto.randomUUID(),
     };
-    const send = () => call(h(signPost), "POST", { cookie: lead, params: { id: projectId }, body });
+    const send = () => call(signPost, "POST", { cookie: lead, params: { id: projectId }, body });
     expect((await send()).status).toBe(201);
     expect((await send()).status).toBe(409);
   });
@@ -105,9 +88,7 @@ describe("parts", () => {
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
     const body = part();
     const statuses = (
-      await Promise.all(
-        Array.from({ length: 4 }, () => call(h(partPost), "POST", { cookie: engineer, body })),
-      )
+      await Promise.all(Array.from({ length: 4 }, () => call(partPost, "POST", { cookie: engineer, body })))
     )
       .map((r) => r.status)
       .sort();
@@ -118,9 +99,9 @@ describe("parts", () => {
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
     const first = part();
     const second = part();
-    expect((await call(h(partPost), "POST", { cookie: engineer, body: first })).status).toBe(201);
-    const created = await (await call(h(partPost), "POST", { cookie: engineer, body: second })).json();
-    const res = await call(h(partPatch), "PATCH", {
+    expect((await call(partPost, "POST", { cookie: engineer, body: first })).status).toBe(201);
+    const created = await (await call(partPost, "POST", { cookie: engineer, body: second })).json();
+    const res = await call(partPatch, "PATCH", {
       cookie: engineer,
       params: { id: created.part.id },
       body: { ...second, partNumber: first.partNumber },

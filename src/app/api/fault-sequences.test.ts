@@ -2,33 +2,22 @@
 // and a fault sequence go through the real route handlers into the project's check, and bad ones are refused with
 // the field that is wrong.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
 import { PATCH as faultCasePatch } from "@/app/api/projects/[id]/fault-cases/[caseId]/route";
 import { POST as faultCasePost } from "@/app/api/projects/[id]/fault-cases/route";
 import { faultCases, parts, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { faultSequence } from "@/lib/soa/sequence";
 import type { PulseResult } from "@/lib/soa/types";
-import {
-  addDemoCandidate,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Sequences");
 let projectId: string;
 let partId: string;
 let cookie: string;
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Sequences");
   const [project] = await testDb.db
     .insert(projects)
     .values({ workspaceId: ws.id, name: "Disconnect", caseTemp: 25 })
@@ -42,17 +31,13 @@ beforeAll(async () => {
     .where(eq(parts.id, partId));
   cookie = await sessionCookie(ws.members.engineer.id, ws.id);
 });
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
 
 async function post(body: unknown) {
-  return call(h(faultCasePost), "POST", { cookie, params: { id: projectId }, body });
+  return call(faultCasePost, "POST", { cookie, params: { id: projectId }, body });
 }
 
 async function resultOf(caseId: string): Promise<PulseResult> {
-  const res = await call(h(checkGet), "GET", { cookie, params: { id: projectId } });
+  const res = await call(checkGet, "GET", { cookie, params: { id: projectId } });
   expect(res.status).toBe(200);
   const check = (await res.json()) as { results: Record<string, Record<string, PulseResult>> };
   return check.results[partId][caseId];
@@ -147,7 +132,7 @@ describe("a fault sequence as a fault case", () => {
   it("can be turned into a typed rectangle by an edit, leaving no stale samples", async () => {
     const res = await post({ name: "To retype", kind: "waveform", samples });
     const { faultCase } = (await res.json()) as { faultCase: { id: string } };
-    const edited = await call(h(faultCasePatch), "PATCH", {
+    const edited = await call(faultCasePatch, "PATCH", {
       cookie,
       params: { id: projectId, caseId: faultCase.id },
       body: { name: "Retyped", kind: "rect", v: "48", i: "8", duration: "2m" },

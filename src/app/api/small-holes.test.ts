@@ -1,6 +1,6 @@
 // The smaller holes: login CSRF, open redirects after sign-in, spreadsheet formulas in the matrix CSV, non-ASCII
 // download names, throttled reset links and archived projects, through the real route handlers.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { safeNext } from "@/app/(auth)/_components/safe-next";
 import { POST as resetPassword } from "@/app/api/auth/reset-password/route";
 import { POST as signIn } from "@/app/api/auth/sign-in/route";
@@ -8,30 +8,19 @@ import { POST as archivePost } from "@/app/api/projects/[id]/archive/route";
 import { POST as faultCasePost } from "@/app/api/projects/[id]/fault-cases/route";
 import { GET as matrixGet } from "@/app/api/projects/[id]/matrix/route";
 import { faultCases, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { contentSecurityPolicy } from "@/proxy";
 import {
   addDemoCandidate,
   appUrl,
   call,
-  createTestWorkspace,
-  deleteWorkspace,
   sessionCookie,
-  type TestWorkspace,
   testDb,
   testPassword,
+  workspaceForFile,
 } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Holes");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Holes");
 
 describe("login CSRF", () => {
   it("a cross-origin text/plain sign-in gets 403 and no session", async () => {
@@ -40,13 +29,13 @@ describe("login CSRF", () => {
       headers: { origin: "https://evil.example", "content-type": "text/plain" },
       body: JSON.stringify({ email: ws.members.engineer.email, password: testPassword }),
     });
-    const res = await h(signIn)(req, { params: Promise.resolve({}) });
+    const res = await signIn(req, { params: Promise.resolve({}) });
     expect(res.status).toBe(403);
     expect(res.headers.get("set-cookie")).toBeNull();
   });
 
   it("a same-origin sign-in still works", async () => {
-    const res = await call(h(signIn), "POST", {
+    const res = await call(signIn, "POST", {
       body: { email: ws.members.lead.email, password: testPassword },
     });
     expect(res.status).toBe(200);
@@ -87,7 +76,7 @@ describe("the matrix CSV", () => {
       duration: 1e-3,
     });
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-    const res = await call(h(matrixGet), "GET", { cookie, params: { id: project.id } });
+    const res = await call(matrixGet, "GET", { cookie, params: { id: project.id } });
     expect(res.status).toBe(200);
     const csv = await res.text();
     expect(csv).not.toMatch(/(^|,)"?=HYPERLINK/m);
@@ -103,7 +92,7 @@ describe("reset links", () => {
     const token = `bogus-${crypto.randomUUID()}`;
     const statuses: number[] = [];
     for (let k = 0; k < 7; k++) {
-      const res = await call(h(resetPassword), "POST", {
+      const res = await call(resetPassword, "POST", {
         body: { token, password: "a long new passphrase" },
       });
       statuses.push(res.status);
@@ -122,12 +111,12 @@ describe("archived projects", () => {
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
     const body = { name: "Short", kind: "rect", v: "48", i: "10", duration: "1 ms" };
     const archive = (archived: boolean) =>
-      call(h(archivePost), "POST", { cookie, params: { id: project.id }, body: { archived } });
+      call(archivePost, "POST", { cookie, params: { id: project.id }, body: { archived } });
     expect((await archive(true)).status).toBe(200);
-    const refused = await call(h(faultCasePost), "POST", { cookie, params: { id: project.id }, body });
+    const refused = await call(faultCasePost, "POST", { cookie, params: { id: project.id }, body });
     expect(refused.status).toBe(409);
     expect((await archive(false)).status).toBe(200);
-    const accepted = await call(h(faultCasePost), "POST", { cookie, params: { id: project.id }, body });
+    const accepted = await call(faultCasePost, "POST", { cookie, params: { id: project.id }, body });
     expect(accepted.status).toBe(201);
   });
 });

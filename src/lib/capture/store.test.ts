@@ -19,7 +19,6 @@ import {
   projectCandidates,
   projects,
 } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { CAPTURE_QUEUE, jobQueue, RETRY_LIMIT } from "@/lib/jobs/boss";
 import { presignUpload } from "@/lib/library/curve-upload";
 import { checkProject } from "@/lib/projects/check";
@@ -33,6 +32,7 @@ import {
   sessionCookie,
   type TestWorkspace,
   testDb,
+  workspaceForFile,
 } from "@/test/fixtures";
 import { requireEnv, waitForMail } from "@/test/services";
 import { GAVE_UP_WORDS, processCaptureJob, recheckCapture, startCaptureWorkers } from "./job";
@@ -48,7 +48,6 @@ const storage = createStorage({
   accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
   secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
 });
-const h = (handler: unknown) => handler as GuardedHandler;
 const { db } = testDb;
 
 /**
@@ -81,7 +80,7 @@ const network: FosterTermRow[] = [
   { r: 0.7, tau: 0.1 },
 ];
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Captures");
 let other: TestWorkspace;
 let cookies: Record<"technician" | "otherTechnician" | "engineer" | "lead" | "outsider", string>;
 let projectId: string;
@@ -161,7 +160,7 @@ async function newProject(name: string): Promise<string> {
 
 /** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
 async function browserUpload(text: string, cookie = cookies.technician, project = projectId) {
-  const res = await call(h(uploadPost), "POST", {
+  const res = await call(uploadPost, "POST", {
     cookie,
     params: { id: project },
     body: { fileName: "precharge-run-3.csv", size: Buffer.byteLength(text), purpose: "capture" },
@@ -176,7 +175,7 @@ async function browserUpload(text: string, cookie = cookies.technician, project 
 async function register(text: string, body: Record<string, unknown> = {}, cookie = cookies.technician) {
   const ticket = await browserUpload(text, cookie);
   const mapping = previewCaptureText(text.slice(0, 65_536)).mapping;
-  const res = await call(h(capturesPost), "POST", {
+  const res = await call(capturesPost, "POST", {
     cookie,
     params: { id: projectId },
     body: { uploadId: ticket.uploadId, name: "Pre-charge, run 3", mapping, ...body },
@@ -189,7 +188,6 @@ async function pendingFor(keys: string[]) {
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Captures");
   other = await createTestWorkspace("Elsewhere");
   const otherTechnician = await addMember(ws.id, "technician");
   cookies = {
@@ -210,9 +208,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await deleteWorkspace(ws.id);
   await deleteWorkspace(other.id);
-  await testDb.sql.end();
 });
 
 /** Registers, then runs the capture's job here (the queue's worker does the same in the app). */
@@ -225,7 +221,7 @@ async function registerAndProcess(text: string, body: Record<string, unknown> = 
 }
 
 async function detail(captureId: string, cookie = cookies.technician) {
-  const res = await call(h(captureGet), "GET", { cookie, params: { id: projectId, captureId } });
+  const res = await call(captureGet, "GET", { cookie, params: { id: projectId, captureId } });
   expect(res.status).toBe(200);
   return res.json();
 }
@@ -376,7 +372,7 @@ describe("capture upload", () => {
 
   it("refuses an upload made for another project, and other purposes and sizes at the ticket", async () => {
     const ticket = await browserUpload(inrushCsv(50), cookies.technician, secondProjectId);
-    const res = await call(h(capturesPost), "POST", {
+    const res = await call(capturesPost, "POST", {
       cookie: cookies.technician,
       params: { id: projectId },
       body: {
@@ -388,7 +384,7 @@ describe("capture upload", () => {
     expect(res.status).toBe(404);
     expect(await storage.head(ticket.objectKey)).not.toBeNull();
     const ask = (body: Record<string, unknown>) =>
-      call(h(uploadPost), "POST", {
+      call(uploadPost, "POST", {
         cookie: cookies.technician,
         params: { id: projectId },
         body: { fileName: "x.csv", size: 10, purpose: "capture", ...body },
@@ -422,7 +418,7 @@ describe("capture routes", () => {
     expect(bySmall.result.tjPeak).toBe(40 + rise.maxRise);
     expect(body.candidates.find((c: { partId: string }) => c.partId === big.id).junction).toBeNull();
     const list = await (
-      await call(h(capturesGet), "GET", { cookie: cookies.lead, params: { id: projectId } })
+      await call(capturesGet, "GET", { cookie: cookies.lead, params: { id: projectId } })
     ).json();
     expect(list.captures.map((c: { id: string }) => c.id)).toContain(captureId);
     expect(list.captures[0]).not.toHaveProperty("trace");
@@ -439,7 +435,7 @@ describe("capture routes", () => {
       // A changed case path is an input of the stored results: stale until rechecked.
       expect((await detail(captureId)).stale).toBe(true);
       expect(await recheckCapture(storage, captureId)).toBe(true);
-      const res = await call(h(captureGet), "GET", {
+      const res = await call(captureGet, "GET", {
         cookie: cookies.technician,
         params: { id: projectId, captureId },
       });
@@ -517,7 +513,7 @@ describe("capture routes", () => {
 
   it("is a 404 from another workspace, from another project and for a malformed id", async () => {
     const get = (cookie: string, id: string, capture: string) =>
-      call(h(captureGet), "GET", { cookie, params: { id, captureId: capture } });
+      call(captureGet, "GET", { cookie, params: { id, captureId: capture } });
     expect((await get(cookies.outsider, projectId, captureId)).status).toBe(404);
     expect((await get(cookies.technician, secondProjectId, captureId)).status).toBe(404);
     expect((await get(cookies.technician, projectId, "not-a-uuid")).status).toBe(404);
@@ -526,7 +522,7 @@ describe("capture routes", () => {
   it("DELETE is for whoever uploaded it, or a lead; it removes the row and both objects", async () => {
     const [row] = await db.select().from(captures).where(eq(captures.id, captureId));
     const del = (cookie: string, capture = captureId) =>
-      call(h(captureDelete), "DELETE", { cookie, params: { id: projectId, captureId: capture } });
+      call(captureDelete, "DELETE", { cookie, params: { id: projectId, captureId: capture } });
     expect((await del(cookies.otherTechnician)).status).toBe(403);
     expect((await del(cookies.engineer)).status).toBe(403);
     expect((await del(cookies.technician)).status).toBe(200);

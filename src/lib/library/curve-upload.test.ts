@@ -1,23 +1,15 @@
 // Upload → storage → parse → rows, against the real storage fake and PostgreSQL.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { GET as limitsGet } from "@/app/api/parts/[id]/limits/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
 import { createStorage } from "@/lib/storage/storage";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv } from "@/test/services";
 import { cleanupStaleUploads, presignUpload, registerCurveSet } from "./curve-upload";
 
@@ -29,7 +21,6 @@ const storageConfig = {
   secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
 };
 const storage = createStorage(storageConfig);
-const h = (handler: unknown) => handler as GuardedHandler;
 
 const csv = [
   "width,V_DS [V],I_D [A]",
@@ -44,7 +35,7 @@ const csv = [
   "DC,40,1.25",
 ].join("\n");
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Uploads");
 let cookie: string;
 
 async function newPart(): Promise<Part> {
@@ -66,7 +57,7 @@ async function newPart(): Promise<Part> {
 
 /** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
 async function browserUpload(partId: string, text: string) {
-  const res = await call(h(uploadPost), "POST", {
+  const res = await call(uploadPost, "POST", {
     cookie,
     params: { id: partId },
     body: { fileName: "figure-9.csv", size: Buffer.byteLength(text), purpose: "curve-set" },
@@ -83,19 +74,14 @@ async function rowsFor(partId: string) {
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Uploads");
   cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 describe("curve-set upload", () => {
   it("stores the object, the curves, name, size and SHA-256, and returns the part to draft", async () => {
     const part = await newPart();
     const ticket = await browserUpload(part.id, csv);
-    const res = await call(h(registerPost), "POST", {
+    const res = await call(registerPost, "POST", {
       cookie,
       params: { id: part.id },
       body: { uploadId: ticket.uploadId },
@@ -125,7 +111,7 @@ describe("curve-set upload", () => {
     const part = await newPart();
     const bad = "width,V_DS [V],I_D [A]\n1 ms,1,60\n1 ms,ten,40\n";
     const ticket = await browserUpload(part.id, bad);
-    const res = await call(h(registerPost), "POST", {
+    const res = await call(registerPost, "POST", {
       cookie,
       params: { id: part.id },
       body: { uploadId: ticket.uploadId },
@@ -175,7 +161,7 @@ describe("curve-set upload", () => {
       begin raise exception 'forced failure for test'; end $$;
       create trigger pf_test_fail before insert on curves for each row execute function pf_test_fail();`);
     try {
-      const res = await call(h(registerPost), "POST", {
+      const res = await call(registerPost, "POST", {
         cookie,
         params: { id: part.id },
         body: { uploadId: ticket.uploadId },
@@ -203,7 +189,7 @@ describe("curve-set upload", () => {
 
   it("refuses a file over 5 MB before any upload", async () => {
     const part = await newPart();
-    const res = await call(h(uploadPost), "POST", {
+    const res = await call(uploadPost, "POST", {
       cookie,
       params: { id: part.id },
       body: { fileName: "big.csv", size: 6_000_000, purpose: "curve-set" },
@@ -216,12 +202,12 @@ describe("limits route", () => {
   it("returns derated and interpolated curves equal to the engine's", async () => {
     const part = await newPart();
     const ticket = await browserUpload(part.id, csv);
-    await call(h(registerPost), "POST", {
+    await call(registerPost, "POST", {
       cookie,
       params: { id: part.id },
       body: { uploadId: ticket.uploadId },
     });
-    const res = await call(h(limitsGet), "GET", {
+    const res = await call(limitsGet, "GET", {
       cookie,
       params: { id: part.id },
       path: `/api/parts/${part.id}/limits?caseTemp=100&width=2ms`,

@@ -1,26 +1,16 @@
 // Findings found again when the part changes, verification over open findings, and its lapse with a notice:
 // against the real database, storage fake and mail fake (issue 12).
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { PATCH as partPatch } from "@/app/api/parts/[id]/route";
 import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as verifyPost } from "@/app/api/parts/[id]/verify/route";
 import { curveSets, type Part, parts } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import type { Finding } from "@/lib/soa/findings";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv } from "@/test/services";
-
-const h = (handler: unknown) => handler as GuardedHandler;
 
 // Curves under a 1 Ω R_DS(on) line, each bending to a constant-power line (I = P/V): no shape findings.
 const csv = [
@@ -36,7 +26,7 @@ const csv = [
   "DC,40,0.2",
 ].join("\n");
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Findings");
 let engineer: string;
 let lead: string;
 
@@ -59,14 +49,14 @@ async function newPart(): Promise<Part> {
 
 async function upload(partId: string, text: string) {
   const ticket = await (
-    await call(h(uploadPost), "POST", {
+    await call(uploadPost, "POST", {
       cookie: engineer,
       params: { id: partId },
       body: { fileName: "figure-9.csv", size: Buffer.byteLength(text), purpose: "curve-set" },
     })
   ).json();
   await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
-  return call(h(registerPost), "POST", {
+  return call(registerPost, "POST", {
     cookie: engineer,
     params: { id: partId },
     body: { uploadId: ticket.uploadId },
@@ -85,13 +75,8 @@ async function mailsTo(address: string): Promise<{ subject: string; text: string
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Findings");
   engineer = await sessionCookie(ws.members.engineer.id, ws.id);
   lead = await sessionCookie(ws.members.lead.id, ws.id);
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 describe("findings that follow the part", () => {
@@ -100,7 +85,7 @@ describe("findings that follow the part", () => {
     expect((await upload(part.id, csv)).status).toBe(201);
     expect(await storedFindings(part.id)).toEqual([]);
     // ΣR_i = 1 K/W against the rated 0.5 K/W: +100 %; the DC level (175 − 25)/1 = 150 W against 12.5 W.
-    const res = await call(h(thermalPut), "PUT", {
+    const res = await call(thermalPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: {
@@ -115,7 +100,7 @@ describe("findings that follow the part", () => {
     expect(kinds).toContain("rating-mismatch");
     expect(kinds).toContain("thermal-mismatch");
     // Fixing the rating to the model's sum removes the rating finding, again without a re-upload.
-    const patch = await call(h(partPatch), "PATCH", {
+    const patch = await call(partPatch, "PATCH", {
       cookie: engineer,
       params: { id: part.id },
       body: {
@@ -148,7 +133,7 @@ describe("verification over open findings", () => {
   it("needs every open finding accepted with a reason, keeps the reasons, and lapses with a notice", async () => {
     const part = await newPart();
     await upload(part.id, csv);
-    await call(h(thermalPut), "PUT", {
+    await call(thermalPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { terms: [{ r: 1, tau: 0.01 }] },
@@ -156,13 +141,13 @@ describe("verification over open findings", () => {
     const open = await storedFindings(part.id);
     expect(open.length).toBeGreaterThan(1);
 
-    const bare = await call(h(verifyPost), "POST", { cookie: lead, params: { id: part.id }, body: {} });
+    const bare = await call(verifyPost, "POST", { cookie: lead, params: { id: part.id }, body: {} });
     expect(bare.status).toBe(409);
     expect((await bare.json()).error.message).toBe(
       `${open.length} open findings need a reason to be accepted before the part can be verified.`,
     );
     const blank = open.map((f, k) => ({ key: f.key, reason: k === 0 ? "  " : "as drawn in the datasheet" }));
-    const oneBlank = await call(h(verifyPost), "POST", {
+    const oneBlank = await call(verifyPost, "POST", {
       cookie: lead,
       params: { id: part.id },
       body: { acceptances: blank },
@@ -170,7 +155,7 @@ describe("verification over open findings", () => {
     expect((await oneBlank.json()).error.message).toMatch(/^1 open finding needs a reason/);
 
     const acceptances = open.map((f) => ({ key: f.key, reason: "model from the datasheet's Z_th figure" }));
-    const ok = await call(h(verifyPost), "POST", {
+    const ok = await call(verifyPost, "POST", {
       cookie: lead,
       params: { id: part.id },
       body: { acceptances },
@@ -183,7 +168,7 @@ describe("verification over open findings", () => {
     );
 
     // The data change: back to draft, the acceptances gone, and the lead who verified is told.
-    await call(h(thermalPut), "PUT", {
+    await call(thermalPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { terms: [{ r: 0.5, tau: 0.01 }] },

@@ -1,22 +1,13 @@
 // Transfer characteristics through their route, against the real database (issue 11): the same parser as the
 // editor, unreadable cells and blocking findings refused by row, the part back in draft, the curves in the check.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { DELETE as transferDelete, PUT as transferPut } from "@/app/api/parts/[id]/transfer/route";
 import { type Part, parts } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { partLimits } from "@/lib/projects/projects";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Transfer");
 let engineer: string;
 
 async function newPart(): Promise<Part> {
@@ -38,18 +29,13 @@ async function newPart(): Promise<Part> {
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Transfer");
   engineer = await sessionCookie(ws.members.engineer.id, ws.id);
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 describe("PUT /api/parts/:id/transfer", () => {
   it("stores two curves, cooler first, returns the part to draft and carries them into the engine's limits", async () => {
     const part = await newPart();
-    const res = await call(h(transferPut), "PUT", {
+    const res = await call(transferPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { text: "T_j;V_GS [V];I_D [A]\n125;3;3\n125;4;25\n25;3;1\n25;4;20\n", fileName: "fig-7.csv" },
@@ -81,7 +67,7 @@ describe("PUT /api/parts/:id/transfer", () => {
 
   it("refuses unreadable cells and V_GS out of order, naming the row, and keeps what was stored", async () => {
     const part = await newPart();
-    const bad = await call(h(transferPut), "PUT", {
+    const bad = await call(transferPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { text: "25,3,1\n25,x,20\n150,3,3\n150,4,25\n" },
@@ -90,7 +76,7 @@ describe("PUT /api/parts/:id/transfer", () => {
     expect((await bad.json()).error.details.issues[0].message).toBe(
       "row 2, column V_GS: 'x' is not a number",
     );
-    const order = await call(h(transferPut), "PUT", {
+    const order = await call(transferPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { text: "25,4,1\n25,3,20\n150,3,3\n150,4,25\n" },
@@ -104,14 +90,14 @@ describe("PUT /api/parts/:id/transfer", () => {
 
   it("DELETE removes them", async () => {
     const part = await newPart();
-    await call(h(transferPut), "PUT", {
+    await call(transferPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { text: "25,3,1\n25,4,20\n150,3,3\n150,4,25\n" },
     });
-    expect(
-      (await call(h(transferDelete), "DELETE", { cookie: engineer, params: { id: part.id } })).status,
-    ).toBe(200);
+    expect((await call(transferDelete, "DELETE", { cookie: engineer, params: { id: part.id } })).status).toBe(
+      200,
+    );
     const [stored] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
     expect(stored.transfer).toBeNull();
   });

@@ -2,23 +2,15 @@
 // a presigned PUT may still do.
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
 import { POST as projectUploadPost } from "@/app/api/projects/[id]/uploads/route";
 import { captures, curveSets, type Part, parts, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { processCaptureJob } from "@/lib/capture/job";
 import { createStorage } from "@/lib/storage/storage";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv } from "@/test/services";
 
 const storage = createStorage({
@@ -28,7 +20,6 @@ const storage = createStorage({
   accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
   secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
 });
-const h = (handler: unknown) => handler as GuardedHandler;
 
 // A small valid curve set in the long format the app documents (public/examples/soa-curves-table.csv).
 const csv = ["width,V_DS [V],I_D [A]", "1 ms,1,60", "1 ms,10,40", "1 ms,40,10", "DC,1,30", "DC,40,1.25"].join(
@@ -36,16 +27,11 @@ const csv = ["width,V_DS [V],I_D [A]", "1 ms,1,60", "1 ms,10,40", "1 ms,40,10", 
 );
 const sha256 = (text: string | Buffer) => createHash("sha256").update(text).digest("hex");
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Integrity");
 let cookie: string;
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Integrity");
   cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 async function newPart(): Promise<Part> {
@@ -65,7 +51,7 @@ async function newPart(): Promise<Part> {
 }
 
 async function ticketFor(partId: string, size: number) {
-  const res = await call(h(uploadPost), "POST", {
+  const res = await call(uploadPost, "POST", {
     cookie,
     params: { id: partId },
     body: { fileName: "figure.csv", size, purpose: "curve-set" },
@@ -86,7 +72,7 @@ describe("registering one curve upload several times at once", () => {
       expect((await put(ticket.url, csv)).status).toBe(200);
       const statuses = await Promise.all(
         Array.from({ length: 3 }, () =>
-          call(h(registerPost), "POST", {
+          call(registerPost, "POST", {
             cookie,
             params: { id: part.id },
             body: { uploadId: ticket.uploadId },
@@ -117,7 +103,7 @@ describe("presigned uploads", () => {
     const part = await newPart();
     const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
     expect((await put(ticket.url, csv)).status).toBe(200);
-    const res = await call(h(registerPost), "POST", {
+    const res = await call(registerPost, "POST", {
       cookie,
       params: { id: part.id },
       body: { uploadId: ticket.uploadId },
@@ -145,7 +131,7 @@ describe("capture uploads", () => {
     );
     const text = ["t,v,i", ...rows].join("\n");
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const ticketRes = await call(h(projectUploadPost), "POST", {
+    const ticketRes = await call(projectUploadPost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { fileName: "run.csv", size: Buffer.byteLength(text), purpose: "capture" },
@@ -153,7 +139,7 @@ describe("capture uploads", () => {
     expect(ticketRes.status).toBe(201);
     const ticket = (await ticketRes.json()) as { uploadId: string; url: string };
     expect((await put(ticket.url, text)).status).toBe(200);
-    const res = await call(h(capturesPost), "POST", {
+    const res = await call(capturesPost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { uploadId: ticket.uploadId, name: "run", mapping: { time: 0, voltage: 1, current: 2 } },

@@ -1,7 +1,7 @@
 // E-mail through the durable outbox with the mail server down (the app's SMTP port points where nothing listens),
 // then back: nothing is marked sent before it is, and nothing is lost.
 import { and, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { POST as forgotPassword } from "@/app/api/auth/forgot-password/route";
 import { POST as signUp } from "@/app/api/auth/sign-up/route";
 import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
@@ -9,17 +9,14 @@ import { POST as saveMeasurements } from "@/app/api/projects/[id]/measurements/r
 import { POST as resend } from "@/app/api/team/invitations/[id]/resend/route";
 import { POST as invite } from "@/app/api/team/invitations/route";
 import { invitations, mailOutbox, notices, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import {
   addDemoCandidate,
   call,
-  createTestWorkspace,
-  deleteWorkspace,
   sessionCookie,
-  type TestWorkspace,
   testDb,
   testPassword,
+  workspaceForFile,
 } from "@/test/fixtures";
 import { waitForMail } from "@/test/services";
 import { createMailer } from "./mailer";
@@ -34,15 +31,7 @@ const workingMailer = () =>
   createMailer({ host: "127.0.0.1", port: realSmtpPort, secure: false, from: "Pulsefence <t@example.test>" });
 const later = () => new Date(Date.now() + 60 * 60 * 1000);
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Outbox");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Outbox");
 
 async function outboxTo(to: string) {
   return testDb.db.select().from(mailOutbox).where(eq(mailOutbox.to, to));
@@ -56,7 +45,7 @@ describe("with the mail server down", () => {
       .returning();
     await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const res = await call(h(saveMeasurements), "POST", {
+    const res = await call(saveMeasurements, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { rows: [{ label: "Overload", kind: "rect", v: 40, i: 900, duration: 10e-3 }] },
@@ -81,12 +70,12 @@ describe("with the mail server down", () => {
   it("resending an invitation keeps a working link waiting in the outbox, delivered when mail returns", async () => {
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const email = `resend-${crypto.randomUUID().slice(0, 8)}@example.test`;
-    expect((await call(h(invite), "POST", { cookie: admin, body: { email, role: "engineer" } })).status).toBe(
+    expect((await call(invite, "POST", { cookie: admin, body: { email, role: "engineer" } })).status).toBe(
       201,
     );
     await outboxIdle();
     const [first] = await testDb.db.select().from(invitations).where(eq(invitations.email, email));
-    const resent = await call(h(resend), "POST", { cookie: admin, params: { id: first.id } });
+    const resent = await call(resend, "POST", { cookie: admin, params: { id: first.id } });
     expect(resent.status).toBe(201);
     await outboxIdle();
     const open = await testDb.db
@@ -99,7 +88,7 @@ describe("with the mail server down", () => {
     await deliverOutbox(workingMailer(), later());
     const mail = await waitForMail(email);
     const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
-    const accepted = await call(h(acceptInvitation), "POST", {
+    const accepted = await call(acceptInvitation, "POST", {
       body: { token, name: "Rae Outbox", password: testPassword },
     });
     expect(accepted.status).toBe(200);
@@ -110,7 +99,7 @@ describe("with the mail server down", () => {
     const unknown = `nobody-${crypto.randomUUID().slice(0, 8)}@example.test`;
     const answers = [];
     for (const email of [known, unknown]) {
-      const res = await call(h(forgotPassword), "POST", { body: { email } });
+      const res = await call(forgotPassword, "POST", { body: { email } });
       answers.push({ status: res.status, body: await res.text(), cookie: res.headers.get("set-cookie") });
     }
     // Mail is down: a known address is not a 503 (nor any other answer than the unknown one's).
@@ -128,7 +117,7 @@ describe("with the mail server down", () => {
     const fresh = `new-${crypto.randomUUID().slice(0, 8)}@example.test`;
     const answers = [];
     for (const email of [known, fresh]) {
-      const res = await call(h(signUp), "POST", {
+      const res = await call(signUp, "POST", {
         body: { name: "Ida Probe", email, password: testPassword, workspaceName: "Probe Lab" },
       });
       answers.push({ status: res.status, body: await res.text(), cookie: res.headers.get("set-cookie") });

@@ -1,27 +1,18 @@
 // The project check route against the engine's contract on the same inputs, on the real database.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
 import { faultCases, measuredPulses, projects } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { runCheck } from "@/lib/soa/check";
 import type { PartLimits, Pulse } from "@/lib/soa/types";
-import {
-  addDemoCandidate,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Check");
 let projectId: string;
 const limitsByPart = new Map<string, PartLimits>();
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Check");
   const { db } = testDb;
   const [project] = await db
     .insert(projects)
@@ -59,11 +50,6 @@ beforeAll(async () => {
     { projectId, label: "M1", kind: "rect", v: 47.5, i: 2.2, duration: 3e-3 },
     { projectId, label: "M2", kind: "rect", v: 120, i: 1, duration: 1e-3 },
   ]);
-});
-
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
 });
 
 describe("GET /api/projects/:id/check", () => {

@@ -4,26 +4,16 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { GET as reportGet } from "@/app/api/projects/[id]/decisions/[decisionId]/report/route";
 import { GET as decisionGet } from "@/app/api/projects/[id]/decisions/[decisionId]/route";
 import { GET as listGet, POST as signPost } from "@/app/api/projects/[id]/decisions/route";
 import { GET as matrixGet } from "@/app/api/projects/[id]/matrix/route";
 import { curves, faultCases, measuredPulses, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
-import {
-  addDemoCandidate,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Decide");
 let projectId: string;
 const partIds: Record<string, string> = {};
 const setIds: Record<string, string> = {};
@@ -37,7 +27,6 @@ function pdfText(bytes: Buffer): string {
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Decide");
   const { db } = testDb;
   const [project] = await db
     .insert(projects)
@@ -58,15 +47,10 @@ beforeAll(async () => {
     .values({ projectId, label: "Bench M1", kind: "rect", v: 47, i: 1.2, duration: 2e-3 });
 });
 
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
-
 describe("decisions", () => {
   it("freezes the evaluation: edits to curves and temperature change neither the snapshot nor the report", async () => {
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
-    const signed = await call(h(signPost), "POST", {
+    const signed = await call(signPost, "POST", {
       cookie: lead,
       params: { id: projectId },
       body: {
@@ -78,10 +62,10 @@ describe("decisions", () => {
     const { decision } = await signed.json();
     const params = { id: projectId, decisionId: decision.id };
 
-    const before = await (await call(h(decisionGet), "GET", { cookie: lead, params })).json();
+    const before = await (await call(decisionGet, "GET", { cookie: lead, params })).json();
     expect(before.drift.results).toEqual([]);
     const reportBefore = pdfText(
-      Buffer.from(await (await call(h(reportGet), "GET", { cookie: lead, params })).arrayBuffer()),
+      Buffer.from(await (await call(reportGet, "GET", { cookie: lead, params })).arrayBuffer()),
     );
 
     // Edit the library and the project after the decision.
@@ -96,10 +80,10 @@ describe("decisions", () => {
       .where(eq(curves.curveSetId, setIds["BFL-100L55"]));
     await testDb.db.update(projects).set({ caseTemp: 120 }).where(eq(projects.id, projectId));
 
-    const after = await (await call(h(decisionGet), "GET", { cookie: lead, params })).json();
+    const after = await (await call(decisionGet, "GET", { cookie: lead, params })).json();
     expect(after.decision.snapshot).toEqual(before.decision.snapshot);
     const reportAfter = pdfText(
-      Buffer.from(await (await call(h(reportGet), "GET", { cookie: lead, params })).arrayBuffer()),
+      Buffer.from(await (await call(reportGet, "GET", { cookie: lead, params })).arrayBuffer()),
     );
     expect(reportAfter).toBe(reportBefore);
 
@@ -117,9 +101,9 @@ describe("decisions", () => {
   it("writes a PDF whose text holds the project, each candidate, each verdict and the caution", async () => {
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
     const { decisions } = await (
-      await call(h(listGet), "GET", { cookie: lead, params: { id: projectId } })
+      await call(listGet, "GET", { cookie: lead, params: { id: projectId } })
     ).json();
-    const res = await call(h(reportGet), "GET", {
+    const res = await call(reportGet, "GET", {
       cookie: lead,
       params: { id: projectId, decisionId: decisions[0].id },
     });
@@ -142,13 +126,13 @@ describe("decisions", () => {
 
   it("supersedes, never edits: a second decision leaves the first in the history", async () => {
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
-    await call(h(signPost), "POST", {
+    await call(signPost, "POST", {
       cookie: lead,
       params: { id: projectId },
       body: { partId: partIds["QM-100G28"], rationale: "Second opinion after the curve change." },
     });
     const { decisions } = await (
-      await call(h(listGet), "GET", { cookie: lead, params: { id: projectId } })
+      await call(listGet, "GET", { cookie: lead, params: { id: projectId } })
     ).json();
     expect(decisions).toHaveLength(2);
     expect(decisions[0].supersededBy).toBeNull();
@@ -158,7 +142,7 @@ describe("decisions", () => {
   it("refuses a decision from an engineer or a technician", async () => {
     for (const role of ["engineer", "technician"] as const) {
       const cookie = await sessionCookie(ws.members[role].id, ws.id);
-      const res = await call(h(signPost), "POST", {
+      const res = await call(signPost, "POST", {
         cookie,
         params: { id: projectId },
         body: { partId: partIds["QM-100G28"], rationale: "Not mine to decide, but trying." },
@@ -169,7 +153,7 @@ describe("decisions", () => {
 
   it("exports the matrix as CSV named after the project and the date", async () => {
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-    const res = await call(h(matrixGet), "GET", { cookie, params: { id: projectId } });
+    const res = await call(matrixGet, "GET", { cookie, params: { id: projectId } });
     expect(res.headers.get("content-disposition")).toMatch(/Cargo-bike-disconnect-\d{4}-\d{2}-\d{2}\.csv/);
     const lines = (await res.text()).trim().split("\r\n");
     expect(lines[0]).toMatch(/^rank,part,maker,/);

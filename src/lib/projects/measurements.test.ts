@@ -1,27 +1,17 @@
 // Bench evidence: paste → preview verdicts → save in one transaction → one e-mail per failing pulse.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { DELETE as deleteMeasurement } from "@/app/api/projects/[id]/measurements/[measurementId]/route";
 import { POST as previewPost } from "@/app/api/projects/[id]/measurements/preview/route";
 import { POST as savePost } from "@/app/api/projects/[id]/measurements/route";
 import { curveSets, curves, measuredPulses, parts, projectCandidates, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { readInbox, waitForMail } from "@/test/services";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Bench");
 let projectId: string;
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Bench");
   const { db } = testDb;
   const [project] = await db
     .insert(projects)
@@ -83,11 +73,6 @@ beforeAll(async () => {
   await db.insert(projectCandidates).values({ projectId, partId: part.id });
 });
 
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
-
 const paste = [
   "label\tV_DS [V]\tI_D [A]\tt_p",
   "P1\t12\t5\t1 ms",
@@ -100,7 +85,7 @@ const paste = [
 describe("measured pulses", () => {
   it("previews every row with its problems and its verdict on each candidate, saving nothing", async () => {
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const res = await call(h(previewPost), "POST", {
+    const res = await call(previewPost, "POST", {
       cookie,
       params: { id: projectId },
       body: { text: paste },
@@ -128,7 +113,7 @@ describe("measured pulses", () => {
       { label: "Q1", kind: "rect", v: 12, i: 5, duration: 1e-3 },
       { label: "Q2", kind: "rect", v: 24, i: 40, duration: 1e-3 },
     ];
-    const res = await call(h(savePost), "POST", {
+    const res = await call(savePost, "POST", {
       cookie,
       params: { id: projectId },
       body: { rows, note: "after rework", boardSerial: "TW-0042", probe: "100:1 diff, 30 A clamp" },
@@ -150,7 +135,7 @@ describe("measured pulses", () => {
       ["Q2", ws.members.technician.id, "TW-0042"],
     ]);
     // Saving more evidence re-checks the project but never mails about Q2 again.
-    await call(h(savePost), "POST", { cookie, params: { id: projectId }, body: { rows: [rows[0]] } });
+    await call(savePost, "POST", { cookie, params: { id: projectId }, body: { rows: [rows[0]] } });
     await new Promise((r) => setTimeout(r, 300));
     const toOwner = (await readInbox())
       .slice(before)
@@ -163,7 +148,7 @@ describe("measured pulses", () => {
     const count = async () =>
       (await testDb.db.select().from(measuredPulses).where(eq(measuredPulses.projectId, projectId))).length;
     const n = await count();
-    const res = await call(h(savePost), "POST", {
+    const res = await call(savePost, "POST", {
       cookie,
       params: { id: projectId },
       body: {
@@ -191,13 +176,13 @@ describe("measured pulses", () => {
       })
       .returning();
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const denied = await call(h(deleteMeasurement), "DELETE", {
+    const denied = await call(deleteMeasurement, "DELETE", {
       cookie: tech,
       params: { id: projectId, measurementId: other.id },
     });
     expect(denied.status).toBe(403);
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
-    const ok = await call(h(deleteMeasurement), "DELETE", {
+    const ok = await call(deleteMeasurement, "DELETE", {
       cookie: lead,
       params: { id: projectId, measurementId: other.id },
     });
@@ -210,8 +195,8 @@ describe("bench scripts", () => {
     const { POST: createToken } = await import("@/app/api/account/tokens/route");
     const { POST: v1Save } = await import("@/app/api/v1/projects/[id]/measurements/route");
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "rig 1" } })).json();
-    const res = await call(h(v1Save), "POST", {
+    const { token } = await (await call(createToken, "POST", { cookie, body: { name: "rig 1" } })).json();
+    const res = await call(v1Save, "POST", {
       bearer: token.secret,
       params: { id: projectId },
       body: { rows: [{ label: "R1", kind: "rect", v: 12, i: 5, duration: 1e-3 }], boardSerial: "TW-9" },
@@ -225,9 +210,9 @@ describe("bench scripts", () => {
     const { POST: createToken } = await import("@/app/api/account/tokens/route");
     const { POST: v1Save } = await import("@/app/api/v1/projects/[id]/measurements/route");
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "rig 2" } })).json();
+    const { token } = await (await call(createToken, "POST", { cookie, body: { name: "rig 2" } })).json();
     const post = (body: unknown) =>
-      call(h(v1Save), "POST", { bearer: token.secret, params: { id: projectId }, body });
+      call(v1Save, "POST", { bearer: token.secret, params: { id: projectId }, body });
     const table = "Acq;Vds max;Id max;+Width;rep spacing [ms];Mean\n7;12,5 V;5 A;1 ms;50;2 A\n";
 
     const unread = await post({ text: table });

@@ -1,7 +1,7 @@
 // Notices by e-mail, through the outbox and the mail fake: one e-mail per action listing every failing pulse, a
 // drifting standing decision told to the project's owner and the lead who signed, and each person's choice honoured.
 import { and, eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { GET as getNotices, PATCH as setNotices } from "@/app/api/account/notices/route";
 import { POST as activate } from "@/app/api/parts/[id]/curve-sets/[setId]/activate/route";
 import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
@@ -17,19 +17,10 @@ import {
   projectCandidates,
   projects,
 } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
-import {
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { type InboxMail, readInbox } from "@/test/services";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
+const ws = workspaceForFile("Notices");
 let partId: string;
 const setIds: Record<"generous" | "tight" | "tighter", string> = { generous: "", tight: "", tighter: "" };
 
@@ -50,7 +41,6 @@ async function newProject(name: string) {
 }
 
 beforeAll(async () => {
-  ws = await createTestWorkspace("Notices");
   const { db } = testDb;
   const [part] = await db
     .insert(parts)
@@ -93,11 +83,6 @@ beforeAll(async () => {
   }
 });
 
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
-
 /** The e-mails to `address` that arrived after `before` (an inbox length), after the outbox had time to send. */
 async function newMailTo(address: string, before: number, expected: number): Promise<InboxMail[]> {
   let mails: InboxMail[] = [];
@@ -116,7 +101,7 @@ describe("failing evidence", () => {
     const project = await newProject("Batch board");
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
     const before = (await readInbox()).length;
-    const res = await call(h(savePost), "POST", {
+    const res = await call(savePost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: {
@@ -146,12 +131,12 @@ describe("failing evidence", () => {
     const project = await newProject("Quiet board");
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const off = await call(h(setNotices), "PATCH", {
+    const off = await call(setNotices, "PATCH", {
       cookie: engineer,
       body: { failingEvidence: false, decisionDrift: true, verificationLapsed: true },
     });
     expect(off.status).toBe(200);
-    const read = await (await call(h(getNotices), "GET", { cookie: engineer })).json();
+    const read = await (await call(getNotices, "GET", { cookie: engineer })).json();
     expect(read.preferences).toEqual({
       failingEvidence: false,
       decisionDrift: true,
@@ -159,7 +144,7 @@ describe("failing evidence", () => {
     });
 
     const before = (await readInbox()).length;
-    const quiet = await call(h(savePost), "POST", {
+    const quiet = await call(savePost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { rows: [row("Q1", 30), row("Q2", 40)] },
@@ -167,11 +152,11 @@ describe("failing evidence", () => {
     expect((await quiet.json()).notified).toBe(0);
     expect(await newMailTo(ws.members.engineer.email, before, 0)).toHaveLength(0);
 
-    await call(h(setNotices), "PATCH", {
+    await call(setNotices, "PATCH", {
       cookie: engineer,
       body: { failingEvidence: true, decisionDrift: true, verificationLapsed: true },
     });
-    const loud = await call(h(savePost), "POST", {
+    const loud = await call(savePost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { rows: [row("L1", 30)] },
@@ -183,9 +168,9 @@ describe("failing evidence", () => {
 
   it("refuses a preference change without a session or with a malformed body", async () => {
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
-    expect((await call(h(setNotices), "PATCH", { body: { failingEvidence: true } })).status).toBe(401);
+    expect((await call(setNotices, "PATCH", { body: { failingEvidence: true } })).status).toBe(401);
     expect(
-      (await call(h(setNotices), "PATCH", { cookie: engineer, body: { failingEvidence: "yes" } })).status,
+      (await call(setNotices, "PATCH", { cookie: engineer, body: { failingEvidence: "yes" } })).status,
     ).toBe(400);
   });
 });
@@ -198,7 +183,7 @@ describe("decision drift", () => {
       { projectId: project.id, name: "Surge", kind: "rect", v: 24, i: 1, duration: 1e-3 },
     ]);
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
-    const signed = await call(h(signPost), "POST", {
+    const signed = await call(signPost, "POST", {
       cookie: lead,
       params: { id: project.id },
       body: { partId, rationale: "Both fault cases pass with margin." },
@@ -210,7 +195,7 @@ describe("decision drift", () => {
 
     // A tighter curve set made active: "Short" now fails. One e-mail each, listing the changed verdict.
     let before = (await readInbox()).length;
-    const res = await call(h(activate), "POST", {
+    const res = await call(activate, "POST", {
       cookie: lead,
       params: { id: partId, setId: setIds.tight },
     });
@@ -226,18 +211,18 @@ describe("decision drift", () => {
 
     // The same change again leaves the same verdicts changed: nobody hears of it twice.
     before = (await readInbox()).length;
-    await call(h(activate), "POST", { cookie: lead, params: { id: partId, setId: setIds.tight } });
+    await call(activate, "POST", { cookie: lead, params: { id: partId, setId: setIds.tight } });
     expect(await newMailTo(owner.email, before, 0)).toHaveLength(0);
     expect(await newMailTo(signer.email, before, 0)).toHaveLength(0);
 
     // The lead turns drift notices off; the next change ("Surge" fails too) reaches the owner only.
-    const off = await call(h(setNotices), "PATCH", {
+    const off = await call(setNotices, "PATCH", {
       cookie: lead,
       body: { failingEvidence: true, decisionDrift: false, verificationLapsed: true },
     });
     expect(off.status).toBe(200);
     before = (await readInbox()).length;
-    await call(h(activate), "POST", { cookie: lead, params: { id: partId, setId: setIds.tighter } });
+    await call(activate, "POST", { cookie: lead, params: { id: partId, setId: setIds.tighter } });
     const toOwner = await newMailTo(owner.email, before, 1);
     expect(toOwner).toHaveLength(1);
     expect(toOwner[0].text).toContain("Surge: pass when signed, fail now");
@@ -269,12 +254,12 @@ describe("verification lapsed", () => {
       .returning();
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
-    await call(h(setNotices), "PATCH", {
+    await call(setNotices, "PATCH", {
       cookie: admin,
       body: { failingEvidence: true, decisionDrift: true, verificationLapsed: false },
     });
     const before = (await readInbox()).length;
-    const res = await call(h(thermalPut), "PUT", {
+    const res = await call(thermalPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
       body: { terms: [{ r: 0.5, tau: 0.01 }] },

@@ -1,21 +1,11 @@
 // Credentials do not outlive the changes that should end them: reset links, API tokens and sessions.
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { apiTokens, passwordResets, sessions } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
-import {
-  addMember,
-  call,
-  cookiePair,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-} from "@/test/fixtures";
+import { addMember, call, cookiePair, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { readInbox } from "@/test/services";
 import { POST as createToken, GET as listTokens } from "../account/tokens/route";
 import { POST as checkPost } from "../v1/check/route";
@@ -24,16 +14,8 @@ import { POST as resetPassword } from "./reset-password/route";
 import { POST as signIn } from "./sign-in/route";
 import { POST as signOutEverywhere } from "./sign-out-everywhere/route";
 
-const h = (handler: unknown) => handler as GuardedHandler;
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Credentials");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Credentials");
 
 // The smallest valid check contract (METHODS.md §9): one curve, one pulse.
 const checkRequest = smallCheckRequest();
@@ -41,7 +23,7 @@ const checkRequest = smallCheckRequest();
 async function resetLinks(email: string, count: number): Promise<string[]> {
   const tokens: string[] = [];
   for (let k = 0; k < count; k++) {
-    expect((await call(h(forgotPassword), "POST", { body: { email } })).status).toBe(200);
+    expect((await call(forgotPassword, "POST", { body: { email } })).status).toBe(200);
     for (let wait = 0; wait < 50; wait++) {
       const found = (await readInbox())
         .filter((m) => m.to.some((t) => t.address === email))
@@ -58,11 +40,11 @@ async function resetLinks(email: string, count: number): Promise<string[]> {
 
 async function newToken(userId: string) {
   const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(h(createToken), "POST", { cookie, body: { name: "bench" } });
+  const res = await call(createToken, "POST", { cookie, body: { name: "bench" } });
   return (await res.json()).token as { id: string; secret: string };
 }
 
-const check = (secret: string) => call(h(checkPost), "POST", { bearer: secret, body: checkRequest });
+const check = (secret: string) => call(checkPost, "POST", { bearer: secret, body: checkRequest });
 
 describe("reset links", () => {
   it("an older link stops working once a newer one is used, and a link lives about an hour", async () => {
@@ -73,8 +55,8 @@ describe("reset links", () => {
       expect(row.expiresAt.getTime() - row.createdAt.getTime()).toBeLessThanOrEqual(60 * 60 * 1000 + 5000);
     }
     const body = (token: string) => ({ body: { token, password: "a newer long passphrase" } });
-    expect((await call(h(resetPassword), "POST", body(newer))).status).toBe(200);
-    expect((await call(h(resetPassword), "POST", body(older))).status).toBe(404);
+    expect((await call(resetPassword, "POST", body(newer))).status).toBe(200);
+    expect((await call(resetPassword, "POST", body(older))).status).toBe(404);
   });
 });
 
@@ -84,7 +66,7 @@ describe("API tokens", () => {
     const token = await newToken(user.id);
     expect((await check(token.secret)).status).toBe(200);
     const [link] = await resetLinks(user.email, 1);
-    const reset = await call(h(resetPassword), "POST", {
+    const reset = await call(resetPassword, "POST", {
       body: { token: link, password: "reset long passphrase" },
     });
     expect(reset.status).toBe(200);
@@ -95,7 +77,7 @@ describe("API tokens", () => {
     const user = await addMember(ws.id, "technician");
     const token = await newToken(user.id);
     const cookie = await sessionCookie(user.id, ws.id);
-    expect((await call(h(signOutEverywhere), "POST", { cookie })).status).toBe(200);
+    expect((await call(signOutEverywhere, "POST", { cookie })).status).toBe(200);
     expect((await check(token.secret)).status).toBe(401);
   });
 
@@ -115,7 +97,7 @@ describe("API tokens", () => {
 describe("sessions", () => {
   it("store only the hash of the cookie's token, and the cookie lives days, not 400", async () => {
     const user = await addMember(ws.id, "lead");
-    const res = await call(h(signIn), "POST", {
+    const res = await call(signIn, "POST", {
       body: { email: user.email, password: "correct horse battery" },
     });
     expect(res.status).toBe(200);
@@ -131,7 +113,7 @@ describe("sessions", () => {
   it("end 30 days after sign-in however often they are used", async () => {
     const user = await addMember(ws.id, "lead");
     const cookie = await sessionCookie(user.id, ws.id);
-    expect((await call(h(listTokens), "GET", { cookie })).status).toBe(200);
+    expect((await call(listTokens, "GET", { cookie })).status).toBe(200);
     // Changed through another connection, as another app process would: heard here through NOTIFY.
     const heard = nextAuthClear();
     await testDb.db
@@ -139,6 +121,6 @@ describe("sessions", () => {
       .set({ createdAt: new Date(Date.now() - 31 * 24 * 3600 * 1000) })
       .where(eq(sessions.userId, user.id));
     await heard;
-    expect((await call(h(listTokens), "GET", { cookie })).status).toBe(401);
+    expect((await call(listTokens, "GET", { cookie })).status).toBe(401);
   });
 });

@@ -1,19 +1,9 @@
 // The account flows end to end through the real route handlers, PostgreSQL and the mail fake.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { apiTokens, invitations, memberships, sessions, users } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { smallCheckRequest } from "@/test/check-request";
-import {
-  call,
-  cookiePair,
-  createTestWorkspace,
-  deleteWorkspace,
-  sessionCookie,
-  type TestWorkspace,
-  testDb,
-  testPassword,
-} from "@/test/fixtures";
+import { call, cookiePair, sessionCookie, testDb, testPassword, workspaceForFile } from "@/test/fixtures";
 import { readInbox, waitForMail } from "@/test/services";
 import { POST as changePassword } from "../account/password/route";
 import { DELETE as revokeToken } from "../account/tokens/[id]/route";
@@ -29,7 +19,6 @@ import { POST as signOutEverywhere } from "./sign-out-everywhere/route";
 import { POST as confirmSignUp } from "./sign-up/confirm/route";
 import { POST as signUp } from "./sign-up/route";
 
-const h = (handler: unknown) => handler as GuardedHandler;
 const unique = () => crypto.randomUUID().slice(0, 8);
 const linkToken = (text: string, path: string) =>
   new RegExp(`${path}/([A-Za-z0-9_-]+)`).exec(text)?.[1] ?? "";
@@ -55,41 +44,34 @@ async function record(res: Response): Promise<Response> {
   return res;
 }
 
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Flows");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Flows");
 
 describe("sign-up and sign-in", () => {
   it("answers a new address and one with an account alike, and creates the account only by the e-mailed link", async () => {
     const email = `founder-${unique()}@example.test`;
     const body = { name: "Mara Quill", email, password: testPassword, workspaceName: "Quill Bench Lab" };
-    const fresh = await record(await call(h(signUp), "POST", { body }));
+    const fresh = await record(await call(signUp, "POST", { body }));
     expect(fresh.status).toBe(202);
     expect(fresh.headers.get("set-cookie")).toBeNull();
     const freshBody = await fresh.text();
     expect(await testDb.db.select().from(users).where(eq(users.email, email))).toHaveLength(0);
 
     const token = linkToken((await mailTo(email, /Finish creating/)).text, "/sign-up/confirm");
-    const confirmed = await record(await call(h(confirmSignUp), "POST", { body: { token } }));
+    const confirmed = await record(await call(confirmSignUp, "POST", { body: { token } }));
     expect(confirmed.status).toBe(201);
     const cookie = cookiePair(confirmed.headers.get("set-cookie")!);
     expect(confirmed.headers.get("set-cookie")).toMatch(/HttpOnly/i);
     expect(confirmed.headers.get("set-cookie")).toMatch(/SameSite=Lax/i);
-    const tokens = await record(await call(h(listTokens), "GET", { cookie }));
+    const tokens = await record(await call(listTokens, "GET", { cookie }));
     expect(tokens.status).toBe(200);
-    expect((await call(h(confirmSignUp), "POST", { body: { token } })).status).toBe(404);
+    expect((await call(confirmSignUp, "POST", { body: { token } })).status).toBe(404);
     const [created] = await testDb.db.select().from(users).where(eq(users.email, email));
     const founded = await testDb.db.select().from(memberships).where(eq(memberships.userId, created.id));
     expect(founded.map((m) => [m.role, m.leadRights])).toEqual([["admin", true]]);
 
     // The same address again: the same status and body, no session, no second account or workspace; the owner
     // is told by e-mail, with a reset link that works.
-    const again = await call(h(signUp), "POST", { body: { ...body, workspaceName: "Other" } });
+    const again = await call(signUp, "POST", { body: { ...body, workspaceName: "Other" } });
     expect(again.status).toBe(202);
     expect(again.headers.get("set-cookie")).toBeNull();
     expect(await again.text()).toBe(freshBody);
@@ -101,13 +83,13 @@ describe("sign-up and sign-in", () => {
     const resetToken = linkToken(told.text, "/reset-password");
     expect(told.text).not.toContain("/sign-up/confirm/");
     expect(
-      (await call(h(resetPassword), "POST", { body: { token: resetToken, password: "after a sign-up try" } }))
+      (await call(resetPassword, "POST", { body: { token: resetToken, password: "after a sign-up try" } }))
         .status,
     ).toBe(200);
   });
 
   it("names the invalid fields of a sign-up", async () => {
-    const res = await call(h(signUp), "POST", {
+    const res = await call(signUp, "POST", {
       body: { name: "", email: "not-an-address", password: "short" },
     });
     expect(res.status).toBe(400);
@@ -124,13 +106,13 @@ describe("sign-up and sign-in", () => {
     const ip = `10.${unique().length}.0.${Math.floor(Math.random() * 250)}-${unique()}`;
     const headers = { "x-forwarded-for": ip };
     for (let k = 0; k < 5; k++) {
-      const res = await call(h(signIn), "POST", {
+      const res = await call(signIn, "POST", {
         body: { email: ws.members.engineer.email, password: "wrong" },
         headers,
       });
       expect(res.status).toBe(401);
     }
-    const sixth = await call(h(signIn), "POST", {
+    const sixth = await call(signIn, "POST", {
       body: { email: ws.members.engineer.email, password: testPassword },
       headers,
     });
@@ -142,16 +124,16 @@ describe("sign-up and sign-in", () => {
 
   it("without a proxy's client address, one person's failures do not lock out another", async () => {
     for (let k = 0; k < 6; k++) {
-      await call(h(signIn), "POST", {
+      await call(signIn, "POST", {
         body: { email: `victim-${unique()}@example.test`, password: "wrong" },
       });
-      await call(h(signIn), "POST", { body: { email: ws.members.admin.email, password: "wrong guess" } });
+      await call(signIn, "POST", { body: { email: ws.members.admin.email, password: "wrong guess" } });
     }
-    const other = await call(h(signIn), "POST", {
+    const other = await call(signIn, "POST", {
       body: { email: ws.members.lead.email, password: testPassword },
     });
     expect([200, 401]).toContain(other.status);
-    const locked = await call(h(signIn), "POST", {
+    const locked = await call(signIn, "POST", {
       body: { email: ws.members.admin.email, password: testPassword },
     });
     expect(locked.status).toBe(429);
@@ -159,7 +141,7 @@ describe("sign-up and sign-in", () => {
 
   it("signs in with the right password", async () => {
     const res = await record(
-      await call(h(signIn), "POST", {
+      await call(signIn, "POST", {
         body: { email: ws.members.technician.email, password: testPassword },
         headers: { "x-forwarded-for": `ip-${unique()}` },
       }),
@@ -174,35 +156,35 @@ describe("invitations", () => {
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const email = `new-tech-${unique()}@example.test`;
     const res = await record(
-      await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } }),
+      await call(invite, "POST", { cookie: admin, body: { email, role: "technician" } }),
     );
     expect(res.status).toBe(201);
     const mail = await waitForMail(email);
     expect(mail.subject).toContain(ws.name);
     const token = linkToken(mail.text, "/invite");
     expect(token.length).toBeGreaterThan(20);
-    const listed = await record(await call(h(listInvitations), "GET", { cookie: admin }));
+    const listed = await record(await call(listInvitations, "GET", { cookie: admin }));
     expect((await listed.json()).invitations.map((i: { email: string }) => i.email)).toContain(email);
 
     const accepted = await record(
-      await call(h(acceptInvitation), "POST", {
+      await call(acceptInvitation, "POST", {
         body: { token, name: "Ivo Brandt", password: testPassword },
       }),
     );
     expect(accepted.status).toBe(200);
-    const second = await call(h(acceptInvitation), "POST", {
+    const second = await call(acceptInvitation, "POST", {
       body: { token, name: "Ivo Brandt", password: testPassword },
     });
     expect(second.status).toBe(404);
 
     const late = `late-${unique()}@example.test`;
-    await call(h(invite), "POST", { cookie: admin, body: { email: late, role: "engineer" } });
+    await call(invite, "POST", { cookie: admin, body: { email: late, role: "engineer" } });
     const lateToken = linkToken((await waitForMail(late)).text, "/invite");
     await testDb.db
       .update(invitations)
       .set({ expiresAt: new Date(Date.now() - 1000) })
       .where(eq(invitations.email, late));
-    const expired = await call(h(acceptInvitation), "POST", {
+    const expired = await call(acceptInvitation, "POST", {
       body: { token: lateToken, name: "Late", password: testPassword },
     });
     expect(expired.status).toBe(404);
@@ -211,9 +193,9 @@ describe("invitations", () => {
   it("keeps one open invitation per address: a second invitation replaces the first", async () => {
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const email = `twice-${unique()}@example.test`;
-    await call(h(invite), "POST", { cookie: admin, body: { email, role: "technician" } });
-    await call(h(invite), "POST", { cookie: admin, body: { email, role: "engineer" } });
-    const listed = await (await call(h(listInvitations), "GET", { cookie: admin })).json();
+    await call(invite, "POST", { cookie: admin, body: { email, role: "technician" } });
+    await call(invite, "POST", { cookie: admin, body: { email, role: "engineer" } });
+    const listed = await (await call(listInvitations, "GET", { cookie: admin })).json();
     const mine = listed.invitations.filter((i: { email: string }) => i.email === email);
     expect(mine).toHaveLength(1);
     expect(mine[0].role).toBe("engineer");
@@ -221,13 +203,13 @@ describe("invitations", () => {
 
   it("refuses a lead handing out the admin role, and a technician inviting at all", async () => {
     const lead = await sessionCookie(ws.members.lead.id, ws.id);
-    const res = await call(h(invite), "POST", {
+    const res = await call(invite, "POST", {
       cookie: lead,
       body: { email: `x-${unique()}@example.test`, role: "admin" },
     });
     expect(res.status).toBe(403);
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const denied = await call(h(invite), "POST", {
+    const denied = await call(invite, "POST", {
       cookie: tech,
       body: { email: `y-${unique()}@example.test`, role: "technician" },
     });
@@ -239,21 +221,17 @@ describe("password reset", () => {
   it("resets once by e-mailed link and signs out every session", async () => {
     const user = ws.members.lead;
     const before = await sessionCookie(user.id, ws.id);
-    const res = await call(h(forgotPassword), "POST", {
+    const res = await call(forgotPassword, "POST", {
       body: { email: user.email },
       headers: { "x-forwarded-for": `ip-${unique()}` },
     });
     expect(res.status).toBe(200);
     const token = linkToken((await waitForMail(user.email)).text, "/reset-password");
     const newPassword = "a brand new passphrase";
-    expect((await call(h(resetPassword), "POST", { body: { token, password: newPassword } })).status).toBe(
-      200,
-    );
-    expect((await call(h(resetPassword), "POST", { body: { token, password: newPassword } })).status).toBe(
-      404,
-    );
-    expect((await call(h(listTokens), "GET", { cookie: before })).status).toBe(401);
-    const signedIn = await call(h(signIn), "POST", {
+    expect((await call(resetPassword, "POST", { body: { token, password: newPassword } })).status).toBe(200);
+    expect((await call(resetPassword, "POST", { body: { token, password: newPassword } })).status).toBe(404);
+    expect((await call(listTokens, "GET", { cookie: before })).status).toBe(401);
+    const signedIn = await call(signIn, "POST", {
       body: { email: user.email, password: newPassword },
       headers: { "x-forwarded-for": `ip-${unique()}` },
     });
@@ -262,7 +240,7 @@ describe("password reset", () => {
 
   it("answers an unknown e-mail the same way; its e-mail says no account uses the address", async () => {
     const email = `nobody-${unique()}@example.test`;
-    const res = await call(h(forgotPassword), "POST", {
+    const res = await call(forgotPassword, "POST", {
       body: { email },
       headers: { "x-forwarded-for": `ip-${unique()}` },
     });
@@ -276,13 +254,13 @@ describe("password reset", () => {
     const user = ws.members.engineer;
     const other = await sessionCookie(user.id, ws.id);
     const mine = await sessionCookie(user.id, ws.id);
-    const res = await call(h(changePassword), "POST", {
+    const res = await call(changePassword, "POST", {
       cookie: mine,
       body: { currentPassword: testPassword, newPassword: "another long passphrase" },
     });
     expect(res.status).toBe(200);
-    expect((await call(h(listTokens), "GET", { cookie: other })).status).toBe(401);
-    expect((await call(h(listTokens), "GET", { cookie: mine })).status).toBe(200);
+    expect((await call(listTokens, "GET", { cookie: other })).status).toBe(401);
+    expect((await call(listTokens, "GET", { cookie: mine })).status).toBe(200);
   });
 });
 
@@ -291,35 +269,35 @@ describe("API tokens", () => {
 
   it("authenticates POST /api/v1/check with a bearer token until it is revoked", async () => {
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const created = await record(await call(h(createToken), "POST", { cookie, body: { name: "bench 3" } }));
+    const created = await record(await call(createToken, "POST", { cookie, body: { name: "bench 3" } }));
     expect(created.status).toBe(201);
     const { token } = await created.json();
     expect(token.secret).toMatch(/^pf_/);
 
-    const ok = await record(await call(h(checkPost), "POST", { bearer: token.secret, body: request }));
+    const ok = await record(await call(checkPost, "POST", { bearer: token.secret, body: request }));
     expect(ok.status).toBe(200);
     const body = await ok.json();
     expect(body.results).toHaveLength(1);
     expect(body.results[0]).toMatchObject({ id: "p1", verdict: expect.any(String), derating: 1 });
 
-    const listed = await record(await call(h(listTokens), "GET", { cookie }));
+    const listed = await record(await call(listTokens, "GET", { cookie }));
     expect(JSON.stringify(await listed.json())).not.toContain(token.secret);
 
-    expect((await call(h(revokeToken), "DELETE", { cookie, params: { id: token.id } })).status).toBe(200);
-    expect((await call(h(checkPost), "POST", { bearer: token.secret, body: request })).status).toBe(401);
+    expect((await call(revokeToken, "DELETE", { cookie, params: { id: token.id } })).status).toBe(200);
+    expect((await call(checkPost, "POST", { bearer: token.secret, body: request })).status).toBe(401);
   });
 
   it("answers an invalid check request 400 with the field path", async () => {
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-    const res = await call(h(checkPost), "POST", { cookie, body: { ...request, caseTemp: "hot" } });
+    const res = await call(checkPost, "POST", { cookie, body: { ...request, caseTemp: "hot" } });
     expect(res.status).toBe(400);
     expect((await res.json()).error.path).toBe("caseTemp");
   });
 
   it("refuses a bearer token outside /api/v1", async () => {
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-    const { token } = await (await call(h(createToken), "POST", { cookie, body: { name: "misuse" } })).json();
-    expect((await call(h(listInvitations), "GET", { bearer: token.secret })).status).toBe(401);
+    const { token } = await (await call(createToken, "POST", { cookie, body: { name: "misuse" } })).json();
+    expect((await call(listInvitations, "GET", { bearer: token.secret })).status).toBe(401);
   });
 });
 
@@ -328,12 +306,12 @@ describe("secrets", () => {
     const user = ws.members.admin;
     const one = await sessionCookie(user.id, ws.id);
     const two = await sessionCookie(user.id, ws.id);
-    expect((await call(h(signOutEverywhere), "POST", { cookie: one })).status).toBe(200);
-    expect((await call(h(listTokens), "GET", { cookie: two })).status).toBe(401);
+    expect((await call(signOutEverywhere, "POST", { cookie: one })).status).toBe(200);
+    expect((await call(listTokens, "GET", { cookie: two })).status).toBe(401);
   });
 
   it("no response of these flows contains a password hash, a token hash or another user's session id", async () => {
-    seen.push(await (await call(h(health), "GET")).text());
+    seen.push(await (await call(health, "GET")).text());
     const hashes = (await testDb.db.select({ h: users.passwordHash }).from(users)).map((r) => r.h);
     const tokenHashes = [
       ...(await testDb.db.select({ h: apiTokens.tokenHash }).from(apiTokens)).map((r) => r.h),

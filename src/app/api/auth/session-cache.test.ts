@@ -26,13 +26,13 @@ import {
   sessionCookie,
   type TestWorkspace,
   testDb,
+  workspaceForFile,
 } from "@/test/fixtures";
 import { GET as listProjects } from "../projects/route";
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Session cache");
 let other: TestWorkspace;
 beforeAll(async () => {
-  ws = await createTestWorkspace("Session cache");
   other = await createTestWorkspace("Session cache other");
   await whenListening();
 });
@@ -41,9 +41,7 @@ afterEach(() => {
   vi.useRealTimers();
 });
 afterAll(async () => {
-  await deleteWorkspace(ws.id);
   await deleteWorkspace(other.id);
-  await testDb.sql.end();
 });
 
 /**

@@ -1,16 +1,7 @@
 // Sign-in throttling under parallel requests and forged client addresses, through the real route handlers.
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import type { GuardedHandler } from "@/lib/auth/guard";
+import { describe, expect, it, vi } from "vitest";
 import { clientIp } from "@/lib/auth/throttle";
-import {
-  addMember,
-  call,
-  createTestWorkspace,
-  deleteWorkspace,
-  type TestWorkspace,
-  testDb,
-  testPassword,
-} from "@/test/fixtures";
+import { addMember, call, testPassword, workspaceForFile } from "@/test/fixtures";
 import { waitForMail } from "@/test/services";
 import { POST as forgotPassword } from "./forgot-password/route";
 import { POST as resetPassword } from "./reset-password/route";
@@ -28,18 +19,10 @@ const viaProxy = (clientWrote: string, proxySaw: string) => ({
 const octet = () => Math.floor(Math.random() * 250) + 1;
 const randomAddress = () => `10.${octet()}.${octet()}.${octet()}`;
 
-const h = (handler: unknown) => handler as GuardedHandler;
-let ws: TestWorkspace;
-beforeAll(async () => {
-  ws = await createTestWorkspace("Throttle");
-});
-afterAll(async () => {
-  await deleteWorkspace(ws.id);
-  await testDb.sql.end();
-});
+const ws = workspaceForFile("Throttle");
 
 const tryPassword = (email: string, password: string, headers: Record<string, string> = {}) =>
-  call(h(signIn), "POST", { body: { email, password }, headers });
+  call(signIn, "POST", { body: { email, password }, headers });
 
 describe("sign-in throttling", () => {
   it("40 parallel wrong passwords for one account: at most 5 are checked, the rest answer 429", async () => {
@@ -85,10 +68,10 @@ describe("sign-in throttling", () => {
     const locked = await tryPassword(victim.email, testPassword);
     expect(locked.status).toBe(429);
     expect((await locked.json()).error.code).toBe("rate_limited:account");
-    expect((await call(h(forgotPassword), "POST", { body: { email: victim.email } })).status).toBe(200);
+    expect((await call(forgotPassword, "POST", { body: { email: victim.email } })).status).toBe(200);
     const token = /\/reset-password\/([A-Za-z0-9_-]+)/.exec((await waitForMail(victim.email)).text)?.[1];
     const fresh = "a fresh long passphrase";
-    expect((await call(h(resetPassword), "POST", { body: { token, password: fresh } })).status).toBe(200);
+    expect((await call(resetPassword, "POST", { body: { token, password: fresh } })).status).toBe(200);
     expect((await tryPassword(victim.email, fresh)).status).toBe(200);
   });
 });

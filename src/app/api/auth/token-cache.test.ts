@@ -6,7 +6,6 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiTokens, memberships, projects } from "@/db/schema";
 import { authCache, whenListening } from "@/lib/auth/auth-memory";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { settleTokenWrites } from "@/lib/auth/token-auth";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
@@ -18,35 +17,31 @@ import {
   sessionCookie,
   type TestWorkspace,
   testDb,
+  workspaceForFile,
 } from "@/test/fixtures";
 import { POST as createToken } from "../account/tokens/route";
 import { POST as checkPost } from "../v1/check/route";
 import { POST as postMeasurements } from "../v1/projects/[id]/measurements/route";
 
-const h = (handler: unknown) => handler as GuardedHandler;
-
 const checkRequest = smallCheckRequest();
 
-let ws: TestWorkspace;
+const ws = workspaceForFile("Token cache");
 let other: TestWorkspace;
 beforeAll(async () => {
-  ws = await createTestWorkspace("Token cache");
   other = await createTestWorkspace("Token cache other");
   await whenListening();
 });
 afterAll(async () => {
-  await deleteWorkspace(ws.id);
   await deleteWorkspace(other.id);
-  await testDb.sql.end();
 });
 
 async function newToken(userId: string) {
   const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(h(createToken), "POST", { cookie, body: { name: "cache" } });
+  const res = await call(createToken, "POST", { cookie, body: { name: "cache" } });
   return (await res.json()).token as { id: string; secret: string };
 }
 
-const check = (secret: string) => call(h(checkPost), "POST", { bearer: secret, body: checkRequest });
+const check = (secret: string) => call(checkPost, "POST", { bearer: secret, body: checkRequest });
 
 describe("remembered API tokens", () => {
   it("listen for changes, so they are remembered at all", () => {
@@ -113,7 +108,7 @@ describe("remembered API tokens", () => {
       .values({ workspaceId: other.id, name: "Elsewhere", caseTemp: 60 })
       .returning({ id: projects.id });
     for (let k = 0; k < 2; k++) {
-      const res = await call(h(postMeasurements), "POST", {
+      const res = await call(postMeasurements, "POST", {
         bearer: token.secret,
         params: { id: foreign.id },
         body: { pulses: [] },

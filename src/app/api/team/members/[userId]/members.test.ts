@@ -4,7 +4,6 @@ import { and, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { POST as saveMeasurements } from "@/app/api/projects/[id]/measurements/route";
 import { memberships, projects } from "@/db/schema";
-import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import {
   addDemoCandidate,
@@ -18,7 +17,6 @@ import {
 import { readInbox, waitForMail } from "@/test/services";
 import { PATCH as changeRole, DELETE as removeMember } from "./route";
 
-const h = (handler: unknown) => handler as GuardedHandler;
 const created: string[] = [];
 afterAll(async () => {
   for (const id of created) await deleteWorkspace(id);
@@ -46,8 +44,8 @@ describe("the last-admin rule under parallel requests", () => {
       const { ws, a, b } = await twoAdmins();
       const [ca, cb] = [await sessionCookie(a.id, ws.id), await sessionCookie(b.id, ws.id)];
       const statuses = await Promise.all([
-        call(h(changeRole), "PATCH", { cookie: ca, params: { userId: b.id }, body: { role: "engineer" } }),
-        call(h(changeRole), "PATCH", { cookie: cb, params: { userId: a.id }, body: { role: "engineer" } }),
+        call(changeRole, "PATCH", { cookie: ca, params: { userId: b.id }, body: { role: "engineer" } }),
+        call(changeRole, "PATCH", { cookie: cb, params: { userId: a.id }, body: { role: "engineer" } }),
       ]).then((rs) => rs.map((r) => r.status).sort());
       // The loser is refused: 409 when it raced the winner, 403 when the winner had already demoted it.
       expect(statuses[0]).toBe(200);
@@ -61,8 +59,8 @@ describe("the last-admin rule under parallel requests", () => {
       const { ws, a, b } = await twoAdmins();
       const [ca, cb] = [await sessionCookie(a.id, ws.id), await sessionCookie(b.id, ws.id)];
       const statuses = await Promise.all([
-        call(h(removeMember), "DELETE", { cookie: ca, params: { userId: b.id } }),
-        call(h(removeMember), "DELETE", { cookie: cb, params: { userId: a.id } }),
+        call(removeMember, "DELETE", { cookie: ca, params: { userId: b.id } }),
+        call(removeMember, "DELETE", { cookie: cb, params: { userId: a.id } }),
       ]).then((rs) => rs.map((r) => r.status).sort());
       expect(statuses[0]).toBe(200);
       expect([403, 404, 409]).toContain(statuses[1]);
@@ -81,7 +79,7 @@ describe("removing a member who owns a project", () => {
       .returning();
     await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
-    const removed = await call(h(removeMember), "DELETE", {
+    const removed = await call(removeMember, "DELETE", {
       cookie: admin,
       params: { userId: ws.members.engineer.id },
     });
@@ -90,7 +88,7 @@ describe("removing a member who owns a project", () => {
     expect(after.ownerId).toBe(ws.members.admin.id);
 
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const saved = await call(h(saveMeasurements), "POST", {
+    const saved = await call(saveMeasurements, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { rows: [{ label: "Overload", kind: "rect", v: 40, i: 900, duration: 10e-3 }] },
