@@ -1,31 +1,10 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { expectRelative, expectToShownDigits, fosterNetwork, ONE_TERM, TWO_TERMS } from "@/test/foster-data";
 import { Solver } from "@/test/odex";
 import { type FosterTerm, rth, zth } from "./foster";
 
-const ONE_TERM: FosterTerm[] = [{ r: 1, tau: 1 }];
-const TWO_TERMS: FosterTerm[] = [
-  { r: 0.1, tau: 1e-3 },
-  { r: 0.4, tau: 0.1 },
-];
-
-/** |actual − shown| within half a unit of the last digit shown in the table. */
-function expectToShownDigits(actual: number, shown: string): void {
-  const decimals = shown.split(".")[1]?.length ?? 0;
-  expect(Math.abs(actual - Number(shown))).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
-
-function expectRelative(actual: number, expected: number, tolerance: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.abs(expected));
-}
-
-const network = fc.array(
-  fc.record({
-    r: fc.double({ min: 1e-3, max: 2, noNaN: true }),
-    tau: fc.double({ min: -6, max: 0, noNaN: true }).map((e) => 10 ** e),
-  }),
-  { minLength: 1, maxLength: 6 },
-);
+const network = fosterNetwork();
 
 describe("zth", () => {
   // Worked values, METHODS.md §10, derived from the Foster formula.

@@ -1,24 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { expectRelative, expectToShownDigits, fosterNetwork, ONE_TERM, TWO_TERMS } from "@/test/foster-data";
 import { Solver } from "@/test/odex";
 import { type FosterTerm, rth, zth } from "./foster";
 import { rectRise, trainRise } from "./thermal-rect";
-
-const ONE_TERM: FosterTerm[] = [{ r: 1, tau: 1 }];
-const TWO_TERMS: FosterTerm[] = [
-  { r: 0.1, tau: 1e-3 },
-  { r: 0.4, tau: 0.1 },
-];
-
-/** |actual − shown| within half a unit of the last digit shown in the table. */
-function expectToShownDigits(actual: number, shown: string): void {
-  const decimals = shown.split(".")[1]?.length ?? 0;
-  expect(Math.abs(actual - Number(shown))).toBeLessThanOrEqual(0.5 * 10 ** -decimals * (1 + 1e-9));
-}
-
-function expectRelative(actual: number, expected: number, tolerance: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.abs(expected));
-}
 
 /** Term states after integrating dθ_i/dt = (R_i·P − θ_i)/τ_i at constant power from `from` to `to`. */
 function integrate(net: readonly FosterTerm[], power: number, from: number, to: number, start: number[]) {
@@ -40,13 +25,7 @@ function integrateTrain(net: FosterTerm[], power: number, width: number, period:
   return state.reduce((sum, theta) => sum + theta, 0);
 }
 
-const network = fc.array(
-  fc.record({
-    r: fc.double({ min: 1e-3, max: 2, noNaN: true }),
-    tau: fc.double({ min: -6, max: 0, noNaN: true }).map((e) => 10 ** e),
-  }),
-  { minLength: 1, maxLength: 6 },
-);
+const network = fosterNetwork();
 
 describe("rectRise", () => {
   // Worked value, METHODS.md §10, derived from the Foster formula (to the digits shown).

@@ -1,23 +1,10 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { expectRelative, fosterNetwork, THREE_TERMS, TWO_TERMS } from "@/test/foster-data";
 import { type OdexSolver, Solver } from "@/test/odex";
 import { type FosterTerm, zth } from "./foster";
 import { trianglePeakRise } from "./thermal-triangle";
 import { waveformRise } from "./thermal-waveform";
-
-const TWO_TERMS: FosterTerm[] = [
-  { r: 0.1, tau: 1e-3 },
-  { r: 0.4, tau: 0.1 },
-];
-const THREE_TERMS: FosterTerm[] = [
-  { r: 0.02, tau: 5e-5 },
-  { r: 0.1, tau: 1e-3 },
-  { r: 0.4, tau: 0.1 },
-];
-
-function expectRelative(actual: number, expected: number, tolerance: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.abs(expected));
-}
 
 function solver(n: number): OdexSolver {
   const s = new Solver(n);
@@ -86,13 +73,7 @@ function sampledTrain(peakPower: number, width: number, period: number, count: n
   return { t, p };
 }
 
-const network = fc.array(
-  fc.record({
-    r: fc.double({ min: 1e-3, max: 2, noNaN: true }),
-    tau: fc.double({ min: -6, max: 0, noNaN: true }).map((e) => 10 ** e),
-  }),
-  { minLength: 1, maxLength: 6 },
-);
+const network = fosterNetwork();
 
 describe("trianglePeakRise", () => {
   // Derived: for one term from rest, θ(t) = R·P·[(1 − e^(−x))(1 + 1/u) − x/u] with x = t/τ, u = w/τ; dθ/dt = 0 at

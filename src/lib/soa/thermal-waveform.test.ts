@@ -1,22 +1,11 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { expectRelative, fosterNetwork, ONE_TERM, THREE_TERMS } from "@/test/foster-data";
 import { Solver } from "@/test/odex";
-import type { FosterTerm } from "./foster";
 import { rectRise } from "./thermal-rect";
 import { trianglePeakRise } from "./thermal-triangle";
 import type { WaveformRise } from "./thermal-waveform";
 import { powerFromVI, rampFactor, waveformRise, waveformRiseVI } from "./thermal-waveform";
-
-const ONE_TERM: FosterTerm[] = [{ r: 1, tau: 1 }];
-const THREE_TERMS: FosterTerm[] = [
-  { r: 0.02, tau: 5e-5 },
-  { r: 0.1, tau: 1e-3 },
-  { r: 0.4, tau: 0.1 },
-];
-
-function expectRelative(actual: number, expected: number, tolerance: number): void {
-  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.abs(expected));
-}
 
 /** Largest |a − b| over two traces, relative to the largest |b| (0 for two all-zero traces). */
 function traceDifference(a: ArrayLike<number>, b: ArrayLike<number>): number {
@@ -29,13 +18,7 @@ function traceDifference(a: ArrayLike<number>, b: ArrayLike<number>): number {
   return difference / Math.max(scale, Number.MIN_VALUE);
 }
 
-const network = fc.array(
-  fc.record({
-    r: fc.double({ min: 1e-3, max: 2, noNaN: true }),
-    tau: fc.double({ min: -6, max: 0, noNaN: true }).map((e) => 10 ** e),
-  }),
-  { minLength: 1, maxLength: 9 },
-);
+const network = fosterNetwork(9);
 
 describe("waveformRise", () => {
   // Worked values, METHODS.md §10, derived from the Foster formula. A power step is a zero-length step.
