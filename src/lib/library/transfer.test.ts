@@ -6,6 +6,7 @@ import { DELETE as transferDelete, PUT as transferPut } from "@/app/api/parts/[i
 import { type Part, parts } from "@/db/schema";
 import { partLimits } from "@/lib/projects/projects";
 import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { WORKED_TRANSFER } from "@/test/transfer-data";
 
 const ws = workspaceForFile("Transfer");
 let engineer: string;
@@ -47,17 +48,7 @@ describe("PUT /api/parts/:id/transfer", () => {
     const [stored] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
     expect(stored.status).toBe("draft");
     expect(stored.transfer).toEqual({
-      temps: [25, 125],
-      curves: [
-        [
-          [3, 1],
-          [4, 20],
-        ],
-        [
-          [3, 3],
-          [4, 25],
-        ],
-      ],
+      ...WORKED_TRANSFER,
       source: { kind: "uploaded", fileName: "fig-7.csv" },
     });
     const limits = partLimits(stored, { refCaseTemp: 25, curves: [] });

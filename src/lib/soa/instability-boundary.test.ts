@@ -1,22 +1,11 @@
 import { describe, expect, it } from "vitest";
+import { WORKED_TRANSFER } from "@/test/transfer-data";
 import { instabilityBoundary } from "./instability-boundary";
 import { prepareTransfer, temperatureCoefficient } from "./stability";
 
 // Transfer data of METHODS.md §10 ("v2 instability"): at 25 °C (3 V, 1 A), (4 V, 20 A); at 125 °C (3 V, 3 A),
 // (4 V, 25 A). The curves do not cross inside the data, so α > 0 at every current of the cooler curve.
-const transfer = prepareTransfer({
-  temps: [25, 125],
-  curves: [
-    [
-      [3, 1],
-      [4, 20],
-    ],
-    [
-      [3, 3],
-      [4, 25],
-    ],
-  ],
-});
+const transfer = prepareTransfer(WORKED_TRANSFER);
 
 describe("instabilityBoundary(transfer, z)", () => {
   it("gives V_max = 40 V / S at 5 A, S = 0.241432 with Z = 0.1380605 K/W (METHODS.md §10 worked value)", () => {

@@ -1,21 +1,10 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { WORKED_TRANSFER } from "@/test/transfer-data";
 import { largestCoefficient, prepareTransfer, stabilityVerdict, temperatureCoefficient } from "./stability";
 
 // METHODS.md §10 "v2 instability": transfer at 25 °C (3 V, 1 A), (4 V, 20 A); at 125 °C (3 V, 3 A), (4 V, 25 A).
-const worked = prepareTransfer({
-  temps: [25, 125],
-  curves: [
-    [
-      [3, 1],
-      [4, 20],
-    ],
-    [
-      [3, 3],
-      [4, 25],
-    ],
-  ],
-});
+const worked = prepareTransfer(WORKED_TRANSFER);
 
 describe("temperatureCoefficient (METHODS.md §12)", () => {
   // Worked value, METHODS.md §10 (derived): g = 3 + ln 5/ln 20 = 3.537244 V; I_b = 3·(25/3)^(g − 3) = 9.371847 A;

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { WORKED_TRANSFER } from "@/test/transfer-data";
 import { prepareTransfer } from "./stability";
 import { transferCrossings } from "./zero-tc";
 
@@ -31,21 +32,7 @@ describe("transferCrossings(transfer)", () => {
   });
 
   it("reports no crossing, hotter curve above at both ends, for the METHODS.md §10 instability data", () => {
-    const result = transferCrossings(
-      prepareTransfer({
-        temps: [25, 125],
-        curves: [
-          [
-            [3, 1],
-            [4, 20],
-          ],
-          [
-            [3, 3],
-            [4, 25],
-          ],
-        ],
-      }),
-    )!;
+    const result = transferCrossings(prepareTransfer(WORKED_TRANSFER))!;
     expect(result.crossings).toEqual([]);
     expect(result.first).toBe(1);
     expect(result.last).toBe(1);
