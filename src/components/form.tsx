@@ -53,55 +53,39 @@ function Frame({
   );
 }
 
-export function TextField({
-  id,
-  label,
-  labelAside,
-  hint,
-  error,
-  className,
-  ref,
-  ...input
-}: FieldFrame &
-  Omit<InputHTMLAttributes<HTMLInputElement>, "id" | "className"> & { ref?: Ref<HTMLInputElement> }) {
+/** A field's props split into its frame's, its control's ties to the hint and error, and the control's own. */
+function splitField<P extends FieldFrame>({ id, label, labelAside, hint, error, className, ...own }: P) {
+  return {
+    frame: { id, label, labelAside, hint, error, className },
+    tie: {
+      id,
+      "aria-invalid": error ? true : undefined,
+      "aria-describedby": describedBy(id, hint && !error, error),
+    },
+    own,
+  };
+}
+
+export function TextField(
+  props: FieldFrame &
+    Omit<InputHTMLAttributes<HTMLInputElement>, "id" | "className"> & { ref?: Ref<HTMLInputElement> },
+) {
+  const { frame, tie, own } = splitField(props);
   return (
-    <Frame id={id} label={label} labelAside={labelAside} hint={hint} error={error} className={className}>
-      <input
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, hint && !error, error)}
-        className={control}
-        {...input}
-      />
+    <Frame {...frame}>
+      <input {...tie} className={control} {...own} />
     </Frame>
   );
 }
 
-export function SelectField({
-  id,
-  label,
-  labelAside,
-  hint,
-  error,
-  className,
-  ref,
-  children,
-  ...select
-}: FieldFrame &
-  Omit<SelectHTMLAttributes<HTMLSelectElement>, "id" | "className"> & { ref?: Ref<HTMLSelectElement> }) {
+export function SelectField(
+  props: FieldFrame &
+    Omit<SelectHTMLAttributes<HTMLSelectElement>, "id" | "className"> & { ref?: Ref<HTMLSelectElement> },
+) {
+  const { frame, tie, own } = splitField(props);
   return (
-    <Frame id={id} label={label} labelAside={labelAside} hint={hint} error={error} className={className}>
-      <select
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, hint && !error, error)}
-        className={`${control} pr-8`}
-        {...select}
-      >
-        {children}
-      </select>
+    <Frame {...frame}>
+      <select {...tie} className={`${control} pr-8`} {...own} />
     </Frame>
   );
 }

@@ -1,21 +1,13 @@
 import type { ReadonlyURLSearchParams } from "next/navigation";
+import { type PartSortKey, partSortKeys } from "@/lib/library/part-sort";
 import type { technologies } from "@/lib/library/technologies";
 
 // The library list's state lives in the URL: these are its keys, their defaults, and the query the list sends.
 
 export type Technology = (typeof technologies)[number];
 
-export const sortKeys = [
-  "partNumber",
-  "maker",
-  "technology",
-  "package",
-  "vdsMax",
-  "rdsOn",
-  "status",
-  "updatedAt",
-] as const;
-export type SortKey = (typeof sortKeys)[number];
+export const sortKeys = partSortKeys;
+export type SortKey = PartSortKey;
 
 export const PAGE_SIZE = 50;
 

@@ -2,19 +2,10 @@ import "server-only";
 import { and, asc, count, desc, eq, gte, ilike, isNotNull, isNull, lte, or, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { curveSets, curves, parts, type Technology, users } from "@/db/schema";
+import { type PartSortKey, partSortKeys } from "@/lib/library/part-sort";
 import { isUuid } from "@/lib/uuid";
 
-export const partSortKeys = [
-  "partNumber",
-  "maker",
-  "technology",
-  "package",
-  "vdsMax",
-  "rdsOn",
-  "status",
-  "updatedAt",
-] as const;
-export type PartSortKey = (typeof partSortKeys)[number];
+export { type PartSortKey, partSortKeys };
 
 export interface PartListQuery {
   workspaceId: string;
