@@ -1,27 +1,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { ACROSS_WIDTHS } from "@/test/curve-data";
 import { allowedCurrent } from "./allowed-current";
 import { prepareCurveSet } from "./curve-set";
 import type { Curve } from "./types";
 
 /** METHODS.md §10 "across widths": 40 A at 1 ms and 16 A at 10 ms at the same voltage (flat over 1–100 V). */
 const acrossWidths = prepareCurveSet({
-  curves: [
-    {
-      duration: 1e-3,
-      points: [
-        [1, 40],
-        [100, 40],
-      ],
-    },
-    {
-      duration: 1e-2,
-      points: [
-        [1, 16],
-        [100, 16],
-      ],
-    },
-  ],
+  curves: ACROSS_WIDTHS,
 });
 
 const withDc = prepareCurveSet({

@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { ACROSS_WIDTHS } from "@/test/curve-data";
 import { checkPulse, prepareCheck, runCheck } from "./check";
 import type { FosterTerm } from "./foster";
 import type {
@@ -30,22 +31,7 @@ const utilisationPart: PartLimits = {
   tjMax: 175,
   soa: {
     refCaseTemp: 25,
-    curves: [
-      {
-        duration: 1e-3,
-        points: [
-          [1, 40],
-          [100, 40],
-        ],
-      },
-      {
-        duration: 1e-2,
-        points: [
-          [1, 16],
-          [100, 16],
-        ],
-      },
-    ],
+    curves: ACROSS_WIDTHS,
   },
 };
 
