@@ -10,7 +10,7 @@ import { chartDomains, chartLayout, textWidth } from "@/components/soa-chart/cha
 import { limitReadout, type Readout, Sym } from "@/components/soa-chart/chart-readout";
 import { plotAxes } from "@/components/soa-chart/frame-model";
 import { formatQuantity } from "@/lib/soa/units";
-import { verdictWords } from "./format";
+import { verdictWords } from "@/lib/vocabulary";
 import type { OverlayLine, OverlayMarker } from "./overlay-model";
 
 /** The legend: the heading, each candidate's line, and the worst verdicts among the chosen pulses. */

@@ -1,8 +1,8 @@
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
+import { q } from "@/lib/format";
 import type { ProjectCheck, ProjectDetail } from "./api";
-import { q } from "./format";
 
 function Figure({ children }: { children: string }) {
   return <span className="num font-mono">{children}</span>;

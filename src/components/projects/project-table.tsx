@@ -4,7 +4,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { q } from "./format";
+import { q } from "@/lib/format";
 
 export interface ProjectRow {
   id: string;
