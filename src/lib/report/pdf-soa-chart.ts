@@ -1,4 +1,4 @@
-import { engineeringTick, logTicks } from "@/lib/chart/log-axis";
+import { decadeDomain, engineeringTick, logTicks } from "@/lib/chart/log-axis";
 import { factor } from "@/lib/format";
 import { computeLimits } from "@/lib/library/limits";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
@@ -21,12 +21,14 @@ export function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): 
     ...limits.curves.flatMap((c) => c.points),
     ...snapshot.pulses.flatMap((p) => (p.v && p.i ? [[p.v, p.i] as [number, number]] : [])),
   ];
-  const decade = (v: number, up: boolean) =>
-    10 ** (up ? Math.ceil(Math.log10(v)) : Math.floor(Math.log10(v)));
-  const vMin = decade(Math.min(...all.map((p) => p[0])), false);
-  const vMax = decade(Math.max(...all.map((p) => p[0])), true);
-  const iMin = decade(Math.min(...all.map((p) => p[1])), false);
-  const iMax = decade(Math.max(...all.map((p) => p[1])), true);
+  const [vMin, vMax] = decadeDomain(
+    all.map((p) => p[0]),
+    [1, 100],
+  );
+  const [iMin, iMax] = decadeDomain(
+    all.map((p) => p[1]),
+    [0.1, 1000],
+  );
   const vDecades = Math.log10(vMax / vMin);
   const iDecades = Math.log10(iMax / iMin);
   const unit = size / Math.max(vDecades, iDecades);
