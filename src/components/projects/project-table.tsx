@@ -5,7 +5,7 @@ import Link from "next/link";
 import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { useUrlState } from "@/components/use-url-state";
-import { q } from "@/lib/format";
+import { percent, q } from "@/lib/format";
 
 export interface ProjectRow {
   id: string;
@@ -46,7 +46,7 @@ const columns: ColumnDef<ProjectRow>[] = [
   {
     id: "utilisationLimit",
     header: "Utilisation limit",
-    cell: ({ row }) => <>{Math.round(row.original.utilisationLimit * 100)}&thinsp;%</>,
+    cell: ({ row }) => percent(row.original.utilisationLimit),
     meta: { numeric: true, headerClassName: "w-28" },
   },
   {
