@@ -36,6 +36,18 @@ test("a failing capture shows the sample that decided it", async ({ page }) => {
     await saveScreenshot(page, "capture-binding-sample");
   });
 
+  await test.step("the traces' text alternative is a data table of the window shown", async () => {
+    const view = page.getByTestId("capture-view");
+    await view.getByText(/Show the traces as a table/).click();
+    const table = view.getByRole("table", { name: "Capture traces" });
+    await expect(table.getByRole("columnheader").first()).toHaveText("t");
+    await expect(table.getByRole("columnheader", { name: /V_DS/ })).toBeVisible();
+    expect(await table.getByRole("row").count()).toBeGreaterThan(10);
+    await expect(table.getByRole("row").nth(1)).toContainText(/\d\u2009(µ|m)?s/);
+    await table.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, "capture-trace-table");
+  });
+
   await test.step("the result's details name the binding sample and the view that decided", async () => {
     await projects.openTab("Results");
     const row = projects.results.getByRole("row").filter({

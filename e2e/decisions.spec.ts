@@ -135,6 +135,9 @@ test.describe
       const text = execFileSync("pdftotext", ["-layout", pdf, "-"], { encoding: "utf8" });
       expect(text).toContain(projectName);
       expect(text).toContain("BFL-100L55");
+      // Figures as lib/format.ts writes them on screen, with plain spaces for the PDF's font.
+      expect(text).toMatch(/utilisation \d+(\.\d+)? %, allowed/);
+      expect(text).toMatch(/derating ×\d(\.\d{1,2})?\b/);
       const firstPage = text.split("\f")[0];
       expect(firstPage).toMatch(/Caution/);
       expect(firstPage).toMatch(/unverified\s+library\s+draft/);

@@ -108,7 +108,7 @@ test("an engineer adds a part, drops its SOA curves and reads them derated and b
     await part.setCaseTemperature(100);
     await expect(part.series("derated")).toHaveCount(5);
     await expect(part.series("derated").first()).toHaveAttribute("stroke-dasharray", /\d/);
-    await expect(page.getByText(/Dashed: the curves derated ×0\.50 for 100/)).toBeVisible();
+    await expect(page.getByText(/Dashed: the curves derated ×0\.5 for 100/)).toBeVisible();
   });
 
   await test.step("a typed pulse width draws its interpolated line, with the caveat in words", async () => {

@@ -115,3 +115,29 @@ test("an engineer builds an inrush fault case; a technician logs bench pulses an
     await saveScreenshot(page, "project-results");
   });
 });
+
+test("the projects list switches to the archived projects and back, in the URL", async ({ page }) => {
+  const projects = new ProjectsPage(page);
+  const name = `Archived board ${stamp}`;
+  await signIn(page, engineer);
+  const url = await projects.create(name, "25");
+  await page.goto(`${url}/settings`);
+  await page.getByRole("button", { name: "Archive project" }).click();
+  await page.getByRole("button", { name: "Archive", exact: true }).click();
+  await expect(page.getByRole("button", { name: "Restore project" })).toBeVisible();
+
+  await page.goto("/projects");
+  await expect(page.getByRole("table", { name: "Projects" })).not.toContainText(name);
+  await page.getByRole("button", { name: /^Show \d+ archived projects?$/ }).click();
+  await expect(page).toHaveURL(/\/projects\?archived=true$/);
+  await expect(page.getByRole("table", { name: "Archived projects" })).toContainText(name);
+  await page.reload();
+  await expect(page.getByRole("table", { name: "Archived projects" })).toContainText(name);
+  await page.goBack();
+  await expect(page).toHaveURL(/\/projects$/);
+  await expect(page.getByRole("table", { name: "Projects" })).not.toContainText(name);
+  await page.goForward();
+  await page.getByRole("button", { name: "Back to the active projects" }).click();
+  await expect(page).toHaveURL(/\/projects$/);
+  await expect(page.getByRole("table", { name: "Projects" })).toBeVisible();
+});

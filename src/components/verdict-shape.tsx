@@ -1,4 +1,4 @@
-import { verdictWords } from "./format";
+import { verdictWords } from "@/lib/vocabulary";
 
 export type Verdict = "pass" | "marginal" | "fail" | "no-data";
 

@@ -1,4 +1,4 @@
-import { percent, q } from "./format";
+import { percent, q } from "@/lib/format";
 import type { AuditEvent } from "./types";
 
 // A project's audit events in plain words: what was done, with the names the details kept.

@@ -1,5 +1,7 @@
+import { factor, percent, q } from "@/lib/format";
 import { explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
-import { percent, q, readWidth, shapeWords, sourceWords } from "./format";
+import { shapeWords, sourceWords } from "@/lib/vocabulary";
+import { readWidth } from "./format";
 import type { CellRef } from "./matrix-table";
 import type { MatrixData } from "./types";
 import { VerdictMark } from "./verdict-mark";
@@ -58,11 +60,11 @@ export function CellDetails({
     ["Allowed current", q(result?.allowedCurrent, "A")],
     ["Utilisation", percent(result?.utilisation)],
     ["Peak junction temperature", result?.tjPeak != null ? q(result.tjPeak, "°C") : "— (no thermal model)"],
-    ["Derating factor", result ? `×${result.derating.toFixed(3)}` : "—"],
+    ["Derating factor", result ? `×${factor(result.derating)}` : "—"],
     [
       "Stability factor",
       result?.stability != null
-        ? `S = ${result.stability.toFixed(3)}, ${result.stabilityVerdict === "fail" ? "runs away (S ≥ 1)" : (result.stabilityVerdict ?? "")}`
+        ? `S = ${factor(result.stability)}, ${result.stabilityVerdict === "fail" ? "runs away (S ≥ 1)" : (result.stabilityVerdict ?? "")}`
         : "— (no transfer characteristics or thermal model)",
     ],
   ];

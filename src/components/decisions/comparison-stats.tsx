@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { StatBlocks } from "@/components/stat-blocks";
+import { money, percent, plural } from "@/lib/format";
 import type { MatrixRow } from "@/lib/projects/matrix";
-import { money, percent, plural } from "./format";
 import { bestPassing, pulseCounts } from "./matrix-model";
 import { policyStat } from "./policy-stat";
 import { useDecisions } from "./queries";

@@ -10,9 +10,10 @@ import { sendJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { TextAreaField } from "@/components/library/fields";
+import { percent } from "@/lib/format";
 import type { MatrixRow } from "@/lib/projects/matrix";
+import { verdictWords } from "@/lib/vocabulary";
 import { CandidateLibraryStatus } from "./candidate-status";
-import { percent, verdictWords } from "./format";
 import { bestPassing } from "./matrix-model";
 import { type CheckedCandidate, decisionKeys } from "./types";
 

@@ -1,5 +1,5 @@
+import { percent, q } from "@/lib/format";
 import { DriftResults } from "./drift-results";
-import { percent, q } from "./format";
 import type { DecisionSnapshot, Drift } from "./types";
 
 type Policy = DecisionSnapshot["policy"];

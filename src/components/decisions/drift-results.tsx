@@ -2,8 +2,8 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
+import { percent } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
-import { percent } from "./format";
 import type { Drift } from "./types";
 import { VerdictMark } from "./verdict-mark";
 

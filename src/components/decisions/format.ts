@@ -1,20 +1,11 @@
+// A decision's pulses and results in one line each, for the matrix's hover texts and the overlay's labels; the
+// figures and words come from lib/format.ts and lib/vocabulary.ts.
+
+import { factor, percent, q } from "@/lib/format";
 import { triangleEquivalent } from "@/lib/soa/equivalent-rectangle";
 import type { PulseResult } from "@/lib/soa/types";
-import { percent, q, sourceWords, verdictWords } from "../format";
+import { sourceWords, verdictWords } from "@/lib/vocabulary";
 import type { CheckedPulse } from "./types";
-
-export { percent, q, shapeWords, sourceWords, verdictWords } from "../format";
-
-/** "1 pulse", "3 pulses". */
-export function plural(count: number, noun: string): string {
-  return `${count} ${noun}${count === 1 ? "" : "s"}`;
-}
-
-/** A unit cost with its currency ("2.85 EUR"), or a dash. */
-export function money(value: number | null, currency: string | null): string {
-  if (value === null) return "—";
-  return `${value.toFixed(2)}${currency ? `\u2009${currency}` : ""}`;
-}
 
 /**
  * The width the curves are read at for a pulse (METHODS.md §6): a triangle's equal-energy rectangle lasts half
@@ -41,9 +32,9 @@ export function resultLine(result: PulseResult | undefined): string {
     `allowed ${q(result.allowedCurrent, "A")}`,
     result.tjPeak !== null ? `Tj peak ${q(result.tjPeak, "°C")}` : null,
     result.stability != null
-      ? `stability S ${result.stability.toFixed(2)} (${verdictWords[result.stabilityVerdict ?? "no-data"]})`
+      ? `stability S ${factor(result.stability)} (${verdictWords[result.stabilityVerdict ?? "no-data"]})`
       : null,
-    `derating ×${result.derating.toFixed(2)}`,
+    `derating ×${factor(result.derating)}`,
     result.flags.length ? `flags: ${result.flags.join(", ")}` : null,
   ];
   return parts.filter(Boolean).join("; ");

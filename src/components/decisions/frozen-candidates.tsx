@@ -3,7 +3,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
-import { money, q } from "./format";
+import { money, q } from "@/lib/format";
 import type { DecisionSnapshot } from "./types";
 
 type Frozen = DecisionSnapshot["candidates"][number];

@@ -3,8 +3,10 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { type MouseEvent, useCallback, useEffect, useMemo, useRef } from "react";
 import { DataTable } from "@/components/data-table";
+import { factor, money, percent } from "@/lib/format";
 import type { MatrixRow } from "@/lib/projects/matrix";
-import { money, percent, pulseLine, resultLine, verdictWords } from "./format";
+import { verdictWords } from "@/lib/vocabulary";
+import { pulseLine, resultLine } from "./format";
 import type { CheckedPulse, MatrixData } from "./types";
 import { VerdictMark, verdictClass } from "./verdict-mark";
 
@@ -101,7 +103,7 @@ function matrixColumns(
                   className="col-span-2 -mt-1 pb-1 text-[10px] text-ink-muted"
                   data-testid="matrix-stability"
                 >
-                  S {result.stability?.toFixed(2)}
+                  S {factor(result.stability)}
                   {result.stabilityVerdict === "fail" ? " unstable" : ""}
                 </span>
               ) : null}

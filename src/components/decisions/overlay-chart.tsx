@@ -9,8 +9,9 @@ import type { LegendRow } from "@/components/soa-chart/chart-legend";
 import { chartDomains, chartLayout, textWidth } from "@/components/soa-chart/chart-model";
 import { limitReadout, type Readout, Sym } from "@/components/soa-chart/chart-readout";
 import { plotAxes } from "@/components/soa-chart/frame-model";
+import { percent } from "@/lib/format";
 import { formatQuantity } from "@/lib/soa/units";
-import { verdictWords } from "./format";
+import { verdictWords } from "@/lib/vocabulary";
 import type { OverlayLine, OverlayMarker } from "./overlay-model";
 
 /** The legend: the heading, each candidate's line, and the worst verdicts among the chosen pulses. */
@@ -124,7 +125,7 @@ function OverlayPlot({
                 { label: Sym.id, value: formatQuantity(m.i, "A") },
                 ...m.byCandidate.map((b) => ({
                   label: b.partNumber,
-                  value: `${verdictWords[b.verdict]}${b.utilisation !== null ? ` ${Math.round(b.utilisation * 100)}\u2009%` : ""}`,
+                  value: `${verdictWords[b.verdict]}${b.utilisation !== null ? ` ${percent(b.utilisation)}` : ""}`,
                 })),
               ],
             })}

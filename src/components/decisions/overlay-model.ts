@@ -1,8 +1,9 @@
 import { mix } from "@/components/soa-chart/chart-colours";
 import type { LimitLine } from "@/components/soa-chart/chart-model";
+import { q } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
 import { worseVerdict } from "@/lib/soa/verdict";
-import { q, readWidth } from "./format";
+import { readWidth } from "./format";
 import type { CheckedCandidate, CheckedPulse, ProjectCheck } from "./types";
 
 // What the overlay chart draws: for each chosen pulse's read width and case temperature, one derated limit line

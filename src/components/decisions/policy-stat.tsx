@@ -1,4 +1,4 @@
-import { percent, q } from "./format";
+import { percent, q } from "@/lib/format";
 
 /**
  * The stat block of a check's policy: the case temperature, with the utilisation limit, the junction guard and

@@ -1,5 +1,5 @@
 import type { Verdict } from "@/lib/soa/types";
-import { verdictWords } from "./format";
+import { verdictWords } from "@/lib/vocabulary";
 
 // A verdict in words with its shape drawn by CSS alone, as a `::before` of the word's own element (no SVG, one
 // element per verdict), for tables of thousands of cells. Same shapes as the chart's markers (DESIGN.md): pass

@@ -3,8 +3,7 @@
 import type { ReactNode } from "react";
 import { type FileRejection, useDropzone } from "react-dropzone";
 import { Button } from "@/components/form";
-
-export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
+import { MAX_CSV_BYTES, overLimit } from "@/lib/csv/limits";
 
 const accept = {
   "text/csv": [".csv"],
@@ -20,7 +19,7 @@ function refusal(rejections: FileRejection[]): string {
   if (rejections.length > 1 || first.errors.some((e) => e.code === "too-many-files"))
     return "Drop one file at a time.";
   if (first.errors.some((e) => e.code === "file-too-large")) {
-    return `${first.file.name} is ${(first.file.size / 1e6).toFixed(1)} MB; the limit is 5 MB.`;
+    return `${first.file.name} is ${overLimit(first.file.size)}.`;
   }
   if (first.errors.some((e) => e.code === "file-invalid-type")) {
     return `${first.file.name} is not a CSV text file (.csv, .tsv or .txt).`;
@@ -46,7 +45,7 @@ export function CsvDropzone({
 }) {
   const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
     accept,
-    maxSize: MAX_UPLOAD_BYTES,
+    maxSize: MAX_CSV_BYTES,
     multiple: false,
     disabled: busy,
     noClick: true,

@@ -8,8 +8,8 @@ import { messageOf, sendJson } from "@/components/api-client";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
+import { fileSize } from "@/lib/format";
 import { CURVE_FORMS } from "@/lib/vocabulary";
-import { sizeText } from "./format";
 
 export interface CurveSetRow {
   id: string;
@@ -42,7 +42,7 @@ function revisionColumns(
       cell: ({ row }) => (row.original.shape === "paired" ? CURVE_FORMS.paired : CURVE_FORMS.long),
       meta: { className: "text-ink-muted", headerClassName: "" },
     },
-    { id: "size", header: "Size", cell: ({ row }) => sizeText(row.original.size), meta: { numeric: true } },
+    { id: "size", header: "Size", cell: ({ row }) => fileSize(row.original.size), meta: { numeric: true } },
     {
       id: "uploadedBy",
       header: "Uploaded by",

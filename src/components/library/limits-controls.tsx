@@ -1,3 +1,4 @@
+import { factor } from "@/lib/format";
 import { FLAG_EXPLANATIONS } from "@/lib/soa/explain";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
 import { formatQuantity } from "@/lib/soa/units";
@@ -60,7 +61,7 @@ export function CaseTempControl({
         {data && data.derating === 0
           ? `At ${formatQuantity(data.caseTemp, "°C")} case, at or above Tj,max, the curves allow no current at all.`
           : data && data.derating < 1
-            ? `Dashed: the curves derated ×${data.derating.toFixed(2)} for ${formatQuantity(data.caseTemp, "°C")} case.`
+            ? `Dashed: the curves derated ×${factor(data.derating)} for ${formatQuantity(data.caseTemp, "°C")} case.`
             : `The curves hold at ${formatQuantity(refCaseTemp, "°C")} case; a higher case temperature draws them derated, dashed.`}
       </p>
     </div>

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { DateText } from "@/components/date-text";
-import { quantityText } from "./format";
+import { q } from "@/lib/format";
 import { PartStatus } from "./part-status";
 import { Sym } from "./symbols";
 
@@ -31,16 +31,16 @@ function Stat({ label, value, note }: { label: ReactNode; value: ReactNode; note
 export function PartStats({ part }: { part: PartFigures }) {
   return (
     <dl className="grid grid-cols-[repeat(auto-fill,minmax(9.5rem,1fr))] gap-3" aria-label="Key figures">
-      <Stat label={<Sym main="V" sub="DSS" />} value={quantityText(part.vdsMax, "V")} />
-      <Stat label={<Sym main="I" sub="DM" />} value={quantityText(part.idPulseMax, "A")} note="pulsed" />
-      <Stat label={<Sym main="R" sub="DS(on)" />} value={quantityText(part.rdsOn, "Ω")} note="at 25 °C" />
-      <Stat label={<Sym main="T" sub="j,max" />} value={quantityText(part.tjMax, "°C")} />
-      <Stat label={<Sym main="R" sub="th(j-c)" />} value={quantityText(part.rthJc, "K/W")} />
+      <Stat label={<Sym main="V" sub="DSS" />} value={q(part.vdsMax, "V")} />
+      <Stat label={<Sym main="I" sub="DM" />} value={q(part.idPulseMax, "A")} note="pulsed" />
+      <Stat label={<Sym main="R" sub="DS(on)" />} value={q(part.rdsOn, "Ω")} note="at 25 °C" />
+      <Stat label={<Sym main="T" sub="j,max" />} value={q(part.tjMax, "°C")} />
+      <Stat label={<Sym main="R" sub="th(j-c)" />} value={q(part.rthJc, "K/W")} />
       {part.avalancheEnergy ? (
         <Stat
           label={<Sym main="E" sub="AS" />}
-          value={quantityText(part.avalancheEnergy, "J")}
-          note={part.avalancheBreakdown ? `V_BR ${quantityText(part.avalancheBreakdown, "V")}` : "from 25 °C"}
+          value={q(part.avalancheEnergy, "J")}
+          note={part.avalancheBreakdown ? `V_BR ${q(part.avalancheBreakdown, "V")}` : "from 25 °C"}
         />
       ) : null}
       <div className="rounded-md border border-line bg-panel px-4 py-3" data-testid="part-status">

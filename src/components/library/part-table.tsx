@@ -8,9 +8,9 @@ import { messageOf } from "@/components/api-client";
 import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
 import { useUrlState } from "@/components/use-url-state";
+import { inUnit, money } from "@/lib/format";
 import { technologyLabels } from "@/lib/library/technologies";
 import { callJson } from "./api";
-import { costText, inUnit } from "./format";
 import {
   apiQuery,
   hasFilters,
@@ -100,7 +100,7 @@ const columns: ColumnDef<PartRow>[] = [
   {
     id: "unitCost",
     header: "Unit cost",
-    cell: ({ row }) => costText(row.original.unitCost, row.original.currency),
+    cell: ({ row }) => money(row.original.unitCost, row.original.currency),
     meta: { numeric: true, className: dense },
     enableSorting: false,
   },

@@ -1,8 +1,8 @@
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
+import { percent, q } from "@/lib/format";
 import type { ProjectCheck, ProjectDetail } from "./api";
-import { q } from "./format";
 
 function Figure({ children }: { children: string }) {
   return <span className="num font-mono">{children}</span>;
@@ -31,7 +31,7 @@ export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?
         },
         {
           label: "Utilisation limit",
-          value: <Figure>{`${Number((project.utilisationLimit * 100).toPrecision(3))}\u2009%`}</Figure>,
+          value: <Figure>{percent(project.utilisationLimit)}</Figure>,
           note: "of the allowed current",
         },
         {

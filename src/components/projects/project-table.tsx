@@ -4,7 +4,8 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { q } from "./format";
+import { useUrlState } from "@/components/use-url-state";
+import { percent, q } from "@/lib/format";
 
 export interface ProjectRow {
   id: string;
@@ -15,6 +16,7 @@ export interface ProjectRow {
   candidates: number;
   owner: string | null;
   updatedAt: Date | string;
+  archived: boolean;
 }
 
 const columns: ColumnDef<ProjectRow>[] = [
@@ -44,7 +46,7 @@ const columns: ColumnDef<ProjectRow>[] = [
   {
     id: "utilisationLimit",
     header: "Utilisation limit",
-    cell: ({ row }) => <>{Math.round(row.original.utilisationLimit * 100)}&thinsp;%</>,
+    cell: ({ row }) => percent(row.original.utilisationLimit),
     meta: { numeric: true, headerClassName: "w-28" },
   },
   {
@@ -66,6 +68,38 @@ const columns: ColumnDef<ProjectRow>[] = [
     meta: { numeric: true, headerClassName: "w-28" },
   },
 ];
+
+/**
+ * The projects, active or archived as the URL's `archived=true` says (kept by useUrlState, as the library's
+ * filters are; a new history entry, so Back returns to the other list), with the switch between the two.
+ */
+export function ProjectList({ rows, canWrite }: { rows: ProjectRow[]; canWrite: boolean }) {
+  const [params, setParams] = useUrlState();
+  const showArchived = params.get("archived") === "true";
+  const archived = rows.filter((r) => r.archived).length;
+  return (
+    <>
+      <ProjectTable
+        rows={rows.filter((r) => r.archived === showArchived)}
+        canWrite={canWrite}
+        archived={showArchived}
+      />
+      {archived > 0 || showArchived ? (
+        <p className="text-sm text-ink-muted">
+          <button
+            type="button"
+            className="text-accent underline underline-offset-2"
+            onClick={() => setParams({ archived: showArchived ? null : "true" }, { push: true })}
+          >
+            {showArchived
+              ? "Back to the active projects"
+              : `Show ${archived} archived ${archived === 1 ? "project" : "projects"}`}
+          </button>
+        </p>
+      ) : null}
+    </>
+  );
+}
 
 /** The projects list: each name opens the project; an empty list says what to do next. */
 export function ProjectTable({

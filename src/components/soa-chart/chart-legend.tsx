@@ -1,10 +1,11 @@
 import { VerdictGlyph } from "@/components/verdict-shape";
+import { factor } from "@/lib/format";
+import type { Verdict } from "@/lib/soa/types";
 import { formatQuantity } from "@/lib/soa/units";
+import { verdictWords } from "@/lib/vocabulary";
 import type { ChartColours } from "./chart-colours";
 import { type ChartLine, DERATED_DASH, LEGEND_ROW } from "./chart-model";
 import type { SoaChartProps } from "./types";
-
-const verdictWords = { pass: "pass", marginal: "marginal", fail: "fail", "no-data": "no data" } as const;
 
 export interface LegendRow {
   key: string;
@@ -12,7 +13,7 @@ export interface LegendRow {
   swatch:
     | { kind: "line"; stroke: string; dash?: string; width: number }
     | { kind: "finding" }
-    | { kind: "verdict"; verdict: keyof typeof verdictWords }
+    | { kind: "verdict"; verdict: Verdict }
     | { kind: "heading" };
 }
 
@@ -30,7 +31,7 @@ export function legendRows(props: SoaChartProps, lines: ChartLine[], colours: Ch
   if (lines.some((l) => l.kind === "derated") && props.derated) {
     rows.push({
       key: "derated",
-      text: `Dashed: at T_C = ${formatQuantity(props.derated.caseTemp, "°C")} (×${props.derated.factor.toFixed(2)})`,
+      text: `Dashed: at T_C = ${formatQuantity(props.derated.caseTemp, "°C")} (×${factor(props.derated.factor)})`,
       swatch: { kind: "line", stroke: colours.inkMuted, dash: DERATED_DASH, width: 1.5 },
     });
   }

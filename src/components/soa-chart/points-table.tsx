@@ -2,10 +2,9 @@ import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
 import { DataTable } from "@/components/data-table";
 import { formatQuantity } from "@/lib/soa/units";
+import { verdictWords } from "@/lib/vocabulary";
 import { durationName, sortByDuration } from "./chart-model";
 import type { ChartCurve, SoaChartProps } from "./types";
-
-const verdictWords = { pass: "pass", marginal: "marginal", fail: "fail", "no-data": "no data" } as const;
 
 interface PointRow {
   id: string;

@@ -3,6 +3,7 @@
 import { type PointerEvent, useMemo, useState } from "react";
 import { interpolateCurve } from "@/lib/soa/interpolate-curve";
 import { formatQuantity } from "@/lib/soa/units";
+import { verdictWords } from "@/lib/vocabulary";
 import { idTitle, vdsTitle } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
 import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "./chart-frame";
@@ -111,7 +112,7 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
               colours={colours}
               size={10}
               readoutOf={(pulse, off) => ({
-                title: `${pulse.label} (${pulse.verdict === "no-data" ? "no data" : pulse.verdict})${off ? ", off scale" : ""}`,
+                title: `${pulse.label} (${verdictWords[pulse.verdict]})${off ? ", off scale" : ""}`,
                 rows: [
                   { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
                   { label: Sym.id, value: formatQuantity(pulse.i, "A") },

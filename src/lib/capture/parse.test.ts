@@ -207,6 +207,10 @@ describe("cells and lines", () => {
     expect(captureLines("a\r\nb\rc\nd", false)).toEqual(["a", "b", "c"]);
     expect(captureLines("a\n", false)).toEqual(["a"]);
   });
+
+  it("captureLines drops a byte-order mark, as every CSV reader does", () => {
+    expect(captureLines("\uFEFFt,V\r\n1,2\r\n", true)).toEqual(["t,V", "1,2"]);
+  });
 });
 
 describe("captureMappingSchema", () => {

@@ -13,7 +13,7 @@
 //   included, the way an editor numbers them; rows in messages are 1-based.
 import { z } from "zod";
 import { splitHeader, unitScale } from "@/lib/csv/header";
-import { type Delimiter, guessDelimiter, splitLine } from "@/lib/csv/text";
+import { type Delimiter, guessDelimiter, normaliseText, splitLine } from "@/lib/csv/text";
 
 /** Most samples a capture may hold: 2 M (48 MB as Float64 t, v, i). */
 export const MAX_CAPTURE_SAMPLES = 2_000_000;
@@ -97,7 +97,7 @@ export function isNumericCell(cell: string, delimiter: Delimiter): boolean {
 
 /** The lines of a text (any line ends, byte-order mark dropped); an unfinished last line is dropped unless complete. */
 export function captureLines(text: string, complete: boolean): string[] {
-  const lines = text.replace(/^\uFEFF/, "").split(/\r\n|\r|\n/);
+  const lines = normaliseText(text).split("\n");
   if (lines.at(-1) === "" || !complete) lines.pop();
   return lines;
 }

@@ -4,8 +4,9 @@ import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import { readExample } from "@/test/examples";
-import { type CurveSetCsvResult, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } from "./curve-set";
+import { type CurveSetCsvResult, digitisedCurveSet, parseCurveSetCsv } from "./curve-set";
 import { curveCsvHelp } from "./curve-set-help";
+import { MAX_CSV_BYTES } from "./limits";
 
 const exampleLongCsv = readExample("soa-curves-table.csv");
 const examplePairedCsv = readExample("soa-curves-paired.csv");
@@ -448,16 +449,19 @@ describe("parseCurveSetCsv rejects, naming row, column and reason", () => {
 
 describe("parseCurveSetCsv limits", () => {
   test("rejects a file above 5 MB, counted in bytes of UTF-8", () => {
-    // derived: "µ" is 2 bytes in UTF-8, so 2.6 Mi of them make 5.2 MB while the string has fewer than 5 Mi chars
-    const text = `width,V,I\n${"µ".repeat(2.6 * 1024 * 1024)}`;
+    // derived: "µ" is 2 bytes in UTF-8, so 2 600 000 of them and the 10-byte header make 5 200 010 bytes (5.2 MB,
+    // SI) while the string has 2 600 010 characters, under the 5 000 000-byte limit
+    const text = `width,V,I\n${"µ".repeat(2_600_000)}`;
     expect(text.length).toBeLessThan(MAX_CSV_BYTES);
-    expect(errorsOf(text)).toEqual(["the file is 5.2 MB; the limit is 5.0 MB"]);
+    expect(errorsOf(text)).toEqual(["the file is 5.2\u2009MB; the limit is 5\u2009MB"]);
   });
 
   test("accepts a file just at the limit", () => {
     const body = "width,V,I\n1ms,1,10\n1ms,2,5\n";
     expect(parseCurveSetCsv(body, { maxBytes: body.length }).ok).toBe(true);
-    expect(errorsOf(body, body.length - 1)[0]).toMatch(/^the file is 0\.0 MB; the limit is 0\.0 MB$/);
+    // derived: the body is 10 + 9 + 8 = 27 bytes of ASCII
+    expect(body.length).toBe(27);
+    expect(errorsOf(body, body.length - 1)[0]).toBe("the file is 27\u2009B; the limit is 26\u2009B");
   });
 
   test("rejects NUL bytes and binary-looking content", () => {

@@ -15,12 +15,12 @@ import { isLongHeader, readLongForm } from "./curve-set-long";
 import { isPairedHeader, readPairedForm } from "./curve-set-paired";
 import { type RawCurve, sameWidth } from "./curve-set-raw";
 import { type CsvIssue, createIssueList, type IssueList } from "./issues";
-import { MAX_CSV_BYTES, readTable } from "./text";
+import { MAX_CSV_BYTES } from "./limits";
+import { readTable } from "./text";
 
 export { curvesToLongCsv, formatWidth } from "./curve-set-export";
 export { curveCsvHelp } from "./curve-set-help";
 export type { CsvIssue } from "./issues";
-export { MAX_CSV_BYTES } from "./text";
 
 export type CurveSetShape = "long" | "paired";
 

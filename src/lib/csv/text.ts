@@ -13,11 +13,9 @@
 //   in a spreadsheet, blank rows included.
 import Papa from "papaparse";
 import { createIssueList, type IssueList } from "./issues";
+import { MAX_CSV_BYTES, overLimit } from "./limits";
 
 export type Delimiter = "," | ";" | "\t";
-
-/** Largest accepted file: 5 MB (5 × 1024 × 1024 bytes of UTF-8). */
-export const MAX_CSV_BYTES = 5 * 1024 * 1024;
 
 const BINARY_SCAN = 65_536;
 const DETECT_LINES = 50;
@@ -40,10 +38,6 @@ export function utf8ByteLength(text: string): number {
   return bytes;
 }
 
-function megabytes(bytes: number): string {
-  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
-}
-
 function isSuspect(code: number): boolean {
   const control = code < 0x20 && code !== 0x09 && code !== 0x0a && code !== 0x0d && code !== 0x0c;
   return control || code === 0x7f || code === 0xfffd;
@@ -52,7 +46,7 @@ function isSuspect(code: number): boolean {
 /** Why the text cannot be a CSV upload (too large, binary), or null when it can. */
 export function textProblem(text: string, maxBytes = MAX_CSV_BYTES): string | null {
   const bytes = utf8ByteLength(text);
-  if (bytes > maxBytes) return `the file is ${megabytes(bytes)}; the limit is ${megabytes(maxBytes)}`;
+  if (bytes > maxBytes) return `the file is ${overLimit(bytes, maxBytes)}`;
   if (text.includes("\0")) {
     return "the file contains NUL bytes, so it is not text (a workbook or an image?); save it as CSV and upload that";
   }

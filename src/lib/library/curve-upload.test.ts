@@ -195,6 +195,7 @@ describe("curve-set upload", () => {
       body: { fileName: "big.csv", size: 6_000_000, purpose: "curve-set" },
     });
     expect(res.status).toBe(413);
+    expect((await res.json()).error.message).toBe("The file is 6\u2009MB; the limit is 5\u2009MB.");
   });
 });
 

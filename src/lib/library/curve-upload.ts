@@ -4,7 +4,8 @@ import { and, eq, lt, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
-import { type CsvIssue, digitisedCurveSet, MAX_CSV_BYTES, parseCurveSetCsv } from "@/lib/csv/curve-set";
+import { type CsvIssue, digitisedCurveSet, parseCurveSetCsv } from "@/lib/csv/curve-set";
+import { MAX_CSV_BYTES, overLimit } from "@/lib/csv/limits";
 import { AppError } from "@/lib/errors";
 import { logError } from "@/lib/log";
 import { findCurveSetIssues } from "@/lib/soa/findings";
@@ -38,8 +39,7 @@ export async function presignUpload(
 ): Promise<UploadTicket> {
   const maxBytes = input.maxBytes ?? MAX_CSV_BYTES;
   if (input.size > maxBytes) {
-    const mb = (n: number) => `${(n / 1e6).toFixed(n < 1e7 ? 1 : 0)} MB`;
-    throw new AppError("too_large:file", `The file is ${mb(input.size)}; the limit is ${mb(maxBytes)}.`);
+    throw new AppError("too_large:file", `The file is ${overLimit(input.size, maxBytes)}.`);
   }
   if (!/\.(csv|txt|tsv)$/i.test(input.fileName)) {
     throw new AppError("invalid:file-type", "Upload a CSV text file (.csv, .tsv or .txt).");
@@ -131,7 +131,7 @@ export async function readUploadedText(
   if (!head) throw new AppError("invalid:upload-missing", "The file did not reach storage. Upload it again.");
   if (head.size > MAX_CSV_BYTES) {
     await storage.remove(objectKey);
-    throw new AppError("too_large:file", "The file is larger than 5 MB.");
+    throw new AppError("too_large:file", `The file is ${overLimit(head.size)}.`);
   }
   const bytes = await storage.get(objectKey);
   if (!bytes)

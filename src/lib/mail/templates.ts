@@ -1,3 +1,5 @@
+import type { Verdict } from "@/lib/soa/types";
+import { verdictWords } from "@/lib/vocabulary";
 import type { Mail } from "./mailer";
 
 // Plain-text e-mails, short and specific: what happened, what to do, when the link stops working.
@@ -47,7 +49,7 @@ export interface FailingPulse {
   pulseName: string;
   source: string;
   pulseFigures: string;
-  verdicts: { candidate: string; verdict: string; detail: string }[];
+  verdicts: { candidate: string; verdict: Verdict; detail: string }[];
   link: string;
 }
 
@@ -80,7 +82,9 @@ export function failingEvidenceMail(input: {
       ...input.pulses.flatMap((p) => [
         "",
         `${p.source[0].toUpperCase()}${p.source.slice(1)}: ${p.pulseName} (${p.pulseFigures}) ${worstWord(p)}`,
-        ...p.verdicts.map((v) => `  ${v.candidate}: ${v.verdict}${v.detail ? ` (${v.detail})` : ""}`),
+        ...p.verdicts.map(
+          (v) => `  ${v.candidate}: ${verdictWords[v.verdict]}${v.detail ? ` (${v.detail})` : ""}`,
+        ),
         `  See it: ${p.link}`,
       ]),
       "",

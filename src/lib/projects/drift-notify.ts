@@ -7,15 +7,8 @@ import { env } from "@/lib/env";
 import { logError } from "@/lib/log";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { decisionDriftMail } from "@/lib/mail/templates";
-import type { Verdict } from "@/lib/soa/types";
+import { verdictWords } from "@/lib/vocabulary";
 import { computeDrift, type DecisionSnapshot, type DriftItem, snapshotNow } from "./decisions";
-
-const verdictWords: Record<Verdict, string> = {
-  pass: "pass",
-  marginal: "marginal",
-  fail: "fail",
-  "no-data": "no data",
-};
 
 /** The verdicts of the changed part that a decision rested on and that differ now. */
 export function changedVerdicts(

@@ -117,6 +117,11 @@ describe("failing evidence", () => {
     expect(mail.subject).toContain("5 new pulses fail");
     for (const label of ["F1", "F2", "F3", "F4", "F5"]) expect(mail.text).toContain(`: ${label} (`);
     expect(mail.text).not.toContain(": OK (");
+    // Words and figures as the screens write them (lib/vocabulary.ts, lib/format.ts): the source in the vocabulary's
+    // words, quantities with a thin space, utilisation as a percentage with a thin space, verdicts in words.
+    expect(mail.text).toContain("Measured pulse: F1 (24\u2009V, 30\u2009A, 1\u2009ms) fails");
+    expect(mail.text).toMatch(/: fail \(utilisation \d+\u2009%/);
+    expect(mail.text).not.toContain("no-data");
     const failingIds = body.saved.filter((_: string, k: number) => k !== 1);
     for (const id of failingIds) expect(mail.text).toContain(`/projects/${project.id}?pulse=${id}`);
     const queued = await testDb.db

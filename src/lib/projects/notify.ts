@@ -3,10 +3,10 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { memberships, notices, type Project, users } from "@/db/schema";
 import { env } from "@/lib/env";
+import { percent, q } from "@/lib/format";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { type FailingPulse, failingEvidenceMail } from "@/lib/mail/templates";
-import { formatTemperature } from "@/lib/soa/sanity";
-import { formatQuantity } from "@/lib/soa/units";
+import { sourceWords } from "@/lib/vocabulary";
 import type { checkProject } from "./check";
 
 type FullCheck = Awaited<ReturnType<typeof checkProject>>;
@@ -15,8 +15,6 @@ type Checked = Pick<FullCheck, "results" | "worstByPulse"> & {
   candidates: Pick<FullCheck["candidates"][number], "partId" | "maker" | "partNumber">[];
   pulses: Pick<FullCheck["pulses"][number], "id" | "source" | "name" | "v" | "i" | "duration">[];
 };
-
-const sourceWords = { measured: "measured pulse", capture: "capture", "fault-case": "fault case" } as const;
 
 /**
  * E-mails the project's owner about the new measured pulses or captures of one action (a paste, an upload, a bench
@@ -82,8 +80,8 @@ function describePulse(checked: Checked, pulse: Checked["pulses"][number], link:
     const r = checked.results[c.partId]?.[pulse.id];
     const detail = r
       ? [
-          r.utilisation !== null ? `utilisation ${(r.utilisation * 100).toFixed(0)} %` : null,
-          r.tjPeak !== null ? `Tj peak ${formatTemperature(r.tjPeak)}` : null,
+          r.utilisation !== null ? `utilisation ${percent(r.utilisation)}` : null,
+          r.tjPeak !== null ? `Tj peak ${q(r.tjPeak, "°C")}` : null,
         ]
           .filter(Boolean)
           .join(", ")
@@ -91,9 +89,9 @@ function describePulse(checked: Checked, pulse: Checked["pulses"][number], link:
     return { candidate: `${c.maker} ${c.partNumber}`, verdict: r?.verdict ?? "no-data", detail };
   });
   const pulseFigures = [
-    pulse.v !== null ? formatQuantity(pulse.v, "V") : null,
-    pulse.i !== null ? formatQuantity(pulse.i, "A") : null,
-    pulse.duration !== null ? formatQuantity(pulse.duration, "s") : null,
+    pulse.v !== null ? q(pulse.v, "V") : null,
+    pulse.i !== null ? q(pulse.i, "A") : null,
+    pulse.duration !== null ? q(pulse.duration, "s") : null,
   ]
     .filter(Boolean)
     .join(", ");

@@ -1,6 +1,6 @@
-import { formatTemperature } from "@/lib/soa/sanity";
+import { percent, plainSpaces, q as quantity } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
-import { formatQuantity } from "@/lib/soa/units";
+import type { Unit } from "@/lib/soa/units";
 
 // The decision report's page furniture (pdfkit): colours, quantities as the PDF sets them, sections, key-value
 // rows, tables that carry over pages, and the verdict markers drawn beside verdicts (shape, never colour alone).
@@ -15,21 +15,13 @@ export const verdictColour: Record<Verdict, string> = {
   fail: "#b3261e",
   "no-data": "#6b7278",
 };
-export const verdictWord: Record<Verdict, string> = {
-  pass: "pass",
-  marginal: "marginal",
-  fail: "fail",
-  "no-data": "no data",
-};
 
 export type Doc = PDFKit.PDFDocument;
 
-export const pct = (u: number | null) => (u === null ? "—" : `${(u * 100).toFixed(0)} %`);
-// The shipped font has no thin space (U+2009): the PDF sets a plain space between number and unit.
-export const fq = (v: number, unit: Parameters<typeof formatQuantity>[1]) =>
-  (unit === "°C" ? formatTemperature(v) : formatQuantity(v, unit)).replace(/\u2009/g, " ");
-export const q = (v: number | null | undefined, unit: Parameters<typeof formatQuantity>[1]) =>
-  v === null || v === undefined ? "—" : fq(v, unit);
+// The figures as lib/format.ts writes them everywhere; the shipped font has no thin space (U+2009), so the PDF
+// sets a plain space between number and unit.
+export const pct = (u: number | null) => plainSpaces(percent(u));
+export const q = (v: number | null | undefined, unit: Unit) => plainSpaces(quantity(v, unit));
 export const stamp = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
 export function contentWidth(doc: Doc): number {

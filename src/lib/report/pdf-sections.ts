@@ -1,18 +1,9 @@
+import { factor, money, plainSpaces } from "@/lib/format";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { explainFlag, VERDICT_EXPLANATIONS } from "@/lib/soa/explain";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
-import {
-  contentWidth,
-  type Doc,
-  ensureSpace,
-  ink,
-  muted,
-  pct,
-  q,
-  table,
-  verdictColour,
-  verdictWord,
-} from "./pdf-layout";
+import { verdictWords } from "@/lib/vocabulary";
+import { contentWidth, type Doc, ensureSpace, ink, muted, pct, q, table, verdictColour } from "./pdf-layout";
 
 // The decision report's tables (pdfkit): the candidates as ranked when signed, the verdict matrix, and each
 // pulse's figures with the reasons of its verdicts, all from the frozen snapshot.
@@ -43,10 +34,10 @@ export function candidatesTable(doc: Doc, snapshot: DecisionSnapshot): void {
           q(c.part.vdsMax, "V"),
           q(c.part.rdsOn, "Ω"),
           q(c.part.tjMax, "°C"),
-          c.unitCost === null ? "—" : `${c.unitCost.toFixed(2)} ${c.currency ?? ""}`,
+          plainSpaces(money(c.unitCost, c.currency)),
           pct(r?.worstUtilisation ?? null),
         ],
-        [{ text: verdictWord[verdict], colour: verdictColour[verdict], verdict }],
+        [{ text: verdictWords[verdict], colour: verdictColour[verdict], verdict }],
       );
     }),
   );
@@ -69,10 +60,10 @@ function verdictRow(plain: string[], verdicts: VerdictCell[]) {
 }
 
 function cell(result: PulseResult | undefined): VerdictCell {
-  if (!result) return { text: "no data", colour: verdictColour["no-data"], verdict: "no-data" };
+  if (!result) return { text: verdictWords["no-data"], colour: verdictColour["no-data"], verdict: "no-data" };
   const u = result.utilisation === null ? "" : ` ${pct(result.utilisation)}`;
   return {
-    text: `${verdictWord[result.verdict]}${u}`,
+    text: `${verdictWords[result.verdict]}${u}`,
     colour: verdictColour[result.verdict],
     verdict: result.verdict,
   };
@@ -152,13 +143,13 @@ export function pulseDetails(
         .font("regular")
         .fontSize(8.5)
         .fillColor(verdictColour[verdict])
-        .text(`${c.partNumber}: ${verdictWord[verdict]}`, doc.page.margins.left + 10, doc.y, {
+        .text(`${c.partNumber}: ${verdictWords[verdict]}`, doc.page.margins.left + 10, doc.y, {
           continued: true,
         });
       const figures = r
-        ? ` — utilisation ${pct(r.utilisation)}, allowed ${q(r.allowedCurrent, "A")}, Tj peak ${q(r.tjPeak, "°C")}, derating ${r.derating.toFixed(3)}${
+        ? ` — utilisation ${pct(r.utilisation)}, allowed ${q(r.allowedCurrent, "A")}, Tj peak ${q(r.tjPeak, "°C")}, derating ×${factor(r.derating)}${
             r.stability != null
-              ? `, stability factor S ${r.stability.toFixed(3)} (${verdictWord[r.stabilityVerdict ?? "no-data"]})`
+              ? `, stability factor S ${factor(r.stability)} (${verdictWords[r.stabilityVerdict ?? "no-data"]})`
               : ""
           }`
         : " — the part had no SOA curves";

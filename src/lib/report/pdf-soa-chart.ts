@@ -1,7 +1,8 @@
-import { engineeringTick, logTicks } from "@/lib/chart/log-axis";
+import { decadeDomain, engineeringTick, logTicks } from "@/lib/chart/log-axis";
+import { factor } from "@/lib/format";
 import { computeLimits } from "@/lib/library/limits";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
-import { contentWidth, type Doc, fq, line, marker, muted, q } from "./pdf-layout";
+import { contentWidth, type Doc, line, marker, muted, q } from "./pdf-layout";
 
 // The decision report's SOA chart of one candidate (pdfkit): the frozen curves and their derated copies on log-log
 // axes with d3-scale's ticks (src/lib/chart/log-axis.ts, as the app's charts), and every pulse by its verdict.
@@ -20,12 +21,14 @@ export function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): 
     ...limits.curves.flatMap((c) => c.points),
     ...snapshot.pulses.flatMap((p) => (p.v && p.i ? [[p.v, p.i] as [number, number]] : [])),
   ];
-  const decade = (v: number, up: boolean) =>
-    10 ** (up ? Math.ceil(Math.log10(v)) : Math.floor(Math.log10(v)));
-  const vMin = decade(Math.min(...all.map((p) => p[0])), false);
-  const vMax = decade(Math.max(...all.map((p) => p[0])), true);
-  const iMin = decade(Math.min(...all.map((p) => p[1])), false);
-  const iMax = decade(Math.max(...all.map((p) => p[1])), true);
+  const [vMin, vMax] = decadeDomain(
+    all.map((p) => p[0]),
+    [1, 100],
+  );
+  const [iMin, iMax] = decadeDomain(
+    all.map((p) => p[1]),
+    [0.1, 1000],
+  );
   const vDecades = Math.log10(vMax / vMin);
   const iDecades = Math.log10(iMax / iMin);
   const unit = size / Math.max(vDecades, iDecades);
@@ -98,7 +101,7 @@ export function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): 
   // Labels and legend outside the clip.
   limits.curves.forEach((curve, k) => {
     const last = curve.points[curve.points.length - 1];
-    const label = curve.duration === "DC" ? "DC" : fq(curve.duration, "s");
+    const label = curve.duration === "DC" ? "DC" : q(curve.duration, "s");
     doc
       .font("regular")
       .fontSize(7)
@@ -112,7 +115,7 @@ export function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): 
     .fontSize(8)
     .fillColor(muted)
     .text(
-      `Solid lines: datasheet curves at ${q(limits.refCaseTemp, "°C")} case. Dashed: derated by ${limits.derating.toFixed(3)} for ${q(snapshot.policy.caseTemp, "°C")} case. Markers: pulses by verdict (circle pass, triangle marginal, square fail, hollow diamond no data).`,
+      `Solid lines: datasheet curves at ${q(limits.refCaseTemp, "°C")} case. Dashed: derated ×${factor(limits.derating)} for ${q(snapshot.policy.caseTemp, "°C")} case. Markers: pulses by verdict (circle pass, triangle marginal, square fail, hollow diamond no data).`,
       { width: contentWidth(doc) },
     );
 }

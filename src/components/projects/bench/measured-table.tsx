@@ -12,8 +12,8 @@ import { FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { can } from "@/lib/auth/permissions";
+import { q, repeatOf, repeatText } from "@/lib/format";
 import { invalidateProject, type MeasuredRecord, type ProjectCheck } from "../api";
-import { q, repeatOf, repeatText } from "../format";
 import type { Person, Viewer } from "../project-workspace";
 
 const num = { numeric: true };

@@ -2,8 +2,8 @@ import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
+import { percent, q, repeatText } from "@/lib/format";
 import type { MeasurementPreview } from "../api";
-import { percent, q, repeatText } from "../format";
 
 /** Evidence beyond the part's ratings is kept and checked, and said so beside its verdict. */
 function beyond(flags: readonly string[] | undefined): string | null {

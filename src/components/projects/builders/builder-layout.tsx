@@ -2,8 +2,9 @@ import type { ReactNode } from "react";
 import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
 import { Button, FormMessage } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
+import { q, repeatText } from "@/lib/format";
 import type { Repeat } from "@/lib/soa/types";
-import { q, repeatText, shapeWords } from "../format";
+import { shapeWords } from "@/lib/vocabulary";
 import { FigureList } from "./figures";
 
 /** The pulse a builder makes: a rectangle or triangle, an unclamped turn-off, or a fault sequence's samples. */

@@ -5,15 +5,6 @@ import { formatQuantity, type Unit } from "@/lib/soa/units";
 // The builders' inputs and intermediate figures with their symbols and units, for the live panel beside each
 // builder and for a fault case's stored origin.
 
-export const builderNames: Record<string, string> = {
-  inrush: "inrush",
-  "current-limit": "short in current limit",
-  "trip-window": "trip window",
-  clamp: "clamp turn-off",
-  unclamped: "unclamped turn-off",
-  sequence: "fault sequence",
-};
-
 type Format = (value: number) => string;
 
 const unit =

@@ -3,12 +3,12 @@
 import { useMemo } from "react";
 import type { z } from "zod";
 import { Sym } from "@/components/library/symbols";
+import { q } from "@/lib/format";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { faultSequence } from "@/lib/soa/sequence";
 import { waveformRiseVI } from "@/lib/soa/thermal-waveform";
 import type { ProjectDetail } from "../api";
 import { TraceCharts, type TracePanel, type TraceSeries } from "../captures/trace-charts";
-import { q } from "../format";
 import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
 import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { sequenceForm } from "./builder-schemas";

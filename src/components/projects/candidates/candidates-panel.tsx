@@ -7,10 +7,9 @@ import { type ReactNode, useState } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
-import { costText } from "@/components/library/format";
 import { Section } from "@/components/page-header";
+import { money, q } from "@/lib/format";
 import { invalidateProject, type ProjectDetail } from "../api";
-import { q } from "../format";
 import { PartPicker } from "./part-picker";
 
 type Candidate = ProjectDetail["candidates"][number];
@@ -56,7 +55,7 @@ function candidateColumns(action: ((part: Candidate["part"]) => ReactNode) | nul
     {
       id: "unitCost",
       header: "Unit cost",
-      cell: ({ row: { original: c } }) => costText(c.part.unitCost, c.part.currency),
+      cell: ({ row: { original: c } }) => money(c.part.unitCost, c.part.currency),
       meta: { numeric: true },
     },
   ];

@@ -5,7 +5,7 @@ import { type KeyboardEvent, useId, useState } from "react";
 import { messageOf } from "@/components/api-client";
 import { callJson } from "@/components/library/api";
 import { useDebounced } from "@/components/use-debounced";
-import { q } from "../format";
+import { q } from "@/lib/format";
 
 interface PartOption {
   id: string;

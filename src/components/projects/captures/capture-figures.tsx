@@ -1,8 +1,8 @@
 import type { ReactNode } from "react";
 import { Sym } from "@/components/library/symbols";
 import type { CaptureSummary } from "@/db/schema";
+import { q } from "@/lib/format";
 import { explainFlag } from "@/lib/soa/explain";
-import { q } from "../format";
 
 function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
   return (

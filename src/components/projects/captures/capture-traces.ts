@@ -1,5 +1,5 @@
+import { q } from "@/lib/format";
 import type { PulseResult } from "@/lib/soa/types";
-import { q } from "../format";
 import type { CaptureDetail } from "./capture-api";
 import type { TracePanel } from "./trace-charts";
 

@@ -6,7 +6,6 @@ import { type FileRejection, useDropzone } from "react-dropzone";
 import { messageOf } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
 import { callJson, putFile } from "@/components/library/api";
-import { sizeText } from "@/components/library/format";
 import { UploadProgress } from "@/components/library/upload-progress";
 import {
   type CapturePreview,
@@ -14,6 +13,8 @@ import {
   PREVIEW_BYTES,
   previewCaptureText,
 } from "@/lib/capture/parse";
+import { overLimit } from "@/lib/csv/limits";
+import { fileSize } from "@/lib/format";
 import { invalidateProject } from "../api";
 import { captureKeys, type RegisteredCapture } from "./capture-api";
 import { ColumnPicker, type PickedCapture } from "./column-picker";
@@ -36,7 +37,7 @@ function refusal(rejections: FileRejection[]): string {
   const [first] = rejections;
   if (!first || rejections.length > 1) return "Drop one file at a time.";
   if (first.errors.some((e) => e.code === "file-too-large"))
-    return `${first.file.name} is ${sizeText(first.file.size)}; the limit is ${sizeText(MAX_CAPTURE_BYTES)}.`;
+    return `${first.file.name} is ${overLimit(first.file.size, MAX_CAPTURE_BYTES)}.`;
   if (first.errors.some((e) => e.code === "file-invalid-type"))
     return `${first.file.name} is not a CSV text file (.csv, .tsv or .txt).`;
   return first.errors[0]?.message ?? "That file could not be used.";
@@ -142,12 +143,12 @@ export function CaptureUpload({
         </p>
         <p className="text-xs text-ink-muted">
           Time, voltage and current columns; instrument settings above the data are skipped. Up to{" "}
-          {sizeText(MAX_CAPTURE_BYTES)} and 2 million samples. You choose the columns before anything is sent.
+          {fileSize(MAX_CAPTURE_BYTES)} and 2 million samples. You choose the columns before anything is sent.
         </p>
       </div>
       {phase.kind === "uploading" ? (
         <UploadProgress
-          label={`Uploading ${phase.file.name} (${sizeText(phase.file.size)})…`}
+          label={`Uploading ${phase.file.name} (${fileSize(phase.file.size)})…`}
           fraction={phase.fraction}
         />
       ) : null}

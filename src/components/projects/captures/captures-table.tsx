@@ -2,9 +2,8 @@ import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
 import { actionsColumn } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { sizeText } from "@/components/library/format";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { q } from "../format";
+import { fileSize, q } from "@/lib/format";
 import type { PanelProps } from "../project-workspace";
 import type { CaptureListItem } from "./capture-api";
 
@@ -41,7 +40,7 @@ export function captureColumns({
             {c.name}
           </button>
           <span className="ml-2 text-xs text-ink-faint">
-            {c.fileName}, {sizeText(c.size)}
+            {c.fileName}, {fileSize(c.size)}
           </span>
         </>
       ),

@@ -1,3 +1,5 @@
+import type { ColumnDef } from "@tanstack/react-table";
+import { DataTable } from "@/components/data-table";
 import type { CapturePreview } from "@/lib/capture/parse";
 import { formatQuantity } from "@/lib/soa/units";
 import { columnName, type PickerInput } from "./column-picker-form";
@@ -40,45 +42,42 @@ export function PreviewSummary({ fileName, preview }: { fileName: string; previe
   );
 }
 
+interface PreviewRow {
+  /** The row's line in the preview (0 = the first data row). */
+  n: number;
+  cells: string[];
+}
+
 /** The file's first rows; the columns picked as time, voltage and current are marked t, V and I. */
 export function PreviewTable({ preview, chosen }: { preview: CapturePreview; chosen: PickerInput | null }) {
   const role = (index: number) =>
     chosen?.time === index ? "t" : chosen?.voltage === index ? "V" : chosen?.current === index ? "I" : null;
+  const columns: ColumnDef<PreviewRow>[] = preview.columns.map((c) => {
+    const picked = role(c.index);
+    return {
+      id: String(c.index),
+      header: () => (
+        <>
+          {picked ? <span className="mr-1.5 rounded bg-accent px-1 text-white">{picked}</span> : null}
+          {columnName(preview, c.index)}
+        </>
+      ),
+      cell: ({ row }) => row.original.cells[c.index] ?? "",
+      meta: {
+        numeric: true,
+        headerClassName: picked ? "bg-accent-soft! text-accent-strong!" : "",
+      },
+    };
+  });
   return (
-    <div className="max-h-64 overflow-auto rounded-md border border-line">
-      <table aria-label="First rows of the file" className="w-full border-separate border-spacing-0 text-xs">
-        <thead>
-          <tr>
-            {preview.columns.map((c) => (
-              <th
-                key={c.index}
-                scope="col"
-                className={`sticky top-0 border-b border-line px-2 py-1.5 text-right font-medium whitespace-nowrap ${
-                  role(c.index) ? "bg-accent-soft text-accent-strong" : "bg-sunken text-ink-muted"
-                }`}
-              >
-                {role(c.index) ? (
-                  <span className="mr-1.5 rounded bg-accent px-1 text-white">{role(c.index)}</span>
-                ) : null}
-                {columnName(preview, c.index)}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {preview.rows.map((row, k) => (
-            // biome-ignore lint/suspicious/noArrayIndexKey: the file's first rows, shown once in file order
-            <tr key={k}>
-              {preview.columns.map((c) => (
-                <td key={c.index} className="num border-b border-line px-2 py-1 text-right font-mono">
-                  {row[c.index] ?? ""}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      label="First rows of the file"
+      columns={columns}
+      data={preview.rows.map((cells, n) => ({ n, cells }))}
+      getRowId={(row) => String(row.n)}
+      density="compact"
+      className="max-h-64"
+    />
   );
 }
 

@@ -1,12 +1,14 @@
 "use client";
 
+import type { ColumnDef } from "@tanstack/react-table";
 import { type PointerEvent, useState } from "react";
+import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
-import { ScrollRegion } from "@/components/scroll-region";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "@/components/soa-chart/chart-frame";
 import { type AxisSpec, makeAxis } from "@/components/soa-chart/frame-model";
 import type { Verdict } from "@/components/verdict-shape";
+import { q } from "@/lib/format";
 import { formatQuantity, type Unit } from "@/lib/soa/units";
 import { Envelope, PanelTitle, TraceMarks } from "./trace-layers";
 import { type Pair, panelDomain, type TraceSeries, visibleRange } from "./trace-model";
@@ -186,65 +188,51 @@ function TraceFrame({
   );
 }
 
+interface TraceRow {
+  /** The sample's index in the drawn series. */
+  k: number;
+}
+
 /** The text alternative: up to 60 evenly spaced drawn steps of the window shown, lowest and highest of each. */
 function TraceTable({ panels, domain }: { panels: TracePanel[]; domain: [number, number] }) {
   const first = panels[0]?.series[0];
   if (!first) return null;
   const [a, b] = visibleRange(first.t, domain[0], domain[1]);
   const step = Math.max(1, Math.ceil((b - a + 1) / 60));
-  const rows: number[] = [];
-  for (let k = a; k <= b; k += step) rows.push(k);
-  const columns = panels.flatMap((p) =>
-    p.series.map((s) => ({ name: p.series.length > 1 ? `${p.name}, ${s.label}` : p.name, s, unit: p.unit })),
-  );
+  const rows: TraceRow[] = [];
+  for (let k = a; k <= b; k += step) rows.push({ k });
   const range = (pair: Pair | undefined, unit: Unit) => {
     if (!pair || pair[0] === null || pair[1] === null) return "—";
-    return pair[0] === pair[1]
-      ? formatQuantity(pair[0], unit)
-      : `${formatQuantity(pair[0], unit)} … ${formatQuantity(pair[1], unit)}`;
+    return pair[0] === pair[1] ? q(pair[0], unit) : `${q(pair[0], unit)} … ${q(pair[1], unit)}`;
   };
+  const columns: ColumnDef<TraceRow>[] = [
+    { id: "t", header: "t", cell: ({ row }) => q(first.t[row.original.k], "s"), meta: { numeric: true } },
+    ...panels.flatMap((p) =>
+      p.series.map(
+        (series, n): ColumnDef<TraceRow> => ({
+          id: `${p.key}-${n}`,
+          header: p.series.length > 1 ? `${p.name}, ${series.label}` : p.name,
+          cell: ({ row }) => range(series.y[row.original.k], p.unit),
+          meta: { numeric: true },
+        }),
+      ),
+    ),
+  ];
   return (
     <details className="text-sm">
       <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
         Show the traces as a table ({rows.length} steps)
       </summary>
-      <ScrollRegion className="mt-2 max-h-80 overflow-auto rounded-md border border-line bg-panel">
-        <table className="w-full border-separate border-spacing-0 text-xs" aria-label="Capture traces">
-          <thead>
-            <tr>
-              <th
-                scope="col"
-                className="sticky top-0 border-b border-line bg-sunken px-2 py-1.5 text-right font-medium text-ink-muted"
-              >
-                t
-              </th>
-              {columns.map((c) => (
-                <th
-                  key={c.name}
-                  scope="col"
-                  className="sticky top-0 border-b border-line bg-sunken px-2 py-1.5 text-right font-medium text-ink-muted"
-                >
-                  {c.name}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((k) => (
-              <tr key={k}>
-                <td className="num border-b border-line px-2 py-1 text-right font-mono">
-                  {formatQuantity(first.t[k], "s")}
-                </td>
-                {columns.map((c) => (
-                  <td key={c.name} className="num border-b border-line px-2 py-1 text-right font-mono">
-                    {range(c.s.y[k], c.unit)}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </ScrollRegion>
+      <div className="mt-2">
+        <DataTable
+          label="Capture traces"
+          columns={columns}
+          data={rows}
+          getRowId={(row) => String(row.k)}
+          density="compact"
+          className="max-h-80"
+        />
+      </div>
     </details>
   );
 }

@@ -1,7 +1,7 @@
 import { z } from "zod";
+import { editable } from "@/lib/format";
 import { faultCaseSchema } from "@/lib/projects/schema";
 import type { FaultCaseRecord } from "../api";
-import { editableValue } from "../format";
 
 // The fault-case form's values as typed, and the schema that turns them into what the fault-case routes take.
 
@@ -77,11 +77,11 @@ export function faultCaseValues(row: FaultCaseRecord): FaultCaseFormValues {
     name: row.name,
     // Only rectangles and triangles are edited here; the table offers no edit for the builders' other shapes.
     kind: row.kind === "triangle" ? "triangle" : "rect",
-    v: editableValue(row.v),
-    i: editableValue(row.i),
-    duration: editableValue(row.duration),
+    v: editable(row.v),
+    i: editable(row.i),
+    duration: editable(row.duration),
     repeats: row.repeatPeriod === null ? "single" : "period",
-    period: editableValue(row.repeatPeriod),
+    period: editable(row.repeatPeriod),
     frequency: "",
     continuous: row.repeatPeriod !== null && row.repeatCount === null,
     count: row.repeatCount === null ? "" : String(row.repeatCount),

@@ -8,9 +8,10 @@ import { ConfirmDelete } from "@/components/confirm-delete";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
+import { q, repeatOf, repeatText } from "@/lib/format";
+import { builderName, shapeWords } from "@/lib/vocabulary";
 import { type FaultCaseRecord, invalidateProject } from "../api";
-import { builderNames, figureLines } from "../builders/figures";
-import { q, repeatOf, repeatText, shapeWords } from "../format";
+import { figureLines } from "../builders/figures";
 import { FaultCaseForm } from "./fault-case-form";
 
 /** The project's fault cases; engineers edit or delete each from its row, and open it to see its origin. */
@@ -131,7 +132,7 @@ function faultCaseColumns({
           </button>
           {row.origin ? (
             <span className="ml-2 text-xs text-ink-faint">
-              from the {builderNames[row.origin.builder] ?? row.origin.builder} builder
+              from the {builderName(row.origin.builder)} builder
             </span>
           ) : null}
         </>
@@ -210,9 +211,7 @@ function FaultCaseOrigin({ row }: { row: FaultCaseRecord }) {
     <div className="max-w-3xl space-y-2 whitespace-normal">
       {row.origin ? (
         <>
-          <p className="font-medium">
-            Built with the {builderNames[row.origin.builder] ?? row.origin.builder} builder
-          </p>
+          <p className="font-medium">Built with the {builderName(row.origin.builder)} builder</p>
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5 text-xs">
             {lines.map((line) => (
               <Fragment key={line.key}>

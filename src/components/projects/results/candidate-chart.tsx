@@ -8,8 +8,9 @@ import { callJson } from "@/components/library/api";
 import { LoadingBox } from "@/components/loading-box";
 import type { ChartPulse } from "@/components/soa-chart";
 import { InstabilityNote } from "@/components/soa-chart/instability-note";
+import { factor, percent, q, repeatText } from "@/lib/format";
+import { shapeWords } from "@/lib/vocabulary";
 import { type CandidateLimits, type CheckedCandidate, type ProjectCheck, projectKeys } from "../api";
-import { percent, q, repeatText, shapeWords } from "../format";
 
 // The chart stack loads after the page has loaded (the charts sit below the results table), in the browser only
 // (it measures its width there).
@@ -97,7 +98,7 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
       </h3>
       <p className="mb-3 text-xs text-ink-muted">
         {data && data.derating < 1
-          ? `Dashed: curves derated ×${data.derating.toFixed(2)} for ${q(caseTemp, "°C")} case. Hover a marker for its pulse.`
+          ? `Dashed: curves derated ×${factor(data.derating)} for ${q(caseTemp, "°C")} case. Hover a marker for its pulse.`
           : `Curves at ${q(data?.refCaseTemp ?? 25, "°C")} case. Hover a marker for its pulse.`}
       </p>
       {!candidate.hasCurves ? (
@@ -130,7 +131,7 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
         <div className="mt-2 space-y-1">
           <p className="text-xs text-ink-muted">
             Boundary drawn for {focus.name}, the pulse with the highest stability factor on this part (S ={" "}
-            {focus.stability.toFixed(2)}).
+            {factor(focus.stability)}).
           </p>
           <InstabilityNote width={focus.width} zth={data.instability.zth} hasTransfer hasThermal />
         </div>

@@ -1,9 +1,10 @@
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
+import { factor, percent, q, repeatText } from "@/lib/format";
 import { curvesRead, decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
+import { pulseShape, sourceWords } from "@/lib/vocabulary";
 import type { CheckedPulse, ProjectCheck } from "../api";
-import { percent, pulseShape, q, repeatText, sourceWords } from "../format";
 
 /** The pulse as the check read it, in one sentence. */
 function pulseSentence(pulse: CheckedPulse, projectCaseTemp: number): string {
@@ -84,7 +85,7 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                       <>
                         <dt className="text-ink-muted">Stability factor</dt>
                         <dd className="num font-mono" data-testid="stability-factor">
-                          S = {result.stability.toFixed(3)}{" "}
+                          S = {factor(result.stability)}{" "}
                           <span className="font-sans text-ink-faint">
                             (runs away at 1; limit {percent(policy.utilisationLimit)})
                           </span>
@@ -120,7 +121,7 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                     {result.repetitionScale !== null ? (
                       <>
                         <dt className="text-ink-muted">Repetition</dt>
-                        <dd className="num font-mono">×{result.repetitionScale.toFixed(3)}</dd>
+                        <dd className="num font-mono">×{factor(result.repetitionScale)}</dd>
                       </>
                     ) : null}
                     <dt className="text-ink-muted">
@@ -136,7 +137,7 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                     </dd>
                     <dt className="text-ink-muted">Derating</dt>
                     <dd className="num font-mono">
-                      ×{result.derating.toFixed(3)}{" "}
+                      ×{factor(result.derating)}{" "}
                       <span className="font-sans text-ink-faint">for {q(pulse.caseTemp, "°C")} case</span>
                     </dd>
                     <dt className="text-ink-muted">

@@ -5,8 +5,9 @@ import { useEffect, useRef, useState } from "react";
 import { DataTable } from "@/components/data-table";
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
+import { factor, q, repeatText } from "@/lib/format";
+import { pulseShape, shapeWords } from "@/lib/vocabulary";
 import type { CheckedPulse, ProjectCheck } from "../api";
-import { pulseShape, q, repeatText, shapeWords } from "../format";
 import { ResultDetails } from "./result-details";
 import { UtilisationBar } from "./utilisation-bar";
 
@@ -113,7 +114,7 @@ function ResultCell({
           data-testid="result-stability"
           title="Electro-thermal stability factor: a hot spot runs away at 1"
         >
-          S <span className="font-mono">{result.stability.toFixed(2)}</span>
+          S <span className="font-mono">{factor(result.stability)}</span>
           {result.stabilityVerdict === "fail" ? " runs away" : " near runaway"}
         </span>
       ) : null}

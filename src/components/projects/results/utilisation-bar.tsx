@@ -1,5 +1,5 @@
+import { percent } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
-import { percent } from "../format";
 
 const SCALE = 1.5;
 const fill: Record<Verdict, string> = {

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { editable } from "@/components/library/format";
 import { PartForm } from "@/components/library/part-form";
 import { TitleBar } from "@/components/library/title-bar";
 import { getPart, partFacets } from "@/db/queries/parts";
 import { requireAction } from "@/lib/auth/page";
+import { editable } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Edit part" };
 

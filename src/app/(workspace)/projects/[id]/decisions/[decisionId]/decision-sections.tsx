@@ -1,9 +1,9 @@
 import Link from "next/link";
 import { DateText } from "@/components/date-text";
-import { percent } from "@/components/decisions/format";
 import { policyStat } from "@/components/decisions/policy-stat";
 import { TitleBar } from "@/components/library/title-bar";
 import { StatBlocks } from "@/components/stat-blocks";
+import { percent } from "@/lib/format";
 import type { DecisionSnapshot, loadDecision } from "@/lib/projects/decisions";
 import { revisionOf } from "@/lib/soa/revision";
 
