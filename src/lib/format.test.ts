@@ -11,6 +11,7 @@ import {
   q,
   repeatOf,
   repeatText,
+  settingPercent,
 } from "./format";
 import { BUILDER_NAMES, builderName, pulseShape, sourceWords, verdictWords } from "./vocabulary";
 
@@ -31,6 +32,15 @@ describe("q, a quantity with its unit", () => {
     expect(q(Number.NaN, "A")).toBe("—");
     expect(q(87, "°C")).toBe(`87${T}°C`);
     expect(q(1e6, "°C")).toMatch(/^off scale \(above /);
+  });
+});
+
+describe("settingPercent, a limit as set (our choice: never rounded to another setting)", () => {
+  it("writes the setting's own figures", () => {
+    expect(settingPercent(0.875)).toBe(`87.5${T}%`);
+    expect(settingPercent(0.9)).toBe(`90${T}%`);
+    expect(settingPercent(0.8125)).toBe(`81.25${T}%`);
+    expect(settingPercent(null)).toBe("—");
   });
 });
 

@@ -35,6 +35,16 @@ export function percent(u: number | null | undefined): string {
   return `${u < 0.1 ? Number((u * 100).toPrecision(2)) : Math.round(u * 100)}${THIN_SPACE}%`;
 }
 
+/**
+ * A limit someone set, as a percentage written as set (up to 4 significant figures, never rounded to a whole
+ * percent): 0.875 → "87.5 %", 0.9 → "90 %". A measured utilisation uses `percent`; a setting shown rounded
+ * would read as another setting.
+ */
+export function settingPercent(fraction: number | null | undefined): string {
+  if (missing(fraction)) return "—";
+  return `${Number((fraction * 100).toPrecision(4))}${THIN_SPACE}%`;
+}
+
 /** A factor without unit (stability factor S, derating, repetition scale): 0.8 → "0.8", 1.2345 → "1.23". */
 export function factor(value: number | null | undefined): string {
   if (missing(value)) return "—";

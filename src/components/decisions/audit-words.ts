@@ -1,4 +1,4 @@
-import { percent, q } from "@/lib/format";
+import { q, settingPercent } from "@/lib/format";
 import type { AuditEvent } from "./types";
 
 // A project's audit events in plain words: what was done, with the names the details kept.
@@ -15,7 +15,9 @@ export function auditWords(event: AuditEvent): string {
     case "project.updated": {
       const parts = [
         num(d.caseTemp) !== null ? `case ${q(num(d.caseTemp), "°C")}` : null,
-        num(d.utilisationLimit) !== null ? `utilisation limit ${percent(num(d.utilisationLimit))}` : null,
+        num(d.utilisationLimit) !== null
+          ? `utilisation limit ${settingPercent(num(d.utilisationLimit))}`
+          : null,
         num(d.tjGuard) !== null ? `Tj guard ${q(num(d.tjGuard), "")}\u2009K` : null,
       ].filter(Boolean);
       return `changed the project's settings${parts.length ? `: ${parts.join(", ")}` : ""}`;

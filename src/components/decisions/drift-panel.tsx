@@ -1,4 +1,4 @@
-import { percent, q } from "@/lib/format";
+import { q, settingPercent } from "@/lib/format";
 import { DriftResults } from "./drift-results";
 import type { DecisionSnapshot, Drift } from "./types";
 
@@ -11,8 +11,9 @@ const betweenWords = {
 } as const;
 
 function policyText(p: Policy): string {
-  const voltage = p.voltageLimit === undefined ? "" : `, voltage limit ${percent(p.voltageLimit)} of V_DSS`;
-  return `utilisation limit ${percent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K${voltage}, between curves: ${betweenWords[p.betweenCurves]}`;
+  const voltage =
+    p.voltageLimit === undefined ? "" : `, voltage limit ${settingPercent(p.voltageLimit)} of V_DSS`;
+  return `utilisation limit ${settingPercent(p.utilisationLimit)}, Tj guard ${q(p.tjGuard, "")}\u2009K${voltage}, between curves: ${betweenWords[p.betweenCurves]}`;
 }
 
 /** True when checking again would give exactly what was frozen. */

@@ -1,4 +1,4 @@
-import { percent, q } from "@/lib/format";
+import { q, settingPercent } from "@/lib/format";
 
 /**
  * The stat block of a check's policy: the case temperature, with the utilisation limit, the junction guard and
@@ -15,8 +15,9 @@ export function policyStat(policy: {
     value: q(policy.caseTemp, "°C"),
     note: (
       <>
-        limit {percent(policy.utilisationLimit)} · T<sub>j</sub> guard {`${q(policy.tjGuard, "")}\u2009K`}
-        {policy.voltageLimit === undefined ? null : ` · voltage limit ${percent(policy.voltageLimit)}`}
+        limit {settingPercent(policy.utilisationLimit)} · T<sub>j</sub> guard{" "}
+        {`${q(policy.tjGuard, "")}\u2009K`}
+        {policy.voltageLimit === undefined ? null : ` · voltage limit ${settingPercent(policy.voltageLimit)}`}
       </>
     ),
   };

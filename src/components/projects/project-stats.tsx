@@ -1,7 +1,7 @@
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
-import { percent, q } from "@/lib/format";
+import { q, settingPercent } from "@/lib/format";
 import type { ProjectCheck, ProjectDetail } from "./api";
 
 function Figure({ children }: { children: string }) {
@@ -31,7 +31,7 @@ export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?
         },
         {
           label: "Utilisation limit",
-          value: <Figure>{percent(project.utilisationLimit)}</Figure>,
+          value: <Figure>{settingPercent(project.utilisationLimit)}</Figure>,
           note: "of the allowed current",
         },
         {

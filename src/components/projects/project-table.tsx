@@ -5,7 +5,7 @@ import Link from "next/link";
 import { DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { useUrlState } from "@/components/use-url-state";
-import { percent, q } from "@/lib/format";
+import { q, settingPercent } from "@/lib/format";
 
 export interface ProjectRow {
   id: string;
@@ -46,7 +46,7 @@ const columns: ColumnDef<ProjectRow>[] = [
   {
     id: "utilisationLimit",
     header: "Utilisation limit",
-    cell: ({ row }) => percent(row.original.utilisationLimit),
+    cell: ({ row }) => settingPercent(row.original.utilisationLimit),
     meta: { numeric: true, headerClassName: "w-28" },
   },
   {

@@ -11,9 +11,9 @@ import {
   ink,
   keyValues,
   muted,
-  pct,
   q,
   section,
+  settingPct,
   stamp,
 } from "./pdf-layout";
 import { candidatesTable, matrix, pulseDetails } from "./pdf-sections";
@@ -99,13 +99,13 @@ export function renderDecisionPdf(input: {
   section(doc, "Assumptions");
   keyValues(doc, [
     ["Case temperature", q(snapshot.policy.caseTemp, "°C")],
-    ["Utilisation limit", pct(snapshot.policy.utilisationLimit)],
+    ["Utilisation limit", settingPct(snapshot.policy.utilisationLimit)],
     ["Junction guard", `${snapshot.policy.tjGuard} K below Tj,max (where a part has a thermal model)`],
     [
       "Voltage limit",
       snapshot.policy.voltageLimit === undefined
         ? "none (checked before the voltage limit existed)"
-        : `${pct(snapshot.policy.voltageLimit)} of V_DSS; above it a pulse is at best marginal`,
+        : `${settingPct(snapshot.policy.voltageLimit)} of V_DSS; above it a pulse is at best marginal`,
     ],
     ["Between datasheet widths", BETWEEN_WORDS[snapshot.policy.betweenCurves]],
     [

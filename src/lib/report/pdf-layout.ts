@@ -1,4 +1,4 @@
-import { percent, plainSpaces, q as quantity } from "@/lib/format";
+import { percent, plainSpaces, q as quantity, settingPercent } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
 import type { Unit } from "@/lib/soa/units";
 
@@ -21,6 +21,7 @@ export type Doc = PDFKit.PDFDocument;
 // The figures as lib/format.ts writes them everywhere; the shipped font has no thin space (U+2009), so the PDF
 // sets a plain space between number and unit.
 export const pct = (u: number | null) => plainSpaces(percent(u));
+export const settingPct = (u: number | null) => plainSpaces(settingPercent(u));
 export const q = (v: number | null | undefined, unit: Unit) => plainSpaces(quantity(v, unit));
 export const stamp = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 

@@ -1,6 +1,6 @@
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { factor, percent, q, repeatText } from "@/lib/format";
+import { factor, percent, q, repeatText, settingPercent } from "@/lib/format";
 import { curvesRead, decidingViews, explainFlag, VERDICT_EXPLANATIONS, VIEW_WORDS } from "@/lib/soa/explain";
 import type { PulseResult, Verdict } from "@/lib/soa/types";
 import { pulseShape, sourceWords } from "@/lib/vocabulary";
@@ -87,7 +87,7 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                         <dd className="num font-mono" data-testid="stability-factor">
                           S = {factor(result.stability)}{" "}
                           <span className="font-sans text-ink-faint">
-                            (runs away at 1; limit {percent(policy.utilisationLimit)})
+                            (runs away at 1; limit {settingPercent(policy.utilisationLimit)})
                           </span>
                         </dd>
                       </>
@@ -132,7 +132,7 @@ export function ResultDetails({ pulse, check }: { pulse: CheckedPulse; check: Pr
                     <dd className="num font-mono">
                       {percent(result.utilisation)}{" "}
                       <span className="font-sans text-ink-faint">
-                        (limit {percent(policy.utilisationLimit)})
+                        (limit {settingPercent(policy.utilisationLimit)})
                       </span>
                     </dd>
                     <dt className="text-ink-muted">Derating</dt>
