@@ -15,19 +15,10 @@ const appB = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const portA = Number(new URL(appB).port) + 7;
 const appA = `http://127.0.0.1:${portA}`;
 const origin = new URL(appB).origin;
-const stamp = Date.now().toString(36);
-const person = {
-  name: "Noor Lindqvist",
-  email: `noor.${stamp}@pulsefence.test`,
-  password: "scale-out-demo-password",
-  workspaceName: `Scale-out lab ${stamp}`,
-};
 
+// Instance A is shared infrastructure, started once; every test signs up its own person and holds its own clients.
 let instanceA: ChildProcess;
-let onA: APIRequestContext;
-let onB: APIRequestContext;
-
-test.describe.configure({ mode: "serial" });
+const contexts: APIRequestContext[] = [];
 
 test.beforeAll(async () => {
   test.setTimeout(120_000);
@@ -43,20 +34,19 @@ test.beforeAll(async () => {
       intervals: [250],
     })
     .toBe(200);
-  onA = await request.newContext({ baseURL: appA, extraHTTPHeaders: { origin } });
 });
 
-test.afterAll(async () => {
-  await onA?.dispose();
-  await onB?.dispose();
-  if (instanceA && instanceA.exitCode === null) {
-    const exited = new Promise((resolve) => instanceA.once("exit", resolve));
-    instanceA.kill("SIGTERM");
-    await exited;
-  }
-});
-
-test("a session made on one instance works on the other", async () => {
+/** A new person signed up on instance A, with a client on each instance carrying the session A set. */
+async function newPersonOnBothInstances() {
+  const stamp = `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+  const person = {
+    name: "Noor Lindqvist",
+    email: `noor.${stamp}@pulsefence.test`,
+    password: "scale-out-demo-password",
+    workspaceName: `Scale-out lab ${stamp}`,
+  };
+  const onA = await request.newContext({ baseURL: appA, extraHTTPHeaders: { origin } });
+  contexts.push(onA);
   // Sign-up answers 202 and e-mails a link; using it on instance A creates the account and signs in there.
   const signedUp = await onA.post("/api/auth/sign-up", { data: person });
   expect(signedUp.status(), await signedUp.text()).toBe(202);
@@ -65,11 +55,26 @@ test("a session made on one instance works on the other", async () => {
   const confirmed = await onA.post("/api/auth/sign-up/confirm", { data: { token } });
   expect(confirmed.status(), await confirmed.text()).toBe(201);
   // The session cookie instance A set, carried to instance B.
-  onB = await request.newContext({
+  const onB = await request.newContext({
     baseURL: appB,
     extraHTTPHeaders: { origin },
     storageState: await onA.storageState(),
   });
+  contexts.push(onB);
+  return { person, onA, onB };
+}
+
+test.afterAll(async () => {
+  for (const context of contexts) await context.dispose();
+  if (instanceA && instanceA.exitCode === null) {
+    const exited = new Promise((resolve) => instanceA.once("exit", resolve));
+    instanceA.kill("SIGTERM");
+    await exited;
+  }
+});
+
+test("a session made on one instance works on the other", async () => {
+  const { onA, onB } = await newPersonOnBothInstances();
   const projects = await onB.get("/api/projects");
   expect(projects.status()).toBe(200);
   const created = await onB.post("/api/projects", { data: { name: "Two instances", caseTemp: 25 } });
@@ -80,6 +85,7 @@ test("a session made on one instance works on the other", async () => {
 });
 
 test("a capture job queued by instance A is finished by a worker of instance B", async () => {
+  const { onA, onB } = await newPersonOnBothInstances();
   const created = await onA.post("/api/projects", { data: { name: "Queued on A", caseTemp: 25 } });
   expect(created.status(), await created.text()).toBe(201);
   const projectId: string = (await created.json()).project.id;
@@ -114,6 +120,7 @@ test("a capture job queued by instance A is finished by a worker of instance B",
 });
 
 test("a sign-in throttle counts failures on both instances together", async () => {
+  const { person, onA, onB } = await newPersonOnBothInstances();
   const attempt = (ctx: APIRequestContext, password: string) =>
     ctx.post("/api/auth/sign-in", { data: { email: person.email, password } });
   const statuses: number[] = [];

@@ -13,20 +13,41 @@ export async function createComparedProject(
   expect(created.status(), await created.text()).toBe(201);
   const projectId: string = (await created.json()).project.id;
   for (const partNumber of partNumbers) {
-    const found = await request.get(`/api/parts?q=${encodeURIComponent(partNumber)}`);
-    expect(found.ok()).toBe(true);
-    const rows: { id: string; partNumber: string }[] = (await found.json()).rows;
-    const part = rows.find((r) => r.partNumber === partNumber);
-    expect(part, `demo part ${partNumber}`).toBeDefined();
     const added = await request.post(`/api/projects/${projectId}/candidates`, {
       headers,
-      data: { partId: part!.id },
+      data: { partId: await demoPartId(request, partNumber) },
     });
     expect(added.ok(), await added.text()).toBe(true);
   }
   const fault = await request.post(`/api/projects/${projectId}/fault-cases`, { headers, data: faultCase });
   expect(fault.ok(), await fault.text()).toBe(true);
   return projectId;
+}
+
+/** The library id of a demo part, found by its part number. */
+async function demoPartId(request: APIRequestContext, partNumber: string): Promise<string> {
+  const found = await request.get(`/api/parts?q=${encodeURIComponent(partNumber)}`);
+  expect(found.ok()).toBe(true);
+  const rows: { id: string; partNumber: string }[] = (await found.json()).rows;
+  const part = rows.find((r) => r.partNumber === partNumber);
+  expect(part, `demo part ${partNumber}`).toBeDefined();
+  return part!.id;
+}
+
+/** Signs a decision for a candidate through the API (the caller must be a lead); returns the decision's page. */
+export async function signDecisionThroughApi(
+  request: APIRequestContext,
+  origin: string,
+  projectId: string,
+  partNumber: string,
+  rationale: string,
+): Promise<string> {
+  const signed = await request.post(`/api/projects/${projectId}/decisions`, {
+    headers: { origin },
+    data: { partId: await demoPartId(request, partNumber), rationale },
+  });
+  expect(signed.status(), await signed.text()).toBe(201);
+  return `/projects/${projectId}/decisions/${(await signed.json()).decision.id}`;
 }
 
 /** The comparison page: the matrix, its filters, the decision form and the overlay chart. */
