@@ -163,6 +163,7 @@ describe("runCheck, pulse shapes", () => {
   // At Tc 25 °C (k = 1) the single 1 ms reading at 20 V is 150/(20·Z(1 ms)) = 111.62 A (§2, a digitised point).
   const singleLimit = 150 / (20 * zth(1e-3));
 
+  // Derived from §7: a train's rise is the superposition of its pulses' steps, so the limit scales by Z(t_p)/Z_train.
   it("scales a repeated rectangle by the exact train impedance and takes Tj from the train", () => {
     const single = one(fullPart, { kind: "rect", v: 20, i: 30, duration: 1e-3 });
     expect(single.allowedCurrent).toBeCloseTo(singleLimit, 9);
@@ -511,6 +512,7 @@ describe("runCheck, properties", () => {
     );
   });
 
+  // Derived from §5: the derating factor only falls as the case gets hotter, so the allowed current cannot rise.
   it("never allows more current at a hotter case", () => {
     fc.assert(
       fc.property(
@@ -692,6 +694,7 @@ describe("revision 2 rules", () => {
     expect(back.flags).toContain("negative-power-clamped");
   });
 
+  // METHODS.md §8: each partial verdict is reported; the stability view needs §12's transfer data, absent here.
   it("reports each view's verdict: curves, thermal, and stability (null until section 12 data)", () => {
     const result = one(fullPart, rect(20, 30, 1e-3));
     expect(result).toMatchObject({ curveVerdict: "pass", thermalVerdict: "pass", stabilityVerdict: null });

@@ -58,7 +58,8 @@ describe("waveformEquivalent", () => {
     expect(waveformEquivalent([0, 1, 2], [10, -50, 10])).toMatchObject({ energy: 10, peakIndex: 0 });
   });
 
-  // Issue 10, request 2: a long pre-heat far below the peak must not be dropped. 12 V × 9.75 A for 1 s, then a
+  // Derived from §6 (the rectangle keeps all of E = ∫p dt), issue 10, request 2: a long pre-heat far below the
+  // peak must not be dropped. 12 V × 9.75 A for 1 s, then a
   // 100 µs spike of 199 A: the energy is dominated by the pre-heat (117 J against 0.24 J).
   it("keeps a long pre-heat far below the peak in the energy", () => {
     const rect = waveformEquivalent([0, 1, 1 + 1e-9, 1 + 1e-4, 1 + 1e-4 + 1e-9], [117, 117, 2388, 2388, 0]);

@@ -75,6 +75,7 @@ describe("explain", () => {
     expect(text).not.toMatch(/never understates the heating\.$/);
   });
 
+  // METHODS.md §8: the final verdict is the worst view's, and each result says which view decided.
   it("says which views decided a result", () => {
     const base = { curveVerdict: "pass", thermalVerdict: "pass", stabilityVerdict: null, flags: [] } as const;
     expect(decidingViews({ ...base, verdict: "pass" })).toEqual(["curves", "thermal"]);

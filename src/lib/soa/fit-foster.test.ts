@@ -163,6 +163,7 @@ describe("fitFoster rejects bad input with a reason", () => {
     [1e-1, 0.4],
   ];
 
+  // Our choice: the fit's input rules (at least 4 points, t > 0 and finite, …) and their messages.
   test.each([
     ["too few points", good.slice(0, 3), {}, "at least 4 points are needed, got 3"],
     ["t = 0", [[0, 0.01], ...good.slice(1)], {}, "point 1: t must be finite and greater than 0, got 0"],

@@ -66,7 +66,7 @@ describe("repetitionScale", () => {
     expect(scale()).toBeCloseTo(0.632121, 6);
   });
 
-  // Issue 10, request 3: one pulse with `count: 1` is the single pulse, whatever the data.
+  // Derived from §7 (N ≥ 1; one pulse is no train), issue 10, request 3: one pulse with `count: 1` is the single pulse, whatever the data.
   it("gives exactly 1 for one pulse, even without any thermal data", () => {
     expect(repetitionScale({ network: null, curves: noCurves, tEq: 0.1, period: 1, count: 1 })).toEqual({
       scale: 1,

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { beyondRatings, formatTemperature, SANITY_LIMITS, saneValue } from "./sanity";
 
 describe("saneValue", () => {
+  // Our choice: the sanity limits in sanity.ts, set after issue 12's absurd inputs; the hint names the limit.
   it("refuses issue 12's absurd inputs with the limit and a hint", () => {
     // Issue 12: a fault case of 1 GV × 2.5 kA, and I_DM = 1e12 A on the part form.
     expect(saneValue(1e9, "voltage")).toBe(

@@ -65,6 +65,7 @@ describe("validateCheckRequest", () => {
     expect(result.ok && result.request.pulses.map((p) => p.kind)).toEqual(["rect", "triangle", "waveform"]);
   });
 
+  // METHODS.md §9: policy, optional ratings and pulses may be left out of a request.
   it("accepts the smallest request: no policy, no optional ratings, no pulses", () => {
     const body = {
       part: { vdsMax: 1, tjMax: 150, soa: { curves: [{ duration: 1, points: [[1, 1]] }] } },
@@ -89,6 +90,7 @@ describe("validateCheckRequest", () => {
     expect(result).toEqual({ ok: false, error: { path, message: "is not a field of the check contract" } });
   });
 
+  // METHODS.md §9 (v2): the voltage limit, the thermal reading between curves and a capture's start.
   it("accepts the v2 fields: voltage limit, thermal reading and a capture's start", () => {
     const body = broken((r) => {
       r.policy = { voltageLimit: 0.9, betweenCurves: "thermal" };
@@ -115,6 +117,7 @@ describe("validateCheckRequest", () => {
     expect(validateCheckRequest(wrong)).toMatchObject({ ok: false, error: { path: "pulses[3].start" } });
   });
 
+  // METHODS.md §9: each field's rule, and the error naming the first broken field's path and why.
   it.each([
     ["a body that is not an object", 42, "", "expected an object, got 42"],
     ["a missing part", broken((r) => delete (r as Json).part), "part", "is required"],
@@ -349,6 +352,7 @@ describe("validateCheckRequest", () => {
     expect(errorOf(body)).toEqual({ path, message });
   });
 
+  // Derived from §5 and §9: derating needs the reference case temperature below Tj,max; each broken field is named.
   it.each([
     [
       "a reference temperature at Tj,max",

@@ -40,6 +40,7 @@ describe("rectRise", () => {
     }
   });
 
+  // Our choice: no width or no network heats nothing (0 K), so callers need no special case.
   it("is 0 for a width ≤ 0 and for an empty network", () => {
     expect(rectRise(TWO_TERMS, 500, 0)).toBe(0);
     expect(rectRise(TWO_TERMS, 500, -1)).toBe(0);
@@ -83,6 +84,7 @@ describe("trainRise", () => {
     expectRelative(trainRise(ONE_TERM, 1, y, x, n), expected, 1e-14);
   });
 
+  // Our choice: no pulse heats nothing; a period shorter than the width is no train (NaN, refused upstream, §7).
   it("is 0 for a width ≤ 0 or fewer than one pulse, NaN when the period is shorter than the width", () => {
     expect(trainRise(TWO_TERMS, 500, 0, 1e-3)).toBe(0);
     expect(trainRise(TWO_TERMS, 500, 1e-3, 2e-3, 0)).toBe(0);

@@ -76,7 +76,7 @@ function sampledTrain(peakPower: number, width: number, period: number, count: n
 const network = fosterNetwork();
 
 describe("trianglePeakRise", () => {
-  // Derived: for one term from rest, θ(t) = R·P·[(1 − e^(−x))(1 + 1/u) − x/u] with x = t/τ, u = w/τ; dθ/dt = 0 at
+  // Derived from §4 and §6 (one Foster term, a triangle from rest): θ(t) = R·P·[(1 − e^(−x))(1 + 1/u) − x/u] with x = t/τ, u = w/τ; dθ/dt = 0 at
   // e^(−x) = 1/(1 + u), where θ = R·P·(1 − ln(1 + u)/u).
   it("one term from rest peaks at R·P·(1 − ln(1 + u)/u), u = w/τ", () => {
     for (const u of [1e-3, 0.1, 1, 3, 10, 1e4]) {

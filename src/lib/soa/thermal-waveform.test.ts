@@ -295,6 +295,7 @@ describe("rampFactor", () => {
 });
 
 describe("powerFromVI", () => {
+  // Common practice, no source: instantaneous power is p = v·i at each sample; unequal series are an error.
   it("multiplies sample by sample and rejects differing lengths", () => {
     expect(powerFromVI([48, 24, 0], [2, 0.5, 7])).toEqual(Float64Array.from([96, 12, 0]));
     expect(() => powerFromVI([1, 2], [1])).toThrow(RangeError);

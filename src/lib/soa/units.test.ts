@@ -62,6 +62,7 @@ describe("parseQuantity", () => {
     expect(value("1M")).toBe(1e6);
   });
 
+  // Our choice (issue 12): a single decimal comma is read as a decimal point.
   it("reads one decimal comma as a decimal point, as typed in many locales (issue 12)", () => {
     expect(value("1,5")).toBe(1.5);
     expect(value("4,2 mΩ", "Ω")).toBe(4.2e-3);
