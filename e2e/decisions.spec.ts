@@ -59,6 +59,8 @@ test.describe("compare and decide", () => {
     page,
     baseURL,
   }) => {
+    // The longest journey of the suite, with its own project set up first: three times the usual time limit.
+    test.slow();
     await signIn(page, lead);
     const { projectId, projectName } = await newComparedProject(page, baseURL!);
     const compare = new ComparePage(page);

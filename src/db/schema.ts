@@ -16,7 +16,10 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 // Types only (erased at run time): what a JSON column holds, so every read is typed without a cast.
+import type { CaptureMapping } from "@/lib/capture/parse";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
+import type { Finding } from "@/lib/soa/findings";
+import type { PulseResult } from "@/lib/soa/types";
 
 // Tables ----------------------------------------------------------------------------------------------------
 
@@ -284,7 +287,7 @@ export const curveSets = pgTable(
     shape: text({ enum: ["long", "paired"] }).notNull(),
     refCaseTemp: doublePrecision().notNull().default(25),
     active: boolean().notNull().default(false),
-    findings: jsonb().$type<unknown[]>().notNull().default([]),
+    findings: jsonb().$type<Finding[]>().notNull().default([]),
     uploadedBy: uuid().references(() => users.id, { onDelete: "set null" }),
     ...created,
   },
@@ -484,7 +487,7 @@ export const captures = pgTable(
     fileName: text().notNull(),
     size: integer().notNull(),
     sha256: text(),
-    mapping: jsonb().$type<Record<string, unknown>>().notNull(),
+    mapping: jsonb().$type<CaptureMapping>().notNull(),
     summary: jsonb().$type<CaptureSummary>(),
     trace: jsonb().$type<CaptureTrace>(),
     status: captureStatusEnum().notNull().default("done"),
@@ -526,7 +529,7 @@ export const captureResults = pgTable(
       .references(() => parts.id, { onDelete: "cascade" }),
     fingerprint: text().notNull(),
     /** The engine's result; null when the candidate has no SOA curves (no data). */
-    result: jsonb().$type<Record<string, unknown>>(),
+    result: jsonb().$type<PulseResult>(),
     junction: jsonb().$type<StoredJunction>(),
     /** The case temperature through the capture when the project applies its case path (the same on every row). */
     caseTrace: jsonb().$type<StoredJunction>(),

@@ -27,6 +27,7 @@ import {
 import type { Access, GuardedHandler } from "@/lib/auth/guard";
 import { type Action, can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
+import { captureMappingSchema } from "@/lib/capture/parse";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { nextAuthClear } from "@/test/auth-clear";
 import {
@@ -224,7 +225,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
         fileName: "c.csv",
         size: 1,
         sha256: "0".repeat(64),
-        mapping: {},
+        mapping: captureMappingSchema.parse({ time: 0, voltage: 1, current: 2 }),
         summary: {
           samples: 2,
           uniform: true,

@@ -10,7 +10,6 @@ import { notifyFailingEvidence } from "@/lib/projects/notify";
 import { loadCandidates } from "@/lib/projects/projects";
 import { powerFromVI } from "@/lib/soa/thermal-waveform";
 import type { Storage } from "@/lib/storage";
-import type { CaptureMapping } from "./parse";
 import { parseCaptureStream } from "./parse-stream";
 import { processCapture } from "./process";
 import { computeCaptureResults, storeCaptureResults, storedResults } from "./results";
@@ -73,7 +72,7 @@ export async function processCaptureJob(
     }
     step = "reading the CSV";
     const hash = createHash("sha256");
-    const parsed = await parseCaptureStream(stream, row.mapping as unknown as CaptureMapping, {
+    const parsed = await parseCaptureStream(stream, row.mapping, {
       sizeHint: head.size,
       onChunk: (chunk) => hash.update(chunk),
     });
@@ -94,7 +93,7 @@ export async function processCaptureJob(
           trace,
           sha256: hash.digest("hex"),
           size: parsed.bytes,
-          mapping: parsed.mapping as unknown as Record<string, unknown>,
+          mapping: parsed.mapping,
           error: null,
           processedAt: new Date(),
         })

@@ -105,7 +105,7 @@ export async function storeCaptureResults(tx: Tx, captureId: string, rows: Compu
   for (const row of rows) {
     const values = {
       fingerprint: row.fingerprint,
-      result: row.result as unknown as Record<string, unknown> | null,
+      result: row.result,
       junction: row.junction,
       caseTrace: row.caseTrace,
       computedAt,
@@ -214,7 +214,7 @@ export async function captureStates(project: Project, candidates: Candidate[]): 
     for (const candidate of candidates) {
       const hit = byKey.get(`${row.id}:${candidate.part.id}`);
       if (hit?.fingerprint !== fingerprintOf(candidate, row.start)) stale = true;
-      else if (hit.result) current[candidate.part.id] = hit.result as unknown as PulseResult;
+      else if (hit.result) current[candidate.part.id] = hit.result;
     }
     if (stale) states.stale.push(row.id);
     states.pulses.push({

@@ -115,7 +115,7 @@ export async function registerCapture(
           samplesKey,
           fileName: upload.fileName,
           size: head.size,
-          mapping: input.mapping as unknown as Record<string, unknown>,
+          mapping: input.mapping,
           status: "queued",
           start: input.start ?? null,
           note: input.note ?? null,

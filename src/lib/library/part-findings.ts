@@ -5,7 +5,7 @@ import { curveSets, curves, memberships, type Part, users } from "@/db/schema";
 import { env } from "@/lib/env";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { verificationLapsedMail } from "@/lib/mail/templates";
-import { type Finding, findCurveSetIssues, ORDER_FINDING_KINDS } from "@/lib/soa/findings";
+import { findCurveSetIssues, ORDER_FINDING_KINDS } from "@/lib/soa/findings";
 
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
@@ -36,7 +36,7 @@ export async function refreshFindings(tx: Tx, part: Pick<Part, "id" | "tjMax" | 
     )
     .orderBy(asc(curves.position));
   for (const set of sets) {
-    const kept = (set.findings as Finding[]).filter((f) => ORDER_FINDING_KINDS.includes(f.kind));
+    const kept = set.findings.filter((f) => ORDER_FINDING_KINDS.includes(f.kind));
     const found = findCurveSetIssues(
       {
         refCaseTemp: set.refCaseTemp,

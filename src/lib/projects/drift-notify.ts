@@ -76,7 +76,7 @@ async function noticeOne(
     .from(projects)
     .where(and(eq(projects.id, decision.projectId), isNull(projects.archivedAt)));
   if (!project) return 0;
-  const frozen = decision.snapshot as unknown as DecisionSnapshot;
+  const frozen = decision.snapshot;
   const items = changedVerdicts(frozen, await snapshotNow(project), partId);
   if (items.length === 0) return 0;
   const recipientIds = [...new Set([project.ownerId, decision.signedBy].filter((id): id is string => !!id))];

@@ -10,7 +10,6 @@ import { LazyCurveUpload, LazyThermalEditor, LazyTransferEditor } from "@/compon
 import { PartStats } from "@/components/library/part-stats";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
-import type { ChartFinding } from "@/components/soa-chart";
 import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
 import { requireMember } from "@/lib/auth/page";
 import { technologyLabels } from "@/lib/library/technologies";
@@ -61,7 +60,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
             hasCurves={active !== null}
             canWrite={canWrite}
             canVerify={canVerify}
-            findings={(active?.findings ?? []) as ChartFinding[]}
+            findings={active?.findings ?? []}
           />
         }
       />
@@ -95,7 +94,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
               fileName: active.fileName,
               refCaseTemp: active.refCaseTemp,
               curves: active.curves,
-              findings: active.findings as ChartFinding[],
+              findings: active.findings,
             }}
             accepted={part.status === "verified" ? part.acceptedFindings : []}
             hasTransfer={part.transfer !== null}

@@ -6,7 +6,7 @@ import { type FindingAcceptance, parts } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { type FindingLike, findingKey, unaccepted, verifySchema } from "@/lib/library/acceptance";
+import { findingKey, unaccepted, verifySchema } from "@/lib/library/acceptance";
 import { loadPart } from "@/lib/library/parts";
 
 /**
@@ -20,7 +20,7 @@ export const POST = route<{ id: string }>({ action: "part.verify" }, async (req,
   if (!active) {
     throw new AppError("conflict:no-curves", "Upload the part's SOA curves before verifying it.");
   }
-  const findings = active.findings as FindingLike[];
+  const findings = active.findings;
   const open = unaccepted(findings, acceptances);
   if (open.length > 0) {
     throw new AppError(
