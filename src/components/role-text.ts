@@ -17,6 +17,7 @@ export const actionDescriptions: Record<Action, string> = {
   "check.run": "Run checks of pulses against candidate parts",
   "part.write": "Add parts to the library with their SOA curve sets and thermal models",
   "project.write": "Create projects, candidates and fault cases",
+  "project.own": "Own a project and receive its failure notices",
   "part.verify": "Mark library parts as verified after a second check against the datasheet",
   "decision.sign": "Sign off a project's decision",
   "member.invite": "Invite people to the workspace",

@@ -1,7 +1,8 @@
 import "server-only";
-import { and, asc, count, eq } from "drizzle-orm";
+import { and, asc, count, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { memberships, type Role, users, workspaces } from "@/db/schema";
+import { rolesAllowed } from "@/lib/auth/permissions";
 
 export async function getMembership({ workspaceId, userId }: { workspaceId: string; userId: string }) {
   const [row] = await db
@@ -62,14 +63,17 @@ export async function lockedRole(tx: Tx, workspaceId: string, userId: string): P
   return row?.role ?? null;
 }
 
-export async function countAdmins(
+/** How many members may manage members (`member.manage`): a workspace never drops to none. */
+export async function countManagers(
   { workspaceId }: { workspaceId: string },
   client: Tx | typeof db = db,
 ): Promise<number> {
   const [row] = await client
     .select({ n: count() })
     .from(memberships)
-    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "admin" satisfies Role)));
+    .where(
+      and(eq(memberships.workspaceId, workspaceId), inArray(memberships.role, rolesAllowed("member.manage"))),
+    );
   return row?.n ?? 0;
 }
 

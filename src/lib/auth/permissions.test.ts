@@ -10,6 +10,7 @@ describe("permission table", () => {
       "part.write",
       "part.verify",
       "project.write",
+      "project.own",
       "decision.sign",
       "member.invite",
     ] as const) {
@@ -46,6 +47,11 @@ describe("permission table", () => {
   it("lets only admins manage members; admins and leads invite", () => {
     expect(roles.filter((r) => can(r, "member.manage"))).toEqual(["admin"]);
     expect(roles.filter((r) => can(r, "member.invite"))).toEqual(["admin", "lead"]);
+  });
+
+  it("lets anyone who writes projects own one, and never a technician", () => {
+    expect(roles.filter((r) => can(r, "project.own"))).toEqual(["admin", "lead", "engineer"]);
+    expect(can("technician", "project.own", true)).toBe(false);
   });
 
   it("lets engineers build the library and projects", () => {

@@ -9,6 +9,8 @@ export const actions = [
   "part.write",
   "part.verify",
   "project.write",
+  /** Be named a project's owner (the engineer it belongs to, who gets its failure notices). */
+  "project.own",
   "measurement.write",
   /** Correct or delete measured pulses and captures that another member recorded (one's own: measurement.write). */
   "measurement.manage",
@@ -29,6 +31,7 @@ const table: Record<Role, readonly Action[]> = {
     "workspace.read",
     "part.write",
     "project.write",
+    "project.own",
     "measurement.write",
     "measurement.manage",
     "check.run",
@@ -42,6 +45,7 @@ const table: Record<Role, readonly Action[]> = {
     "part.write",
     "part.verify",
     "project.write",
+    "project.own",
     "measurement.write",
     "measurement.manage",
     "check.run",
@@ -50,7 +54,14 @@ const table: Record<Role, readonly Action[]> = {
     "audit.read",
   ],
   // Builds the library and the projects.
-  engineer: ["workspace.read", "part.write", "project.write", "measurement.write", "check.run"],
+  engineer: [
+    "workspace.read",
+    "part.write",
+    "project.write",
+    "project.own",
+    "measurement.write",
+    "check.run",
+  ],
   // Logs what the bench measured.
   technician: ["workspace.read", "measurement.write", "check.run"],
 };

@@ -6,16 +6,17 @@ import { recordAudit } from "@/db/queries/audit";
 import { getMembership } from "@/db/queries/members";
 import { projects } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import type { anyFaultCaseSchema, projectSchema } from "./schema";
 
 type ProjectValues = z.output<typeof projectSchema>;
 
-/** The owner engineer must be a member of the workspace (any role that writes projects). */
+/** The owner must be a member of the workspace whose role may own a project (`project.own`). */
 export async function assertOwner(caller: MemberCaller, ownerId: string | null | undefined): Promise<void> {
   if (!ownerId) return;
   const membership = await getMembership({ workspaceId: caller.workspaceId, userId: ownerId });
-  if (!membership || membership.role === "technician") {
+  if (!membership || !can(membership.role, "project.own")) {
     throw new AppError("invalid:owner", "The owner must be an engineer, lead or admin of this workspace.", {
       details: { fieldErrors: { ownerId: ["Choose an engineer, lead or admin of this workspace"] } },
     });

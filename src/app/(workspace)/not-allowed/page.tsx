@@ -4,7 +4,14 @@ import { PageHeader } from "@/components/page-header";
 import { actionDescriptions } from "@/components/role-text";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
-import { type Action, actions, grantedByLeadRights, roleLabels, rolesAllowed } from "@/lib/auth/permissions";
+import {
+  type Action,
+  actions,
+  can,
+  grantedByLeadRights,
+  roleLabels,
+  rolesAllowed,
+} from "@/lib/auth/permissions";
 
 export const metadata: Metadata = { title: "Not for your role" };
 
@@ -20,7 +27,7 @@ export default async function NotAllowedPage({
   const member = await requireMember();
   const { action: raw } = await searchParams;
   const action = (actions as readonly string[]).includes(raw ?? "") ? (raw as Action) : null;
-  const admins = (await rememberedMembers(member.workspace.id)).filter((m) => m.role === "admin");
+  const admins = (await rememberedMembers(member.workspace.id)).filter((m) => can(m.role, "member.manage"));
   const allowed = action ? rolesAllowed(action).map((r) => roleLabels[r].toLowerCase()) : [];
   const byLeadRights = action ? grantedByLeadRights(action) : false;
 

@@ -4,7 +4,7 @@ import { TitleBar } from "@/components/library/title-bar";
 import { emptyProject, ProjectForm } from "@/components/projects/project-form";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
-import { roleLabels } from "@/lib/auth/permissions";
+import { can, roleLabels } from "@/lib/auth/permissions";
 
 export const metadata: Metadata = { title: "New project" };
 
@@ -12,7 +12,7 @@ export default async function NewProjectPage() {
   const member = await requireAction("project.write");
   const members = await rememberedMembers(member.workspace.id);
   const owners = members
-    .filter((m) => m.role !== "technician" && m.userId !== member.user.id)
+    .filter((m) => can(m.role, "project.own") && m.userId !== member.user.id)
     .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));
   return (
     <div className="space-y-5">

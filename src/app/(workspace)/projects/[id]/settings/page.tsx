@@ -7,7 +7,7 @@ import { ArchiveProject } from "@/components/projects/archive-project";
 import { ProjectForm } from "@/components/projects/project-form";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
-import { roleLabels } from "@/lib/auth/permissions";
+import { can, roleLabels } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { loadProject } from "@/lib/projects/projects";
 import { formatQuantity } from "@/lib/soa/units";
@@ -23,7 +23,7 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
   });
   const members = await rememberedMembers(member.workspace.id);
   const owners = members
-    .filter((m) => m.role !== "technician")
+    .filter((m) => can(m.role, "project.own"))
     .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));
   return (
     <div className="space-y-8">

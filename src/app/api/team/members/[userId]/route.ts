@@ -1,8 +1,8 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { countAdmins, getMembership, lockedRole, lockWorkspace } from "@/db/queries/members";
-import { memberships, projects } from "@/db/schema";
+import { countManagers, getMembership, lockedRole, lockWorkspace } from "@/db/queries/members";
+import { memberships, projects, type Role } from "@/db/schema";
 import { forgetCachedAuth } from "@/lib/auth/auth-memory";
 import { type MemberCaller, route } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
@@ -10,6 +10,8 @@ import { changeRoleSchema } from "@/lib/auth/schemas";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { isUuid } from "@/lib/uuid";
+
+const manages = (role: Role) => can(role, "member.manage");
 
 async function loadMember(caller: MemberCaller, userId: string) {
   const membership = isUuid(userId) ? await getMembership({ workspaceId: caller.workspaceId, userId }) : null;
@@ -41,7 +43,8 @@ export const PATCH = route<{ userId: string }>(
       await lockWorkspace(tx, caller.workspaceId);
       const current = await lockedRole(tx, caller.workspaceId, userId);
       if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
-      if (current === "admin" && role !== "admin" && (await countAdmins(caller, tx)) <= 1) {
+      // The last member who may manage members (an admin) keeps that role.
+      if (manages(current) && !manages(role) && (await countManagers(caller, tx)) <= 1) {
         throw new AppError(
           "conflict:last-admin",
           "A workspace needs at least one admin. Make someone else admin first.",
@@ -91,7 +94,7 @@ export const DELETE = route<{ userId: string }>(
       await lockWorkspace(tx, caller.workspaceId);
       const current = await lockedRole(tx, caller.workspaceId, userId);
       if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
-      if (current === "admin" && (await countAdmins(caller, tx)) <= 1) {
+      if (manages(current) && (await countManagers(caller, tx)) <= 1) {
         throw new AppError("conflict:last-admin", "The last admin cannot be removed.");
       }
       await assertStillManager(tx, caller);
