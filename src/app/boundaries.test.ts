@@ -1,6 +1,9 @@
 // Every workspace page has an error boundary of its own segment, and every workspace page without an id in its
 // path a loading state that says what is loading. No loading boundary sits above a page with an id: such a page
-// must answer 404 before anything is streamed, which a loading boundary above it would prevent.
+// must answer 404 before anything is streamed, which a loading boundary above it would prevent; it renders a
+// <Suspense> after its not-found check instead, whose fallback says what is loading. The not-allowed page reads
+// nothing slow (the member it already has, and the admins' names) and has no loading state. The root has a
+// global-error.tsx for a failure in the root layout itself.
 import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
@@ -50,6 +53,28 @@ describe("error and loading boundaries", () => {
       else if (!rel(dir).includes("not-allowed"))
         expect(loading.length, `${rel(dir)} has no loading.tsx`).toBe(1);
     }
+  });
+
+  it("every workspace page with an id shows a loading state after its not-found check", () => {
+    const withId = workspacePages.filter((dir) => rel(dir).includes("["));
+    expect(withId.length).toBeGreaterThan(5);
+    for (const dir of withId) {
+      const text = readFileSync(path.join(dir, "page.tsx"), "utf8");
+      // The not-found check is awaited in the page before the first <Suspense> renders (in the page or a helper).
+      expect(text, `${rel(dir)} answers 404 for an unknown id`).toMatch(/\bnotFound\(\)/);
+      const suspense = text.indexOf("<Suspense");
+      expect(suspense, `${rel(dir)} has no <Suspense> loading state`).toBeGreaterThan(-1);
+      expect(text.slice(suspense), rel(dir)).toMatch(
+        />\s*(Loading|Checking) (the|your) [^<]*[a-z][^<]*…\s*</,
+      );
+    }
+  });
+
+  it("the root has a global error boundary that renders its own document", () => {
+    const text = readFileSync(path.join(app, "global-error.tsx"), "utf8");
+    expect(text).toMatch(/^"use client";/);
+    expect(text).toMatch(/<html[\s>]/);
+    expect(text).toMatch(/<body[\s>]/);
   });
 
   it("every loading state says what is loading", () => {

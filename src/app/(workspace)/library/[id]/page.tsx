@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { cache } from "react";
+import { cache, Suspense } from "react";
+import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { Caution } from "@/components/caution";
 import { CurveSetRevisions } from "@/components/library/curve-set-revisions";
 import { LimitsPanel } from "@/components/library/limits-panel";
@@ -11,7 +12,7 @@ import { PartStats } from "@/components/library/part-stats";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
-import { requireMember } from "@/lib/auth/page";
+import { type PageMember, requireMember } from "@/lib/auth/page";
 import { technologyLabels } from "@/lib/library/technologies";
 
 /** The part, read once per request for both the title and the page. */
@@ -28,6 +29,21 @@ export async function generateMetadata({ params }: { params: Promise<{ id: strin
 export default async function PartPage({ params }: { params: Promise<{ id: string }> }) {
   const { member, part } = await pageOf((await params).id);
   if (!part) notFound();
+  // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
+  return (
+    <Suspense fallback={<PageSkeleton>Loading the part…</PageSkeleton>}>
+      <PartView member={member} part={part} />
+    </Suspense>
+  );
+}
+
+async function PartView({
+  member,
+  part,
+}: {
+  member: PageMember;
+  part: NonNullable<Awaited<ReturnType<typeof getPart>>>;
+}) {
   const [sets, active] = await Promise.all([
     listCurveSets({ partId: part.id }),
     getActiveCurveSet({ partId: part.id }),

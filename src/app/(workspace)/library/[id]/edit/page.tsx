@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
+import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { PartForm } from "@/components/library/part-form";
 import { TitleBar } from "@/components/library/title-bar";
 import { getPart, partFacets } from "@/db/queries/parts";
-import { requireAction } from "@/lib/auth/page";
+import { type PageMember, requireAction } from "@/lib/auth/page";
 import { editable } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Edit part" };
@@ -12,11 +14,24 @@ export const metadata: Metadata = { title: "Edit part" };
 export default async function EditPartPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireAction("part.write");
   const { id } = await params;
-  const [part, facets] = await Promise.all([
-    getPart({ workspaceId: member.workspace.id, partId: id }),
-    partFacets({ workspaceId: member.workspace.id }),
-  ]);
+  const part = await getPart({ workspaceId: member.workspace.id, partId: id });
   if (!part) notFound();
+  // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
+  return (
+    <Suspense fallback={<PageSkeleton>Loading the part form…</PageSkeleton>}>
+      <EditPartView member={member} part={part} />
+    </Suspense>
+  );
+}
+
+async function EditPartView({
+  member,
+  part,
+}: {
+  member: PageMember;
+  part: NonNullable<Awaited<ReturnType<typeof getPart>>>;
+}) {
+  const facets = await partFacets({ workspaceId: member.workspace.id });
   return (
     <div className="space-y-5">
       <TitleBar

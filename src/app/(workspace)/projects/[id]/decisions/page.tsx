@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
+import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { AuditList } from "@/components/decisions/audit-list";
 import { DecisionHistory } from "@/components/decisions/decision-history";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
-import { requireMember } from "@/lib/auth/page";
+import { type PageMember, requireMember } from "@/lib/auth/page";
 import { AppError } from "@/lib/errors";
 import { listDecisions } from "@/lib/projects/decisions";
 import { loadProject } from "@/lib/projects/projects";
@@ -22,6 +24,21 @@ export default async function DecisionsPage({ params }: { params: Promise<{ id: 
     if (error instanceof AppError) notFound();
     throw error;
   });
+  // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
+  return (
+    <Suspense fallback={<PageSkeleton>Loading the project's decisions…</PageSkeleton>}>
+      <DecisionsView member={member} project={project} />
+    </Suspense>
+  );
+}
+
+async function DecisionsView({
+  member,
+  project,
+}: {
+  member: PageMember;
+  project: Awaited<ReturnType<typeof loadProject>>;
+}) {
   const decisions = await listDecisions(project.id);
   const canSign = member.can("decision.sign");
 

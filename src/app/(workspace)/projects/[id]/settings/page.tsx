@@ -1,12 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
+import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { ArchiveProject } from "@/components/projects/archive-project";
 import { ProjectForm } from "@/components/projects/project-form";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
-import { requireAction } from "@/lib/auth/page";
+import { type PageMember, requireAction } from "@/lib/auth/page";
 import { can, roleLabels } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { loadProject } from "@/lib/projects/projects";
@@ -21,6 +23,21 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
     if (error instanceof AppError) notFound();
     throw error;
   });
+  // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
+  return (
+    <Suspense fallback={<PageSkeleton>Loading the project settings…</PageSkeleton>}>
+      <ProjectSettingsView member={member} project={project} />
+    </Suspense>
+  );
+}
+
+async function ProjectSettingsView({
+  member,
+  project,
+}: {
+  member: PageMember;
+  project: Awaited<ReturnType<typeof loadProject>>;
+}) {
   const members = await rememberedMembers(member.workspace.id);
   const owners = members
     .filter((m) => can(m.role, "project.own"))
