@@ -1,3 +1,4 @@
+// Long file: the pinned route table, its fixtures and the checks generated from it belong in one place.
 // Every route handler against a pinned table of what each method needs, checked against the files on disk: a route
 // file or an exported method that is not in the table fails, and so does a handler whose guard declares another
 // action than the one pinned here (a destructive route declared with a read action cannot pass). Each method is
@@ -171,6 +172,16 @@ async function dispatch(route: string, method: string, options: CallOptions = {}
 
 let a: TestWorkspace; // the workspace whose resources are addressed
 let b: TestWorkspace; // another team: must never reach a's resources
+/** The workspace the resource fixtures below create in: a, except while `inWorkspace` makes another's. */
+let home: TestWorkspace;
+async function inWorkspace<T>(ws: TestWorkspace, make: () => Promise<T>): Promise<T> {
+  home = ws;
+  try {
+    return await make();
+  } finally {
+    home = a;
+  }
+}
 interface Caller {
   who: string;
   role: Role;
@@ -214,7 +225,7 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
   "/api/v1/projects/[id]/measurements": async () => ({ id: await project() }),
   "/api/projects/[id]/captures/[captureId]": async () => {
     const id = await project();
-    const key = `${a.id}/projects/${id}/capture/${crypto.randomUUID()}`;
+    const key = `${home.id}/projects/${id}/capture/${crypto.randomUUID()}`;
     const [row] = await testDb.db
       .insert(captures)
       .values({
@@ -284,7 +295,7 @@ async function part(): Promise<string> {
   const [row] = await testDb.db
     .insert(parts)
     .values({
-      workspaceId: a.id,
+      workspaceId: home.id,
       partNumber: `RT-${crypto.randomUUID().slice(0, 8)}`,
       maker: "Route Test Devices",
       technology: "si-mosfet",
@@ -299,7 +310,7 @@ async function part(): Promise<string> {
 async function project(): Promise<string> {
   const [row] = await testDb.db
     .insert(projects)
-    .values({ workspaceId: a.id, name: `Route test ${crypto.randomUUID().slice(0, 6)}`, caseTemp: 60 })
+    .values({ workspaceId: home.id, name: `Route test ${crypto.randomUUID().slice(0, 6)}`, caseTemp: 60 })
     .returning({ id: projects.id });
   return row.id;
 }
@@ -326,7 +337,7 @@ async function projectWithDecision(): Promise<{ id: string; decisionId: string }
   const [row] = await testDb.db
     .insert(decisions)
     .values({
-      workspaceId: a.id,
+      workspaceId: home.id,
       projectId: id,
       chosenLabel: "none",
       rationale: "route test",
@@ -342,7 +353,7 @@ async function partWithCurveSet(): Promise<{ id: string; setId: string }> {
   const [set] = await testDb.db
     .insert(curveSets)
     .values({
-      workspaceId: a.id,
+      workspaceId: home.id,
       partId: id,
       objectKey: `test/${crypto.randomUUID()}.csv`,
       fileName: "soa.csv",
@@ -423,6 +434,7 @@ async function pendingUpload(workspaceId: string, purpose: string): Promise<stri
 beforeAll(async () => {
   a = await createTestWorkspace("Routes A");
   b = await createTestWorkspace("Routes B");
+  home = a;
   for (const role of roles) {
     const id = a.members[role].id;
     callers.push({ who: role, role, id, leadRights: false });
@@ -588,6 +600,40 @@ for (const route of Object.keys(table)) {
     });
   });
 }
+
+// A nested route's own parent with a child id that is not its own: another parent's child in the same workspace,
+// or another workspace's. Generated from the table, so a new nested route is covered by adding it there. Handlers
+// load the child by its parent (DEVELOPERS.md, Access control): either is a 404, never the other record.
+const nestedRoutes = Object.keys(table).filter((route) => (route.match(/\[/g) ?? []).length > 1);
+describe("an own parent with a foreign child id in the path", () => {
+  it("finds the nested routes", () => {
+    expect(nestedRoutes.length).toBeGreaterThan(8);
+    for (const route of nestedRoutes)
+      expect(route, "the parent is the route's first [id]").toMatch(/\/\[id\]\//);
+  });
+
+  for (const route of nestedRoutes)
+    it(`${route}: another parent's or another workspace's child is 404`, async () => {
+      for (const method of calledMethods(route)) {
+        const { need, body } = pinOf(route, method);
+        const caller = callers.find((c) => allows(need, c))!;
+        const own = await params(route, caller.id);
+        const children = {
+          "another parent's": await params(route, caller.id),
+          "another workspace's": await inWorkspace(b, () => params(route, caller.id)),
+        };
+        for (const [whose, other] of Object.entries(children)) {
+          expect(other.id, "a different parent").not.toBe(own.id);
+          const res = await dispatch(route, method, {
+            cookie: await sessionCookie(caller.id, a.id),
+            body,
+            params: { ...other, id: own.id },
+          });
+          expect(res.status, `${caller.who}: ${method} ${route} with ${whose} child`).toBe(404);
+        }
+      }
+    });
+});
 
 /** Calls a change with a cookie, optionally without any Origin header (a script or an old browser). */
 async function callWithout(route: string, method: string, noOrigin: boolean, options: CallOptions) {
