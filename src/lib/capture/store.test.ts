@@ -1,3 +1,4 @@
+// Long file: the capture path from upload to stored results, on one set of storage and database fixtures.
 // Capture upload → storage → streaming parse → objects and row, against the real storage fake and PostgreSQL.
 import { createHash } from "node:crypto";
 import { eq, inArray } from "drizzle-orm";

@@ -1,3 +1,4 @@
+// Long file: one short case per curve-set file shape and per problem the reader reports.
 // Expected values are derived by hand from the file contents (unit prefixes: SI, common practice, no source),
 // unless a comment names another source.
 import fc from "fast-check";

@@ -1,3 +1,4 @@
+// Long file: one short case per column, unit and problem the measurement table reader handles.
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import {

@@ -1,3 +1,4 @@
+// Long file: the engine's entry point through each view (curves, thermal, repetition, stability) on shared parts.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ACROSS_WIDTHS } from "@/test/curve-data";

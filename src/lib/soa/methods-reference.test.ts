@@ -1,3 +1,4 @@
+// Long file: METHODS.md §10's reference checks, kept together in the order the section lists them.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { runCheck } from "./check";

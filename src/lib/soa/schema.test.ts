@@ -1,3 +1,4 @@
+// Long file: every field rule of the check contract, one table of broken requests per area.
 import { describe, expect, it } from "vitest";
 import { formatPath, validateCheckRequest } from "./schema";
 

@@ -1,3 +1,4 @@
+// Long file: the waveform thermal model against an independent ODE solver, case by case.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { expectRelative, fosterNetwork, ONE_TERM, THREE_TERMS } from "@/test/foster-data";

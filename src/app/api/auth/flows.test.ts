@@ -1,3 +1,4 @@
+// Long file: every account flow (sign-up, sign-in, invitations, reset, tokens, secrets) on the same handlers and fixtures.
 // The account flows end to end through the real route handlers, PostgreSQL and the mail fake.
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeEach, describe, expect, it } from "vitest";
