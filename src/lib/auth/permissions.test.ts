@@ -1,5 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { actions, assignableRoles, can, leadRightsActions, roles, rolesAllowed } from "./permissions";
+import {
+  actions,
+  assignableRoles,
+  can,
+  leadRightsActions,
+  roleHasLeadRights,
+  roles,
+  rolesAllowed,
+} from "./permissions";
 
 // The product's division of work (PRODUCT.md, roles table), pinned so that a change to the table is deliberate.
 describe("permission table", () => {
@@ -31,6 +39,10 @@ describe("permission table", () => {
       for (const action of actions.filter((x) => !leadRightsActions.includes(x as never)))
         expect(can(role, action, true), `${role} ${action}`).toBe(can(role, action));
     }
+  });
+
+  it("says only a lead's role holds lead rights already, so only a lead is never offered them", () => {
+    expect(roles.filter((r) => roleHasLeadRights(r))).toEqual(["lead"]);
   });
 
   it("names the roles an action is open to, for the page that tells a member whom to ask", () => {

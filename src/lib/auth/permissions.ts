@@ -83,6 +83,11 @@ export function rolesAllowed(action: Action): Role[] {
   return roles.filter((role) => table[role].includes(action));
 }
 
+/** Whether a role already does everything lead rights grant (granting them would add nothing). */
+export function roleHasLeadRights(role: Role): boolean {
+  return leadRightsActions.every((action) => table[role].includes(action));
+}
+
 /** Whether lead rights would allow `action` to a member whose role does not. */
 export function grantedByLeadRights(action: Action): boolean {
   return (leadRightsActions as readonly Action[]).includes(action);

@@ -4,11 +4,11 @@ import { listApiTokens } from "@/db/queries/api-tokens";
 import { getNoticePreferences } from "@/lib/auth/notice-preferences";
 import { requireMember } from "@/lib/auth/page";
 import { CreateTokenForm } from "./create-token-form";
+import { LazyTokensTable } from "./lazy-tokens-table";
 import { NoticePreferencesForm } from "./notice-preferences-form";
 import { PasswordForm } from "./password-form";
 import { ProfileForm } from "./profile-form";
 import { SignOutEverywhere } from "./sign-out-everywhere";
-import { TokensTable } from "./tokens-table";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -59,7 +59,7 @@ export default async function AccountPage() {
       >
         <CreateTokenForm workspaceName={member.workspace.name} />
         <div className="mt-4">
-          <TokensTable
+          <LazyTokensTable
             tokens={tokens.map((t) => ({ ...t, workspaceName: workspaceNames.get(t.workspaceId) ?? null }))}
           />
         </div>

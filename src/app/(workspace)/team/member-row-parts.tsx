@@ -2,7 +2,7 @@
 
 import { Button } from "@/components/form";
 import type { Role } from "@/db/schema";
-import { roleLabels } from "@/lib/auth/permissions";
+import { roleHasLeadRights, roleLabels } from "@/lib/auth/permissions";
 
 // The pieces of a member's row on the Team page: the role controls and the notes that open under the row.
 
@@ -51,7 +51,7 @@ export function RoleControls({
           </option>
         ))}
       </select>
-      {access.role === "lead" ? null : (
+      {roleHasLeadRights(access.role) ? null : (
         <label className="inline-flex items-center gap-1.5 text-xs text-ink-muted max-md:min-h-11 pointer-coarse:min-h-11">
           <input
             type="checkbox"

@@ -4,7 +4,7 @@ import { StatBlocks } from "@/components/stat-blocks";
 import { listPendingInvitations } from "@/db/queries/invitations";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireAction } from "@/lib/auth/page";
-import { assignableRoles } from "@/lib/auth/permissions";
+import { assignableRoles, can } from "@/lib/auth/permissions";
 import { InvitationsTable } from "./invitations-table";
 import { InviteForm } from "./invite-form";
 import { MembersTable } from "./members-table";
@@ -21,7 +21,7 @@ export default async function TeamPage() {
   ]);
   const mayManage = member.can("member.manage");
   const grantable = assignableRoles(member.role);
-  const admins = members.filter((m) => m.role === "admin").length;
+  const admins = members.filter((m) => can(m.role, "member.manage")).length;
 
   return (
     <div className="space-y-8">
