@@ -143,7 +143,7 @@ try {
     const label = path.replace(ids.project, ":id").replace(ids.part, ":id");
     console.log(
       `${label.padEnd(26)} LCP ${Number.isNaN(lcp) ? "–" : `${lcp.toFixed(0)} ms`}`.padEnd(42) +
-        `first-load JS ${(last.jsGzip / 1024).toFixed(0)} kB gzip in ${last.jsFiles} files  (HTTP ${last.status}` +
+        `first-load JS ${(last.jsGzip / 1024).toFixed(1)} kB gzip in ${last.jsFiles} files  (HTTP ${last.status}` +
         `${last.ended === path ? "" : `, ended on ${last.ended.replace(ids.project, ":id").replace(ids.part, ":id")}`})`,
     );
   }

@@ -1,9 +1,9 @@
-import { zodResolver } from "@hookform/resolvers/zod";
 import type { FormEventHandler, ReactNode } from "react";
 import {
   type DefaultValues,
   type FieldValues,
   type Path,
+  type Resolver,
   type UseFormSetError,
   useForm,
 } from "react-hook-form";
@@ -13,6 +13,18 @@ import { applyServerErrors, fieldBinder } from "./form-errors";
 
 // The forms that post to the API and stay on the page (sign-in, sign-up, password, profile, …): zod checks the
 // values in the browser; a server's field errors land under their fields, anything else in the form's message.
+// A form names its schema by a loader: the schema, and zod with it, load at the form's first check, not with the
+// page (a page's first load stays within its budget).
+
+/** A form's zod schema, loaded when first needed: `() => import("@/lib/auth/schemas").then((m) => m.signInSchema)`. */
+export type SchemaLoader<T extends FieldValues> = () => Promise<z.ZodType<T, T>>;
+
+function lazyResolver<T extends FieldValues>(load: SchemaLoader<T>): Resolver<T> {
+  return async (values, context, options) => {
+    const [{ zodResolver }, schema] = await Promise.all([import("@hookform/resolvers/zod"), load()]);
+    return zodResolver(schema)(values, context, options);
+  };
+}
 
 /**
  * A react-hook-form form whose fields are the keys of `defaultValues`. `send` posts the values; an error it
@@ -25,12 +37,12 @@ export function useApiForm<T extends FieldValues>({
   send,
   onError,
 }: {
-  schema: z.ZodType<T, T>;
+  schema: SchemaLoader<T>;
   defaultValues: DefaultValues<T>;
   send: (values: T) => Promise<void>;
   onError?: (error: unknown, setError: UseFormSetError<T>) => boolean;
 }) {
-  const form = useForm<T>({ resolver: zodResolver(schema), defaultValues });
+  const form = useForm<T>({ resolver: lazyResolver(schema), defaultValues });
   const onSubmit = form.handleSubmit(async (values) => {
     try {
       await send(values);

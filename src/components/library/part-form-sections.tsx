@@ -2,7 +2,8 @@ import type { ReactNode } from "react";
 import type { Path } from "react-hook-form";
 import { SelectField } from "@/components/form";
 import type { Bind } from "@/components/form-errors";
-import { type PartInput, technologies, technologyLabels } from "@/lib/library/part-schema";
+import type { PartInput } from "@/lib/library/part-schema";
+import { technologies, technologyLabels } from "@/lib/library/technologies";
 import { UnitField } from "./fields";
 import { Sym } from "./symbols";
 

@@ -1,16 +1,26 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
-import { useForm } from "react-hook-form";
+import { type Resolver, useForm } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage } from "@/components/form";
 import { applyServerErrors, fieldBinder } from "@/components/form-errors";
-import { type PartInput, partSchema } from "@/lib/library/part-schema";
+import type { PartInput, partSchema } from "@/lib/library/part-schema";
 import { TextAreaField } from "./fields";
 import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from "./part-form-sections";
+
+type PartBody = ReturnType<typeof partSchema.parse>;
+
+/** The form's resolver: the schema (and zod with it) is loaded at the first check, not with the page. */
+const checkPart: Resolver<PartInput, unknown, PartBody> = async (values, context, options) => {
+  const [{ zodResolver }, { partSchema }] = await Promise.all([
+    import("@hookform/resolvers/zod"),
+    import("@/lib/library/part-schema"),
+  ]);
+  return zodResolver(partSchema)(values, context, options);
+};
 
 export type PartFormValues = {
   partNumber: string;
@@ -74,8 +84,8 @@ export function PartForm({
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<PartInput, unknown, ReturnType<typeof partSchema.parse>>({
-    resolver: zodResolver(partSchema),
+  } = useForm<PartInput, unknown, PartBody>({
+    resolver: checkPart,
     defaultValues: defaults as PartInput,
   });
 

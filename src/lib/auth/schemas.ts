@@ -65,3 +65,15 @@ export const noticePreferencesSchema = z.object({
   decisionDrift: z.boolean(),
   verificationLapsed: z.boolean(),
 });
+
+/** The reset form's own field (the token travels beside it). */
+export const resetPasswordFormSchema = resetPasswordSchema.pick({ password: true });
+
+/** Accepting an invitation: a new account needs a name and a real password. */
+export const inviteNewAccountSchema = z.object({ name: profileSchema.shape.name, password });
+
+/** Accepting an invitation into an existing account: it only proves itself with its password. */
+export const inviteExistingAccountSchema = z.object({
+  name: z.string(),
+  password: z.string().min(1, { message: "Enter your password" }),
+});

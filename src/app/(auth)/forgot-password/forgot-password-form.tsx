@@ -4,12 +4,11 @@ import { useState } from "react";
 import { sendJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, useApiForm } from "@/components/api-form";
 import { FormMessage } from "@/components/form";
-import { forgotPasswordSchema } from "@/lib/auth/schemas";
 
 export function ForgotPasswordForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
   const { onSubmit, bind, formState } = useApiForm({
-    schema: forgotPasswordSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.forgotPasswordSchema),
     defaultValues: { email: "" },
     send: async (values) => {
       await sendJson("POST", "/api/auth/forgot-password", values);

@@ -6,14 +6,13 @@ import { useState } from "react";
 import { sendJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, useApiForm } from "@/components/api-form";
 import { TextField } from "@/components/form";
-import { signInSchema } from "@/lib/auth/schemas";
 import { linkClass } from "../_components/auth-heading";
 
 export function SignInForm({ next }: { next: string | null }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
   const { onSubmit, bind, formState } = useApiForm({
-    schema: signInSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.signInSchema),
     defaultValues: { email: "", password: "" },
     send: async (values) => {
       await sendJson("POST", "/api/auth/sign-in", values);

@@ -4,12 +4,11 @@ import { useState } from "react";
 import { sendJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, NewPasswordField, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
-import { signUpSchema } from "@/lib/auth/schemas";
 
 export function SignUpForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
   const { onSubmit, bind, formState } = useApiForm({
-    schema: signUpSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.signUpSchema),
     defaultValues: { name: "", email: "", password: "", workspaceName: "" },
     send: async (values) => {
       await sendJson("POST", "/api/auth/sign-up", values);

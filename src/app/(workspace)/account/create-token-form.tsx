@@ -5,7 +5,6 @@ import { useState, useTransition } from "react";
 import { sendJson } from "@/components/api-client";
 import { useApiForm } from "@/components/api-form";
 import { Button, FormMessage, TextField } from "@/components/form";
-import { createTokenSchema } from "@/lib/auth/schemas";
 import { TokenSecret } from "./token-secret";
 
 interface CreatedToken {
@@ -20,7 +19,7 @@ export function CreateTokenForm({ workspaceName }: { workspaceName: string }) {
   const [refreshing, startTransition] = useTransition();
   const [created, setCreated] = useState<CreatedToken | null>(null);
   const { onSubmit, bind, reset, formState } = useApiForm({
-    schema: createTokenSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.createTokenSchema),
     defaultValues: { name: "" },
     send: async (values) => {
       const { token } = await sendJson<{ token: CreatedToken }>("POST", "/api/account/tokens", values);

@@ -4,12 +4,11 @@ import { useState } from "react";
 import { sendJson } from "@/components/api-client";
 import { AccountHint, ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
-import { changePasswordSchema } from "@/lib/auth/schemas";
 
 export function PasswordForm({ email }: { email: string }) {
   const [changed, setChanged] = useState(false);
   const { onSubmit, bind, reset, formState } = useApiForm({
-    schema: changePasswordSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.changePasswordSchema),
     defaultValues: { currentPassword: "", newPassword: "" },
     send: async (values) => {
       setChanged(false);

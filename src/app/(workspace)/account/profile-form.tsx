@@ -5,14 +5,13 @@ import { useState, useTransition } from "react";
 import { sendJson } from "@/components/api-client";
 import { ApiFormShell, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
-import { profileSchema } from "@/lib/auth/schemas";
 
 export function ProfileForm({ name, email }: { name: string; email: string }) {
   const router = useRouter();
   const [refreshing, startTransition] = useTransition();
   const [saved, setSaved] = useState(false);
   const { onSubmit, register, reset, formState } = useApiForm({
-    schema: profileSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.profileSchema),
     defaultValues: { name },
     send: async (values) => {
       setSaved(false);

@@ -3,24 +3,15 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { z } from "zod";
 import { sendJson } from "@/components/api-client";
 import { AccountHint, ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { TextField } from "@/components/form";
-import { password, profileSchema } from "@/lib/auth/schemas";
 import { linkClass } from "../../_components/auth-heading";
 
 interface Values {
   name: string;
   password: string;
 }
-
-// A new account needs a name and a real password; an existing one only proves itself with its password.
-const newAccountSchema: z.ZodType<Values, Values> = z.object({ name: profileSchema.shape.name, password });
-const existingAccountSchema: z.ZodType<Values, Values> = z.object({
-  name: z.string(),
-  password: z.string().min(1, { message: "Enter your password" }),
-});
 
 export function AcceptInvitationForm({
   token,
@@ -34,7 +25,10 @@ export function AcceptInvitationForm({
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
   const { onSubmit, bind, formState } = useApiForm<Values>({
-    schema: existing ? existingAccountSchema : newAccountSchema,
+    schema: () =>
+      import("@/lib/auth/schemas").then((m) =>
+        existing ? m.inviteExistingAccountSchema : m.inviteNewAccountSchema,
+      ),
     defaultValues: { name: "", password: "" },
     send: async (values) => {
       await sendJson("POST", "/api/invitations/accept", {

@@ -5,17 +5,14 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiError, sendJson } from "@/components/api-client";
 import { ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
-import { resetPasswordSchema } from "@/lib/auth/schemas";
 import { linkClass } from "../../_components/auth-heading";
-
-const formSchema = resetPasswordSchema.pick({ password: true });
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
   const [deadLink, setDeadLink] = useState(false);
   const { onSubmit, bind, formState } = useApiForm({
-    schema: formSchema,
+    schema: () => import("@/lib/auth/schemas").then((m) => m.resetPasswordFormSchema),
     defaultValues: { password: "" },
     send: async (values) => {
       await sendJson("POST", "/api/auth/reset-password", { token, password: values.password });
