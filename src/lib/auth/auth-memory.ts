@@ -53,42 +53,53 @@ export async function whenListening(): Promise<void> {
   await state.listening;
 }
 
-/** A member's role in a workspace, remembered as briefly as the rest; null when not a member. */
-export async function rememberedMembership(
-  workspaceId: string,
-  userId: string,
-): Promise<CachedMembership | null> {
+/**
+ * What memory holds (`cached`), else what `read` gets from the database, remembered (`remember`, with the
+ * generation taken before the read) unless it is null.
+ */
+async function throughMemory<T>(
+  cached: T | undefined,
+  read: () => Promise<T | null>,
+  remember: (value: T, generation: number) => void,
+): Promise<T | null> {
   listenForAuthChanges();
-  const cached = authCache.membership(workspaceId, userId);
-  if (cached) return cached;
+  if (cached !== undefined) return cached;
   const generation = authCache.generation();
-  const row = await getMembership({ workspaceId, userId });
-  if (!row) return null;
-  const membership = { role: row.role, leadRights: row.leadRights, workspaceName: row.workspaceName };
-  authCache.rememberMembership(workspaceId, userId, membership, generation);
-  return membership;
+  const value = await read();
+  if (value !== null) remember(value, generation);
+  return value;
+}
+
+/** A member's role in a workspace, remembered as briefly as the rest; null when not a member. */
+export function rememberedMembership(workspaceId: string, userId: string): Promise<CachedMembership | null> {
+  return throughMemory(
+    authCache.membership(workspaceId, userId),
+    async () => {
+      const row = await getMembership({ workspaceId, userId });
+      return row && { role: row.role, leadRights: row.leadRights, workspaceName: row.workspaceName };
+    },
+    (value, generation) => authCache.rememberMembership(workspaceId, userId, value, generation),
+  );
 }
 
 /** The workspaces a user belongs to (the switcher's list), remembered as briefly as the rest. */
 export async function rememberedWorkspaces(userId: string): Promise<readonly CachedWorkspace[]> {
-  listenForAuthChanges();
-  const cached = authCache.workspaces(userId);
-  if (cached) return cached;
-  const generation = authCache.generation();
-  const rows = await listUserWorkspaces({ userId });
-  authCache.rememberWorkspaces(userId, rows, generation);
-  return rows;
+  const rows = await throughMemory(
+    authCache.workspaces(userId),
+    () => listUserWorkspaces({ userId }),
+    (value, generation) => authCache.rememberWorkspaces(userId, value, generation),
+  );
+  return rows ?? [];
 }
 
 /** A workspace's members (owners, pickers, the team page), remembered as briefly as the rest. */
 export async function rememberedMembers(workspaceId: string): Promise<readonly CachedMember[]> {
-  listenForAuthChanges();
-  const cached = authCache.members(workspaceId);
-  if (cached) return cached;
-  const generation = authCache.generation();
-  const rows = await listMembers({ workspaceId });
-  authCache.rememberMembers(workspaceId, rows, generation);
-  return rows;
+  const rows = await throughMemory(
+    authCache.members(workspaceId),
+    () => listMembers({ workspaceId }),
+    (value, generation) => authCache.rememberMembers(workspaceId, value, generation),
+  );
+  return rows ?? [];
 }
 
 /**
