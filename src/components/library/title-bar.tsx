@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { ReactNode } from "react";
 
 /** A page's one-line title with its context under it and its actions at the right, over a hairline. */
@@ -18,5 +19,14 @@ export function TitleBar({
       </div>
       {actions ? <div className="flex flex-wrap items-center gap-2">{actions}</div> : null}
     </header>
+  );
+}
+
+/** A link in a title bar's context line (the trail back to the list and the record the page belongs to). */
+export function CrumbLink({ href, children }: { href: string; children: ReactNode }) {
+  return (
+    <Link href={href} className="hover:text-ink hover:underline">
+      {children}
+    </Link>
   );
 }

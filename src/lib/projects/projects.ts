@@ -19,6 +19,14 @@ export async function loadProject(caller: Pick<MemberCaller, "workspaceId">, pro
   return project;
 }
 
+/** The caller's workspace's project for a page, or null when there is none (the page then answers notFound()). */
+export async function findProject(caller: Pick<MemberCaller, "workspaceId">, projectId: string) {
+  return loadProject(caller, projectId).catch((error: unknown) => {
+    if (error instanceof AppError) return null;
+    throw error;
+  });
+}
+
 /**
  * The project, for a change: an archived project is kept read-only for history, so any change to it (its settings,
  * candidates, pulses, evidence or decisions) answers 409 until it is restored.

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { cache, Suspense } from "react";
 import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
@@ -9,7 +8,7 @@ import { LimitsPanel } from "@/components/library/limits-panel";
 import { PartActions } from "@/components/library/part-actions";
 import { LazyCurveUpload, LazyThermalEditor, LazyTransferEditor } from "@/components/library/part-page-lazy";
 import { PartStats } from "@/components/library/part-stats";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { getActiveCurveSet, getPart, listCurveSets } from "@/db/queries/parts";
 import { type PageMember, requireMember } from "@/lib/auth/page";
@@ -61,10 +60,8 @@ async function PartView({
         }
         context={
           <>
-            <Link href="/library" className="hover:text-ink hover:underline">
-              Library
-            </Link>{" "}
-            · {technologyLabels[part.technology]} · {part.package}
+            <CrumbLink href="/library">Library</CrumbLink> · {technologyLabels[part.technology]} ·{" "}
+            {part.package}
             {part.datasheetRevision ? ` · datasheet ${part.datasheetRevision}` : ""}
           </>
         }

@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { emptyPart, PartForm } from "@/components/library/part-form";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { partFacets } from "@/db/queries/parts";
 import { requireAction } from "@/lib/auth/page";
 
@@ -16,10 +15,7 @@ export default async function NewPartPage() {
         title="New part"
         context={
           <>
-            <Link href="/library" className="hover:text-ink hover:underline">
-              Library
-            </Link>{" "}
-            · {member.workspace.name}
+            <CrumbLink href="/library">Library</CrumbLink> · {member.workspace.name}
           </>
         }
       />

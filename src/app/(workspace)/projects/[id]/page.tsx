@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { type ComponentProps, Suspense } from "react";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { LoadingBox } from "@/components/loading-box";
 import { Prefetched } from "@/components/prefetched";
 import { projectKeys } from "@/components/projects/api";
@@ -10,10 +10,9 @@ import { ProjectWorkspace } from "@/components/projects/project-workspace";
 import type { Project } from "@/db/schema";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
-import { AppError } from "@/lib/errors";
 import { checkProject } from "@/lib/projects/check";
 import { projectDetail } from "@/lib/projects/detail";
-import { loadProject } from "@/lib/projects/projects";
+import { findProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -23,10 +22,7 @@ const linkButton =
 export default async function ProjectPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireMember();
   const { id } = await params;
-  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
-    if (error instanceof AppError) notFound();
-    throw error;
-  });
+  const project = (await findProject({ workspaceId: member.workspace.id }, id)) ?? notFound();
   const members = await rememberedMembers(member.workspace.id);
   const owner = members.find((m) => m.userId === project.ownerId);
   const canWrite = member.can("project.write");
@@ -37,9 +33,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
         title={project.name}
         context={
           <>
-            <Link href="/projects" className="hover:text-ink hover:underline">
-              Projects
-            </Link>
+            <CrumbLink href="/projects">Projects</CrumbLink>
             {owner ? ` · owner ${owner.name}` : ""}
           </>
         }

@@ -1,10 +1,9 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { PartForm } from "@/components/library/part-form";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { getPart, partFacets } from "@/db/queries/parts";
 import { type PageMember, requireAction } from "@/lib/auth/page";
 import { editable } from "@/lib/format";
@@ -38,13 +37,10 @@ async function EditPartView({
         title={`Edit ${part.partNumber}`}
         context={
           <>
-            <Link href="/library" className="hover:text-ink hover:underline">
-              Library
-            </Link>{" "}
-            ·{" "}
-            <Link href={`/library/${part.id}`} className="hover:text-ink hover:underline">
+            <CrumbLink href="/library">Library</CrumbLink> ·{" "}
+            <CrumbLink href={`/library/${part.id}`}>
               {part.maker} {part.partNumber}
-            </Link>
+            </CrumbLink>
           </>
         }
       />

@@ -1,29 +1,25 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { CompareActions } from "@/components/decisions/compare-actions";
 import { CompareView } from "@/components/decisions/compare-view";
 import { decisionKeys } from "@/components/decisions/types";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { LoadingBox } from "@/components/loading-box";
 import { Prefetched } from "@/components/prefetched";
+import { ProjectTrail } from "@/components/projects/project-trail";
 import type { Project } from "@/db/schema";
 import { requireMember } from "@/lib/auth/page";
-import { AppError } from "@/lib/errors";
 import { checkProject } from "@/lib/projects/check";
 import { listDecisions } from "@/lib/projects/decisions";
-import { loadProject } from "@/lib/projects/projects";
+import { findProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Compare and decide" };
 
 export default async function ComparePage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireMember();
   const { id } = await params;
-  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
-    if (error instanceof AppError) notFound();
-    throw error;
-  });
+  const project = (await findProject({ workspaceId: member.workspace.id }, id)) ?? notFound();
   const canSign = member.can("decision.sign");
 
   return (
@@ -32,17 +28,9 @@ export default async function ComparePage({ params }: { params: Promise<{ id: st
         title="Compare and decide"
         context={
           <>
-            <Link href="/projects" className="hover:text-ink hover:underline">
-              Projects
-            </Link>
-            {" / "}
-            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
-              {project.name}
-            </Link>
+            <ProjectTrail project={project} />
             {" · "}
-            <Link href={`/projects/${project.id}/decisions`} className="hover:text-ink hover:underline">
-              Decisions
-            </Link>
+            <CrumbLink href={`/projects/${project.id}/decisions`}>Decisions</CrumbLink>
           </>
         }
         actions={<CompareActions projectId={project.id} canSign={canSign} />}

@@ -7,10 +7,11 @@ import { AuditList } from "@/components/decisions/audit-list";
 import { DecisionHistory } from "@/components/decisions/decision-history";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
+import { ProjectTrail } from "@/components/projects/project-trail";
+import type { Project } from "@/db/schema";
 import { type PageMember, requireMember } from "@/lib/auth/page";
-import { AppError } from "@/lib/errors";
 import { listDecisions } from "@/lib/projects/decisions";
-import { loadProject } from "@/lib/projects/projects";
+import { findProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Decisions" };
 
@@ -20,10 +21,7 @@ const button =
 export default async function DecisionsPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireMember();
   const { id } = await params;
-  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
-    if (error instanceof AppError) notFound();
-    throw error;
-  });
+  const project = (await findProject({ workspaceId: member.workspace.id }, id)) ?? notFound();
   // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
   return (
     <Suspense fallback={<PageSkeleton>Loading the project's decisions…</PageSkeleton>}>
@@ -32,13 +30,7 @@ export default async function DecisionsPage({ params }: { params: Promise<{ id: 
   );
 }
 
-async function DecisionsView({
-  member,
-  project,
-}: {
-  member: PageMember;
-  project: Awaited<ReturnType<typeof loadProject>>;
-}) {
+async function DecisionsView({ member, project }: { member: PageMember; project: Project }) {
   const decisions = await listDecisions(project.id);
   const canSign = member.can("decision.sign");
 
@@ -46,17 +38,7 @@ async function DecisionsView({
     <div className="space-y-8">
       <TitleBar
         title="Decisions"
-        context={
-          <>
-            <Link href="/projects" className="hover:text-ink hover:underline">
-              Projects
-            </Link>
-            {" / "}
-            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
-              {project.name}
-            </Link>
-          </>
-        }
+        context={<ProjectTrail project={project} />}
         actions={
           <Link href={`/projects/${project.id}/compare`} className={button}>
             Compare and decide

@@ -1,17 +1,15 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Suspense } from "react";
 import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { ArchiveProject } from "@/components/projects/archive-project";
 import { ProjectForm } from "@/components/projects/project-form";
-import { rememberedMembers } from "@/lib/auth/auth-memory";
+import type { Project } from "@/db/schema";
 import { type PageMember, requireAction } from "@/lib/auth/page";
-import { can, roleLabels } from "@/lib/auth/permissions";
-import { AppError } from "@/lib/errors";
-import { loadProject } from "@/lib/projects/projects";
+import { ownerChoices } from "@/lib/projects/owner-choices";
+import { findProject } from "@/lib/projects/projects";
 import { formatQuantity } from "@/lib/soa/units";
 
 export const metadata: Metadata = { title: "Project settings" };
@@ -19,10 +17,7 @@ export const metadata: Metadata = { title: "Project settings" };
 export default async function ProjectSettingsPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireAction("project.write");
   const { id } = await params;
-  const project = await loadProject({ workspaceId: member.workspace.id }, id).catch((error: unknown) => {
-    if (error instanceof AppError) notFound();
-    throw error;
-  });
+  const project = (await findProject({ workspaceId: member.workspace.id }, id)) ?? notFound();
   // Found (or 404 above, answered before anything streams): the rest loads behind a loading state.
   return (
     <Suspense fallback={<PageSkeleton>Loading the project settings…</PageSkeleton>}>
@@ -31,30 +26,16 @@ export default async function ProjectSettingsPage({ params }: { params: Promise<
   );
 }
 
-async function ProjectSettingsView({
-  member,
-  project,
-}: {
-  member: PageMember;
-  project: Awaited<ReturnType<typeof loadProject>>;
-}) {
-  const members = await rememberedMembers(member.workspace.id);
-  const owners = members
-    .filter((m) => can(m.role, "project.own"))
-    .map((m) => ({ id: m.userId, name: m.name, role: roleLabels[m.role].toLowerCase() }));
+async function ProjectSettingsView({ member, project }: { member: PageMember; project: Project }) {
+  const owners = await ownerChoices(member.workspace.id);
   return (
     <div className="space-y-8">
       <TitleBar
         title="Project settings"
         context={
           <>
-            <Link href="/projects" className="hover:text-ink hover:underline">
-              Projects
-            </Link>{" "}
-            ·{" "}
-            <Link href={`/projects/${project.id}`} className="hover:text-ink hover:underline">
-              {project.name}
-            </Link>
+            <CrumbLink href="/projects">Projects</CrumbLink> ·{" "}
+            <CrumbLink href={`/projects/${project.id}`}>{project.name}</CrumbLink>
           </>
         }
       />

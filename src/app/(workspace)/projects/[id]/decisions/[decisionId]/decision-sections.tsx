@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { DateText } from "@/components/date-text";
 import { policyStat } from "@/components/decisions/policy-stat";
-import { TitleBar } from "@/components/library/title-bar";
+import { CrumbLink, TitleBar } from "@/components/library/title-bar";
+import { ProjectTrail } from "@/components/projects/project-trail";
 import { StatBlocks } from "@/components/stat-blocks";
 import { percent } from "@/lib/format";
 import type { DecisionSnapshot, loadDecision } from "@/lib/projects/decisions";
@@ -28,17 +29,9 @@ export function DecisionTitle({
       title={`Decision: ${decision.chosenLabel}`}
       context={
         <>
-          <Link href="/projects" className="hover:text-ink hover:underline">
-            Projects
-          </Link>
+          <ProjectTrail project={project} />
           {" / "}
-          <Link href={base} className="hover:text-ink hover:underline">
-            {project.name}
-          </Link>
-          {" / "}
-          <Link href={`${base}/decisions`} className="hover:text-ink hover:underline">
-            Decisions
-          </Link>
+          <CrumbLink href={`${base}/decisions`}>Decisions</CrumbLink>
         </>
       }
       actions={
