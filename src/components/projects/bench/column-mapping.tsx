@@ -1,7 +1,12 @@
 "use client";
 
 import { useId } from "react";
-import type { ColumnMapping, MeasurementColumns, MeasurementField } from "@/lib/csv/measurements";
+import {
+  type ColumnMapping,
+  MEASUREMENT_FIELDS,
+  type MeasurementColumns,
+  type MeasurementField,
+} from "@/lib/csv/measurements";
 
 const fieldWords: Record<MeasurementField, string> = {
   label: "label",
@@ -13,20 +18,10 @@ const fieldWords: Record<MeasurementField, string> = {
   frequency: "repetition frequency",
   count: "pulse count",
 };
-const order: MeasurementField[] = [
-  "label",
-  "voltage",
-  "current",
-  "width",
-  "shape",
-  "period",
-  "frequency",
-  "count",
-];
 
 /** What a column is read as now: a field, "skip" when left out, "" when nothing reads it. */
 function currentChoice(columns: MeasurementColumns, index: number): MeasurementField | "skip" | "" {
-  const field = order.find((f) => columns[f] === index);
+  const field = MEASUREMENT_FIELDS.find((f) => columns[f] === index);
   if (field) return field;
   if (columns.ignored.some((c) => c.index === index && c.note === "left out")) return "skip";
   return "";
@@ -85,7 +80,7 @@ export function ColumnMappingTable({
                   className="mt-0.5 block h-8 w-full rounded-md border border-line-strong bg-panel px-2 text-sm aria-invalid:border-fail"
                 >
                   {choice === "" ? <option value="">not read: choose…</option> : null}
-                  {order.map((f) => (
+                  {MEASUREMENT_FIELDS.map((f) => (
                     <option key={f} value={f}>
                       {fieldWords[f]}
                     </option>
