@@ -3,14 +3,7 @@
 import type { ReactNode } from "react";
 import { type FileRejection, useDropzone } from "react-dropzone";
 import { Button } from "@/components/form";
-import { MAX_CSV_BYTES, overLimit } from "@/lib/csv/limits";
-
-const accept = {
-  "text/csv": [".csv"],
-  "text/plain": [".txt", ".csv"],
-  "text/tab-separated-values": [".tsv"],
-  "application/vnd.ms-excel": [".csv"],
-};
+import { CSV_FILE_TYPES, MAX_CSV_BYTES, overLimit } from "@/lib/csv/limits";
 
 /** Why a dropped file was refused before it was sent, in words. */
 function refusal(rejections: FileRejection[]): string {
@@ -44,7 +37,7 @@ export function CsvDropzone({
   testId?: string;
 }) {
   const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
-    accept,
+    accept: CSV_FILE_TYPES,
     maxSize: MAX_CSV_BYTES,
     multiple: false,
     disabled: busy,

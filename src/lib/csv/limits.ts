@@ -9,3 +9,11 @@ export const MAX_CSV_BYTES = 5_000_000;
 export function overLimit(size: number, limit = MAX_CSV_BYTES): string {
   return `${fileSize(size)}; the limit is ${fileSize(limit)}`;
 }
+
+/** The file types a CSV drop zone offers and accepts (react-dropzone's `accept`): CSV, tab-separated and plain text. */
+export const CSV_FILE_TYPES = {
+  "text/csv": [".csv"],
+  "text/plain": [".txt", ".csv"],
+  "text/tab-separated-values": [".tsv"],
+  "application/vnd.ms-excel": [".csv"],
+};

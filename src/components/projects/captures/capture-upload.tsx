@@ -13,7 +13,7 @@ import {
   PREVIEW_BYTES,
   previewCaptureText,
 } from "@/lib/capture/parse";
-import { overLimit } from "@/lib/csv/limits";
+import { CSV_FILE_TYPES, overLimit } from "@/lib/csv/limits";
 import { fileSize } from "@/lib/format";
 import { invalidateProject } from "../api";
 import { captureKeys, type RegisteredCapture } from "./capture-api";
@@ -25,13 +25,6 @@ type Phase =
   | { kind: "uploading"; file: File; fraction: number }
   | { kind: "checking"; file: File }
   | { kind: "failed"; message: string; retry: { file: File; preview: CapturePreview } | null };
-
-const accept = {
-  "text/csv": [".csv"],
-  "text/plain": [".txt", ".csv"],
-  "text/tab-separated-values": [".tsv"],
-  "application/vnd.ms-excel": [".csv"],
-};
 
 function refusal(rejections: FileRejection[]): string {
   const [first] = rejections;
@@ -102,7 +95,7 @@ export function CaptureUpload({
   }
 
   const { getRootProps, getInputProps, isDragActive, open } = useDropzone({
-    accept,
+    accept: CSV_FILE_TYPES,
     maxSize: MAX_CAPTURE_BYTES,
     multiple: false,
     disabled: busy,
