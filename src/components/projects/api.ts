@@ -3,6 +3,7 @@ import { callJson } from "@/components/library/api";
 import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
 import type { CsvIssue } from "@/lib/csv/issues";
 import type { MeasurementColumns } from "@/lib/csv/measurements";
+import type { ProjectPulse } from "@/lib/projects/evaluate";
 import type { BetweenCurves, Flag, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
 
 // The project screens' view of our route handlers: the JSON they answer with (dates as ISO text), their query
@@ -87,19 +88,8 @@ export interface ProjectDetail {
   measuredPulses: MeasuredRecord[];
 }
 
-export type PulseSource = "fault-case" | "measured" | "capture";
-
-export interface CheckedPulse {
-  id: string;
-  source: PulseSource;
-  name: string;
-  caseTemp: number;
-  v: number | null;
-  i: number | null;
-  duration: number | null;
-  kind: "rect" | "triangle" | "waveform" | "avalanche";
-  repeat?: Repeat;
-}
+/** A pulse as the check's response carries it: the project's pulse without the engine's input and stored results. */
+export type CheckedPulse = Omit<ProjectPulse, "pulse" | "stored">;
 
 export interface CheckedCandidate {
   partId: string;
