@@ -8,36 +8,17 @@
 //   PF_LOAD_SECONDS  seconds per check run (default 10); PF_MIXED_SECONDS, PF_MIXED_RATE (60, 200)
 //   PF_LOAD_ONLY     "check" or "mixed" to run one part
 import autocannon from "autocannon";
-import { demoUsers } from "../src/lib/demo/users";
 import { checkBody } from "./load/check-body";
 import { type Figures, figuresLine, Recorder } from "./load/figures";
+import { engineerSession, loopbackOrigin } from "./load/target";
 
-const base = new URL(
-  process.env.PF_LOAD_URL ?? `http://127.0.0.1:${3000 + Number(process.env.PF_PORT_OFFSET ?? 0)}`,
-);
-if (!["127.0.0.1", "localhost", "[::1]"].includes(base.hostname) && !base.hostname.startsWith("127.")) {
-  throw new Error(`load traffic goes only to this machine's loopback address, not ${base.hostname}`);
-}
-const origin = base.origin;
+const origin = loopbackOrigin("load traffic goes");
 const checkSeconds = Number(process.env.PF_LOAD_SECONDS ?? 10);
 const mixedSeconds = Number(process.env.PF_MIXED_SECONDS ?? 60);
 const mixedRate = Number(process.env.PF_MIXED_RATE ?? 200);
 const only = process.env.PF_LOAD_ONLY;
 /** A request still unanswered after this long counts as a timeout. */
 const TIMEOUT_S = 10;
-
-async function signIn(): Promise<string> {
-  const engineer = demoUsers.find((u) => u.role === "engineer")!;
-  const res = await fetch(`${origin}/api/auth/sign-in`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin },
-    body: JSON.stringify({ email: engineer.email, password: engineer.password }),
-  });
-  if (!res.ok) throw new Error(`sign-in answered ${res.status}: is the demo workspace seeded?`);
-  const cookie = res.headers.getSetCookie().find((c) => c.startsWith("pulsefence_session="));
-  if (!cookie) throw new Error("sign-in set no session cookie");
-  return cookie.split(";")[0];
-}
 
 async function getJson<T>(path: string, cookie: string, init: RequestInit = {}): Promise<T> {
   const res = await fetch(`${origin}${path}`, {
@@ -153,7 +134,7 @@ async function mixedRun(cookie: string, token: string): Promise<void> {
   );
 }
 
-const cookie = await signIn();
+const cookie = await engineerSession(origin);
 const { token } = await getJson<{ token: { secret: string } }>("/api/account/tokens", cookie, {
   method: "POST",
   body: JSON.stringify({ name: `load ${new Date().toISOString()}` }),

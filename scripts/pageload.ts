@@ -7,31 +7,14 @@
 //   PF_LOAD_URL  the app, default http://127.0.0.1:<3000 + PF_PORT_OFFSET>
 import { gzipSync } from "node:zlib";
 import { type Browser, chromium, type Page } from "playwright-core";
-import { demoUsers } from "../src/lib/demo/users";
 import { quantile } from "./load/figures";
+import { engineerSession, loopbackOrigin } from "./load/target";
 
-const base = new URL(
-  process.env.PF_LOAD_URL ?? `http://127.0.0.1:${3000 + Number(process.env.PF_PORT_OFFSET ?? 0)}`,
-);
-if (!["127.0.0.1", "localhost", "[::1]"].includes(base.hostname) && !base.hostname.startsWith("127.")) {
-  throw new Error(`page loads go only to this machine's loopback address, not ${base.hostname}`);
-}
-const origin = base.origin;
+const origin = loopbackOrigin("page loads go");
 const runs = Number(process.env.PF_PAGELOAD_RUNS ?? 3);
 
 async function sessionCookie(): Promise<{ name: string; value: string }> {
-  const engineer = demoUsers.find((u) => u.role === "engineer")!;
-  const res = await fetch(`${origin}/api/auth/sign-in`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin },
-    body: JSON.stringify({ email: engineer.email, password: engineer.password }),
-  });
-  if (!res.ok) throw new Error(`sign-in answered ${res.status}: is the demo workspace seeded?`);
-  const pair = res.headers
-    .getSetCookie()
-    .find((c) => c.startsWith("pulsefence_session="))
-    ?.split(";")[0];
-  if (!pair) throw new Error("sign-in set no session cookie");
+  const pair = await engineerSession(origin);
   const at = pair.indexOf("=");
   return { name: pair.slice(0, at), value: pair.slice(at + 1) };
 }
