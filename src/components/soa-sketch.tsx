@@ -1,8 +1,7 @@
 "use client";
 
 import { decadeDomain } from "@/lib/chart/log-axis";
-import { idTitle, vdsTitle } from "./soa-chart/chart-axes";
-import { ChartFrame, PlotArea } from "./soa-chart/chart-frame";
+import { ChartFrame, SoaPlotArea } from "./soa-chart/chart-frame";
 import { linePath, type PlotBox, plotAxes } from "./soa-chart/frame-model";
 import { type Verdict, VerdictGlyph } from "./verdict-shape";
 
@@ -64,12 +63,10 @@ export function SoaSketch() {
       label="Sketch of a log-log SOA chart: limit lines for 100 µs, 1 ms, 10 ms and DC, with three pulses marked pass, marginal and fail."
       testId="soa-sketch"
     >
-      <PlotArea
+      <SoaPlotArea
         plot={plot}
         x={x}
         y={y}
-        xTitle={vdsTitle}
-        yTitle={idTitle}
         clipped={widths.map((w, k) => (
           <path
             key={w.label}

@@ -1,9 +1,8 @@
 "use client";
 
 import { type PointerEvent, useMemo, useState } from "react";
-import { idTitle, vdsTitle } from "@/components/soa-chart/chart-axes";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
-import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "@/components/soa-chart/chart-frame";
+import { ChartFigure, ChartFrame, pointerAt, SoaPlotArea } from "@/components/soa-chart/chart-frame";
 import { EndLabels, LimitLines, PulseMarks } from "@/components/soa-chart/chart-layers";
 import type { LegendRow } from "@/components/soa-chart/chart-legend";
 import { chartDomains, chartLayout, textWidth } from "@/components/soa-chart/chart-model";
@@ -99,12 +98,10 @@ function OverlayPlot({
       legend={{ rows: legend, x: layout.legend.x, y: layout.legend.y }}
       readout={readout}
     >
-      <PlotArea
+      <SoaPlotArea
         plot={plot}
         x={x}
         y={y}
-        xTitle={vdsTitle}
-        yTitle={idTitle}
         clipped={
           <LimitLines lines={lines} x={x} y={y} attributes={(line) => ({ "data-candidate": line.partId })} />
         }

@@ -1,7 +1,7 @@
 "use client";
 
-import { type PointerEvent, type ReactNode, useId } from "react";
-import { ChartAxes } from "./chart-axes";
+import { type ComponentProps, type PointerEvent, type ReactNode, useId } from "react";
+import { ChartAxes, idTitle, vdsTitle } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
 import { ChartExport } from "./chart-export-buttons";
 import { ChartLegend, type LegendRow } from "./chart-legend";
@@ -180,4 +180,9 @@ export function PlotArea({
       {front}
     </g>
   );
+}
+
+/** The plot area of an SOA chart (the full chart, the overlay, the sketch): V_DS across and I_D up as its titles. */
+export function SoaPlotArea(props: Omit<ComponentProps<typeof PlotArea>, "xTitle" | "yTitle">) {
+  return <PlotArea {...props} xTitle={vdsTitle} yTitle={idTitle} />;
 }

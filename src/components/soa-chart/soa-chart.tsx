@@ -4,9 +4,8 @@ import { type PointerEvent, useMemo, useState } from "react";
 import { interpolateCurve } from "@/lib/soa/interpolate-curve";
 import { formatQuantity } from "@/lib/soa/units";
 import { verdictWords } from "@/lib/vocabulary";
-import { idTitle, vdsTitle } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
-import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "./chart-frame";
+import { ChartFigure, ChartFrame, pointerAt, SoaPlotArea } from "./chart-frame";
 import { EndLabels, LimitLines, PulseMarks } from "./chart-layers";
 import { FindingMark, legendRows } from "./chart-legend";
 import { buildLines, type ChartLine, chartDomains, chartLayout, textWidth } from "./chart-model";
@@ -81,12 +80,10 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
       legend={{ rows, ...layout.legend, columnWidth: legendWidth }}
       readout={readout}
     >
-      <PlotArea
+      <SoaPlotArea
         plot={plot}
         x={x}
         y={y}
-        xTitle={vdsTitle}
-        yTitle={idTitle}
         clipped={
           <LimitLines
             lines={lines}
