@@ -2,17 +2,13 @@ import { expect, type Page, test } from "@playwright/test";
 import { benchCaptureCsv } from "./fixtures/capture-csv";
 import { signIn } from "./pages/auth-pages";
 import { createComparedProject } from "./pages/decisions-page";
+import { engineer } from "./pages/demo-people";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot } from "./screenshots";
 
 // METHODS.md §6 (revision 2): every sample of a capture is read at its own width, and the sample that decided a
 // failing verdict is shown: marked on the time charts, drawn on the SOA chart and named in the result's details.
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
 const demoProject = "48 V battery disconnect, cargo bike";
 const demoCapture = "Pre-charge ramp with controller idle load, board TW-03";
 

@@ -1,6 +1,7 @@
 import path from "node:path";
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
+import { engineer, lead, technician } from "./pages/demo-people";
 import { createPart, PartPage } from "./pages/library-page";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot, screenshotDir } from "./screenshots";
@@ -8,21 +9,6 @@ import { saveScreenshot, screenshotDir } from "./screenshots";
 // Issue 12: data entry a user can trust. Curve files in a table, paired semicolon/decimal-comma and paired tab
 // form, each digitised with 1–4 % noise where curves share the R_DS(on) line, and a set with a real crossing.
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
-const lead = {
-  name: "Teodor Vasquez-Lind",
-  email: "lead@tidewater.example",
-  password: "tidewater-lead-demo",
-};
-const technician = {
-  name: "Rafi Doucette",
-  email: "tech@tidewater.example",
-  password: "tidewater-tech-demo",
-};
 const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
 
 test("curve files upload without false findings; a thermal model added later updates them; verifying needs reasons", async ({

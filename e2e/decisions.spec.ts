@@ -4,21 +4,12 @@ import path from "node:path";
 import { expect, type Page, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
 import { ComparePage, createComparedProject, signDecisionThroughApi } from "./pages/decisions-page";
+import { engineer, lead } from "./pages/demo-people";
 import { saveScreenshot, screenshotDir } from "./screenshots";
 
 // The lead's job on the demo scenario: compare the three demo parts on the pre-charge inrush, see the
 // low-R_DS(on) part fail it and the linear-mode part pass, sign the decision, and take the PDF away.
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
-const lead = {
-  name: "Teodor Vasquez-Lind",
-  email: "lead@tidewater.example",
-  password: "tidewater-lead-demo",
-};
 const inrush = { name: "Pre-charge inrush", kind: "triangle" as const, v: 48, i: 1.5, duration: 0.048 };
 const demoParts = ["QM-80T16", "QM-100G28", "BFL-100L55"];
 

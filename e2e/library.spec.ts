@@ -1,19 +1,10 @@
 import { expect, test } from "@playwright/test";
 import { AppShell } from "./pages/app-shell";
 import { signIn } from "./pages/auth-pages";
+import { engineer, technician } from "./pages/demo-people";
 import { createPart, fixture, LibraryList, PartPage, plain } from "./pages/library-page";
 import { saveScreenshot } from "./screenshots";
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
-const technician = {
-  name: "Rafi Doucette",
-  email: "tech@tidewater.example",
-  password: "tidewater-tech-demo",
-};
 const demoParts = ["QM-80T16", "QM-100G28", "BFL-100L55"];
 const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`;
 

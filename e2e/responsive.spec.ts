@@ -1,17 +1,12 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, type Page, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
+import { lead } from "./pages/demo-people";
 import { saveScreenshot } from "./screenshots";
 
 // Every main page at a phone's, a tablet's and a desktop's size: no horizontal page overflow (wide tables scroll
 // inside their cards), the narrow-screen menu reaches the navigation, workspace and sign-out, and axe-core finds
 // no serious or critical accessibility violation (WCAG 2 A and AA rules).
-
-const lead = {
-  name: "Teodor Vasquez-Lind",
-  email: "lead@tidewater.example",
-  password: "tidewater-lead-demo",
-};
 
 const sizes = [
   { name: "phone", width: 390, height: 844 },

@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
 import { createComparedProject } from "./pages/decisions-page";
+import { engineer } from "./pages/demo-people";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot } from "./screenshots";
 
@@ -8,11 +9,6 @@ import { saveScreenshot } from "./screenshots";
 // current limit, clamped turn-off, pause, restarts) on the demo candidates, sees the sequence's power and each
 // candidate's Tj over the whole of it, and finds both in the results.
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
 const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
 const typed = { name: "Typed short", kind: "rect" as const, v: 48, i: 10, duration: 1e-3 };
 

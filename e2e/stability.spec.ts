@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
 import { ComparePage, createComparedProject } from "./pages/decisions-page";
+import { engineer, lead } from "./pages/demo-people";
 import { createPart, PartPage } from "./pages/library-page";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot } from "./screenshots";
@@ -9,16 +10,6 @@ import { saveScreenshot } from "./screenshots";
 // instability boundary on its SOA chart and a slow pulse that lies under the curves but beyond the boundary; a lead
 // sees the stability failure in the comparison.
 
-const engineer = {
-  name: "Imke Osei",
-  email: "engineer@tidewater.example",
-  password: "tidewater-engineer-demo",
-};
-const lead = {
-  name: "Teodor Vasquez-Lind",
-  email: "lead@tidewater.example",
-  password: "tidewater-lead-demo",
-};
 const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
 const partNumber = `ST-${stamp}`;
 
