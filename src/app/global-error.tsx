@@ -2,24 +2,13 @@
 
 // The last boundary: it replaces the root layout when that fails, so it renders its own document with the same look
 // (tokens from globals.css, the same fonts) and shows nothing of the workspace, only the error's reference.
-import localFont from "next/font/local";
 import { SegmentError, type SegmentErrorProps } from "@/components/segment-error";
+import { fontVariables } from "./fonts";
 import "./globals.css";
-
-const sans = localFont({
-  src: "./fonts/Geist-Variable.woff2",
-  variable: "--font-geist-sans",
-  display: "swap",
-});
-const mono = localFont({
-  src: "./fonts/GeistMono-Variable.woff2",
-  variable: "--font-geist-mono",
-  display: "swap",
-});
 
 export default function GlobalError(props: SegmentErrorProps) {
   return (
-    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+    <html lang="en" className={fontVariables}>
       <head>
         <title>Pulsefence</title>
       </head>

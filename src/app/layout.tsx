@@ -1,19 +1,8 @@
 import type { Metadata } from "next";
-import localFont from "next/font/local";
 import { headers } from "next/headers";
 import type { ReactNode } from "react";
+import { fontVariables } from "./fonts";
 import "./globals.css";
-
-const sans = localFont({
-  src: "./fonts/Geist-Variable.woff2",
-  variable: "--font-geist-sans",
-  display: "swap",
-});
-const mono = localFont({
-  src: "./fonts/GeistMono-Variable.woff2",
-  variable: "--font-geist-mono",
-  display: "swap",
-});
 
 export const metadata: Metadata = {
   title: { default: "Pulsefence", template: "%s · Pulsefence" },
@@ -24,7 +13,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   // Every page is rendered per request, so Next.js can put this request's CSP nonce (src/proxy.ts) on its scripts.
   await headers();
   return (
-    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+    <html lang="en" className={fontVariables}>
       <body className="min-h-screen bg-surface font-sans text-ink antialiased">{children}</body>
     </html>
   );
