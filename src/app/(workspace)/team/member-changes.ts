@@ -5,20 +5,15 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { sendJson } from "@/components/api-client";
 import type { Role } from "@/db/schema";
+import type { CachedMember } from "@/lib/auth/auth-cache";
 import { type Access, describeChange } from "./member-row-parts";
 
 // The members table's row state, lifted out of its rows: a role change waits for confirmation, a saved change says
 // so and can be undone, a removal asks first, and a failure is said under its row. One row at a time asks, saves
 // or fails; starting on another row clears the last one's.
 
-export interface Member {
-  userId: string;
-  name: string;
-  email: string;
-  role: Role;
-  leadRights: boolean;
-  joinedAt: Date;
-}
+/** A row of the members table: a workspace's member as pages list them. */
+export type Member = CachedMember;
 
 interface AccessChange {
   member: Member;
