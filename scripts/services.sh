@@ -145,8 +145,9 @@ start_services() {
 # Debian's nginx on APP_PORT, which balances them (least connections, kept-alive upstream connections) and sheds
 # overload: more than PF_APP_INFLIGHT requests in flight per process (default 24) answer 503 with Retry-After at
 # once instead of queueing into timeouts; /api/health is exempt, so it stays answerable under load. Bearer-token
-# POSTs to /api/v1/check go to PF_API_PROCESSES lean API servers instead (src/server/api-server.ts: the same
-# handler without the framework's request path; default one per core, PF_API_INFLIGHT in flight each, default 64).
+# POSTs to /api/v1/check, health and every API read (GET, HEAD) go to PF_API_PROCESSES lean API servers instead
+# (src/server/api-server.ts: the same handlers without the framework's request path; default one per core,
+# PF_API_INFLIGHT in flight each, default 64).
 # Logs go to $DATA_DIR/app-N.log, api-N.log and $DATA_DIR/nginx/. NEXT_DIST_DIR, if set, names the build served.
 start_app() {
   local processes=${PF_APP_PROCESSES:-$(nproc)} inflight=${PF_APP_INFLIGHT:-24} k port servers=""
@@ -243,6 +244,19 @@ $api_servers    keepalive 128;
       alias $ROOT/${NEXT_DIST_DIR:-.next}/static/;
       add_header Cache-Control "public, max-age=31536000, immutable";
       add_header X-Content-Type-Options nosniff;
+    }
+    # Reads of the API (GET and HEAD, session or token) go to the lean API servers too: the same handlers
+    # (src/server/lean-routes.ts), without the framework's request path. Changes made with a session go to the app.
+    location /api/ {
+      error_page 418 = @api_read;
+      error_page 503 @overloaded;
+      if (\$request_method ~ ^(GET|HEAD)\$) { return 418; }
+      limit_conn inflight $((processes * inflight));
+      proxy_pass http://app;
+    }
+    location @api_read {
+      limit_conn api_inflight $((api_processes * api_inflight));
+      proxy_pass http://api;
     }
     location = /api/v1/check {
       limit_conn api_inflight $((api_processes * api_inflight));

@@ -1,15 +1,28 @@
 // The lean API server answers exactly as the app's route would, over real HTTP: same access checks, same body
-// limits, same errors and headers, and the same result for the same request; it serves nothing else.
+// limits, same errors and headers, and the same result for the same request; it serves the check contract, health
+// and the API's reads, nothing else.
+import { readdirSync, readFileSync } from "node:fs";
 import type { AddressInfo } from "node:net";
+import path from "node:path";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, memberships } from "@/db/schema";
+import { apiTokens, memberships, projects } from "@/db/schema";
 import { whenListening } from "@/lib/auth/auth-memory";
 import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
-import { addMember, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import {
+  addMember,
+  call,
+  createTestWorkspace,
+  deleteWorkspace,
+  sessionCookie,
+  testDb,
+  workspaceForFile,
+} from "@/test/fixtures";
 import { POST as createToken } from "../app/api/account/tokens/route";
+import { GET as projectGet } from "../app/api/projects/[id]/route";
 import { POST as checkPost } from "../app/api/v1/check/route";
 import { createApiServer } from "./api-server";
+import { leanRoutes } from "./lean-routes";
 
 const body = smallCheckRequest([insidePulse, overVoltagePulse]);
 
@@ -117,10 +130,56 @@ describe("the lean API server", () => {
     expect(await head.text()).toBe("");
   });
 
-  it("serves nothing but the check contract and health", async () => {
+  it("serves nothing but the check contract, health and reads", async () => {
     const get = await fetch(`${base}/api/v1/check`);
     expect(get.status).toBe(404);
     expect((await get.json()).error.code).toBe("not_found:route");
     expect((await post({}, "{}", "/api/projects")).status).toBe(404);
+    const deleted = await fetch(`${base}/api/projects/${crypto.randomUUID()}`, { method: "DELETE" });
+    expect(deleted.status).toBe(404);
+  });
+
+  it("serves every read the app's route files export, and only those", async () => {
+    // The route files on disk whose module exports GET (read from the source, as the framework reads exports).
+    const apiDir = path.join(import.meta.dirname, "../app/api");
+    const withGet = readdirSync(apiDir, { recursive: true, encoding: "utf8" })
+      .filter((file) => path.basename(file) === "route.ts")
+      .filter((file) => /export const GET\b/.test(readFileSync(path.join(apiDir, file), "utf8")))
+      .map((file) => `/api/${path.dirname(file).split(path.sep).join("/")}`);
+    const leanReads = leanRoutes.filter((r) => r.method === "GET").map((r) => r.route);
+    expect(new Set(leanReads)).toEqual(new Set(withGet));
+    expect(leanReads).toHaveLength(withGet.length);
+  });
+
+  it("answers a session's read as the route does, and keeps another workspace's out", async () => {
+    const [own] = await testDb.db
+      .insert(projects)
+      .values({ workspaceId: ws.id, name: "Lean read" })
+      .returning({ id: projects.id });
+    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
+    const res = await fetch(`${base}/api/projects/${own.id}`, { headers: { cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("x-content-type-options")).toBe("nosniff");
+    const viaRoute = await call(projectGet, "GET", { cookie, params: { id: own.id } });
+    expect(await res.json()).toEqual(await viaRoute.json());
+    const head = await fetch(`${base}/api/projects/${own.id}`, { method: "HEAD", headers: { cookie } });
+    expect(head.status).toBe(200);
+    expect(await head.text()).toBe("");
+    expect((await fetch(`${base}/api/projects/${own.id}`)).status).toBe(401);
+    const other = await createTestWorkspace("Lean other");
+    try {
+      const foreign = await sessionCookie(other.members.lead.id, other.id);
+      const refused = await fetch(`${base}/api/projects/${own.id}`, { headers: { cookie: foreign } });
+      expect(refused.status).toBe(404);
+      expect((await refused.json()).error.code).toBe("not_found:project");
+    } finally {
+      await deleteWorkspace(other.id);
+    }
+  });
+
+  it("sends a path with a trailing slash to the one without, as the app does", async () => {
+    const res = await fetch(`${base}/api/projects/?archived=true`, { redirect: "manual" });
+    expect(res.status).toBe(308);
+    expect(res.headers.get("location")).toBe("/api/projects?archived=true");
   });
 });
