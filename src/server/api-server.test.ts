@@ -146,6 +146,11 @@ describe("the lean API server", () => {
       .filter((file) => path.basename(file) === "route.ts")
       .filter((file) => /export const GET\b/.test(readFileSync(path.join(apiDir, file), "utf8")))
       .map((file) => `/api/${path.dirname(file).split(path.sep).join("/")}`);
+    // They run outside the framework here, so none may reach for its request helpers.
+    for (const route of withGet) {
+      const source = readFileSync(path.join(apiDir, route.slice("/api/".length), "route.ts"), "utf8");
+      expect(source, route).not.toMatch(/from "next\/(headers|server)"/);
+    }
     const leanReads = leanRoutes.filter((r) => r.method === "GET").map((r) => r.route);
     expect(new Set(leanReads)).toEqual(new Set(withGet));
     expect(leanReads).toHaveLength(withGet.length);
