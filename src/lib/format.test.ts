@@ -44,16 +44,30 @@ describe("settingPercent, a limit as set (our choice: never rounded to another s
   });
 });
 
-describe("percent, utilisation (our choice: whole percent from 10 %, two figures below)", () => {
-  it("rounds to a whole percentage from 10 % up", () => {
-    expect(percent(0.834)).toBe(`83${T}%`);
+// A displayed utilisation may read high, never low (METHODS.md's first principle, applied to what is shown).
+describe("percent, utilisation (our choice: rounded up; whole percent from 10 %, two figures below)", () => {
+  it("rounds up to a whole percentage from 10 %", () => {
+    expect(percent(0.834)).toBe(`84${T}%`);
     expect(percent(1.32)).toBe(`132${T}%`);
     expect(percent(0.1)).toBe(`10${T}%`);
   });
-  it("keeps two significant figures below 10 %, without trailing zeros", () => {
+  it("never shows a failing utilisation as 100 % or less", () => {
+    expect(percent(1.004)).toBe(`101${T}%`);
+    expect(percent(1.0000001)).toBe(`101${T}%`);
+    expect(percent(1)).toBe(`100${T}%`);
+  });
+  it("does not round up the float noise of an exact value", () => {
+    expect(1.1 * 100).not.toBe(110);
+    expect(percent(1.1)).toBe(`110${T}%`);
+    expect(0.07 * 100).not.toBe(7);
+    expect(percent(0.07)).toBe(`7${T}%`);
+    expect(percent(0.8)).toBe(`80${T}%`);
+  });
+  it("keeps two significant figures below 10 %, rounded up, without trailing zeros", () => {
     expect(percent(0.042)).toBe(`4.2${T}%`);
     expect(percent(0.05)).toBe(`5${T}%`);
-    expect(percent(0.00123)).toBe(`0.12${T}%`);
+    expect(percent(0.00123)).toBe(`0.13${T}%`);
+    expect(percent(0)).toBe(`0${T}%`);
   });
   it("gives a dash for no value", () => {
     expect(percent(null)).toBe("—");

@@ -29,10 +29,18 @@ export function q(value: number | null | undefined, unit: Unit | "", digits = 3)
   return unit === "°C" ? formatTemperature(value) : formatQuantity(value, unit, digits);
 }
 
-/** Utilisation as a percentage: 0.834 → "83 %", 1.32 → "132 %", 0.042 → "4.2 %". */
+/**
+ * Utilisation (or a curve's deviation) as a percentage, rounded up, so that it never reads lower than it is: a
+ * pulse at 100.4 % of its limit fails and must not read "100 %". Whole percent from 10 %, two significant figures
+ * below: 0.834 → "84 %", 1.004 → "101 %", 0.8 → "80 %", 0.042 → "4.2 %". Noise in a value's last digits (1.1 × 100
+ * is 110.00000000000001) is not rounded up.
+ */
 export function percent(u: number | null | undefined): string {
   if (missing(u)) return "—";
-  return `${u < 0.1 ? Number((u * 100).toPrecision(2)) : Math.round(u * 100)}${THIN_SPACE}%`;
+  const pct = Number((u * 100).toPrecision(12));
+  if (pct === 0 || Math.abs(pct) >= 10) return `${Math.ceil(pct)}${THIN_SPACE}%`;
+  const step = 10 ** (Math.floor(Math.log10(Math.abs(pct))) - 1);
+  return `${Number((Math.ceil(pct / step) * step).toPrecision(2))}${THIN_SPACE}%`;
 }
 
 /**
