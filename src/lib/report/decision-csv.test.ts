@@ -68,6 +68,20 @@ describe("decisionCsv", () => {
     expect(b).toContain(",draft,,");
   });
 
+  // CSV injection: a spreadsheet runs a cell starting with =, +, - or @ as a formula (OWASP, "CSV Injection").
+  it("quotes a typed name a spreadsheet would run as a formula, and leaves numbers alone", () => {
+    const hostile = structuredClone(snapshot);
+    hostile.candidates[1].partNumber = '=HYPERLINK("x")';
+    hostile.candidates[1].maker = "@SUM(A1)";
+    hostile.pulses[0].name = "-2+3";
+    hostile.pulses[0].v = -48;
+    const a = decisionCsv(hostile).split("\r\n")[1];
+    expect(a).toContain(`"'=HYPERLINK(""x"")"`);
+    expect(a).toContain(`"'@SUM(A1)"`);
+    expect(a).toContain(`"'-2+3"`);
+    expect(a).toContain(",-48,");
+  });
+
   it("sensible() leaves missing and non-finite values empty", () => {
     expect(sensible(null)).toBe("");
     expect(sensible(Number.NaN)).toBe("");

@@ -45,5 +45,7 @@ export function decisionCsv(snapshot: DecisionSnapshot): string {
       };
     });
   });
-  return Papa.unparse(rows, { newline: "\r\n" });
+  // Names are typed by people: a cell a spreadsheet would run as a formula (=, +, -, @, tab or CR at the start of
+  // text) is prefixed with a quote. Numbers stay numbers, so a negative value is not touched.
+  return Papa.unparse(rows, { newline: "\r\n", escapeFormulae: true });
 }
