@@ -6,11 +6,12 @@ import type { AddressInfo } from "node:net";
 import path from "node:path";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, memberships, projects } from "@/db/schema";
+import { apiTokens, memberships } from "@/db/schema";
 import { whenListening } from "@/lib/auth/auth-memory";
 import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -157,10 +158,7 @@ describe("the lean API server", () => {
   });
 
   it("answers a session's read as the route does, and keeps another workspace's out", async () => {
-    const [own] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Lean read" })
-      .returning({ id: projects.id });
+    const own = await addProject(ws.id, { name: "Lean read" });
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
     const res = await fetch(`${base}/api/projects/${own.id}`, { headers: { cookie } });
     expect(res.status).toBe(200);

@@ -4,23 +4,16 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { GET as limitsGet } from "@/app/api/parts/[id]/limits/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
-import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
+import { curveSets, curves, parts, pendingUploads } from "@/db/schema";
 import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
 import { createStorage } from "@/lib/storage/storage";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
-import { requireEnv } from "@/test/services";
+import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { storageConfig } from "@/test/services";
 import { cleanupStaleUploads, presignUpload, registerCurveSet } from "./curve-upload";
 
-const storageConfig = {
-  endpoint: requireEnv("S3_ENDPOINT"),
-  region: "us-east-1",
-  bucket: requireEnv("S3_BUCKET"),
-  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
-  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
-};
-const storage = createStorage(storageConfig);
+const storage = createStorage(storageConfig());
 
 const csv = [
   "width,V_DS [V],I_D [A]",
@@ -38,22 +31,7 @@ const csv = [
 const ws = workspaceForFile("Uploads");
 let cookie: string;
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `UP-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Upload Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      status: "verified",
-    })
-    .returning();
-  return part;
-}
+const newPart = () => addPart(ws.id, { status: "verified" });
 
 /** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
 async function browserUpload(partId: string, text: string) {
@@ -133,7 +111,7 @@ describe("curve-set upload", () => {
       size: 10,
       purpose: "curve-set",
     });
-    const down = createStorage({ ...storageConfig, endpoint: "http://127.0.0.1:9" });
+    const down = createStorage({ ...storageConfig(), endpoint: "http://127.0.0.1:9" });
     const [upload] = await testDb.db
       .select()
       .from(pendingUploads)

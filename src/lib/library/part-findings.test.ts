@@ -7,9 +7,9 @@ import { PATCH as partPatch } from "@/app/api/parts/[id]/route";
 import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as verifyPost } from "@/app/api/parts/[id]/verify/route";
-import { curveSets, type Part, parts } from "@/db/schema";
+import { curveSets, parts } from "@/db/schema";
 import type { Finding } from "@/lib/soa/findings";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv } from "@/test/services";
 
 // Curves under a 1 Ω R_DS(on) line, each bending to a constant-power line (I = P/V): no shape findings.
@@ -30,22 +30,7 @@ const ws = workspaceForFile("Findings");
 let engineer: string;
 let lead: string;
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `PF-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Findings Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      rthJc: 0.5,
-    })
-    .returning();
-  return part;
-}
+const newPart = () => addPart(ws.id, { maker: "Findings Test Devices", rthJc: 0.5 });
 
 async function upload(partId: string, text: string) {
   const ticket = await (

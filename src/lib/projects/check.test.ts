@@ -1,12 +1,12 @@
 // The project check route against the engine's contract on the same inputs, on the real database.
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
-import { faultCases, measuredPulses, projects } from "@/db/schema";
+import { faultCases, measuredPulses } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { runCheck } from "@/lib/soa/check";
 import type { PartLimits, Pulse } from "@/lib/soa/types";
-import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addDemoCandidate, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
 const ws = workspaceForFile("Check");
 let projectId: string;
@@ -14,16 +14,12 @@ const limitsByPart = new Map<string, PartLimits>();
 
 beforeAll(async () => {
   const { db } = testDb;
-  const [project] = await db
-    .insert(projects)
-    .values({
-      workspaceId: ws.id,
-      name: "Disconnect board",
-      caseTemp: 85,
-      utilisationLimit: 0.7,
-      tjGuard: 20,
-    })
-    .returning();
+  const project = await addProject(ws.id, {
+    name: "Disconnect board",
+    caseTemp: 85,
+    utilisationLimit: 0.7,
+    tjGuard: 20,
+  });
   projectId = project.id;
   for (const demo of DEMO_PARTS) {
     // The second part without a thermal model: its repetitions read Z_th from the curves.

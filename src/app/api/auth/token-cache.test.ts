@@ -4,13 +4,14 @@
 // written off the response path at most once a minute; a wrong workspace is still a 404.
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, memberships, projects } from "@/db/schema";
+import { apiTokens, memberships } from "@/db/schema";
 import { authCache, whenListening } from "@/lib/auth/auth-memory";
 import { settleTokenWrites } from "@/lib/auth/token-auth";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -103,10 +104,7 @@ describe("remembered API tokens", () => {
   it("still answer 404 for a project of another workspace, remembered or not", async () => {
     const user = await addMember(ws.id, "engineer");
     const token = await newToken(user.id);
-    const [foreign] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: other.id, name: "Elsewhere", caseTemp: 60 })
-      .returning({ id: projects.id });
+    const foreign = await addProject(other.id, { name: "Elsewhere", caseTemp: 60 });
     for (let k = 0; k < 2; k++) {
       const res = await call(postMeasurements, "POST", {
         bearer: token.secret,
