@@ -1,7 +1,6 @@
 // Upload → storage → parse → rows, against the real storage fake and PostgreSQL.
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { GET as limitsGet } from "@/app/api/parts/[id]/limits/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { curveSets, curves, parts, pendingUploads } from "@/db/schema";
@@ -9,6 +8,7 @@ import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
 import { createStorage } from "@/lib/storage/storage";
+import { browserUpload, registerUpload } from "@/test/curve-upload";
 import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { storageConfig } from "@/test/services";
 import { cleanupStaleUploads, presignUpload, registerCurveSet } from "./curve-upload";
@@ -33,20 +33,6 @@ let cookie: string;
 
 const newPart = () => addPart(ws.id, { status: "verified" });
 
-/** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
-async function browserUpload(partId: string, text: string) {
-  const res = await call(uploadPost, "POST", {
-    cookie,
-    params: { id: partId },
-    body: { fileName: "figure-9.csv", size: Buffer.byteLength(text), purpose: "curve-set" },
-  });
-  expect(res.status).toBe(201);
-  const ticket = await res.json();
-  const put = await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
-  expect(put.status).toBe(200);
-  return ticket as { uploadId: string; objectKey: string };
-}
-
 async function rowsFor(partId: string) {
   return testDb.db.select().from(curveSets).where(eq(curveSets.partId, partId));
 }
@@ -58,12 +44,8 @@ beforeAll(async () => {
 describe("curve-set upload", () => {
   it("stores the object, the curves, name, size and SHA-256, and returns the part to draft", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, csv);
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(201);
     const [set] = await rowsFor(part.id);
     // The set keeps its own copy of the parsed bytes; the presigned object is removed.
@@ -88,12 +70,8 @@ describe("curve-set upload", () => {
   it("rejects a malformed file with row and column, stores nothing and deletes the object", async () => {
     const part = await newPart();
     const bad = "width,V_DS [V],I_D [A]\n1 ms,1,60\n1 ms,ten,40\n";
-    const ticket = await browserUpload(part.id, bad);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, bad);
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.error.details.issues[0]).toMatchObject({ row: 3, column: "V_DS [V]" });
@@ -132,18 +110,14 @@ describe("curve-set upload", () => {
 
   it("leaves neither rows nor object when the database fails mid-transaction", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
+    const ticket = await browserUpload(cookie, part.id, csv);
     // A real failure inside the transaction: a trigger that refuses the curves of this part's set.
     await testDb.sql.unsafe(`
       create or replace function pf_test_fail() returns trigger language plpgsql as $$
       begin raise exception 'forced failure for test'; end $$;
       create trigger pf_test_fail before insert on curves for each row execute function pf_test_fail();`);
     try {
-      const res = await call(registerPost, "POST", {
-        cookie,
-        params: { id: part.id },
-        body: { uploadId: ticket.uploadId },
-      });
+      const res = await registerUpload(cookie, part.id, ticket.uploadId);
       expect(res.status).toBe(500);
     } finally {
       await testDb.sql.unsafe("drop trigger pf_test_fail on curves; drop function pf_test_fail();");
@@ -156,7 +130,7 @@ describe("curve-set upload", () => {
 
   it("removes uploaded objects never registered", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
+    const ticket = await browserUpload(cookie, part.id, csv);
     await testDb.db
       .update(pendingUploads)
       .set({ createdAt: new Date(Date.now() - 2 * 3600_000) })
@@ -180,12 +154,8 @@ describe("curve-set upload", () => {
 describe("limits route", () => {
   it("returns derated and interpolated curves equal to the engine's", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
-    await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, csv);
+    await registerUpload(cookie, part.id, ticket.uploadId);
     const res = await call(limitsGet, "GET", {
       cookie,
       params: { id: part.id },

@@ -3,13 +3,13 @@
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
 import { POST as projectUploadPost } from "@/app/api/projects/[id]/uploads/route";
 import { captures, curveSets } from "@/db/schema";
 import { processCaptureJob } from "@/lib/capture/job";
 import { createStorage } from "@/lib/storage/storage";
+import { registerUpload } from "@/test/curve-upload";
 import { addPart, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv, storageConfig } from "@/test/services";
 
@@ -51,13 +51,7 @@ describe("registering one curve upload several times at once", () => {
       const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
       expect((await put(ticket.url, csv)).status).toBe(200);
       const statuses = await Promise.all(
-        Array.from({ length: 3 }, () =>
-          call(registerPost, "POST", {
-            cookie,
-            params: { id: part.id },
-            body: { uploadId: ticket.uploadId },
-          }),
-        ),
+        Array.from({ length: 3 }, () => registerUpload(cookie, part.id, ticket.uploadId)),
       ).then((rs) => rs.map((r) => r.status).sort());
       expect(statuses[0]).toBe(201);
       for (const s of statuses.slice(1)) expect([404, 409]).toContain(s);
@@ -83,11 +77,7 @@ describe("presigned uploads", () => {
     const part = await newPart();
     const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
     expect((await put(ticket.url, csv)).status).toBe(200);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(201);
     const forged = csv.replace("1 ms,40,10", "1 ms,40,99");
     await put(ticket.url, forged);
