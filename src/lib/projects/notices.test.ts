@@ -216,21 +216,13 @@ describe("decision drift", () => {
 
 describe("verification lapsed", () => {
   it("a verifier who turned these notices off hears nothing when the part returns to draft", async () => {
-    const [part] = await testDb.db
-      .insert(parts)
-      .values({
-        workspaceId: ws.id,
-        partNumber: "NT-8",
-        maker: "Notice Devices",
-        technology: "si-mosfet",
-        package: "TO-220",
-        vdsMax: 60,
-        tjMax: 175,
-        status: "verified",
-        verifiedBy: ws.members.admin.id,
-        verifiedAt: new Date(),
-      })
-      .returning();
+    const part = await addPart(ws.id, {
+      partNumber: "NT-8",
+      maker: "Notice Devices",
+      status: "verified",
+      verifiedBy: ws.members.admin.id,
+      verifiedAt: new Date(),
+    });
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
     await call(setNotices, "PATCH", {
