@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { runStamp } from "./fixtures/stamp";
 import { AccountPage } from "./pages/account-page";
 import { AppShell } from "./pages/app-shell";
 import { acceptInvitation, signIn, signUp } from "./pages/auth-pages";
@@ -12,7 +13,7 @@ function expectNoSecrets(html: string): void {
   expect(html).not.toMatch(/\b[0-9a-f]{64}\b/);
 }
 
-const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const stamp = runStamp();
 const admin = {
   name: "Ines Varga",
   email: `ines.${stamp}@pulsefence.test`,

@@ -1,5 +1,6 @@
 import path from "node:path";
 import { expect, test } from "@playwright/test";
+import { shortStamp } from "./fixtures/stamp";
 import { signIn } from "./pages/auth-pages";
 import { engineer, lead, technician } from "./pages/demo-people";
 import { createPart, PartPage } from "./pages/library-page";
@@ -9,7 +10,7 @@ import { saveScreenshot, screenshotDir } from "./screenshots";
 // Issue 12: data entry a user can trust. Curve files in a table, paired semicolon/decimal-comma and paired tab
 // form, each digitised with 1–4 % noise where curves share the R_DS(on) line, and a set with a real crossing.
 
-const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
+const stamp = shortStamp();
 
 test("curve files upload without false findings; a thermal model added later updates them; verifying needs reasons", async ({
   page,

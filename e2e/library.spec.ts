@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { shortStamp } from "./fixtures/stamp";
 import { AppShell } from "./pages/app-shell";
 import { signIn } from "./pages/auth-pages";
 import { engineer, technician } from "./pages/demo-people";
@@ -6,7 +7,7 @@ import { createPart, fixture, LibraryList, PartPage, plain } from "./pages/libra
 import { saveScreenshot } from "./screenshots";
 
 const demoParts = ["QM-80T16", "QM-100G28", "BFL-100L55"];
-const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`;
+const stamp = shortStamp();
 
 test("an engineer adds a part, drops its SOA curves and reads them derated and between widths", async ({
   page,
@@ -14,7 +15,7 @@ test("an engineer adds a part, drops its SOA curves and reads them derated and b
   const shell = new AppShell(page);
   const list = new LibraryList(page);
   const part = new PartPage(page);
-  const partNumber = `LX60-${stamp}`.toUpperCase();
+  const partNumber = `LX60-${stamp}`;
 
   await test.step("the engineer opens the library and sees the demo parts", async () => {
     await signIn(page, engineer);

@@ -1,11 +1,12 @@
 import { expect, test } from "@playwright/test";
+import { runStamp } from "./fixtures/stamp";
 import { requestSignUp, signUp } from "./pages/auth-pages";
 import { waitForMail } from "./pages/mail-inbox";
 import { saveScreenshot } from "./screenshots";
 
 // Each person chooses which notices they get; sign-up never tells whether an address already has an account.
 
-const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const stamp = runStamp();
 const person = {
   name: "Tamsin Ferreira",
   email: `tamsin.${stamp}@pulsefence.test`,

@@ -1,11 +1,12 @@
 import { expect, test } from "@playwright/test";
+import { runStamp } from "./fixtures/stamp";
 import { signIn, signUp } from "./pages/auth-pages";
 import { linkIn, waitForMail } from "./pages/mail-inbox";
 
 // The password forms end to end: a forgotten password reset by its e-mailed link (once only), a wrong sign-in,
 // and the account page's password and name forms, each with its browser check and its server's answer.
 
-const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const stamp = runStamp();
 const person = {
   name: "Ilse Varga",
   email: `ilse.${stamp}@pulsefence.test`,

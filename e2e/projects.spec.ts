@@ -1,11 +1,12 @@
 import { expect, test } from "@playwright/test";
+import { runStamp } from "./fixtures/stamp";
 import { AppShell } from "./pages/app-shell";
 import { signIn } from "./pages/auth-pages";
 import { engineer, technician } from "./pages/demo-people";
 import { ProjectsPage } from "./pages/projects-page";
 import { saveScreenshot } from "./screenshots";
 
-const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const stamp = runStamp();
 const projectName = `Cargo bike disconnect ${stamp}`;
 const parts = ["QM-80T16", "QM-100G28", "BFL-100L55"];
 

@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { shortStamp } from "./fixtures/stamp";
 import { signIn } from "./pages/auth-pages";
 import { createComparedProject } from "./pages/decisions-page";
 import { engineer } from "./pages/demo-people";
@@ -9,7 +10,7 @@ import { saveScreenshot } from "./screenshots";
 // current limit, clamped turn-off, pause, restarts) on the demo candidates, sees the sequence's power and each
 // candidate's Tj over the whole of it, and finds both in the results.
 
-const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
+const stamp = shortStamp();
 const typed = { name: "Typed short", kind: "rect" as const, v: 48, i: 10, duration: 1e-3 };
 
 test("the turn-off builder's unclamped case and the fault-sequence builder make checked fault cases", async ({

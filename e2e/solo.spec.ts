@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { runStamp } from "./fixtures/stamp";
 import { signUp } from "./pages/auth-pages";
 import { ComparePage } from "./pages/decisions-page";
 import { saveScreenshot } from "./screenshots";
@@ -6,7 +7,7 @@ import { saveScreenshot } from "./screenshots";
 // A one-person team: whoever signs up founds the workspace as admin with lead rights, adds the invented sample
 // project in one click, and signs a decision alone. Role changes confirm, say they saved and can be undone.
 
-const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`;
+const stamp = runStamp();
 const solo = {
   name: "Wren Okafor",
   email: `wren.${stamp}@pulsefence.test`,

@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { shortStamp } from "./fixtures/stamp";
 import { signIn } from "./pages/auth-pages";
 import { ComparePage, createComparedProject } from "./pages/decisions-page";
 import { engineer, lead } from "./pages/demo-people";
@@ -10,7 +11,7 @@ import { saveScreenshot } from "./screenshots";
 // instability boundary on its SOA chart and a slow pulse that lies under the curves but beyond the boundary; a lead
 // sees the stability failure in the comparison.
 
-const stamp = `${(Date.now() % 1e8).toString(36)}${Math.floor(Math.random() * 100)}`.toUpperCase();
+const stamp = shortStamp();
 const partNumber = `ST-${stamp}`;
 
 // Invented transfer data: the 150 °C curve carries five times the 25 °C current at 3 V and crosses it between 4 V

@@ -6,11 +6,13 @@ import type { AddressInfo } from "node:net";
 import path from "node:path";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, memberships, projects } from "@/db/schema";
+import { apiTokens, memberships } from "@/db/schema";
 import { whenListening } from "@/lib/auth/auth-memory";
+import { newApiToken } from "@/test/api-token";
 import { insidePulse, overVoltagePulse, smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -18,7 +20,6 @@ import {
   testDb,
   workspaceForFile,
 } from "@/test/fixtures";
-import { POST as createToken } from "../app/api/account/tokens/route";
 import { GET as projectGet } from "../app/api/projects/[id]/route";
 import { POST as checkPost } from "../app/api/v1/check/route";
 import { createApiServer } from "./api-server";
@@ -39,12 +40,6 @@ afterAll(async () => {
   await new Promise((resolve) => server.close(resolve));
 });
 
-async function newToken(userId: string) {
-  const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(createToken, "POST", { cookie, body: { name: "lean" } });
-  return (await res.json()).token as { id: string; secret: string };
-}
-
 const post = (headers: Record<string, string>, payload: string, path = "/api/v1/check") =>
   fetch(`${base}${path}`, {
     method: "POST",
@@ -55,7 +50,7 @@ const post = (headers: Record<string, string>, payload: string, path = "/api/v1/
 describe("the lean API server", () => {
   it("answers a token's check with the route's own result", async () => {
     const user = await addMember(ws.id, "technician");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "lean");
     const res = await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(body));
     expect(res.status).toBe(200);
     const lean = await res.json();
@@ -75,7 +70,7 @@ describe("the lean API server", () => {
 
   it("refuses a revoked token and a removed member", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "lean");
     expect((await post({ authorization: `Bearer ${token.secret}` }, JSON.stringify(body))).status).toBe(200);
     await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
     await expect
@@ -93,7 +88,7 @@ describe("the lean API server", () => {
 
   it("names the field of invalid input, and bounds the body as the app does", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "lean");
     const auth = { authorization: `Bearer ${token.secret}` };
     const broken = await post(auth, "{");
     expect(broken.status).toBe(400);
@@ -107,7 +102,7 @@ describe("the lean API server", () => {
 
   it("answers 64 requests at once, each with its own result", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "lean");
     const answers = await Promise.all(
       Array.from({ length: 64 }, async (_, k) => {
         const own = smallCheckRequest([{ ...insidePulse, id: `p${k}` }]);
@@ -157,10 +152,7 @@ describe("the lean API server", () => {
   });
 
   it("answers a session's read as the route does, and keeps another workspace's out", async () => {
-    const [own] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Lean read" })
-      .returning({ id: projects.id });
+    const own = await addProject(ws.id, { name: "Lean read" });
     const cookie = await sessionCookie(ws.members.technician.id, ws.id);
     const res = await fetch(`${base}/api/projects/${own.id}`, { headers: { cookie } });
     expect(res.status).toBe(200);

@@ -6,8 +6,12 @@ import {
   curveSets,
   curves,
   memberships,
+  type NewPart,
+  type Part,
+  type Project,
   parts,
   projectCandidates,
+  projects,
   type Role,
   users,
   workspaces,
@@ -15,7 +19,7 @@ import {
 import { hashPassword } from "@/lib/auth/password";
 import { startSession } from "@/lib/auth/session";
 import { type DemoPart, demoCurves } from "@/lib/demo/parts";
-import type { PartLimits } from "@/lib/soa/types";
+import type { Curve, PartLimits } from "@/lib/soa/types";
 import { requireEnv } from "./services";
 
 export const testDb = createDb(requireEnv("DATABASE_URL"), { max: 3 });
@@ -142,6 +146,74 @@ export async function deleteWorkspace(id: string): Promise<void> {
 }
 
 /**
+ * A part in the workspace's library with a unique number: a 60 V, 175 °C MOSFET in TO-220 unless `values` says
+ * otherwise.
+ */
+export async function addPart(workspaceId: string, values: Partial<NewPart> = {}): Promise<Part> {
+  const [part] = await testDb.db
+    .insert(parts)
+    .values({
+      workspaceId,
+      partNumber: `TP-${uid()}`,
+      maker: "Test Devices",
+      technology: "si-mosfet",
+      package: "TO-220",
+      vdsMax: 60,
+      tjMax: 175,
+      ...values,
+    })
+    .returning();
+  return part;
+}
+
+/** A project of the workspace (case temperature 25 °C unless `values` says otherwise). */
+export async function addProject(
+  workspaceId: string,
+  values: Omit<typeof projects.$inferInsert, "workspaceId">,
+): Promise<Project> {
+  const [project] = await testDb.db
+    .insert(projects)
+    .values({ workspaceId, ...values })
+    .returning();
+  return project;
+}
+
+/**
+ * A curve set of the part with its curves in order, as a registered upload leaves it (the file itself is not
+ * stored); the part's active set unless `options.active` is false. Returns the set's id.
+ */
+export async function addCurveSet(
+  workspaceId: string,
+  partId: string,
+  setCurves: readonly Curve[],
+  options: { active?: boolean; fileName?: string } = {},
+): Promise<string> {
+  const { db } = testDb;
+  const [set] = await db
+    .insert(curveSets)
+    .values({
+      workspaceId,
+      partId,
+      objectKey: `test/${crypto.randomUUID()}`,
+      fileName: options.fileName ?? "soa.csv",
+      size: 1,
+      sha256: "0".repeat(64),
+      shape: "long",
+      active: options.active ?? true,
+    })
+    .returning({ id: curveSets.id });
+  await db.insert(curves).values(
+    setCurves.map((c, position) => ({
+      curveSetId: set.id,
+      position,
+      duration: c.duration === "DC" ? null : c.duration,
+      points: c.points,
+    })),
+  );
+  return set.id;
+}
+
+/**
  * A demo part (src/lib/demo/parts.ts) in the workspace's library with its modelled curves as the active curve set,
  * added as a candidate of the project. Returns the ids and the part as the engine takes it.
  */
@@ -151,49 +223,23 @@ export async function addDemoCandidate(
   demo: DemoPart,
   options: { foster?: boolean } = {},
 ): Promise<{ partId: string; setId: string; limits: PartLimits }> {
-  const { db } = testDb;
   const withFoster = options.foster ?? true;
-  const [part] = await db
-    .insert(parts)
-    .values({
-      workspaceId,
-      partNumber: demo.partNumber,
-      maker: demo.maker,
-      technology: "si-mosfet",
-      package: demo.package,
-      vdsMax: demo.vdsMax,
-      idPulseMax: demo.idPulseMax,
-      rdsOn: demo.rdsOn,
-      tjMax: demo.tjMax,
-      rthJc: demo.rthJc,
-      foster: withFoster ? demo.foster : null,
-      unitCost: demo.unitCost,
-      currency: demo.currency,
-    })
-    .returning({ id: parts.id });
-  const [set] = await db
-    .insert(curveSets)
-    .values({
-      workspaceId,
-      partId: part.id,
-      objectKey: `test/${crypto.randomUUID()}`,
-      fileName: "soa.csv",
-      size: 1,
-      sha256: "0".repeat(64),
-      shape: "long",
-      active: true,
-    })
-    .returning({ id: curveSets.id });
+  const part = await addPart(workspaceId, {
+    partNumber: demo.partNumber,
+    maker: demo.maker,
+    package: demo.package,
+    vdsMax: demo.vdsMax,
+    idPulseMax: demo.idPulseMax,
+    rdsOn: demo.rdsOn,
+    tjMax: demo.tjMax,
+    rthJc: demo.rthJc,
+    foster: withFoster ? demo.foster : null,
+    unitCost: demo.unitCost,
+    currency: demo.currency,
+  });
   const setCurves = demoCurves(demo);
-  await db.insert(curves).values(
-    setCurves.map((c, position) => ({
-      curveSetId: set.id,
-      position,
-      duration: c.duration === "DC" ? null : c.duration,
-      points: c.points,
-    })),
-  );
-  await db.insert(projectCandidates).values({ projectId, partId: part.id });
+  const setId = await addCurveSet(workspaceId, part.id, setCurves);
+  await testDb.db.insert(projectCandidates).values({ projectId, partId: part.id });
   const limits: PartLimits = {
     vdsMax: demo.vdsMax,
     tjMax: demo.tjMax,
@@ -203,5 +249,5 @@ export async function addDemoCandidate(
     ...(withFoster ? { foster: demo.foster } : {}),
     soa: { refCaseTemp: 25, curves: setCurves },
   };
-  return { partId: part.id, setId: set.id, limits };
+  return { partId: part.id, setId, limits };
 }

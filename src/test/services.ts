@@ -8,6 +8,17 @@ export function requireEnv(name: string): string {
   return value;
 }
 
+/** The storage fake's settings from the environment the test command sets, for `createStorage`. */
+export function storageConfig() {
+  return {
+    endpoint: requireEnv("S3_ENDPOINT"),
+    region: process.env.S3_REGION ?? "us-east-1",
+    bucket: requireEnv("S3_BUCKET"),
+    accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
+    secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
+  };
+}
+
 export interface InboxMail {
   id: string;
   subject: string;

@@ -7,18 +7,21 @@ import { POST as faultCasePost } from "@/app/api/projects/[id]/fault-cases/route
 import { POST as projectPost } from "@/app/api/projects/route";
 import { POST as invitePost } from "@/app/api/team/invitations/route";
 import { POST as checkPost } from "@/app/api/v1/check/route";
-import { projects } from "@/db/schema";
-import { appUrl, call, type RouteHandler, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import {
+  addProject,
+  appUrl,
+  call,
+  type RouteHandler,
+  sessionCookie,
+  workspaceForFile,
+} from "@/test/fixtures";
 
 const ws = workspaceForFile("Fuzz");
 let admin: string;
 let projectId: string;
 beforeAll(async () => {
   admin = await sessionCookie(ws.members.admin.id, ws.id);
-  const [project] = await testDb.db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name: "Fuzz board", caseTemp: 25 })
-    .returning();
+  const project = await addProject(ws.id, { name: "Fuzz board", caseTemp: 25 });
   projectId = project.id;
 });
 

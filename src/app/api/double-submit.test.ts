@@ -4,18 +4,15 @@ import { describe, expect, it } from "vitest";
 import { PATCH as partPatch } from "@/app/api/parts/[id]/route";
 import { POST as partPost } from "@/app/api/parts/route";
 import { POST as signPost } from "@/app/api/projects/[id]/decisions/route";
-import { decisions, projects } from "@/db/schema";
+import { decisions } from "@/db/schema";
 import { DEMO_PARTS } from "@/lib/demo/parts";
-import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addDemoCandidate, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
 const ws = workspaceForFile("Twice");
 
 /** A project with one candidate; each test takes another demo part (one workspace holds each part once). */
 async function projectWithCandidate(demo: number) {
-  const [project] = await testDb.db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name: `Twice ${crypto.randomUUID().slice(0, 4)}`, caseTemp: 25 })
-    .returning();
+  const project = await addProject(ws.id, { name: `Twice ${crypto.randomUUID().slice(0, 4)}`, caseTemp: 25 });
   const { partId } = await addDemoCandidate(ws.id, project.id, DEMO_PARTS[demo]);
   return { projectId: project.id, partId };
 }

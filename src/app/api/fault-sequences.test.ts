@@ -6,11 +6,11 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
 import { PATCH as faultCasePatch } from "@/app/api/projects/[id]/fault-cases/[caseId]/route";
 import { POST as faultCasePost } from "@/app/api/projects/[id]/fault-cases/route";
-import { faultCases, parts, projects } from "@/db/schema";
+import { faultCases, parts } from "@/db/schema";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { faultSequence } from "@/lib/soa/sequence";
 import type { PulseResult } from "@/lib/soa/types";
-import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addDemoCandidate, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
 const ws = workspaceForFile("Sequences");
 let projectId: string;
@@ -18,10 +18,7 @@ let partId: string;
 let cookie: string;
 
 beforeAll(async () => {
-  const [project] = await testDb.db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name: "Disconnect", caseTemp: 25 })
-    .returning();
+  const project = await addProject(ws.id, { name: "Disconnect", caseTemp: 25 });
   projectId = project.id;
   // QM-100G28 (V_DSS 100 V) with an invented avalanche rating: E_AS 50 mJ, I_AS 30 A, V_BR 100 V.
   ({ partId } = await addDemoCandidate(ws.id, projectId, DEMO_PARTS[1]));

@@ -12,17 +12,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   apiTokens,
   captures,
-  curveSets,
-  curves,
   decisions,
   faultCases,
   invitations,
   measuredPulses,
   memberships,
-  parts,
   pendingUploads,
   projectCandidates,
-  projects,
   type Role,
 } from "@/db/schema";
 import type { Access, GuardedHandler } from "@/lib/auth/guard";
@@ -32,7 +28,10 @@ import { captureMappingSchema } from "@/lib/capture/parse";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
 import { nextAuthClear } from "@/test/auth-clear";
 import {
+  addCurveSet,
   addMember,
+  addPart,
+  addProject,
   type CallOptions,
   call,
   createTestWorkspace,
@@ -292,26 +291,14 @@ const paramFixtures: Record<string, () => Promise<Record<string, string>>> = {
 };
 
 async function part(): Promise<string> {
-  const [row] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: home.id,
-      partNumber: `RT-${crypto.randomUUID().slice(0, 8)}`,
-      maker: "Route Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 80,
-      tjMax: 175,
-    })
-    .returning({ id: parts.id });
-  return row.id;
+  return (await addPart(home.id, { vdsMax: 80 })).id;
 }
 
 async function project(): Promise<string> {
-  const [row] = await testDb.db
-    .insert(projects)
-    .values({ workspaceId: home.id, name: `Route test ${crypto.randomUUID().slice(0, 6)}`, caseTemp: 60 })
-    .returning({ id: projects.id });
+  const row = await addProject(home.id, {
+    name: `Route test ${crypto.randomUUID().slice(0, 6)}`,
+    caseTemp: 60,
+  });
   return row.id;
 }
 
@@ -350,29 +337,16 @@ async function projectWithDecision(): Promise<{ id: string; decisionId: string }
 
 async function partWithCurveSet(): Promise<{ id: string; setId: string }> {
   const id = await part();
-  const [set] = await testDb.db
-    .insert(curveSets)
-    .values({
-      workspaceId: home.id,
-      partId: id,
-      objectKey: `test/${crypto.randomUUID()}.csv`,
-      fileName: "soa.csv",
-      size: 10,
-      sha256: "0".repeat(64),
-      shape: "long",
-      active: true,
-    })
-    .returning({ id: curveSets.id });
-  await testDb.db.insert(curves).values({
-    curveSetId: set.id,
-    position: 0,
-    duration: 1e-3,
-    points: [
-      [1, 100],
-      [50, 2],
-    ],
-  });
-  return { id, setId: set.id };
+  const setId = await addCurveSet(home.id, id, [
+    {
+      duration: 1e-3,
+      points: [
+        [1, 100],
+        [50, 2],
+      ],
+    },
+  ]);
+  return { id, setId };
 }
 
 async function pendingInvitation(): Promise<string> {
@@ -656,24 +630,8 @@ describe("foreign ids in bodies and query strings", () => {
   let foreignPart = "";
   let foreignProject = "";
   beforeAll(async () => {
-    const [p] = await testDb.db
-      .insert(parts)
-      .values({
-        workspaceId: b.id,
-        partNumber: "FOREIGN-1",
-        maker: "Elsewhere",
-        technology: "si-mosfet",
-        package: "TO-220",
-        vdsMax: 80,
-        tjMax: 175,
-      })
-      .returning({ id: parts.id });
-    foreignPart = p.id;
-    const [q] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: b.id, name: "Foreign project", caseTemp: 25 })
-      .returning({ id: projects.id });
-    foreignProject = q.id;
+    foreignPart = (await addPart(b.id, { partNumber: "FOREIGN-1", maker: "Elsewhere", vdsMax: 80 })).id;
+    foreignProject = (await addProject(b.id, { name: "Foreign project", caseTemp: 25 })).id;
   });
 
   it("a candidate from another workspace's library is 404", async () => {

@@ -7,11 +7,12 @@ import { POST as signIn } from "@/app/api/auth/sign-in/route";
 import { POST as archivePost } from "@/app/api/projects/[id]/archive/route";
 import { POST as faultCasePost } from "@/app/api/projects/[id]/fault-cases/route";
 import { GET as matrixGet } from "@/app/api/projects/[id]/matrix/route";
-import { faultCases, projects } from "@/db/schema";
+import { faultCases } from "@/db/schema";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { contentSecurityPolicy } from "@/proxy";
 import {
   addDemoCandidate,
+  addProject,
   appUrl,
   call,
   sessionCookie,
@@ -62,10 +63,7 @@ describe("the redirect after sign-in", () => {
 
 describe("the matrix CSV", () => {
   it("escapes cells a spreadsheet would run as formulas, and names the file in UTF-8 too", async () => {
-    const [project] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Prüfstand 試験", caseTemp: 25 })
-      .returning();
+    const project = await addProject(ws.id, { name: "Prüfstand 試験", caseTemp: 25 });
     await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
     await testDb.db.insert(faultCases).values({
       projectId: project.id,
@@ -104,10 +102,7 @@ describe("reset links", () => {
 
 describe("archived projects", () => {
   it("refuse changes with 409 until restored", async () => {
-    const [project] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Old board", caseTemp: 25 })
-      .returning();
+    const project = await addProject(ws.id, { name: "Old board", caseTemp: 25 });
     const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
     const body = { name: "Short", kind: "rect", v: "48", i: "10", duration: "1 ms" };
     const archive = (archived: boolean) =>

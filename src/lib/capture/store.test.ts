@@ -11,11 +11,8 @@ import { GET as capturesGet, POST as capturesPost } from "@/app/api/projects/[id
 import { POST as uploadPost } from "@/app/api/projects/[id]/uploads/route";
 import {
   captures,
-  curveSets,
-  curves,
   type FosterTermRow,
   type Part,
-  parts,
   pendingUploads,
   projectCandidates,
   projects,
@@ -26,7 +23,10 @@ import { checkProject } from "@/lib/projects/check";
 import { powerFromVI, waveformRise } from "@/lib/soa/thermal-waveform";
 import { createStorage } from "@/lib/storage/storage";
 import {
+  addCurveSet,
   addMember,
+  addPart,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -35,20 +35,14 @@ import {
   testDb,
   workspaceForFile,
 } from "@/test/fixtures";
-import { requireEnv, waitForMail } from "@/test/services";
+import { storageConfig, waitForMail } from "@/test/services";
 import { GAVE_UP_WORDS, processCaptureJob, recheckCapture, startCaptureWorkers } from "./job";
 import { captureMappingSchema, previewCaptureText } from "./parse";
 import { parseCaptureText } from "./parse-stream";
 import { processCapture } from "./process";
 import { loadCaptureSamples, registerCapture, samplesKeyOf } from "./store";
 
-const storage = createStorage({
-  endpoint: requireEnv("S3_ENDPOINT"),
-  region: "us-east-1",
-  bucket: requireEnv("S3_BUCKET"),
-  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
-  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
-});
+const storage = createStorage(storageConfig());
 const { db } = testDb;
 
 /**
@@ -90,37 +84,13 @@ let small: Part;
 let big: Part;
 
 async function newPart(name: string, scale: number, foster: FosterTermRow[] | null): Promise<Part> {
-  const [part] = await db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `${name}-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Capture Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      foster,
-      status: "verified",
-    })
-    .returning();
-  const [set] = await db
-    .insert(curveSets)
-    .values({
-      workspaceId: ws.id,
-      partId: part.id,
-      objectKey: `${ws.id}/parts/${part.id}/curve-set/${crypto.randomUUID()}.csv`,
-      fileName: "soa.csv",
-      size: 1,
-      sha256: "0".repeat(64),
-      shape: "long",
-      active: true,
-    })
-    .returning();
-  await db.insert(curves).values([
+  const part = await addPart(ws.id, {
+    partNumber: `${name}-${crypto.randomUUID().slice(0, 6)}`,
+    foster,
+    status: "verified",
+  });
+  await addCurveSet(ws.id, part.id, [
     {
-      curveSetId: set.id,
-      position: 0,
       duration: 1e-4,
       points: [
         [1, 150 * scale],
@@ -128,8 +98,6 @@ async function newPart(name: string, scale: number, foster: FosterTermRow[] | nu
       ],
     },
     {
-      curveSetId: set.id,
-      position: 1,
       duration: 1e-3,
       points: [
         [1, 50 * scale],
@@ -139,8 +107,6 @@ async function newPart(name: string, scale: number, foster: FosterTermRow[] | nu
     {
       // A 10 ms curve: a capture's low-power samples are read at widths up to the record's own length
       // (METHODS.md §6), beyond 1 ms here.
-      curveSetId: set.id,
-      position: 2,
       duration: 1e-2,
       points: [
         [1, 20 * scale],
@@ -152,11 +118,7 @@ async function newPart(name: string, scale: number, foster: FosterTermRow[] | nu
 }
 
 async function newProject(name: string): Promise<string> {
-  const [project] = await db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name, caseTemp: 40, ownerId: ws.members.engineer.id })
-    .returning({ id: projects.id });
-  return project.id;
+  return (await addProject(ws.id, { name, caseTemp: 40, ownerId: ws.members.engineer.id })).id;
 }
 
 /** What the browser does: ask for a ticket, PUT the file to the presigned URL. */

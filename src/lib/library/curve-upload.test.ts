@@ -1,26 +1,19 @@
 // Upload → storage → parse → rows, against the real storage fake and PostgreSQL.
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { GET as limitsGet } from "@/app/api/parts/[id]/limits/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
-import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema";
+import { curveSets, curves, parts, pendingUploads } from "@/db/schema";
 import { allowedCurrent } from "@/lib/soa/allowed-current";
 import { prepareCurveSet } from "@/lib/soa/curve-set";
 import { derate } from "@/lib/soa/derate";
 import { createStorage } from "@/lib/storage/storage";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
-import { requireEnv } from "@/test/services";
+import { browserUpload, registerUpload } from "@/test/curve-upload";
+import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { storageConfig } from "@/test/services";
 import { cleanupStaleUploads, presignUpload, registerCurveSet } from "./curve-upload";
 
-const storageConfig = {
-  endpoint: requireEnv("S3_ENDPOINT"),
-  region: "us-east-1",
-  bucket: requireEnv("S3_BUCKET"),
-  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
-  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
-};
-const storage = createStorage(storageConfig);
+const storage = createStorage(storageConfig());
 
 const csv = [
   "width,V_DS [V],I_D [A]",
@@ -38,36 +31,7 @@ const csv = [
 const ws = workspaceForFile("Uploads");
 let cookie: string;
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `UP-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Upload Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      status: "verified",
-    })
-    .returning();
-  return part;
-}
-
-/** What the browser does: ask for a ticket, PUT the file to the presigned URL. */
-async function browserUpload(partId: string, text: string) {
-  const res = await call(uploadPost, "POST", {
-    cookie,
-    params: { id: partId },
-    body: { fileName: "figure-9.csv", size: Buffer.byteLength(text), purpose: "curve-set" },
-  });
-  expect(res.status).toBe(201);
-  const ticket = await res.json();
-  const put = await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
-  expect(put.status).toBe(200);
-  return ticket as { uploadId: string; objectKey: string };
-}
+const newPart = () => addPart(ws.id, { status: "verified" });
 
 async function rowsFor(partId: string) {
   return testDb.db.select().from(curveSets).where(eq(curveSets.partId, partId));
@@ -80,12 +44,8 @@ beforeAll(async () => {
 describe("curve-set upload", () => {
   it("stores the object, the curves, name, size and SHA-256, and returns the part to draft", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, csv);
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(201);
     const [set] = await rowsFor(part.id);
     // The set keeps its own copy of the parsed bytes; the presigned object is removed.
@@ -110,12 +70,8 @@ describe("curve-set upload", () => {
   it("rejects a malformed file with row and column, stores nothing and deletes the object", async () => {
     const part = await newPart();
     const bad = "width,V_DS [V],I_D [A]\n1 ms,1,60\n1 ms,ten,40\n";
-    const ticket = await browserUpload(part.id, bad);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, bad);
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.error.details.issues[0]).toMatchObject({ row: 3, column: "V_DS [V]" });
@@ -133,7 +89,7 @@ describe("curve-set upload", () => {
       size: 10,
       purpose: "curve-set",
     });
-    const down = createStorage({ ...storageConfig, endpoint: "http://127.0.0.1:9" });
+    const down = createStorage({ ...storageConfig(), endpoint: "http://127.0.0.1:9" });
     const [upload] = await testDb.db
       .select()
       .from(pendingUploads)
@@ -154,18 +110,14 @@ describe("curve-set upload", () => {
 
   it("leaves neither rows nor object when the database fails mid-transaction", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
+    const ticket = await browserUpload(cookie, part.id, csv);
     // A real failure inside the transaction: a trigger that refuses the curves of this part's set.
     await testDb.sql.unsafe(`
       create or replace function pf_test_fail() returns trigger language plpgsql as $$
       begin raise exception 'forced failure for test'; end $$;
       create trigger pf_test_fail before insert on curves for each row execute function pf_test_fail();`);
     try {
-      const res = await call(registerPost, "POST", {
-        cookie,
-        params: { id: part.id },
-        body: { uploadId: ticket.uploadId },
-      });
+      const res = await registerUpload(cookie, part.id, ticket.uploadId);
       expect(res.status).toBe(500);
     } finally {
       await testDb.sql.unsafe("drop trigger pf_test_fail on curves; drop function pf_test_fail();");
@@ -178,7 +130,7 @@ describe("curve-set upload", () => {
 
   it("removes uploaded objects never registered", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
+    const ticket = await browserUpload(cookie, part.id, csv);
     await testDb.db
       .update(pendingUploads)
       .set({ createdAt: new Date(Date.now() - 2 * 3600_000) })
@@ -202,12 +154,8 @@ describe("curve-set upload", () => {
 describe("limits route", () => {
   it("returns derated and interpolated curves equal to the engine's", async () => {
     const part = await newPart();
-    const ticket = await browserUpload(part.id, csv);
-    await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const ticket = await browserUpload(cookie, part.id, csv);
+    await registerUpload(cookie, part.id, ticket.uploadId);
     const res = await call(limitsGet, "GET", {
       cookie,
       params: { id: part.id },

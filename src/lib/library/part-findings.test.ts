@@ -2,14 +2,13 @@
 // against the real database, storage fake and mail fake (issue 12).
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { PATCH as partPatch } from "@/app/api/parts/[id]/route";
 import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
-import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as verifyPost } from "@/app/api/parts/[id]/verify/route";
-import { curveSets, type Part, parts } from "@/db/schema";
+import { curveSets, parts } from "@/db/schema";
 import type { Finding } from "@/lib/soa/findings";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { browserUpload, registerUpload } from "@/test/curve-upload";
+import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { requireEnv } from "@/test/services";
 
 // Curves under a 1 Ω R_DS(on) line, each bending to a constant-power line (I = P/V): no shape findings.
@@ -30,37 +29,11 @@ const ws = workspaceForFile("Findings");
 let engineer: string;
 let lead: string;
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `PF-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Findings Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      rthJc: 0.5,
-    })
-    .returning();
-  return part;
-}
+const newPart = () => addPart(ws.id, { maker: "Findings Test Devices", rthJc: 0.5 });
 
 async function upload(partId: string, text: string) {
-  const ticket = await (
-    await call(uploadPost, "POST", {
-      cookie: engineer,
-      params: { id: partId },
-      body: { fileName: "figure-9.csv", size: Buffer.byteLength(text), purpose: "curve-set" },
-    })
-  ).json();
-  await fetch(ticket.url, { method: "PUT", body: text, headers: { "content-type": "text/csv" } });
-  return call(registerPost, "POST", {
-    cookie: engineer,
-    params: { id: partId },
-    body: { uploadId: ticket.uploadId },
-  });
+  const ticket = await browserUpload(engineer, partId, text);
+  return registerUpload(engineer, partId, ticket.uploadId);
 }
 
 async function storedFindings(partId: string): Promise<Finding[]> {

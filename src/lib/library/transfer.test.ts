@@ -3,31 +3,15 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DELETE as transferDelete, PUT as transferPut } from "@/app/api/parts/[id]/transfer/route";
-import { type Part, parts } from "@/db/schema";
+import { parts } from "@/db/schema";
 import { partLimits } from "@/lib/projects/projects";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { WORKED_TRANSFER } from "@/test/transfer-data";
 
 const ws = workspaceForFile("Transfer");
 let engineer: string;
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `TR-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Transfer Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-      status: "verified",
-      avalancheEnergy: 0.2,
-    })
-    .returning();
-  return part;
-}
+const newPart = () => addPart(ws.id, { status: "verified", avalancheEnergy: 0.2 });
 
 beforeAll(async () => {
   engineer = await sessionCookie(ws.members.engineer.id, ws.id);

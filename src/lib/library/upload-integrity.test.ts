@@ -3,23 +3,17 @@
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { POST as registerPost } from "@/app/api/parts/[id]/curve-sets/route";
 import { POST as uploadPost } from "@/app/api/parts/[id]/uploads/route";
 import { POST as capturesPost } from "@/app/api/projects/[id]/captures/route";
 import { POST as projectUploadPost } from "@/app/api/projects/[id]/uploads/route";
-import { captures, curveSets, type Part, parts, projects } from "@/db/schema";
+import { captures, curveSets } from "@/db/schema";
 import { processCaptureJob } from "@/lib/capture/job";
 import { createStorage } from "@/lib/storage/storage";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
-import { requireEnv } from "@/test/services";
+import { registerUpload } from "@/test/curve-upload";
+import { addPart, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { requireEnv, storageConfig } from "@/test/services";
 
-const storage = createStorage({
-  endpoint: requireEnv("S3_ENDPOINT"),
-  region: "us-east-1",
-  bucket: requireEnv("S3_BUCKET"),
-  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
-  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
-});
+const storage = createStorage(storageConfig());
 
 // A small valid curve set in the long format the app documents (public/examples/soa-curves-table.csv).
 const csv = ["width,V_DS [V],I_D [A]", "1 ms,1,60", "1 ms,10,40", "1 ms,40,10", "DC,1,30", "DC,40,1.25"].join(
@@ -34,21 +28,7 @@ beforeAll(async () => {
   cookie = await sessionCookie(ws.members.engineer.id, ws.id);
 });
 
-async function newPart(): Promise<Part> {
-  const [part] = await testDb.db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: `IN-${crypto.randomUUID().slice(0, 6)}`,
-      maker: "Integrity Test Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-    })
-    .returning();
-  return part;
-}
+const newPart = () => addPart(ws.id);
 
 async function ticketFor(partId: string, size: number) {
   const res = await call(uploadPost, "POST", {
@@ -71,13 +51,7 @@ describe("registering one curve upload several times at once", () => {
       const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
       expect((await put(ticket.url, csv)).status).toBe(200);
       const statuses = await Promise.all(
-        Array.from({ length: 3 }, () =>
-          call(registerPost, "POST", {
-            cookie,
-            params: { id: part.id },
-            body: { uploadId: ticket.uploadId },
-          }),
-        ),
+        Array.from({ length: 3 }, () => registerUpload(cookie, part.id, ticket.uploadId)),
       ).then((rs) => rs.map((r) => r.status).sort());
       expect(statuses[0]).toBe(201);
       for (const s of statuses.slice(1)) expect([404, 409]).toContain(s);
@@ -103,11 +77,7 @@ describe("presigned uploads", () => {
     const part = await newPart();
     const ticket = await ticketFor(part.id, Buffer.byteLength(csv));
     expect((await put(ticket.url, csv)).status).toBe(200);
-    const res = await call(registerPost, "POST", {
-      cookie,
-      params: { id: part.id },
-      body: { uploadId: ticket.uploadId },
-    });
+    const res = await registerUpload(cookie, part.id, ticket.uploadId);
     expect(res.status).toBe(201);
     const forged = csv.replace("1 ms,40,10", "1 ms,40,99");
     await put(ticket.url, forged);
@@ -120,10 +90,7 @@ describe("presigned uploads", () => {
 
 describe("capture uploads", () => {
   it("after registration, a PUT to the upload's URL changes nothing the capture points to", async () => {
-    const [project] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Integrity board", caseTemp: 25 })
-      .returning();
+    const project = await addProject(ws.id, { name: "Integrity board", caseTemp: 25 });
     // A small falling-current waveform: time (s), V_DS (V), I_D (A).
     const rows = Array.from(
       { length: 200 },

@@ -8,10 +8,11 @@ import { POST as acceptInvitation } from "@/app/api/invitations/accept/route";
 import { POST as saveMeasurements } from "@/app/api/projects/[id]/measurements/route";
 import { POST as resend } from "@/app/api/team/invitations/[id]/resend/route";
 import { POST as invite } from "@/app/api/team/invitations/route";
-import { invitations, mailOutbox, notices, projects } from "@/db/schema";
+import { invitations, mailOutbox, notices } from "@/db/schema";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import {
   addDemoCandidate,
+  addProject,
   call,
   sessionCookie,
   testDb,
@@ -39,10 +40,11 @@ async function outboxTo(to: string) {
 
 describe("with the mail server down", () => {
   it("a failing measurement's notice stays queued, and is sent once mail returns", async () => {
-    const [project] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Outbox board", caseTemp: 25, ownerId: ws.members.engineer.id })
-      .returning();
+    const project = await addProject(ws.id, {
+      name: "Outbox board",
+      caseTemp: 25,
+      ownerId: ws.members.engineer.id,
+    });
     await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
     const res = await call(saveMeasurements, "POST", {

@@ -1,12 +1,12 @@
 // The project check route against the engine's contract on the same inputs, on the real database.
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as checkGet } from "@/app/api/projects/[id]/check/route";
-import { faultCases, measuredPulses, projects } from "@/db/schema";
+import { faultCases, measuredPulses, type Role } from "@/db/schema";
 import type { GuardedHandler } from "@/lib/auth/guard";
 import { DEMO_PARTS } from "@/lib/demo/parts";
 import { runCheck } from "@/lib/soa/check";
 import type { PartLimits, Pulse } from "@/lib/soa/types";
-import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addDemoCandidate, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
 const ws = workspaceForFile("Check");
 let projectId: string;
@@ -14,16 +14,12 @@ const limitsByPart = new Map<string, PartLimits>();
 
 beforeAll(async () => {
   const { db } = testDb;
-  const [project] = await db
-    .insert(projects)
-    .values({
-      workspaceId: ws.id,
-      name: "Disconnect board",
-      caseTemp: 85,
-      utilisationLimit: 0.7,
-      tjGuard: 20,
-    })
-    .returning();
+  const project = await addProject(ws.id, {
+    name: "Disconnect board",
+    caseTemp: 85,
+    utilisationLimit: 0.7,
+    tjGuard: 20,
+  });
   projectId = project.id;
   for (const demo of DEMO_PARTS) {
     // The second part without a thermal model: its repetitions read Z_th from the curves.
@@ -52,10 +48,15 @@ beforeAll(async () => {
   ]);
 });
 
+/** The project's check as the workspace's member of `role` asks for it. */
+async function checkAs(role: Role): Promise<Response> {
+  const cookie = await sessionCookie(ws.members[role].id, ws.id);
+  return call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } });
+}
+
 describe("GET /api/projects/:id/check", () => {
   it("gives every candidate × pulse the engine's own result for the same inputs", async () => {
-    const cookie = await sessionCookie(ws.members.technician.id, ws.id);
-    const res = await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } });
+    const res = await checkAs("technician");
     expect(res.status).toBe(200);
     const body = await res.json();
     expect(body.candidates).toHaveLength(3);
@@ -82,10 +83,7 @@ describe("GET /api/projects/:id/check", () => {
   });
 
   it("checks a fault case at its own case temperature and an over-voltage pulse as a fail", async () => {
-    const cookie = await sessionCookie(ws.members.engineer.id, ws.id);
-    const body = await (
-      await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } })
-    ).json();
+    const body = await (await checkAs("engineer")).json();
     const cold = body.pulses.find((p: { name: string }) => p.name === "Cold start");
     expect(cold.caseTemp).toBe(-20);
     const m2 = body.pulses.find((p: { name: string }) => p.name === "M2");
@@ -97,10 +95,7 @@ describe("GET /api/projects/:id/check", () => {
   });
 
   it("tells the demo story: the lowest-R_DS(on) part fails the inrush, the linear-mode part passes", async () => {
-    const cookie = await sessionCookie(ws.members.lead.id, ws.id);
-    const body = await (
-      await call(checkGet as GuardedHandler, "GET", { cookie, params: { id: projectId } })
-    ).json();
+    const body = await (await checkAs("lead")).json();
     const inrush = body.pulses.find((p: { name: string }) => p.name === "Pre-charge inrush");
     const byNumber = (n: string) =>
       body.candidates.find((c: { partNumber: string }) => c.partNumber === n).partId;

@@ -11,7 +11,7 @@ import { GET as listGet, POST as signPost } from "@/app/api/projects/[id]/decisi
 import { GET as matrixGet } from "@/app/api/projects/[id]/matrix/route";
 import { curves, faultCases, measuredPulses, projects } from "@/db/schema";
 import { DEMO_PARTS } from "@/lib/demo/parts";
-import { addDemoCandidate, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+import { addDemoCandidate, addProject, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 
 const ws = workspaceForFile("Decide");
 let projectId: string;
@@ -28,10 +28,7 @@ function pdfText(bytes: Buffer): string {
 
 beforeAll(async () => {
   const { db } = testDb;
-  const [project] = await db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name: "Cargo bike disconnect", caseTemp: 85 })
-    .returning();
+  const project = await addProject(ws.id, { name: "Cargo bike disconnect", caseTemp: 85 });
   projectId = project.id;
   for (const demo of DEMO_PARTS) {
     const added = await addDemoCandidate(ws.id, projectId, demo);

@@ -4,62 +4,31 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { DELETE as deleteMeasurement } from "@/app/api/projects/[id]/measurements/[measurementId]/route";
 import { POST as previewPost } from "@/app/api/projects/[id]/measurements/preview/route";
 import { POST as savePost } from "@/app/api/projects/[id]/measurements/route";
+import { mailOutbox, measuredPulses, projectCandidates } from "@/db/schema";
 import {
-  curveSets,
-  curves,
-  mailOutbox,
-  measuredPulses,
-  parts,
-  projectCandidates,
-  projects,
-} from "@/db/schema";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+  addCurveSet,
+  addPart,
+  addProject,
+  call,
+  sessionCookie,
+  testDb,
+  workspaceForFile,
+} from "@/test/fixtures";
 import { waitForMail } from "@/test/services";
 
 const ws = workspaceForFile("Bench");
 let projectId: string;
 
 beforeAll(async () => {
-  const { db } = testDb;
-  const [project] = await db
-    .insert(projects)
-    .values({
-      workspaceId: ws.id,
-      name: `Bench evidence ${crypto.randomUUID().slice(0, 4)}`,
-      caseTemp: 25,
-      ownerId: ws.members.engineer.id,
-    })
-    .returning();
+  const project = await addProject(ws.id, {
+    name: `Bench evidence ${crypto.randomUUID().slice(0, 4)}`,
+    caseTemp: 25,
+    ownerId: ws.members.engineer.id,
+  });
   projectId = project.id;
-  const [part] = await db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: "BN-1",
-      maker: "Bench Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-    })
-    .returning();
-  const [set] = await db
-    .insert(curveSets)
-    .values({
-      workspaceId: ws.id,
-      partId: part.id,
-      objectKey: `test/${crypto.randomUUID()}`,
-      fileName: "s.csv",
-      size: 1,
-      sha256: "0".repeat(64),
-      shape: "long",
-      active: true,
-    })
-    .returning();
-  await db.insert(curves).values([
+  const part = await addPart(ws.id, { partNumber: "BN-1", maker: "Bench Devices" });
+  await addCurveSet(ws.id, part.id, [
     {
-      curveSetId: set.id,
-      position: 0,
       duration: 1e-3,
       points: [
         [1, 100],
@@ -68,8 +37,6 @@ beforeAll(async () => {
       ],
     },
     {
-      curveSetId: set.id,
-      position: 1,
       duration: 1e-2,
       points: [
         [1, 60],
@@ -78,7 +45,7 @@ beforeAll(async () => {
       ],
     },
   ]);
-  await db.insert(projectCandidates).values({ projectId, partId: part.id });
+  await testDb.db.insert(projectCandidates).values({ projectId, partId: part.id });
 });
 
 const paste = [

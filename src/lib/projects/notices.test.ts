@@ -7,17 +7,16 @@ import { POST as activate } from "@/app/api/parts/[id]/curve-sets/[setId]/activa
 import { PUT as thermalPut } from "@/app/api/parts/[id]/thermal/route";
 import { POST as signPost } from "@/app/api/projects/[id]/decisions/route";
 import { POST as savePost } from "@/app/api/projects/[id]/measurements/route";
+import { faultCases, mailOutbox, notices, parts, projectCandidates, projects } from "@/db/schema";
 import {
-  curveSets,
-  curves,
-  faultCases,
-  mailOutbox,
-  notices,
-  parts,
-  projectCandidates,
-  projects,
-} from "@/db/schema";
-import { call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
+  addCurveSet,
+  addPart,
+  addProject,
+  call,
+  sessionCookie,
+  testDb,
+  workspaceForFile,
+} from "@/test/fixtures";
 import { type InboxMail, readInbox } from "@/test/services";
 
 const ws = workspaceForFile("Notices");
@@ -28,10 +27,10 @@ const setIds: Record<"generous" | "tight" | "tighter", string> = { generous: "",
 const lines = { generous: 1, tight: 10, tighter: 20 } as const;
 
 async function newProject(name: string) {
-  const [project] = await testDb.db
-    .insert(projects)
-    .values({ workspaceId: ws.id, name: `${name} ${crypto.randomUUID().slice(0, 4)}`, caseTemp: 25 })
-    .returning();
+  const project = await addProject(ws.id, {
+    name: `${name} ${crypto.randomUUID().slice(0, 4)}`,
+    caseTemp: 25,
+  });
   await testDb.db
     .update(projects)
     .set({ ownerId: ws.members.engineer.id })
@@ -41,44 +40,19 @@ async function newProject(name: string) {
 }
 
 beforeAll(async () => {
-  const { db } = testDb;
-  const [part] = await db
-    .insert(parts)
-    .values({
-      workspaceId: ws.id,
-      partNumber: "NT-7",
-      maker: "Notice Devices",
-      technology: "si-mosfet",
-      package: "TO-220",
-      vdsMax: 60,
-      tjMax: 175,
-    })
-    .returning();
-  partId = part.id;
+  partId = (await addPart(ws.id, { partNumber: "NT-7", maker: "Notice Devices" })).id;
   for (const [name, divide] of Object.entries(lines) as [keyof typeof lines, number][]) {
-    const [set] = await db
-      .insert(curveSets)
-      .values({
-        workspaceId: ws.id,
-        partId,
-        objectKey: `test/${crypto.randomUUID()}`,
-        fileName: `${name}.csv`,
-        size: 1,
-        sha256: "0".repeat(64),
-        shape: "long",
-        active: name === "generous",
-      })
-      .returning();
-    setIds[name] = set.id;
-    await db.insert(curves).values({
-      curveSetId: set.id,
-      position: 0,
+    const line = {
       duration: 1e-3,
       points: [
         [1, 100 / divide],
         [10, 40 / divide],
         [60, 5 / divide],
-      ],
+      ] as [number, number][],
+    };
+    setIds[name] = await addCurveSet(ws.id, partId, [line], {
+      active: name === "generous",
+      fileName: `${name}.csv`,
     });
   }
 });
@@ -242,21 +216,13 @@ describe("decision drift", () => {
 
 describe("verification lapsed", () => {
   it("a verifier who turned these notices off hears nothing when the part returns to draft", async () => {
-    const [part] = await testDb.db
-      .insert(parts)
-      .values({
-        workspaceId: ws.id,
-        partNumber: "NT-8",
-        maker: "Notice Devices",
-        technology: "si-mosfet",
-        package: "TO-220",
-        vdsMax: 60,
-        tjMax: 175,
-        status: "verified",
-        verifiedBy: ws.members.admin.id,
-        verifiedAt: new Date(),
-      })
-      .returning();
+    const part = await addPart(ws.id, {
+      partNumber: "NT-8",
+      maker: "Notice Devices",
+      status: "verified",
+      verifiedBy: ws.members.admin.id,
+      verifiedAt: new Date(),
+    });
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const engineer = await sessionCookie(ws.members.engineer.id, ws.id);
     await call(setNotices, "PATCH", {

@@ -93,27 +93,21 @@ describe("validateCheckRequest", () => {
 
   // METHODS.md §9 (v2): the voltage limit, the thermal reading between curves and a capture's start.
   it("accepts the v2 fields: voltage limit, thermal reading and a capture's start", () => {
+    const capture = (start: string) => ({
+      id: "cap",
+      kind: "waveform",
+      t: [0, 1],
+      v: [1, 1],
+      i: [1, 1],
+      start,
+    });
     const body = broken((r) => {
       r.policy = { voltageLimit: 0.9, betweenCurves: "thermal" };
-      (r.pulses as Json[]).push({
-        id: "cap",
-        kind: "waveform",
-        t: [0, 1],
-        v: [1, 1],
-        i: [1, 1],
-        start: "steady",
-      });
+      (r.pulses as Json[]).push(capture("steady"));
     });
     expect(validateCheckRequest(body).ok).toBe(true);
     const wrong = broken((r) => {
-      (r.pulses as Json[]).push({
-        id: "cap",
-        kind: "waveform",
-        t: [0, 1],
-        v: [1, 1],
-        i: [1, 1],
-        start: "hot",
-      });
+      (r.pulses as Json[]).push(capture("hot"));
     });
     expect(validateCheckRequest(wrong)).toMatchObject({ ok: false, error: { path: "pulses[3].start" } });
   });

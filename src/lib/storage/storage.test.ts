@@ -2,16 +2,10 @@ import { createHash, randomBytes } from "node:crypto";
 import { Readable } from "node:stream";
 import { describe, expect, it } from "vitest";
 import { AppError } from "@/lib/errors";
-import { requireEnv } from "@/test/services";
+import { storageConfig } from "@/test/services";
 import { createStorage } from "./storage";
 
-const config = {
-  endpoint: requireEnv("S3_ENDPOINT"),
-  region: process.env.S3_REGION ?? "us-east-1",
-  bucket: requireEnv("S3_BUCKET"),
-  accessKeyId: requireEnv("S3_ACCESS_KEY_ID"),
-  secretAccessKey: requireEnv("S3_SECRET_ACCESS_KEY"),
-};
+const config = storageConfig();
 const storage = createStorage(config);
 const sha = (b: Uint8Array) => createHash("sha256").update(b).digest("hex");
 

@@ -3,11 +3,12 @@ import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { apiTokens, passwordResets, sessions } from "@/db/schema";
+import { newApiToken } from "@/test/api-token";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import { addMember, call, cookiePair, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
 import { readInbox } from "@/test/services";
-import { POST as createToken, GET as listTokens } from "../account/tokens/route";
+import { GET as listTokens } from "../account/tokens/route";
 import { POST as checkPost } from "../v1/check/route";
 import { POST as forgotPassword } from "./forgot-password/route";
 import { POST as resetPassword } from "./reset-password/route";
@@ -38,12 +39,6 @@ async function resetLinks(email: string, count: number): Promise<string[]> {
   return tokens;
 }
 
-async function newToken(userId: string) {
-  const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(createToken, "POST", { cookie, body: { name: "bench" } });
-  return (await res.json()).token as { id: string; secret: string };
-}
-
 const check = (secret: string) => call(checkPost, "POST", { bearer: secret, body: checkRequest });
 
 describe("reset links", () => {
@@ -63,7 +58,7 @@ describe("reset links", () => {
 describe("API tokens", () => {
   it("stop working after a password reset", async () => {
     const user = await addMember(ws.id, "technician");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "bench");
     expect((await check(token.secret)).status).toBe(200);
     const [link] = await resetLinks(user.email, 1);
     const reset = await call(resetPassword, "POST", {
@@ -75,7 +70,7 @@ describe("API tokens", () => {
 
   it("stop working after sign-out everywhere", async () => {
     const user = await addMember(ws.id, "technician");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "bench");
     const cookie = await sessionCookie(user.id, ws.id);
     expect((await call(signOutEverywhere, "POST", { cookie })).status).toBe(200);
     expect((await check(token.secret)).status).toBe(401);
@@ -83,7 +78,7 @@ describe("API tokens", () => {
 
   it("expire", async () => {
     const user = await addMember(ws.id, "technician");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "bench");
     const [row] = await testDb.db.select().from(apiTokens).where(eq(apiTokens.id, token.id));
     expect(row.expiresAt.getTime()).toBeLessThanOrEqual(Date.now() + 91 * 24 * 3600 * 1000);
     await testDb.db

@@ -4,22 +4,22 @@
 // written off the response path at most once a minute; a wrong workspace is still a 404.
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { apiTokens, memberships, projects } from "@/db/schema";
+import { apiTokens, memberships } from "@/db/schema";
 import { authCache, whenListening } from "@/lib/auth/auth-memory";
 import { settleTokenWrites } from "@/lib/auth/token-auth";
+import { newApiToken } from "@/test/api-token";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import {
   addMember,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
-  sessionCookie,
   type TestWorkspace,
   testDb,
   workspaceForFile,
 } from "@/test/fixtures";
-import { POST as createToken } from "../account/tokens/route";
 import { POST as checkPost } from "../v1/check/route";
 import { POST as postMeasurements } from "../v1/projects/[id]/measurements/route";
 
@@ -35,12 +35,6 @@ afterAll(async () => {
   await deleteWorkspace(other.id);
 });
 
-async function newToken(userId: string) {
-  const cookie = await sessionCookie(userId, ws.id);
-  const res = await call(createToken, "POST", { cookie, body: { name: "cache" } });
-  return (await res.json()).token as { id: string; secret: string };
-}
-
 const check = (secret: string) => call(checkPost, "POST", { bearer: secret, body: checkRequest });
 
 describe("remembered API tokens", () => {
@@ -50,7 +44,7 @@ describe("remembered API tokens", () => {
 
   it("answer 401 once another process revokes the token (heard through NOTIFY, within the TTL)", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "cache");
     expect((await check(token.secret)).status).toBe(200);
     // Remembered now: the second answer needs no database.
     expect((await check(token.secret)).status).toBe(200);
@@ -63,7 +57,7 @@ describe("remembered API tokens", () => {
 
   it("answer 403 once another process removes the member, and 200 again for a member re-added", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "cache");
     expect((await check(token.secret)).status).toBe(200);
     const heard = nextAuthClear();
     await testDb.db.delete(memberships).where(eq(memberships.userId, user.id));
@@ -73,7 +67,7 @@ describe("remembered API tokens", () => {
 
   it("are not cleared by a last_used_at write (no notification for it)", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "cache");
     let cleared = 0;
     const stop = authCache.onClear(() => cleared++);
     await testDb.db.update(apiTokens).set({ lastUsedAt: new Date() }).where(eq(apiTokens.id, token.id));
@@ -87,7 +81,7 @@ describe("remembered API tokens", () => {
 
   it("have last_used_at written after the answer, once, not at every request", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
+    const token = await newApiToken(user.id, ws.id, "cache");
     const lastUsed = async () =>
       (await testDb.db.select().from(apiTokens).where(eq(apiTokens.id, token.id)))[0].lastUsedAt;
     expect(await lastUsed()).toBeNull();
@@ -102,11 +96,8 @@ describe("remembered API tokens", () => {
 
   it("still answer 404 for a project of another workspace, remembered or not", async () => {
     const user = await addMember(ws.id, "engineer");
-    const token = await newToken(user.id);
-    const [foreign] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: other.id, name: "Elsewhere", caseTemp: 60 })
-      .returning({ id: projects.id });
+    const token = await newApiToken(user.id, ws.id, "cache");
+    const foreign = await addProject(other.id, { name: "Elsewhere", caseTemp: 60 });
     for (let k = 0; k < 2; k++) {
       const res = await call(postMeasurements, "POST", {
         bearer: token.secret,

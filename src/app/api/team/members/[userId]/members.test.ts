@@ -8,6 +8,7 @@ import { DEMO_PARTS } from "@/lib/demo/parts";
 import {
   addDemoCandidate,
   addMember,
+  addProject,
   call,
   createTestWorkspace,
   deleteWorkspace,
@@ -73,10 +74,11 @@ describe("removing a member who owns a project", () => {
   it("passes the project to the removing admin, and its failures are mailed to them, not the removed member", async () => {
     const ws = await createTestWorkspace("Owners");
     created.push(ws.id);
-    const [project] = await testDb.db
-      .insert(projects)
-      .values({ workspaceId: ws.id, name: "Owned board", caseTemp: 25, ownerId: ws.members.engineer.id })
-      .returning();
+    const project = await addProject(ws.id, {
+      name: "Owned board",
+      caseTemp: 25,
+      ownerId: ws.members.engineer.id,
+    });
     await addDemoCandidate(ws.id, project.id, DEMO_PARTS[0]);
     const admin = await sessionCookie(ws.members.admin.id, ws.id);
     const removed = await call(removeMember, "DELETE", {
