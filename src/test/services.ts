@@ -1,4 +1,5 @@
 // Test helpers for integration tests that run against the real local services started by the test command.
+import { expect } from "vitest";
 
 /** The named environment variable; fails the test clearly when the test command did not provide it. */
 export function requireEnv(name: string): string {
@@ -34,13 +35,33 @@ export async function readInbox(): Promise<InboxMail[]> {
   return (await res.json()) as InboxMail[];
 }
 
-/** Waits until an e-mail to `address` arrives (the fake stores mail asynchronously). */
+/** The e-mails to `address` the mail fake holds, oldest first; with `subject`, only those whose subject matches. */
+export async function mailsTo(address: string, subject?: RegExp): Promise<InboxMail[]> {
+  return (await readInbox()).filter(
+    (m) => m.to.some((t) => t.address === address) && (!subject || subject.test(m.subject)),
+  );
+}
+
+/**
+ * Waits until at least `count` e-mails to `address` (matching `subject`, if given) have arrived, polling the fake
+ * through `expect.poll` (it stores mail asynchronously), and answers all of them, oldest first.
+ */
+export async function waitForMails(
+  address: string,
+  count: number,
+  { subject, timeoutMs = 10_000 }: { subject?: RegExp; timeoutMs?: number } = {},
+): Promise<InboxMail[]> {
+  await expect
+    .poll(async () => (await mailsTo(address, subject)).length, {
+      timeout: timeoutMs,
+      interval: 100,
+      message: `e-mails to ${address}${subject ? ` matching ${subject}` : ""}`,
+    })
+    .toBeGreaterThanOrEqual(count);
+  return mailsTo(address, subject);
+}
+
+/** Waits until an e-mail to `address` arrives and answers the latest one. */
 export async function waitForMail(address: string, timeoutMs = 5000): Promise<InboxMail> {
-  const until = Date.now() + timeoutMs;
-  for (;;) {
-    const mail = (await readInbox()).filter((m) => m.to.some((t) => t.address === address)).at(-1);
-    if (mail) return mail;
-    if (Date.now() > until) throw new Error(`no e-mail to ${address} within ${timeoutMs} ms`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
+  return (await waitForMails(address, 1, { timeoutMs })).at(-1)!;
 }

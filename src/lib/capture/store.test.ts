@@ -524,12 +524,9 @@ describe("the job queue", () => {
     await startCaptureWorkers(() => storage, 1);
     const { res } = await register(inrushCsv(300), { name: "through the queue" });
     const { capture } = await res.json();
-    let status = "queued";
-    for (let k = 0; k < 300 && (status === "queued" || status === "processing"); k++) {
-      await new Promise((resolve) => setTimeout(resolve, 100));
-      status = (await detail(capture.id)).capture.status;
-    }
-    expect(status).toBe("done");
+    await expect
+      .poll(async () => (await detail(capture.id)).capture.status, { timeout: 30_000, interval: 100 })
+      .toBe("done");
     const body = await detail(capture.id);
     expect(
       body.candidates.find((c: { partId: string }) => c.partId === small.id).result.verdict,

@@ -1,6 +1,6 @@
 // Notices by e-mail, through the outbox and the mail fake: one e-mail per action listing every failing pulse, a
 // drifting standing decision told to the project's owner and the lead who signed, and each person's choice honoured.
-import { and, eq } from "drizzle-orm";
+import { and, eq, gte } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as getNotices, PATCH as setNotices } from "@/app/api/account/notices/route";
 import { POST as activate } from "@/app/api/parts/[id]/curve-sets/[setId]/activate/route";
@@ -57,15 +57,31 @@ beforeAll(async () => {
   }
 });
 
-/** The e-mails to `address` that arrived after `before` (an inbox length), after the outbox had time to send. */
-async function newMailTo(address: string, before: number, expected: number): Promise<InboxMail[]> {
-  let mails: InboxMail[] = [];
-  for (let wait = 0; wait < 30; wait++) {
-    mails = (await readInbox()).slice(before).filter((m) => m.to.some((t) => t.address === address));
-    if (mails.length >= expected && (expected > 0 || wait >= 5)) break;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  return mails;
+/** Where the inbox stands before an action, and when: later e-mails and outbox rows are the action's. */
+async function mark() {
+  return { inbox: (await readInbox()).length, at: new Date() };
+}
+type Mark = Awaited<ReturnType<typeof mark>>;
+
+/** The e-mails to `address` that arrived after `before`, once at least `expected` have (the fake stores mail late). */
+async function newMailTo(address: string, before: Mark, expected: number): Promise<InboxMail[]> {
+  const fresh = async () =>
+    (await readInbox()).slice(before.inbox).filter((m) => m.to.some((t) => t.address === address));
+  await expect
+    .poll(async () => (await fresh()).length, { timeout: 5000, interval: 100 })
+    .toBeGreaterThanOrEqual(expected);
+  return fresh();
+}
+
+/**
+ * The e-mails to `address` queued after `before`. An action writes its e-mail to the outbox in its own transaction,
+ * so once it has answered the outbox tells at once, without waiting on the mail fake, that it sent none.
+ */
+function queuedFor(address: string, before: Mark) {
+  return testDb.db
+    .select()
+    .from(mailOutbox)
+    .where(and(eq(mailOutbox.to, address), gte(mailOutbox.createdAt, before.at)));
 }
 
 const row = (label: string, i: number) => ({ label, kind: "rect", v: 24, i, duration: 1e-3 });
@@ -74,7 +90,7 @@ describe("failing evidence", () => {
   it("one pasted table of five failing rows is one e-mail to the owner, listing all five", async () => {
     const project = await newProject("Batch board");
     const tech = await sessionCookie(ws.members.technician.id, ws.id);
-    const before = (await readInbox()).length;
+    const before = await mark();
     const res = await call(savePost, "POST", {
       cookie: tech,
       params: { id: project.id },
@@ -122,14 +138,14 @@ describe("failing evidence", () => {
       verificationLapsed: true,
     });
 
-    const before = (await readInbox()).length;
+    const before = await mark();
     const quiet = await call(savePost, "POST", {
       cookie: tech,
       params: { id: project.id },
       body: { rows: [row("Q1", 30), row("Q2", 40)] },
     });
     expect((await quiet.json()).notified).toBe(0);
-    expect(await newMailTo(ws.members.engineer.email, before, 0)).toHaveLength(0);
+    expect(await queuedFor(ws.members.engineer.email, before)).toHaveLength(0);
 
     await call(setNotices, "PATCH", {
       cookie: engineer,
@@ -173,7 +189,7 @@ describe("decision drift", () => {
     const { engineer: owner, lead: signer } = ws.members;
 
     // A tighter curve set made active: "Short" now fails. One e-mail each, listing the changed verdict.
-    let before = (await readInbox()).length;
+    let before = await mark();
     const res = await call(activate, "POST", {
       cookie: lead,
       params: { id: partId, setId: setIds.tight },
@@ -189,10 +205,10 @@ describe("decision drift", () => {
     }
 
     // The same change again leaves the same verdicts changed: nobody hears of it twice.
-    before = (await readInbox()).length;
+    before = await mark();
     await call(activate, "POST", { cookie: lead, params: { id: partId, setId: setIds.tight } });
-    expect(await newMailTo(owner.email, before, 0)).toHaveLength(0);
-    expect(await newMailTo(signer.email, before, 0)).toHaveLength(0);
+    expect(await queuedFor(owner.email, before)).toHaveLength(0);
+    expect(await queuedFor(signer.email, before)).toHaveLength(0);
 
     // The lead turns drift notices off; the next change ("Surge" fails too) reaches the owner only.
     const off = await call(setNotices, "PATCH", {
@@ -200,12 +216,12 @@ describe("decision drift", () => {
       body: { failingEvidence: true, decisionDrift: false, verificationLapsed: true },
     });
     expect(off.status).toBe(200);
-    before = (await readInbox()).length;
+    before = await mark();
     await call(activate, "POST", { cookie: lead, params: { id: partId, setId: setIds.tighter } });
     const toOwner = await newMailTo(owner.email, before, 1);
     expect(toOwner).toHaveLength(1);
     expect(toOwner[0].text).toContain("Surge: pass when signed, fail now");
-    expect(await newMailTo(signer.email, before, 0)).toHaveLength(0);
+    expect(await queuedFor(signer.email, before)).toHaveLength(0);
     const driftRows = await testDb.db
       .select()
       .from(notices)
@@ -229,7 +245,7 @@ describe("verification lapsed", () => {
       cookie: admin,
       body: { failingEvidence: true, decisionDrift: true, verificationLapsed: false },
     });
-    const before = (await readInbox()).length;
+    const before = await mark();
     const res = await call(thermalPut, "PUT", {
       cookie: engineer,
       params: { id: part.id },
@@ -238,7 +254,7 @@ describe("verification lapsed", () => {
     expect(res.status).toBe(200);
     const [after] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
     expect(after.status).toBe("draft");
-    expect(await newMailTo(ws.members.admin.email, before, 0)).toHaveLength(0);
+    expect(await queuedFor(ws.members.admin.email, before)).toHaveLength(0);
     const queued = await testDb.db
       .select()
       .from(mailOutbox)

@@ -7,7 +7,7 @@ import { newApiToken } from "@/test/api-token";
 import { nextAuthClear } from "@/test/auth-clear";
 import { smallCheckRequest } from "@/test/check-request";
 import { addMember, call, cookiePair, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
-import { readInbox } from "@/test/services";
+import { mailsTo, waitForMails } from "@/test/services";
 import { GET as listTokens } from "../account/tokens/route";
 import { POST as checkPost } from "../v1/check/route";
 import { POST as forgotPassword } from "./forgot-password/route";
@@ -21,22 +21,13 @@ const ws = workspaceForFile("Credentials");
 // The smallest valid check contract (METHODS.md §9): one curve, one pulse.
 const checkRequest = smallCheckRequest();
 
+/** Asks for `count` reset links for `email`, one after another, and answers their tokens in order. */
 async function resetLinks(email: string, count: number): Promise<string[]> {
-  const tokens: string[] = [];
   for (let k = 0; k < count; k++) {
     expect((await call(forgotPassword, "POST", { body: { email } })).status).toBe(200);
-    for (let wait = 0; wait < 50; wait++) {
-      const found = (await readInbox())
-        .filter((m) => m.to.some((t) => t.address === email))
-        .map((m) => /\/reset-password\/([A-Za-z0-9_-]+)/.exec(m.text)?.[1] ?? "");
-      if (found.length > k) {
-        tokens.push(found[k]);
-        break;
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
+    await waitForMails(email, k + 1);
   }
-  return tokens;
+  return (await mailsTo(email)).map((m) => /\/reset-password\/([A-Za-z0-9_-]+)/.exec(m.text)?.[1] ?? "");
 }
 
 const check = (secret: string) => call(checkPost, "POST", { bearer: secret, body: checkRequest });

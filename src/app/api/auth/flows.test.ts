@@ -14,7 +14,7 @@ import {
   testDb,
   testPassword,
 } from "@/test/fixtures";
-import { readInbox, waitForMail } from "@/test/services";
+import { waitForMail, waitForMails } from "@/test/services";
 import { POST as changePassword } from "../account/password/route";
 import { DELETE as revokeToken } from "../account/tokens/[id]/route";
 import { POST as createToken, GET as listTokens } from "../account/tokens/route";
@@ -35,14 +35,7 @@ const linkToken = (text: string, path: string) =>
 
 /** The latest e-mail to `address` whose subject matches (the fake stores mail asynchronously). */
 async function mailTo(address: string, subject: RegExp) {
-  for (let wait = 0; wait < 100; wait++) {
-    const mail = (await readInbox())
-      .filter((m) => m.to.some((t) => t.address === address) && subject.test(m.subject))
-      .at(-1);
-    if (mail) return mail;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no e-mail to ${address} matching ${subject}`);
+  return (await waitForMails(address, 1, { subject })).at(-1)!;
 }
 
 /** Each test gets its own workspace (one member of each role, all on `testPassword`), so none sees another's changes. */
