@@ -26,6 +26,7 @@ import { type Action, can, roles } from "@/lib/auth/permissions";
 import { hashToken, randomToken } from "@/lib/auth/tokens";
 import { captureMappingSchema } from "@/lib/capture/parse";
 import type { DecisionSnapshot } from "@/lib/projects/decisions";
+import { answer } from "@/server/api-server";
 import { nextAuthClear } from "@/test/auth-clear";
 import {
   addCurveSet,
@@ -167,6 +168,23 @@ async function dispatch(route: string, method: string, options: CallOptions = {}
   const handler = handlers[method];
   const withBody = method !== "GET" && method !== "HEAD" && method !== "OPTIONS";
   return call(handler as never, method, { ...options, body: withBody ? (options.body ?? {}) : undefined });
+}
+
+/**
+ * Every way production answers the request: the app's route, and for GET and HEAD also the lean API servers
+ * (src/server/api-server.ts), where nginx sends every read of the API, reached by the request's real path.
+ */
+async function answersOf(
+  route: string,
+  method: string,
+  options: CallOptions = {},
+): Promise<{ via: string; res: Response }[]> {
+  const app = { via: "app", res: await dispatch(route, method, options) };
+  if (method !== "GET" && method !== "HEAD") return [app];
+  const values = options.params ?? {};
+  const path = route.replace(/\[(\w+)\]/g, (_, name: string) => encodeURIComponent(values[name] ?? ""));
+  const lean = await call(answer as never, method, { ...options, path, body: undefined });
+  return [app, { via: "lean server", res: lean }];
 }
 
 let a: TestWorkspace; // the workspace whose resources are addressed
@@ -477,8 +495,10 @@ for (const route of Object.keys(table)) {
     it("answers anonymous callers 401, or the public answer", async () => {
       for (const method of calledMethods(route)) {
         const { need, ok, body } = pinOf(route, method);
-        const res = await dispatch(route, method, { body, params: await params(route) });
-        expect(res.status, `${method} ${route} without a session`).toBe(need === "public" ? ok : 401);
+        for (const { via, res } of await answersOf(route, method, { body, params: await params(route) }))
+          expect(res.status, `${via}: ${method} ${route} without a session`).toBe(
+            need === "public" ? ok : 401,
+          );
       }
     });
 
@@ -501,13 +521,13 @@ for (const route of Object.keys(table)) {
       for (const method of calledMethods(route)) {
         const { need, ok, body } = pinOf(route, method);
         for (const caller of callers) {
-          const res = await dispatch(route, method, {
+          const expected = allows(need, caller) ? ok : 403;
+          for (const { via, res } of await answersOf(route, method, {
             cookie: await sessionCookie(caller.id, a.id),
             body,
             params: await params(route, caller.id),
-          });
-          const expected = allows(need, caller) ? ok : 403;
-          expect(res.status, `${caller.who}: ${method} ${route}`).toBe(expected);
+          }))
+            expect(res.status, `${via}: ${caller.who}: ${method} ${route}`).toBe(expected);
         }
       }
     });
@@ -516,13 +536,13 @@ for (const route of Object.keys(table)) {
       for (const method of calledMethods(route)) {
         const { need, ok, body, bearer } = pinOf(route, method);
         for (const caller of callers) {
-          const res = await dispatch(route, method, {
+          const expected = !bearer ? 401 : allows(need, caller) ? ok : 403;
+          for (const { via, res } of await answersOf(route, method, {
             bearer: await apiTokenFor(caller.id, a.id),
             body,
             params: await params(route, caller.id),
-          });
-          const expected = !bearer ? 401 : allows(need, caller) ? ok : 403;
-          expect(res.status, `${caller.who} by token: ${method} ${route}`).toBe(expected);
+          }))
+            expect(res.status, `${via}: ${caller.who} by token: ${method} ${route}`).toBe(expected);
         }
       }
     });
@@ -564,12 +584,12 @@ for (const route of Object.keys(table)) {
         // An outsider whose role in their own workspace would allow the action: only the wall stops them.
         const role = roles.find((r) => allows(need, { role: r, leadRights: false })) ?? "admin";
         const outsider = b.members[role];
-        const res = await dispatch(route, method, {
+        for (const { via, res } of await answersOf(route, method, {
           cookie: await sessionCookie(outsider.id, b.id),
           body: body ?? { role: "lead" },
           params: await params(route),
-        });
-        expect(res.status, `${method} ${route} from another workspace`).toBe(404);
+        }))
+          expect(res.status, `${via}: ${method} ${route} from another workspace`).toBe(404);
       }
     });
   });
