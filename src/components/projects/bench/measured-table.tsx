@@ -9,12 +9,12 @@ import { ConfirmDelete } from "@/components/confirm-delete";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { FormMessage } from "@/components/form";
-import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { can } from "@/lib/auth/permissions";
-import { q, repeatOf, repeatText } from "@/lib/format";
+import { repeatOf, repeatText } from "@/lib/format";
 import { invalidateProject, type MeasuredRecord, type ProjectCheck } from "../api";
 import type { Person, Viewer } from "../project-workspace";
+import { pulseFigureColumns } from "../pulse-columns";
 
 const num = { numeric: true };
 const muted = { className: "text-ink-muted", headerClassName: "" };
@@ -75,14 +75,7 @@ export function MeasuredTable({
       ),
       meta: { className: "font-medium", headerClassName: "" },
     },
-    {
-      id: "v",
-      header: () => <Sym main="V" sub="DS" />,
-      cell: ({ row }) => q(row.original.v, "V"),
-      meta: num,
-    },
-    { id: "i", header: () => <Sym main="I" sub="D" />, cell: ({ row }) => q(row.original.i, "A"), meta: num },
-    { id: "width", header: "Width", cell: ({ row }) => q(row.original.duration, "s"), meta: num },
+    ...pulseFigureColumns<MeasuredRecord>(num),
     {
       id: "repeat",
       header: "Repetition",
