@@ -29,7 +29,7 @@ function lazyResolver<T extends FieldValues>(load: SchemaLoader<T>): Resolver<T>
 /**
  * A react-hook-form form whose fields are the keys of `defaultValues`. `send` posts the values; an error it
  * throws goes to `onError` first (true when that placed it) and then under the fields it names, or in
- * `root.server`.
+ * `root.server`. `shell` is what its ApiFormShell takes from it: the submit, the server's message, pending.
  */
 export function useApiForm<T extends FieldValues>({
   schema,
@@ -51,7 +51,12 @@ export function useApiForm<T extends FieldValues>({
       applyServerErrors(error, form.setError, Object.keys(defaultValues) as Path<T>[]);
     }
   });
-  return { ...form, onSubmit, bind: fieldBinder(form.register, form.formState.errors) };
+  const shell = {
+    onSubmit,
+    error: form.formState.errors.root?.server?.message,
+    pending: form.formState.isSubmitting,
+  };
+  return { ...form, onSubmit, shell, bind: fieldBinder(form.register, form.formState.errors) };
 }
 
 /**
