@@ -169,3 +169,13 @@ export function FormMessage({ tone, children }: { tone: "error" | "done"; childr
     </p>
   );
 }
+
+/** A short problem beside the button that met it (role alert); nothing while there is none. */
+export function InlineAlert({ children }: { children: ReactNode }) {
+  if (!children) return null;
+  return (
+    <span role="alert" className="text-xs text-fail">
+      {children}
+    </span>
+  );
+}
