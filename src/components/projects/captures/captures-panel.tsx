@@ -2,12 +2,12 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useRef, useState } from "react";
-import { messageOf } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { useRowDelete } from "@/components/confirm-delete";
 import { DataTable } from "@/components/data-table";
 import { FormMessage } from "@/components/form";
 import { Section } from "@/components/page-header";
+import { queryStatus } from "@/components/query-status";
 import { useUrlState } from "@/components/use-url-state";
 import { invalidateProject } from "../api";
 import type { PanelProps } from "../project-workspace";
@@ -91,15 +91,7 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
           data={captures}
           getRowId={(c) => c.id}
           rowProps={(c) => ({ className: c.id === selected ? "bg-accent-soft" : "hover:bg-surface" })}
-          status={
-            list.isPending ? (
-              "Loading captures…"
-            ) : list.isError ? (
-              <span role="alert" className="text-fail">
-                {messageOf(list.error)}
-              </span>
-            ) : null
-          }
+          status={queryStatus(list, "Loading captures…")}
           empty={
             canMeasure
               ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
