@@ -140,6 +140,10 @@ export function Button({
   );
 }
 
+/** A link that looks like a secondary button: to another page, or a download. */
+export const linkButtonClass =
+  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
+
 /** The row that closes a form: secondary things at the left, the primary action at the bottom right. */
 export function FormActions({ children, aside }: { children: ReactNode; aside?: ReactNode }) {
   return (
