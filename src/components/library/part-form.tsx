@@ -1,12 +1,8 @@
 "use client";
 
-import Link from "next/link";
-import { useRouter } from "next/navigation";
-import { useTransition } from "react";
-import { type Resolver, useForm } from "react-hook-form";
+import type { Resolver } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage } from "@/components/form";
-import { applyServerErrors, fieldBinder } from "@/components/form-errors";
+import { SaveFormActions, useSaveForm } from "@/components/save-form";
 import type { PartInput, partSchema } from "@/lib/library/part-schema";
 import { TextAreaField } from "./fields";
 import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from "./part-form-sections";
@@ -77,33 +73,18 @@ export function PartForm({
   defaults: PartFormValues;
   facets: { makers: string[]; packages: string[] };
 }) {
-  const router = useRouter();
-  const [navigating, startTransition] = useTransition();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<PartInput, unknown, PartBody>({
+  const { onSubmit, bind, formState, pending } = useSaveForm<PartInput, PartBody>({
     resolver: checkPart,
     defaultValues: defaults as PartInput,
-  });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
+    fields,
+    codes: { "conflict:part": "partNumber" },
+    save: async (values) => {
       const { part } = partId
         ? await sendJson<{ part: { id: string } }>("PATCH", `/api/parts/${partId}`, values)
         : await sendJson<{ part: { id: string } }>("POST", "/api/parts", values);
-      startTransition(() => {
-        router.push(`/library/${part.id}`);
-        router.refresh();
-      });
-    } catch (error) {
-      applyServerErrors(error, setError, fields, { "conflict:part": "partNumber" });
-    }
+      return `/library/${part.id}`;
+    },
   });
-
-  const bind = fieldBinder(register, errors);
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
@@ -114,18 +95,12 @@ export function PartForm({
 
       <TextAreaField id="part-notes" label="Notes" hint="Optional" {...bind("notes")} />
 
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      <FormActions
-        aside={
-          <Link href={partId ? `/library/${partId}` : "/library"} className="hover:text-ink hover:underline">
-            Cancel
-          </Link>
-        }
-      >
-        <Button type="submit" variant="primary" pending={isSubmitting || navigating}>
-          {partId ? "Save part" : "Create part"}
-        </Button>
-      </FormActions>
+      <SaveFormActions
+        error={formState.errors.root?.server?.message}
+        cancelHref={partId ? `/library/${partId}` : "/library"}
+        pending={pending}
+        label={partId ? "Save part" : "Create part"}
+      />
     </form>
   );
 }

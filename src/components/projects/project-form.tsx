@@ -1,14 +1,10 @@
 "use client";
 
 import { useQueryClient } from "@tanstack/react-query";
-import Link from "next/link";
-import { useRouter } from "next/navigation";
-import { useTransition } from "react";
-import { type Resolver, useForm } from "react-hook-form";
+import type { Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage } from "@/components/form";
-import { applyServerErrors, fieldBinder } from "@/components/form-errors";
+import { SaveFormActions, useSaveForm } from "@/components/save-form";
 import { invalidateProject } from "./api";
 import type { projectFormSchema } from "./project-form-schema";
 import { CasePathFields, DesignFields, type OwnerChoice, PolicyFields } from "./project-form-sections";
@@ -40,36 +36,21 @@ export function ProjectForm({
   defaults: ProjectFormValues;
   owners: OwnerChoice[];
 }) {
-  const router = useRouter();
   const queryClient = useQueryClient();
-  const [navigating, startTransition] = useTransition();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    watch,
-    formState: { errors, isSubmitting },
-  } = useForm<ProjectFormValues, unknown, ProjectBody>({
-    resolver: checkValues,
-    defaultValues: defaults,
-  });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
-      const { project } = projectId
-        ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
-        : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
-      await invalidateProject(queryClient, project.id);
-      startTransition(() => {
-        router.push(`/projects/${project.id}`);
-        router.refresh();
-      });
-    } catch (error) {
-      applyServerErrors(error, setError, projectFields);
-    }
-  });
-
-  const bind = fieldBinder(register, errors);
+  const { onSubmit, bind, register, watch, formState, pending } = useSaveForm<ProjectFormValues, ProjectBody>(
+    {
+      resolver: checkValues,
+      defaultValues: defaults,
+      fields: projectFields,
+      save: async (values) => {
+        const { project } = projectId
+          ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
+          : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
+        await invalidateProject(queryClient, project.id);
+        return `/projects/${project.id}`;
+      },
+    },
+  );
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
@@ -77,21 +58,12 @@ export function ProjectForm({
       <PolicyFields bind={bind} />
       <CasePathFields bind={bind} apply={register("applyCaseNetwork")} text={watch("caseNetwork")} />
 
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      <FormActions
-        aside={
-          <Link
-            href={projectId ? `/projects/${projectId}` : "/projects"}
-            className="hover:text-ink hover:underline"
-          >
-            Cancel
-          </Link>
-        }
-      >
-        <Button type="submit" variant="primary" pending={isSubmitting || navigating}>
-          {projectId ? "Save settings" : "Create project"}
-        </Button>
-      </FormActions>
+      <SaveFormActions
+        error={formState.errors.root?.server?.message}
+        cancelHref={projectId ? `/projects/${projectId}` : "/projects"}
+        pending={pending}
+        label={projectId ? "Save settings" : "Create project"}
+      />
     </form>
   );
 }
