@@ -16,10 +16,16 @@ import { applyServerErrors, fieldBinder } from "./form-errors";
 // A form names its schema by a loader: the schema, and zod with it, load at the form's first check, not with the
 // page (a page's first load stays within its budget).
 
-/** A form's zod schema, loaded when first needed: `() => import("@/lib/auth/schemas").then((m) => m.signInSchema)`. */
-export type SchemaLoader<T extends FieldValues> = () => Promise<z.ZodType<T, T>>;
+/**
+ * A form's zod schema, loaded when first needed: `() => import("@/lib/auth/schemas").then((m) => m.signInSchema)`;
+ * it checks the form's values (`In`) and gives what is sent (`Out`).
+ */
+export type SchemaLoader<In extends FieldValues, Out = In> = () => Promise<z.ZodType<Out, In>>;
 
-function lazyResolver<T extends FieldValues>(load: SchemaLoader<T>): Resolver<T> {
+/** A react-hook-form resolver that loads its schema, and zod with it, at the form's first check. */
+export function lazyResolver<In extends FieldValues, Out = In>(
+  load: SchemaLoader<In, Out>,
+): Resolver<In, unknown, Out> {
   return async (values, context, options) => {
     const [{ zodResolver }, schema] = await Promise.all([import("@hookform/resolvers/zod"), load()]);
     return zodResolver(schema)(values, context, options);

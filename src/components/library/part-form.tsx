@@ -1,7 +1,7 @@
 "use client";
 
-import type { Resolver } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
+import { lazyResolver } from "@/components/api-form";
 import { SaveFormActions, useSaveForm } from "@/components/save-form";
 import type { PartInput, partSchema } from "@/lib/library/part-schema";
 import { TextAreaField } from "./fields";
@@ -10,13 +10,9 @@ import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from 
 type PartBody = ReturnType<typeof partSchema.parse>;
 
 /** The form's resolver: the schema (and zod with it) is loaded at the first check, not with the page. */
-const checkPart: Resolver<PartInput, unknown, PartBody> = async (values, context, options) => {
-  const [{ zodResolver }, { partSchema }] = await Promise.all([
-    import("@hookform/resolvers/zod"),
-    import("@/lib/library/part-schema"),
-  ]);
-  return zodResolver(partSchema)(values, context, options);
-};
+const checkPart = lazyResolver<PartInput, PartBody>(() =>
+  import("@/lib/library/part-schema").then((m) => m.partSchema),
+);
 
 export type PartFormValues = {
   partNumber: string;

@@ -1,9 +1,9 @@
 "use client";
 
 import { useQueryClient } from "@tanstack/react-query";
-import type { Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { sendJson } from "@/components/api-client";
+import { lazyResolver } from "@/components/api-form";
 import { SaveFormActions, useSaveForm } from "@/components/save-form";
 import { invalidateProject } from "./api";
 import type { projectFormSchema } from "./project-form-schema";
@@ -15,13 +15,9 @@ export { emptyProject, type ProjectFormValues } from "./project-form-values";
 type ProjectBody = z.output<typeof projectFormSchema>;
 
 /** The form's resolver: the schema (and zod with it) is loaded at the first validation, not with the page. */
-const checkValues: Resolver<ProjectFormValues, unknown, ProjectBody> = async (values, context, options) => {
-  const [{ zodResolver }, { projectFormSchema }] = await Promise.all([
-    import("@hookform/resolvers/zod"),
-    import("./project-form-schema"),
-  ]);
-  return zodResolver(projectFormSchema)(values, context, options);
-};
+const checkValues = lazyResolver<ProjectFormValues, ProjectBody>(() =>
+  import("./project-form-schema").then((m) => m.projectFormSchema),
+);
 
 /**
  * A project's settings: new (POST /api/projects) or edited (PATCH /api/projects/:id). The margin policy is the
