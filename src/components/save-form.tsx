@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useTransition } from "react";
+import { type FormEventHandler, type ReactNode, useTransition } from "react";
 import { type DefaultValues, type FieldValues, type Path, type Resolver, useForm } from "react-hook-form";
 import { Button, FormActions, FormMessage } from "./form";
 import { applyServerErrors, fieldBinder } from "./form-errors";
@@ -12,7 +12,8 @@ import { applyServerErrors, fieldBinder } from "./form-errors";
 /**
  * A create-or-edit form: `save` sends the checked values and gives the saved item's page, which then opens. A
  * server's error lands under the `fields` it names (or the field its code maps to in `codes`), else in
- * `root.server`. `pending` lasts until the page is open.
+ * `root.server`. `shell` is what its SaveFormShell takes from it: the submit, the server's message, and pending,
+ * which lasts until the page is open.
  */
 export function useSaveForm<In extends FieldValues, Out>({
   resolver,
@@ -42,23 +43,29 @@ export function useSaveForm<In extends FieldValues, Out>({
     }
   });
   const { errors, isSubmitting } = form.formState;
-  return { ...form, onSubmit, bind: fieldBinder(form.register, errors), pending: isSubmitting || navigating };
+  const shell = { onSubmit, error: errors.root?.server?.message, pending: isSubmitting || navigating };
+  return { ...form, shell, bind: fieldBinder(form.register, errors) };
 }
 
-/** The close of such a form: the server's message, Cancel back to `cancelHref`, and the submit button. */
-export function SaveFormActions({
+/** Such a form: its fields, then the server's message, Cancel back to `cancelHref`, and the submit button. */
+export function SaveFormShell({
+  onSubmit,
   error,
-  cancelHref,
   pending,
+  cancelHref,
   label,
+  children,
 }: {
+  onSubmit: FormEventHandler<HTMLFormElement>;
   error: string | undefined;
-  cancelHref: string;
   pending: boolean;
+  cancelHref: string;
   label: string;
+  children: ReactNode;
 }) {
   return (
-    <>
+    <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
+      {children}
       <FormMessage tone="error">{error}</FormMessage>
       <FormActions
         aside={
@@ -71,6 +78,6 @@ export function SaveFormActions({
           {label}
         </Button>
       </FormActions>
-    </>
+    </form>
   );
 }

@@ -2,7 +2,7 @@
 
 import { sendJson } from "@/components/api-client";
 import { lazyResolver } from "@/components/api-form";
-import { SaveFormActions, useSaveForm } from "@/components/save-form";
+import { SaveFormShell, useSaveForm } from "@/components/save-form";
 import type { PartInput, partSchema } from "@/lib/library/part-schema";
 import { TextAreaField } from "./fields";
 import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from "./part-form-sections";
@@ -69,7 +69,7 @@ export function PartForm({
   defaults: PartFormValues;
   facets: { makers: string[]; packages: string[] };
 }) {
-  const { onSubmit, bind, formState, pending } = useSaveForm<PartInput, PartBody>({
+  const { shell, bind } = useSaveForm<PartInput, PartBody>({
     resolver: checkPart,
     defaultValues: defaults as PartInput,
     fields,
@@ -83,20 +83,17 @@ export function PartForm({
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
+    <SaveFormShell
+      {...shell}
+      cancelHref={partId ? `/library/${partId}` : "/library"}
+      label={partId ? "Save part" : "Create part"}
+    >
       <IdentityFields bind={bind} facets={facets} />
       <RatingFields bind={bind} />
       <AvalancheFields bind={bind} />
       <PurchasingFields bind={bind} />
 
       <TextAreaField id="part-notes" label="Notes" hint="Optional" {...bind("notes")} />
-
-      <SaveFormActions
-        error={formState.errors.root?.server?.message}
-        cancelHref={partId ? `/library/${partId}` : "/library"}
-        pending={pending}
-        label={partId ? "Save part" : "Create part"}
-      />
-    </form>
+    </SaveFormShell>
   );
 }

@@ -4,7 +4,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
 import { sendJson } from "@/components/api-client";
 import { lazyResolver } from "@/components/api-form";
-import { SaveFormActions, useSaveForm } from "@/components/save-form";
+import { SaveFormShell, useSaveForm } from "@/components/save-form";
 import { invalidateProject } from "./api";
 import type { projectFormSchema } from "./project-form-schema";
 import { CasePathFields, DesignFields, type OwnerChoice, PolicyFields } from "./project-form-sections";
@@ -33,33 +33,28 @@ export function ProjectForm({
   owners: OwnerChoice[];
 }) {
   const queryClient = useQueryClient();
-  const { onSubmit, bind, register, watch, formState, pending } = useSaveForm<ProjectFormValues, ProjectBody>(
-    {
-      resolver: checkValues,
-      defaultValues: defaults,
-      fields: projectFields,
-      save: async (values) => {
-        const { project } = projectId
-          ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
-          : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
-        await invalidateProject(queryClient, project.id);
-        return `/projects/${project.id}`;
-      },
+  const { shell, bind, register, watch } = useSaveForm<ProjectFormValues, ProjectBody>({
+    resolver: checkValues,
+    defaultValues: defaults,
+    fields: projectFields,
+    save: async (values) => {
+      const { project } = projectId
+        ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
+        : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
+      await invalidateProject(queryClient, project.id);
+      return `/projects/${project.id}`;
     },
-  );
+  });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
+    <SaveFormShell
+      {...shell}
+      cancelHref={projectId ? `/projects/${projectId}` : "/projects"}
+      label={projectId ? "Save settings" : "Create project"}
+    >
       <DesignFields bind={bind} owners={owners} editing={projectId !== undefined} />
       <PolicyFields bind={bind} />
       <CasePathFields bind={bind} apply={register("applyCaseNetwork")} text={watch("caseNetwork")} />
-
-      <SaveFormActions
-        error={formState.errors.root?.server?.message}
-        cancelHref={projectId ? `/projects/${projectId}` : "/projects"}
-        pending={pending}
-        label={projectId ? "Save settings" : "Create project"}
-      />
-    </form>
+    </SaveFormShell>
   );
 }
