@@ -16,10 +16,16 @@ import { applyServerErrors, fieldBinder } from "./form-errors";
 // A form names its schema by a loader: the schema, and zod with it, load at the form's first check, not with the
 // page (a page's first load stays within its budget).
 
-/** A form's zod schema, loaded when first needed: `() => import("@/lib/auth/schemas").then((m) => m.signInSchema)`. */
-export type SchemaLoader<T extends FieldValues> = () => Promise<z.ZodType<T, T>>;
+/**
+ * A form's zod schema, loaded when first needed: `() => import("@/lib/auth/schemas").then((m) => m.signInSchema)`;
+ * it checks the form's values (`In`) and gives what is sent (`Out`).
+ */
+export type SchemaLoader<In extends FieldValues, Out = In> = () => Promise<z.ZodType<Out, In>>;
 
-function lazyResolver<T extends FieldValues>(load: SchemaLoader<T>): Resolver<T> {
+/** A react-hook-form resolver that loads its schema, and zod with it, at the form's first check. */
+export function lazyResolver<In extends FieldValues, Out = In>(
+  load: SchemaLoader<In, Out>,
+): Resolver<In, unknown, Out> {
   return async (values, context, options) => {
     const [{ zodResolver }, schema] = await Promise.all([import("@hookform/resolvers/zod"), load()]);
     return zodResolver(schema)(values, context, options);
@@ -29,7 +35,7 @@ function lazyResolver<T extends FieldValues>(load: SchemaLoader<T>): Resolver<T>
 /**
  * A react-hook-form form whose fields are the keys of `defaultValues`. `send` posts the values; an error it
  * throws goes to `onError` first (true when that placed it) and then under the fields it names, or in
- * `root.server`.
+ * `root.server`. `shell` is what its ApiFormShell takes from it: the submit, the server's message, pending.
  */
 export function useApiForm<T extends FieldValues>({
   schema,
@@ -51,7 +57,12 @@ export function useApiForm<T extends FieldValues>({
       applyServerErrors(error, form.setError, Object.keys(defaultValues) as Path<T>[]);
     }
   });
-  return { ...form, onSubmit, bind: fieldBinder(form.register, form.formState.errors) };
+  const shell = {
+    onSubmit,
+    error: form.formState.errors.root?.server?.message,
+    pending: form.formState.isSubmitting,
+  };
+  return { ...form, onSubmit, shell, bind: fieldBinder(form.register, form.formState.errors) };
 }
 
 /**

@@ -1,7 +1,9 @@
 "use client";
 
-import type { ReactNode } from "react";
-import { Button } from "@/components/form";
+import { useMutation } from "@tanstack/react-query";
+import { type ReactNode, useState } from "react";
+import { messageOf, sendJson } from "@/components/api-client";
+import { Button, FormMessage } from "@/components/form";
 
 /**
  * A row's delete action in two steps: "Delete" asks, then "Delete" / "Keep" decide. Other row actions (`before`)
@@ -47,4 +49,32 @@ export function ConfirmDelete({
       </Button>
     </span>
   );
+}
+
+/**
+ * A table's row deletes: which row is asking, the DELETE request to `path(id)`, then `refresh` (what showed the
+ * row). `action` is a row's ConfirmDelete; `failure` the form message to show under the table.
+ */
+export function useRowDelete(path: (id: string) => string, refresh: () => Promise<unknown>) {
+  const [confirming, setConfirming] = useState<string | null>(null);
+  const remove = useMutation({
+    mutationFn: (id: string) => sendJson("DELETE", path(id)),
+    onSuccess: async () => {
+      setConfirming(null);
+      await refresh();
+    },
+  });
+  const action = (id: string, label: string, before?: ReactNode) => (
+    <ConfirmDelete
+      label={label}
+      confirming={confirming === id}
+      pending={remove.isPending}
+      onAsk={() => setConfirming(id)}
+      onConfirm={() => remove.mutate(id)}
+      onKeep={() => setConfirming(null)}
+      before={before}
+    />
+  );
+  const failure = remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null;
+  return { action, failure };
 }

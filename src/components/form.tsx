@@ -2,9 +2,9 @@ import type { ButtonHTMLAttributes, InputHTMLAttributes, ReactNode, Ref, SelectH
 
 // Form pieces shared by every form: label above the field, hint and error under it, tied with aria-describedby.
 
-interface FieldFrame {
+export interface FieldFrame {
   id: string;
-  label: string;
+  label: ReactNode;
   /** Shown at the right of the label, e.g. a "Forgot password?" link. */
   labelAside?: ReactNode;
   hint?: ReactNode;
@@ -21,7 +21,24 @@ const control =
   "placeholder:text-ink-faint focus-visible:border-accent focus-visible:outline-1 focus-visible:outline-offset-0 " +
   "aria-invalid:border-fail disabled:cursor-not-allowed disabled:bg-sunken disabled:text-ink-muted";
 
-function Frame({
+/** The hint, or else the error, under a field, with the ids its control's aria-describedby names. */
+export function FieldNote({ id, hint, error }: { id: string; hint?: ReactNode; error?: string }) {
+  if (error) {
+    return (
+      <p id={`${id}-error`} className="mt-1 text-xs text-fail">
+        {error}
+      </p>
+    );
+  }
+  return hint ? (
+    <p id={`${id}-hint`} className="mt-1 text-xs text-ink-muted">
+      {hint}
+    </p>
+  ) : null;
+}
+
+/** A field's frame: the label (and what stands at its right) above the control, the hint or error under it. */
+export function Frame({
   id,
   label,
   labelAside,
@@ -39,22 +56,21 @@ function Frame({
         {labelAside}
       </div>
       {children}
-      {hint && !error ? (
-        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-muted">
-          {hint}
-        </p>
-      ) : null}
-      {error ? (
-        <p id={`${id}-error`} className="mt-1 text-xs text-fail">
-          {error}
-        </p>
-      ) : null}
+      <FieldNote id={id} hint={hint} error={error} />
     </div>
   );
 }
 
 /** A field's props split into its frame's, its control's ties to the hint and error, and the control's own. */
-function splitField<P extends FieldFrame>({ id, label, labelAside, hint, error, className, ...own }: P) {
+export function splitField<P extends FieldFrame>({
+  id,
+  label,
+  labelAside,
+  hint,
+  error,
+  className,
+  ...own
+}: P) {
   return {
     frame: { id, label, labelAside, hint, error, className },
     tie: {
@@ -124,6 +140,10 @@ export function Button({
   );
 }
 
+/** A link that looks like a secondary button: to another page, or a download. */
+export const linkButtonClass =
+  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
+
 /** The row that closes a form: secondary things at the left, the primary action at the bottom right. */
 export function FormActions({ children, aside }: { children: ReactNode; aside?: ReactNode }) {
   return (
@@ -151,5 +171,15 @@ export function FormMessage({ tone, children }: { tone: "error" | "done"; childr
     >
       {children}
     </p>
+  );
+}
+
+/** A short problem beside the button that met it (role alert); nothing while there is none. */
+export function InlineAlert({ children }: { children: ReactNode }) {
+  if (!children) return null;
+  return (
+    <span role="alert" className="text-xs text-fail">
+      {children}
+    </span>
   );
 }

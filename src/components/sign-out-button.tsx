@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiError, messageOf, sendJson } from "./api-client";
-import { Button } from "./form";
+import { Button, InlineAlert } from "./form";
 
 /** Ends this browser's session and goes to the sign-in page. */
 export function SignOutButton({
@@ -41,11 +41,7 @@ export function SignOutButton({
       <Button variant={variant} size={size} pending={pending} onClick={signOut} className={className}>
         Sign out
       </Button>
-      {error ? (
-        <span role="alert" className="text-xs text-fail">
-          {error}
-        </span>
-      ) : null}
+      <InlineAlert>{error}</InlineAlert>
     </>
   );
 }

@@ -10,6 +10,26 @@ type Frozen = DecisionSnapshot["candidates"][number];
 
 const none = (text: string) => <span className="text-ink-faint">{text}</span>;
 
+/** A rating of the frozen part: its symbol and unit over the figure. */
+function rating(
+  id: "vdsMax" | "rdsOn" | "tjMax",
+  main: string,
+  sub: string,
+  unit: "V" | "Ω" | "°C",
+): ColumnDef<Frozen> {
+  return {
+    id,
+    header: () => (
+      <>
+        <Sym main={main} sub={sub} />
+        {` (${unit})`}
+      </>
+    ),
+    cell: ({ row }) => q(row.original.part[id], unit),
+    meta: { numeric: true },
+  };
+}
+
 const columns: ColumnDef<Frozen>[] = [
   {
     id: "part",
@@ -22,36 +42,9 @@ const columns: ColumnDef<Frozen>[] = [
     ),
   },
   { id: "package", header: "Package", cell: ({ row }) => row.original.part.package },
-  {
-    id: "vdsMax",
-    header: () => (
-      <>
-        <Sym main="V" sub="DSS" /> (V)
-      </>
-    ),
-    cell: ({ row }) => q(row.original.part.vdsMax, "V"),
-    meta: { numeric: true },
-  },
-  {
-    id: "rdsOn",
-    header: () => (
-      <>
-        <Sym main="R" sub="DS(on)" /> (Ω)
-      </>
-    ),
-    cell: ({ row }) => q(row.original.part.rdsOn, "Ω"),
-    meta: { numeric: true },
-  },
-  {
-    id: "tjMax",
-    header: () => (
-      <>
-        <Sym main="T" sub="j,max" /> (°C)
-      </>
-    ),
-    cell: ({ row }) => q(row.original.part.tjMax, "°C"),
-    meta: { numeric: true },
-  },
+  rating("vdsMax", "V", "DSS", "V"),
+  rating("rdsOn", "R", "DS(on)", "Ω"),
+  rating("tjMax", "T", "j,max", "°C"),
   {
     id: "unitCost",
     header: "Unit cost",

@@ -6,10 +6,10 @@ import dynamic from "next/dynamic";
 import { type ReactNode, useMemo, useState } from "react";
 import { AfterLoad } from "@/components/after-load";
 import { messageOf } from "@/components/api-client";
-import { DataTable } from "@/components/data-table";
 import { callJson } from "@/components/library/api";
 import { LoadingBox } from "@/components/loading-box";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
+import { ChartTable } from "@/components/soa-chart/chart-table";
 import { percent, q } from "@/lib/format";
 import { verdictWords } from "@/lib/vocabulary";
 import { pulseLine, readWidth } from "./format";
@@ -197,21 +197,18 @@ function OverlayTable({ check, markers }: { check: ProjectCheck; markers: Marker
     marker.byCandidate.map((b, k) => ({ ...b, marker, first: k === 0 })),
   );
   return (
-    <details className="mt-2 text-sm">
-      <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
-        Show the chart as a table ({markers.length} {markers.length === 1 ? "pulse" : "pulses"} ×{" "}
-        {check.candidates.length} candidates)
-      </summary>
-      <div className="mt-2">
-        <DataTable
-          label="Chosen pulses by candidate"
-          columns={overlayColumns}
-          data={rows}
-          getRowId={(r) => `${r.marker.id}-${r.partNumber}`}
-          density="compact"
-          className="max-h-80"
-        />
-      </div>
-    </details>
+    <ChartTable
+      className="mt-2 text-sm"
+      summary={
+        <>
+          Show the chart as a table ({markers.length} {markers.length === 1 ? "pulse" : "pulses"} ×{" "}
+          {check.candidates.length} candidates)
+        </>
+      }
+      label="Chosen pulses by candidate"
+      columns={overlayColumns}
+      data={rows}
+      getRowId={(r) => `${r.marker.id}-${r.partNumber}`}
+    />
   );
 }

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
-import { Button } from "@/components/form";
+import { Button, linkButtonClass } from "@/components/form";
 import { type OpenFinding, VerifyPart } from "./verify-part";
 
 /**
@@ -60,10 +60,7 @@ export function PartActions({
       ) : null}
       {canWrite ? (
         <>
-          <Link
-            href={`/library/${partId}/edit`}
-            className="inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken"
-          >
+          <Link href={`/library/${partId}/edit`} className={linkButtonClass}>
             Edit part
           </Link>
           {archived ? (

@@ -1,12 +1,8 @@
 "use client";
 
-import Link from "next/link";
-import { useRouter } from "next/navigation";
-import { useTransition } from "react";
-import { type Resolver, useForm } from "react-hook-form";
 import { sendJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage } from "@/components/form";
-import { applyServerErrors, fieldBinder } from "@/components/form-errors";
+import { lazyResolver } from "@/components/api-form";
+import { SaveFormShell, useSaveForm } from "@/components/save-form";
 import type { PartInput, partSchema } from "@/lib/library/part-schema";
 import { TextAreaField } from "./fields";
 import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from "./part-form-sections";
@@ -14,13 +10,9 @@ import { AvalancheFields, IdentityFields, PurchasingFields, RatingFields } from 
 type PartBody = ReturnType<typeof partSchema.parse>;
 
 /** The form's resolver: the schema (and zod with it) is loaded at the first check, not with the page. */
-const checkPart: Resolver<PartInput, unknown, PartBody> = async (values, context, options) => {
-  const [{ zodResolver }, { partSchema }] = await Promise.all([
-    import("@hookform/resolvers/zod"),
-    import("@/lib/library/part-schema"),
-  ]);
-  return zodResolver(partSchema)(values, context, options);
-};
+const checkPart = lazyResolver<PartInput, PartBody>(() =>
+  import("@/lib/library/part-schema").then((m) => m.partSchema),
+);
 
 export type PartFormValues = {
   partNumber: string;
@@ -77,55 +69,31 @@ export function PartForm({
   defaults: PartFormValues;
   facets: { makers: string[]; packages: string[] };
 }) {
-  const router = useRouter();
-  const [navigating, startTransition] = useTransition();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<PartInput, unknown, PartBody>({
+  const { shell, bind } = useSaveForm<PartInput, PartBody>({
     resolver: checkPart,
     defaultValues: defaults as PartInput,
-  });
-
-  const onSubmit = handleSubmit(async (values) => {
-    try {
+    fields,
+    codes: { "conflict:part": "partNumber" },
+    save: async (values) => {
       const { part } = partId
         ? await sendJson<{ part: { id: string } }>("PATCH", `/api/parts/${partId}`, values)
         : await sendJson<{ part: { id: string } }>("POST", "/api/parts", values);
-      startTransition(() => {
-        router.push(`/library/${part.id}`);
-        router.refresh();
-      });
-    } catch (error) {
-      applyServerErrors(error, setError, fields, { "conflict:part": "partNumber" });
-    }
+      return `/library/${part.id}`;
+    },
   });
 
-  const bind = fieldBinder(register, errors);
-
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-6 rounded-md border border-line bg-panel p-5">
+    <SaveFormShell
+      {...shell}
+      cancelHref={partId ? `/library/${partId}` : "/library"}
+      label={partId ? "Save part" : "Create part"}
+    >
       <IdentityFields bind={bind} facets={facets} />
       <RatingFields bind={bind} />
       <AvalancheFields bind={bind} />
       <PurchasingFields bind={bind} />
 
       <TextAreaField id="part-notes" label="Notes" hint="Optional" {...bind("notes")} />
-
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      <FormActions
-        aside={
-          <Link href={partId ? `/library/${partId}` : "/library"} className="hover:text-ink hover:underline">
-            Cancel
-          </Link>
-        }
-      >
-        <Button type="submit" variant="primary" pending={isSubmitting || navigating}>
-          {partId ? "Save part" : "Create part"}
-        </Button>
-      </FormActions>
-    </form>
+    </SaveFormShell>
   );
 }

@@ -4,9 +4,9 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import type { ColumnDef, SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { messageOf } from "@/components/api-client";
 import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
+import { queryStatus } from "@/components/query-status";
 import { useUrlState } from "@/components/use-url-state";
 import { inUnit, money } from "@/lib/format";
 import { technologyLabels } from "@/lib/library/technologies";
@@ -151,15 +151,7 @@ export function PartTable({ canWrite }: { canWrite: boolean }) {
           }
         }}
         rowProps={() => ({ className: `hover:bg-surface ${query.isPlaceholderData ? "opacity-60" : ""}` })}
-        status={
-          query.isPending ? (
-            "Loading parts…"
-          ) : query.isError ? (
-            <span role="alert" className="text-fail">
-              {messageOf(query.error)}
-            </span>
-          ) : null
-        }
+        status={queryStatus(query, "Loading parts…")}
         empty={
           filtered ? (
             <span className="inline-flex items-center gap-3">

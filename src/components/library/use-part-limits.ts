@@ -1,22 +1,17 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import type { ChartCurve, ChartFinding, ChartInterpolated } from "@/components/soa-chart";
+import type { ChartFinding, ChartInterpolated } from "@/components/soa-chart";
 import { useDebounced } from "@/components/use-debounced";
+import type { Limits as ComputedLimits } from "@/lib/library/limits";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
 import { formatQuantity, parseQuantity } from "@/lib/soa/units";
 import { callJson } from "./api";
 
-/** GET /api/parts/:id/limits: the curves, derated for the case temperature, and the line for a typed width. */
-export interface Limits {
-  refCaseTemp: number;
-  caseTemp: number;
-  derating: number;
-  curves: ChartCurve[];
-  derated: ChartCurve[];
-  interpolated: { width: number; policy: string; flags: Flag[]; points: [number, number][] } | null;
-  instability: { width: number; zth: number; points: [number, number][] } | null;
-  findings: ChartFinding[];
-}
+/**
+ * GET /api/parts/:id/limits: the engine's limits (the curves, derated for the case temperature, and the line for a
+ * typed width) with the curve set's findings.
+ */
+export type Limits = ComputedLimits & { findings: ChartFinding[] };
 
 /** How the typed width was read, in a few words for its label. */
 function widthNote(flags: Flag[]): string {

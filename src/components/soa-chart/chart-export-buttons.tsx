@@ -1,7 +1,7 @@
 "use client";
 
 import { type RefObject, useState } from "react";
-import { Button } from "@/components/form";
+import { Button, InlineAlert } from "@/components/form";
 import { downloadPng, downloadSvg } from "./chart-export";
 
 /** "SVG" and "PNG": the chart as drawn, with its legend, for reports. */
@@ -36,11 +36,7 @@ export function ChartExport({ frame, fileName }: { frame: RefObject<HTMLElement 
       >
         PNG
       </Button>
-      {error ? (
-        <span role="alert" className="text-xs text-fail">
-          {error}
-        </span>
-      ) : null}
+      <InlineAlert>{error}</InlineAlert>
     </div>
   );
 }

@@ -1,9 +1,9 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
-import { DataTable } from "@/components/data-table";
 import { formatQuantity } from "@/lib/soa/units";
 import { verdictWords } from "@/lib/vocabulary";
 import { durationName, sortByDuration } from "./chart-model";
+import { ChartTable } from "./chart-table";
 import type { ChartCurve, SoaChartProps } from "./types";
 
 interface PointRow {
@@ -76,22 +76,19 @@ export function PointsTable({ title, curves, derated, interpolated, pulses }: So
     })),
   ];
   return (
-    <details className="group min-w-0 flex-1 text-sm">
-      <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
-        Show the chart as a table ({groups.length} lines
-        {pulses?.length ? `, ${pulses.length} pulses` : ""})
-      </summary>
-      <div className="mt-2">
-        <DataTable
-          label={`SOA points of ${title}`}
-          columns={pointColumns}
-          data={rows}
-          getRowId={(row) => row.id}
-          density="compact"
-          className="max-h-80"
-        />
-      </div>
-    </details>
+    <ChartTable
+      className="group min-w-0 flex-1 text-sm"
+      summary={
+        <>
+          Show the chart as a table ({groups.length} lines
+          {pulses?.length ? `, ${pulses.length} pulses` : ""})
+        </>
+      }
+      label={`SOA points of ${title}`}
+      columns={pointColumns}
+      data={rows}
+      getRowId={(row) => row.id}
+    />
   );
 }
 

@@ -7,7 +7,7 @@ import { FormMessage } from "@/components/form";
 
 export function ForgotPasswordForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const { onSubmit, bind, formState } = useApiForm({
+  const { shell, bind } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.forgotPasswordSchema),
     defaultValues: { email: "" },
     send: async (values) => {
@@ -25,13 +25,7 @@ export function ForgotPasswordForm() {
     );
   }
   return (
-    <ApiFormShell
-      onSubmit={onSubmit}
-      error={formState.errors.root?.server?.message}
-      label="Send reset link"
-      pendingLabel="Sending…"
-      pending={formState.isSubmitting}
-    >
+    <ApiFormShell {...shell} label="Send reset link" pendingLabel="Sending…">
       <EmailField id="forgot-email" {...bind("email")} />
     </ApiFormShell>
   );

@@ -11,7 +11,7 @@ import { linkClass } from "../_components/auth-heading";
 export function SignInForm({ next }: { next: string | null }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
-  const { onSubmit, bind, formState } = useApiForm({
+  const { shell, bind } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.signInSchema),
     defaultValues: { email: "", password: "" },
     send: async (values) => {
@@ -24,11 +24,10 @@ export function SignInForm({ next }: { next: string | null }) {
 
   return (
     <ApiFormShell
-      onSubmit={onSubmit}
-      error={formState.errors.root?.server?.message}
+      {...shell}
       label="Sign in"
       pendingLabel="Signing in…"
-      pending={formState.isSubmitting || leaving}
+      pending={shell.pending || leaving}
       after={
         // After the button in the page's order: Tab goes e-mail → password → Sign in.
         <p className="text-right">

@@ -7,7 +7,7 @@ import { FormMessage, TextField } from "@/components/form";
 
 export function SignUpForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const { onSubmit, bind, formState } = useApiForm({
+  const { shell, bind } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.signUpSchema),
     defaultValues: { name: "", email: "", password: "", workspaceName: "" },
     send: async (values) => {
@@ -27,13 +27,7 @@ export function SignUpForm() {
   }
 
   return (
-    <ApiFormShell
-      onSubmit={onSubmit}
-      error={formState.errors.root?.server?.message}
-      label="Create workspace"
-      pendingLabel="Sending…"
-      pending={formState.isSubmitting}
-    >
+    <ApiFormShell {...shell} label="Create workspace" pendingLabel="Sending…">
       <TextField id="sign-up-name" label="Your name" autoComplete="name" {...bind("name")} />
       <EmailField id="sign-up-email" {...bind("email")} />
       <NewPasswordField id="sign-up-password" label="Password" {...bind("password")} />

@@ -7,7 +7,7 @@ import { FormMessage, TextField } from "@/components/form";
 
 export function PasswordForm({ email }: { email: string }) {
   const [changed, setChanged] = useState(false);
-  const { onSubmit, bind, reset, formState } = useApiForm({
+  const { shell, bind, reset } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.changePasswordSchema),
     defaultValues: { currentPassword: "", newPassword: "" },
     send: async (values) => {
@@ -20,16 +20,14 @@ export function PasswordForm({ email }: { email: string }) {
 
   return (
     <ApiFormShell
-      onSubmit={onSubmit}
+      {...shell}
       className="rounded-md border border-line bg-panel p-4"
-      error={formState.errors.root?.server?.message}
       status={
         changed ? (
           <FormMessage tone="done">Password changed. Your other sessions are signed out.</FormMessage>
         ) : null
       }
       label="Change password"
-      pending={formState.isSubmitting}
     >
       <AccountHint email={email} />
       <div className="space-y-4">

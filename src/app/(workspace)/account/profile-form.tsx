@@ -10,7 +10,7 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
   const router = useRouter();
   const [refreshing, startTransition] = useTransition();
   const [saved, setSaved] = useState(false);
-  const { onSubmit, register, reset, formState } = useApiForm({
+  const { shell, register, reset, formState } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.profileSchema),
     defaultValues: { name },
     send: async (values) => {
@@ -24,12 +24,11 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
 
   return (
     <ApiFormShell
-      onSubmit={onSubmit}
+      {...shell}
       className="rounded-md border border-line bg-panel p-4"
-      error={formState.errors.root?.server?.message}
       status={saved ? <FormMessage tone="done">Name saved.</FormMessage> : null}
       label="Save name"
-      pending={formState.isSubmitting || refreshing}
+      pending={shell.pending || refreshing}
       disabled={!formState.isDirty}
     >
       <div className="space-y-4">

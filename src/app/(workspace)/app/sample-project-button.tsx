@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
 import { messageOf, sendJson } from "@/components/api-client";
-import { Button } from "@/components/form";
+import { Button, InlineAlert } from "@/components/form";
 
 /** Adds the invented sample project in one click and opens it. */
 export function SampleProjectButton({ variant = "primary" }: { variant?: "primary" | "secondary" }) {
@@ -19,11 +19,7 @@ export function SampleProjectButton({ variant = "primary" }: { variant?: "primar
       <Button variant={variant} pending={add.isPending || navigating} onClick={() => add.mutate()}>
         {add.isPending ? "Adding the sample…" : "Add a sample project"}
       </Button>
-      {add.isError ? (
-        <span role="alert" className="text-xs text-fail">
-          {messageOf(add.error)}
-        </span>
-      ) : null}
+      <InlineAlert>{add.isError ? messageOf(add.error) : null}</InlineAlert>
     </span>
   );
 }

@@ -1,20 +1,17 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useQueryClient } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
-import { ConfirmDelete } from "@/components/confirm-delete";
+import { useRowDelete } from "@/components/confirm-delete";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
-import { FormMessage } from "@/components/form";
-import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { can } from "@/lib/auth/permissions";
-import { q, repeatOf, repeatText } from "@/lib/format";
+import { repeatOf, repeatText } from "@/lib/format";
 import { invalidateProject, type MeasuredRecord, type ProjectCheck } from "../api";
 import type { Person, Viewer } from "../project-workspace";
+import { pulseFigureColumns } from "../pulse-columns";
+import { recordedBy } from "../recorded-by";
 
 const num = { numeric: true };
 const muted = { className: "text-ink-muted", headerClassName: "" };
@@ -43,22 +40,11 @@ export function MeasuredTable({
   people: Person[];
 }) {
   const queryClient = useQueryClient();
-  const [confirming, setConfirming] = useState<string | null>(null);
-  const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = can(viewer.role, "measurement.manage");
-  const remove = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", `/api/projects/${projectId}/measurements/${id}`),
-    onSuccess: async () => {
-      setConfirming(null);
-      await invalidateProject(queryClient, projectId);
-    },
-  });
-  const whoText = (row: MeasuredRecord) =>
-    row.createdBy
-      ? row.createdBy === viewer.id
-        ? "you"
-        : (names.get(row.createdBy) ?? "a former member")
-      : "—";
+  const recorded = recordedBy(viewer, people);
+  const remove = useRowDelete(
+    (id) => `/api/projects/${projectId}/measurements/${id}`,
+    () => invalidateProject(queryClient, projectId),
+  );
   const columns: ColumnDef<MeasuredRecord>[] = [
     {
       id: "label",
@@ -75,14 +61,7 @@ export function MeasuredTable({
       ),
       meta: { className: "font-medium", headerClassName: "" },
     },
-    {
-      id: "v",
-      header: () => <Sym main="V" sub="DS" />,
-      cell: ({ row }) => q(row.original.v, "V"),
-      meta: num,
-    },
-    { id: "i", header: () => <Sym main="I" sub="D" />, cell: ({ row }) => q(row.original.i, "A"), meta: num },
-    { id: "width", header: "Width", cell: ({ row }) => q(row.original.duration, "s"), meta: num },
+    ...pulseFigureColumns<MeasuredRecord>(num),
     {
       id: "repeat",
       header: "Repetition",
@@ -107,7 +86,7 @@ export function MeasuredTable({
         cellProps: (row) => ({ title: benchText(row) || undefined }),
       },
     },
-    { id: "who", header: "Logged by", cell: ({ row }) => whoText(row.original), meta: muted },
+    { id: "who", header: "Logged by", cell: ({ row }) => recorded.who(row.original.createdBy), meta: muted },
     {
       id: "when",
       header: "When (UTC)",
@@ -118,17 +97,7 @@ export function MeasuredTable({
   if (canMeasure) {
     columns.push(
       actionsColumn(
-        (row) =>
-          row.createdBy === viewer.id || mayDeleteAny ? (
-            <ConfirmDelete
-              label={row.label}
-              confirming={confirming === row.id}
-              pending={remove.isPending}
-              onAsk={() => setConfirming(row.id)}
-              onConfirm={() => remove.mutate(row.id)}
-              onKeep={() => setConfirming(null)}
-            />
-          ) : null,
+        (row) => (recorded.mayDelete(row.createdBy) ? remove.action(row.id, row.label) : null),
         "w-32",
       ),
     );
@@ -147,7 +116,7 @@ export function MeasuredTable({
             : "No measured pulses yet. Technicians log what the bench measured here."
         }
       />
-      {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
+      {remove.failure}
     </>
   );
 }

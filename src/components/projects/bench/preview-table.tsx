@@ -1,9 +1,9 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
-import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { percent, q, repeatText } from "@/lib/format";
+import { percent, repeatText } from "@/lib/format";
 import type { MeasurementPreview } from "../api";
+import { pulseFigureColumns } from "../pulse-columns";
 
 /** Evidence beyond the part's ratings is kept and checked, and said so beside its verdict. */
 function beyond(flags: readonly string[] | undefined): string | null {
@@ -33,9 +33,7 @@ const fixed: ColumnDef<PreviewRow>[] = [
     cell: ({ row }) => (row.original.kind === "rect" ? "rect" : "triangle"),
     meta: muted,
   },
-  { id: "v", header: () => <Sym main="V" sub="DS" />, cell: ({ row }) => q(row.original.v, "V"), meta: num },
-  { id: "i", header: () => <Sym main="I" sub="D" />, cell: ({ row }) => q(row.original.i, "A"), meta: num },
-  { id: "width", header: "Width", cell: ({ row }) => q(row.original.duration, "s"), meta: num },
+  ...pulseFigureColumns<PreviewRow>(num),
   {
     id: "repeat",
     header: "Repetition",

@@ -12,6 +12,8 @@ import {
 } from "react-hook-form";
 import type { z } from "zod";
 import { UnitField } from "@/components/library/fields";
+import type { BuilderResult } from "@/lib/soa/builders";
+import type { Pulse, PulseKind } from "@/lib/soa/types";
 import { type BuilderProps, type BuiltPulse, PulseSummary, saveBuilt } from "./builder-layout";
 
 // What every fault-case builder shares: its form (validated live, saved the same way), its unit fields written as
@@ -25,6 +27,23 @@ export type Built =
 /** A pulse built from `input`: the engine's figures are shown beside the form and stored with the input as origin. */
 export function builtCase(pulse: BuiltPulse, input: object, figures: object): Built {
   return { ok: true, figures, pulse, origin: { input, figures } };
+}
+
+/**
+ * The case an engine builder's one pulse makes: `shape` turns the pulse of `kind` into the fault case, stored with
+ * `input`. The engine's refusal passes through; another kind is refused (`word` names the one expected).
+ */
+export function caseOfPulse<K extends PulseKind>(
+  built: BuilderResult<object>,
+  kind: K,
+  word: string,
+  input: object,
+  shape: (pulse: Extract<Pulse, { kind: K }>) => BuiltPulse,
+): Built {
+  if (!built.ok) return built;
+  const pulse = built.pulses[0];
+  if (pulse.kind !== kind) return { ok: false, reason: `the builder made no ${word}` };
+  return builtCase(shape(pulse as Extract<Pulse, { kind: K }>), input, built.figures);
 }
 
 /** One text field of a builder: the form value it edits and how it is labelled. */

@@ -3,7 +3,7 @@
 import type { z } from "zod";
 import { Sym } from "@/components/library/symbols";
 import { clampTurnOff, unclampedTurnOff } from "@/lib/soa/builders";
-import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderFields, type Built, caseOfPulse, useBuilderForm } from "./builder-form";
 import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { clampForm } from "./builder-schemas";
 import { TurnOffChoice } from "./turn-off-choice";
@@ -21,20 +21,12 @@ function build(input: Input): Built {
       busVoltage: input.busVoltage,
       ...delay,
     };
-    const built = unclampedTurnOff(circuit);
-    if (!built.ok) return built;
-    const pulse = built.pulses[0];
-    if (pulse.kind !== "avalanche") return { ok: false, reason: "the builder made no avalanche pulse" };
-    return builtCase(
-      {
-        kind: "avalanche",
-        supply: pulse.supply,
-        current: pulse.current,
-        inductance: pulse.inductance,
-      },
-      circuit,
-      built.figures,
-    );
+    return caseOfPulse(unclampedTurnOff(circuit), "avalanche", "avalanche pulse", circuit, (pulse) => ({
+      kind: "avalanche",
+      supply: pulse.supply,
+      current: pulse.current,
+      inductance: pulse.inductance,
+    }));
   }
   const circuit = {
     inductance: input.inductance,
@@ -43,15 +35,13 @@ function build(input: Input): Built {
     clampVoltage: input.clampVoltage ?? Number.NaN,
     ...delay,
   };
-  const built = clampTurnOff(circuit);
-  if (!built.ok) return built;
-  const pulse = built.pulses[0];
-  if (pulse.kind !== "triangle") return { ok: false, reason: "the builder made no triangle" };
-  return builtCase(
-    { kind: "triangle", v: pulse.v, i: pulse.i, duration: pulse.duration, repeat: null },
-    circuit,
-    built.figures,
-  );
+  return caseOfPulse(clampTurnOff(circuit), "triangle", "triangle", circuit, (pulse) => ({
+    kind: "triangle",
+    v: pulse.v,
+    i: pulse.i,
+    duration: pulse.duration,
+    repeat: null,
+  }));
 }
 
 /**

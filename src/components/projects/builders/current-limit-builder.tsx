@@ -3,7 +3,7 @@
 import type { z } from "zod";
 import { Sym } from "@/components/library/symbols";
 import { currentLimitFault } from "@/lib/soa/builders";
-import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderFields, type Built, caseOfPulse, useBuilderForm } from "./builder-form";
 import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { currentLimitForm } from "./builder-schemas";
 
@@ -19,21 +19,13 @@ function build(input: Input): Built {
     ...(input.restarts && input.restartPeriod !== undefined ? { retryPeriod: input.restartPeriod } : {}),
     ...(input.restarts && input.restartCount !== undefined ? { retryCount: input.restartCount } : {}),
   };
-  const built = currentLimitFault(circuit);
-  if (!built.ok) return built;
-  const pulse = built.pulses[0];
-  if (pulse.kind !== "rect") return { ok: false, reason: "the builder made no rectangle" };
-  return builtCase(
-    {
-      kind: "rect",
-      v: pulse.v,
-      i: pulse.i,
-      duration: pulse.duration,
-      repeat: pulse.repeat ?? null,
-    },
-    circuit,
-    built.figures,
-  );
+  return caseOfPulse(currentLimitFault(circuit), "rect", "rectangle", circuit, (pulse) => ({
+    kind: "rect",
+    v: pulse.v,
+    i: pulse.i,
+    duration: pulse.duration,
+    repeat: pulse.repeat ?? null,
+  }));
 }
 
 /** A short held in current limit until the hold timer turns the switch off; with restarts, a train. */

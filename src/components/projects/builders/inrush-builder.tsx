@@ -52,6 +52,12 @@ export function buildInrush(input: Input): Built {
   };
 }
 
+/** The pulses a loaded inrush's waveform may be saved as, in the order offered. */
+const equivalents = [
+  ["triangle", "an equal-energy falling triangle at the peak power"],
+  ["rect", "an equal-energy rectangle at the peak power"],
+] as const;
+
 export function InrushBuilder({ create }: BuilderProps) {
   const { form, values, frame } = useBuilderForm<Values, Input>({
     schema: inrushForm,
@@ -127,24 +133,17 @@ export function InrushBuilder({ create }: BuilderProps) {
                   With a load the pulse is a waveform; save it as
                 </legend>
                 <div className="mt-1.5 flex flex-wrap gap-x-6 gap-y-1 text-sm">
-                  <label className="inline-flex items-center gap-2">
-                    <input
-                      type="radio"
-                      value="triangle"
-                      {...form.register("equivalent")}
-                      className="accent-[var(--color-accent)]"
-                    />
-                    an equal-energy falling triangle at the peak power
-                  </label>
-                  <label className="inline-flex items-center gap-2">
-                    <input
-                      type="radio"
-                      value="rect"
-                      {...form.register("equivalent")}
-                      className="accent-[var(--color-accent)]"
-                    />
-                    an equal-energy rectangle at the peak power
-                  </label>
+                  {equivalents.map(([value, words]) => (
+                    <label key={value} className="inline-flex items-center gap-2">
+                      <input
+                        type="radio"
+                        value={value}
+                        {...form.register("equivalent")}
+                        className="accent-[var(--color-accent)]"
+                      />
+                      {words}
+                    </label>
+                  ))}
                 </div>
                 <p className="mt-1 text-xs text-ink-muted">
                   Fault cases are rectangles or triangles, so the waveform is replaced by a pulse with the

@@ -9,7 +9,7 @@ import { faultSequence } from "@/lib/soa/sequence";
 import { waveformRiseVI } from "@/lib/soa/thermal-waveform";
 import type { ProjectDetail } from "../api";
 import { TraceCharts, type TracePanel, type TraceSeries } from "../captures/trace-charts";
-import { BuilderFields, type Built, builtCase, useBuilderForm } from "./builder-form";
+import { BuilderFields, type Built, caseOfPulse, useBuilderForm } from "./builder-form";
 import { BuilderLayout, type BuilderProps } from "./builder-layout";
 import { sequenceForm } from "./builder-schemas";
 import { TurnOffChoice } from "./turn-off-choice";
@@ -49,14 +49,10 @@ function build(input: Input): Built {
     restarts: input.restarts,
     ...(input.pause !== undefined ? { pause: input.pause } : {}),
   });
-  if (!built.ok) return built;
-  const pulse = built.pulses[0];
-  if (pulse.kind !== "waveform") return { ok: false, reason: "the builder made no waveform" };
-  return builtCase(
-    { kind: "waveform", samples: { t: pulse.t, v: pulse.v, i: pulse.i } },
-    circuit,
-    built.figures,
-  );
+  return caseOfPulse(built, "waveform", "waveform", circuit, (pulse) => ({
+    kind: "waveform",
+    samples: { t: pulse.t, v: pulse.v, i: pulse.i },
+  }));
 }
 
 /**

@@ -1,17 +1,17 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useRef, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
-import { ConfirmDelete } from "@/components/confirm-delete";
+import { useRowDelete } from "@/components/confirm-delete";
 import { DataTable } from "@/components/data-table";
 import { FormMessage } from "@/components/form";
 import { Section } from "@/components/page-header";
+import { queryStatus } from "@/components/query-status";
 import { useUrlState } from "@/components/use-url-state";
-import { can } from "@/lib/auth/permissions";
 import { invalidateProject } from "../api";
 import type { PanelProps } from "../project-workspace";
+import { recordedBy } from "../recorded-by";
 import { captureKeys, inProgress, type RegisteredCapture, useCaptures } from "./capture-api";
 import { CaptureUpload } from "./capture-upload";
 import { CaptureView } from "./capture-view";
@@ -23,7 +23,6 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
   const queryClient = useQueryClient();
   const list = useCaptures(projectId);
   const [fresh, setFresh] = useState<RegisteredCapture | null>(null);
-  const [confirming, setConfirming] = useState<string | null>(null);
   const captures = list.data?.captures ?? [];
   const selected = params.get("capture") ?? captures[0]?.id ?? null;
   // When a capture's job finishes, the project's check (results, charts, comparison) has new evidence.
@@ -37,23 +36,20 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
       void invalidateProject(queryClient, projectId);
     following.current = pendingIds;
   }, [pendingIds, queryClient, projectId]);
-  const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = can(viewer.role, "measurement.manage");
+  const recorded = recordedBy(viewer, people);
 
   function open(id: string) {
     setParams({ tab: "captures", capture: id }, { push: true });
   }
 
-  const remove = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", `/api/projects/${projectId}/captures/${id}`),
-    onSuccess: async () => {
-      setConfirming(null);
-      await Promise.all([
+  const remove = useRowDelete(
+    (id) => `/api/projects/${projectId}/captures/${id}`,
+    () =>
+      Promise.all([
         queryClient.invalidateQueries({ queryKey: captureKeys.list(projectId) }),
         invalidateProject(queryClient, projectId),
-      ]);
-    },
-  });
+      ]),
+  );
 
   return (
     <div className="space-y-8">
@@ -87,45 +83,22 @@ export function CapturesPanel({ projectId, check, viewer, canMeasure, people }: 
             check,
             selected,
             open,
-            who: (c) =>
-              c.createdBy
-                ? c.createdBy === viewer.id
-                  ? "you"
-                  : (names.get(c.createdBy) ?? "a former member")
-                : "—",
+            who: (c) => recorded.who(c.createdBy),
             actions: canMeasure
-              ? (c) =>
-                  c.createdBy === viewer.id || mayDeleteAny ? (
-                    <ConfirmDelete
-                      label={c.name}
-                      confirming={confirming === c.id}
-                      pending={remove.isPending}
-                      onAsk={() => setConfirming(c.id)}
-                      onConfirm={() => remove.mutate(c.id)}
-                      onKeep={() => setConfirming(null)}
-                    />
-                  ) : null
+              ? (c) => (recorded.mayDelete(c.createdBy) ? remove.action(c.id, c.name) : null)
               : null,
           })}
           data={captures}
           getRowId={(c) => c.id}
           rowProps={(c) => ({ className: c.id === selected ? "bg-accent-soft" : "hover:bg-surface" })}
-          status={
-            list.isPending ? (
-              "Loading captures…"
-            ) : list.isError ? (
-              <span role="alert" className="text-fail">
-                {messageOf(list.error)}
-              </span>
-            ) : null
-          }
+          status={queryStatus(list, "Loading captures…")}
           empty={
             canMeasure
               ? "No captures yet. Drop a scope waveform above; you choose its columns before it is sent."
               : "No captures yet. Technicians upload scope waveforms here."
           }
         />
-        {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
+        {remove.failure}
         <Caution className="mt-3" />
       </Section>
 

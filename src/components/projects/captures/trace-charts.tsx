@@ -2,10 +2,10 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import { type PointerEvent, useState } from "react";
-import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { ChartFigure, ChartFrame, PlotArea, pointerAt } from "@/components/soa-chart/chart-frame";
+import { ChartTable } from "@/components/soa-chart/chart-table";
 import { type AxisSpec, makeAxis } from "@/components/soa-chart/frame-model";
 import type { Verdict } from "@/components/verdict-shape";
 import { q } from "@/lib/format";
@@ -219,20 +219,13 @@ function TraceTable({ panels, domain }: { panels: TracePanel[]; domain: [number,
     ),
   ];
   return (
-    <details className="text-sm">
-      <summary className="cursor-pointer text-ink-muted select-none hover:text-ink">
-        Show the traces as a table ({rows.length} steps)
-      </summary>
-      <div className="mt-2">
-        <DataTable
-          label="Capture traces"
-          columns={columns}
-          data={rows}
-          getRowId={(row) => String(row.k)}
-          density="compact"
-          className="max-h-80"
-        />
-      </div>
-    </details>
+    <ChartTable
+      className="text-sm"
+      summary={<>Show the traces as a table ({rows.length} steps)</>}
+      label="Capture traces"
+      columns={columns}
+      data={rows}
+      getRowId={(row) => String(row.k)}
+    />
   );
 }

@@ -1,12 +1,11 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useQueryClient } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { Fragment, type ReactNode, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
-import { ConfirmDelete } from "@/components/confirm-delete";
+import { useRowDelete } from "@/components/confirm-delete";
 import { actionsColumn, DataTable } from "@/components/data-table";
-import { Button, FormMessage } from "@/components/form";
+import { Button } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { q, repeatOf, repeatText } from "@/lib/format";
 import { builderName, shapeWords } from "@/lib/vocabulary";
@@ -29,36 +28,25 @@ export function FaultCaseTable({
   const queryClient = useQueryClient();
   const [editing, setEditing] = useState<string | null>(null);
   const [open, setOpen] = useState<string | null>(null);
-  const [confirming, setConfirming] = useState<string | null>(null);
-  const remove = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", `/api/projects/${projectId}/fault-cases/${id}`),
-    onSuccess: async () => {
-      setConfirming(null);
-      await invalidateProject(queryClient, projectId);
-    },
-  });
+  const remove = useRowDelete(
+    (id) => `/api/projects/${projectId}/fault-cases/${id}`,
+    () => invalidateProject(queryClient, projectId),
+  );
   const columns = faultCaseColumns({
     open,
     toggle: (id) => setOpen(open === id ? null : id),
     projectCaseTemp,
     actions: canWrite
-      ? (row) => (
-          <ConfirmDelete
-            label={row.name}
-            confirming={confirming === row.id}
-            pending={remove.isPending}
-            onAsk={() => setConfirming(row.id)}
-            onConfirm={() => remove.mutate(row.id)}
-            onKeep={() => setConfirming(null)}
-            before={
-              row.kind === "rect" || row.kind === "triangle" ? (
-                <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
-                  Edit
-                </Button>
-              ) : null
-            }
-          />
-        )
+      ? (row) =>
+          remove.action(
+            row.id,
+            row.name,
+            row.kind === "rect" || row.kind === "triangle" ? (
+              <Button size="sm" variant="quiet" onClick={() => setEditing(row.id)}>
+                Edit
+              </Button>
+            ) : null,
+          )
       : null,
   });
 
@@ -76,7 +64,7 @@ export function FaultCaseTable({
             : "No fault cases yet. An engineer adds the pulses the design must survive."
         }
       />
-      {remove.isError ? <FormMessage tone="error">{messageOf(remove.error)}</FormMessage> : null}
+      {remove.failure}
       {editing ? (
         <div className="mt-4">
           <h3 className="mb-2 text-sm font-semibold">

@@ -8,6 +8,7 @@ import { VerdictBadge } from "@/components/verdict-shape";
 import { factor, q, repeatText } from "@/lib/format";
 import { pulseShape, shapeWords } from "@/lib/vocabulary";
 import type { CheckedPulse, ProjectCheck } from "../api";
+import { pulseFigureColumns } from "../pulse-columns";
 import { ResultDetails } from "./result-details";
 import { UtilisationBar } from "./utilisation-bar";
 
@@ -145,14 +146,7 @@ function resultColumns(
       ),
       meta: { rowHeader: true, headerClassName: "min-w-48 py-1.5 align-bottom" },
     },
-    {
-      id: "v",
-      header: () => <Sym main="V" sub="DS" />,
-      cell: ({ row }) => q(row.original.v, "V"),
-      meta: num,
-    },
-    { id: "i", header: () => <Sym main="I" sub="D" />, cell: ({ row }) => q(row.original.i, "A"), meta: num },
-    { id: "width", header: "Width", cell: ({ row }) => q(row.original.duration, "s"), meta: num },
+    ...pulseFigureColumns<CheckedPulse>(num),
     ...check.candidates.map(
       (c): ColumnDef<CheckedPulse> => ({
         id: `part-${c.partId}`,

@@ -24,7 +24,7 @@ export function AcceptInvitationForm({
 }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
-  const { onSubmit, bind, formState } = useApiForm<Values>({
+  const { shell, bind } = useApiForm<Values>({
     schema: () =>
       import("@/lib/auth/schemas").then((m) =>
         existing ? m.inviteExistingAccountSchema : m.inviteNewAccountSchema,
@@ -45,11 +45,10 @@ export function AcceptInvitationForm({
 
   return (
     <ApiFormShell
-      onSubmit={onSubmit}
-      error={formState.errors.root?.server?.message}
+      {...shell}
       label="Accept and join"
       pendingLabel="Joining…"
-      pending={formState.isSubmitting || leaving}
+      pending={shell.pending || leaving}
     >
       <AccountHint email={email} />
       {existing ? null : (

@@ -11,7 +11,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const [leaving, setLeaving] = useState(false);
   const [deadLink, setDeadLink] = useState(false);
-  const { onSubmit, bind, formState } = useApiForm({
+  const { shell, bind, formState } = useApiForm({
     schema: () => import("@/lib/auth/schemas").then((m) => m.resetPasswordFormSchema),
     defaultValues: { password: "" },
     send: async (values) => {
@@ -30,7 +30,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   return (
     <ApiFormShell
-      onSubmit={onSubmit}
+      {...shell}
       error={
         serverError ? (
           <>
@@ -48,7 +48,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
       }
       label="Save password"
       pendingLabel="Saving…"
-      pending={formState.isSubmitting || leaving}
+      pending={shell.pending || leaving}
       disabled={deadLink}
     >
       <NewPasswordField id="reset-password" label="New password" {...bind("password")} />

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { type ComponentProps, Suspense } from "react";
+import { linkButtonClass } from "@/components/form";
 import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { LoadingBox } from "@/components/loading-box";
 import { Prefetched } from "@/components/prefetched";
@@ -15,9 +16,6 @@ import { projectDetail } from "@/lib/projects/detail";
 import { findProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Project" };
-
-const linkButton =
-  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
 
 export default async function ProjectPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireMember();
@@ -39,14 +37,14 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
         }
         actions={
           <>
-            <Link href={`/projects/${project.id}/compare`} className={linkButton}>
+            <Link href={`/projects/${project.id}/compare`} className={linkButtonClass}>
               Compare and decide
             </Link>
-            <Link href={`/projects/${project.id}/decisions`} className={linkButton}>
+            <Link href={`/projects/${project.id}/decisions`} className={linkButtonClass}>
               Decisions
             </Link>
             {canWrite ? (
-              <Link href={`/projects/${project.id}/settings`} className={linkButton}>
+              <Link href={`/projects/${project.id}/settings`} className={linkButtonClass}>
                 Settings
               </Link>
             ) : null}

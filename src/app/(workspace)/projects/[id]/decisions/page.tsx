@@ -5,6 +5,7 @@ import { Suspense } from "react";
 import { PageSkeleton } from "@/app/(workspace)/_components/page-skeleton";
 import { AuditList } from "@/components/decisions/audit-list";
 import { DecisionHistory } from "@/components/decisions/decision-history";
+import { linkButtonClass } from "@/components/form";
 import { TitleBar } from "@/components/library/title-bar";
 import { Section } from "@/components/page-header";
 import { ProjectTrail } from "@/components/projects/project-trail";
@@ -14,9 +15,6 @@ import { listDecisions } from "@/lib/projects/decisions";
 import { findProject } from "@/lib/projects/projects";
 
 export const metadata: Metadata = { title: "Decisions" };
-
-const button =
-  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
 
 export default async function DecisionsPage({ params }: { params: Promise<{ id: string }> }) {
   const member = await requireMember();
@@ -40,7 +38,7 @@ async function DecisionsView({ member, project }: { member: PageMember; project:
         title="Decisions"
         context={<ProjectTrail project={project} />}
         actions={
-          <Link href={`/projects/${project.id}/compare`} className={button}>
+          <Link href={`/projects/${project.id}/compare`} className={linkButtonClass}>
             Compare and decide
           </Link>
         }

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { DateText } from "@/components/date-text";
 import { policyStat } from "@/components/decisions/policy-stat";
+import { linkButtonClass } from "@/components/form";
 import { CrumbLink, TitleBar } from "@/components/library/title-bar";
 import { ProjectTrail } from "@/components/projects/project-trail";
 import { StatBlocks } from "@/components/stat-blocks";
@@ -11,9 +12,6 @@ import { revisionOf } from "@/lib/soa/revision";
 // The decision record's sections above its rationale: the title bar, where the record stands, its key figures.
 
 type Decision = Awaited<ReturnType<typeof loadDecision>>;
-
-const button =
-  "inline-flex h-9 items-center rounded-md border border-line-strong bg-panel px-4 text-sm font-medium hover:bg-sunken";
 
 /** The title, the way back through projects, and the downloads of the frozen record. */
 export function DecisionTitle({
@@ -36,10 +34,14 @@ export function DecisionTitle({
       }
       actions={
         <>
-          <Link href={`${base}/compare`} className={button}>
+          <Link href={`${base}/compare`} className={linkButtonClass}>
             Compare now
           </Link>
-          <a href={`/api/projects/${project.id}/decisions/${decision.id}/csv`} download className={button}>
+          <a
+            href={`/api/projects/${project.id}/decisions/${decision.id}/csv`}
+            download
+            className={linkButtonClass}
+          >
             Download CSV (frozen)
           </a>
           <a
