@@ -8,7 +8,7 @@ import { listPendingInvitations } from "@/db/queries/invitations";
 import { listPartsAwaitingVerification, listRecentProjects } from "@/db/queries/overview";
 import { rememberedMembers } from "@/lib/auth/auth-memory";
 import { requireMember } from "@/lib/auth/page";
-import { roleLabels } from "@/lib/auth/permissions";
+import { roleHasLeadRights, roleLabels } from "@/lib/auth/permissions";
 import { nextStep } from "./next-step";
 import { RecentWork } from "./recent-work";
 import { RoleAbilities } from "./role-abilities";
@@ -28,7 +28,7 @@ export default async function OverviewPage() {
   ]);
   const openFindings = awaiting.reduce((sum, p) => sum + p.findings, 0);
   const step = nextStep(member, { projects: recent, awaiting });
-  const roleName = `${roleLabels[member.role]}${member.leadRights && member.role !== "lead" ? " with lead rights" : ""}`;
+  const roleName = `${roleLabels[member.role]}${member.leadRights && !roleHasLeadRights(member.role) ? " with lead rights" : ""}`;
 
   const stats = [
     { label: "Your role", value: roleName },

@@ -6,6 +6,7 @@ import { useState, useTransition } from "react";
 import { sendJson } from "@/components/api-client";
 import type { Role } from "@/db/schema";
 import type { CachedMember } from "@/lib/auth/auth-cache";
+import { can } from "@/lib/auth/permissions";
 import { type Access, describeChange } from "./member-row-parts";
 
 // The members table's row state, lifted out of its rows: a role change waits for confirmation, a saved change says
@@ -45,8 +46,9 @@ export function useMemberChanges(selfId: string) {
           : { userId: member.userId, message: describeChange(member.name, current, next), previous: current },
       );
       startTransition(() => {
-        // Giving up your own admin role takes the Team page away with it.
-        if (member.userId === selfId && next.role !== "admin") router.replace("/app");
+        // Giving up your own right to invite takes the Team page away with it (the page needs member.invite).
+        if (member.userId === selfId && !can(next.role, "member.invite", next.leadRights))
+          router.replace("/app");
         router.refresh();
       });
     },

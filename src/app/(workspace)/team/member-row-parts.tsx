@@ -72,7 +72,7 @@ export function RoleText({ access }: { access: Access }) {
   return (
     <>
       {roleLabels[access.role]}
-      {access.leadRights && access.role !== "lead" ? (
+      {access.leadRights && !roleHasLeadRights(access.role) ? (
         <span className="ml-1.5 text-xs text-ink-muted">with lead rights</span>
       ) : null}
     </>
@@ -84,7 +84,7 @@ export function ProposedChange({
   name,
   from,
   to,
-  leavesTeam,
+  losesManagement,
   busy,
   onCancel,
   onConfirm,
@@ -93,7 +93,7 @@ export function ProposedChange({
   from: Role;
   to: Role;
   /** The admin demotes themself and will no longer manage the team. */
-  leavesTeam: boolean;
+  losesManagement: boolean;
   busy: boolean;
   onCancel: () => void;
   onConfirm: () => void;
@@ -103,7 +103,7 @@ export function ProposedChange({
       <p>
         Change {name} from {roleLabels[from].toLowerCase()} to{" "}
         <span className="font-medium">{roleLabels[to].toLowerCase()}</span>?
-        {leavesTeam ? " You will no longer manage this team." : ""}
+        {losesManagement ? " You will no longer manage this team." : ""}
       </p>
       <span className="flex gap-2">
         <Button size="sm" variant="quiet" onClick={onCancel} disabled={busy}>

@@ -6,6 +6,7 @@ import { ConfirmStep } from "@/components/confirm-step";
 import { actionsColumn, DataTable, dateColumn, textColumn } from "@/components/data-table";
 import { rowAlert } from "@/components/table";
 import type { Role } from "@/db/schema";
+import { can } from "@/lib/auth/permissions";
 import { accessOf, type Member, type MemberChanges, useMemberChanges } from "./member-changes";
 import { ProposedChange, RoleControls, RoleText, SavedChange } from "./member-row-parts";
 
@@ -119,7 +120,7 @@ function memberNotes(m: Member, selfId: string, changes: MemberChanges): ReactNo
           name={m.name}
           from={m.role}
           to={proposal.role}
-          leavesTeam={m.userId === selfId && proposal.role !== "admin"}
+          losesManagement={m.userId === selfId && !can(proposal.role, "member.manage", proposal.leadRights)}
           busy={busy}
           onCancel={changes.cancel}
           onConfirm={() => changes.confirm(m, proposal)}
