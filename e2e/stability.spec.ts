@@ -95,7 +95,7 @@ test("transfer data draw the instability boundary; a pulse under the curves fail
     await expect(page.getByTestId("transfer-finding")).toHaveCount(0);
     await expect(page.getByTestId("transfer-chart")).toBeVisible();
     await expect(page.getByTestId("zero-tc-point")).toBeVisible();
-    await expect(page.getByText(/Zero-temperature-coefficient point: 4\.\d+ V/)).toBeVisible();
+    await expect(page.getByText(/Zero-temperature-coefficient point: 4\.\d+\sV/)).toBeVisible();
     await page.getByRole("button", { name: "Save transfer characteristics" }).click();
     await expect(page.getByText("Transfer characteristics saved.")).toBeVisible();
     await saveScreenshot(page, "stability-transfer-saved");

@@ -1,9 +1,11 @@
 import { describe, expect, it } from "vitest";
 import {
+  count,
   editable,
   factor,
   fileSize,
   inUnit,
+  kelvin,
   money,
   percent,
   plainSpaces,
@@ -110,6 +112,11 @@ describe("money, fileSize, inUnit, editable", () => {
     expect(editable(1 / 3)).toBe("333.333333333333m");
     expect(editable(null)).toBe("");
   });
+  it("rounds a figure offered to another form as asked, and no further", () => {
+    expect(editable(0.0123456789, "prefixed", 6)).toBe("12.3457m");
+    expect(editable(87.5, "plain", 6)).toBe("87.5");
+    expect(editable(0.07 * 100, "plain", 6)).toBe("7");
+  });
 });
 
 describe("counts and repetitions", () => {
@@ -121,6 +128,13 @@ describe("counts and repetitions", () => {
     expect(repeatText(undefined)).toBeNull();
     expect(repeatOf({ repeatPeriod: 0.1, repeatCount: null })).toEqual({ period: 0.1 });
     expect(repeatOf({ repeatPeriod: null, repeatCount: 3 })).toBeUndefined();
+  });
+  it("groups the thousands of a count, and writes a temperature difference in kelvin", () => {
+    expect(count(1_000_000)).toBe("1,000,000");
+    expect(count(999)).toBe("999");
+    expect(kelvin(25)).toBe(`25${T}K`);
+    expect(kelvin(12.345)).toBe(`12.3${T}K`);
+    expect(kelvin(null)).toBe("—");
   });
   it("sets plain spaces for the PDF's font", () => {
     expect(plainSpaces(`4.2${T}mΩ, 83${T}%`)).toBe("4.2 mΩ, 83 %");

@@ -80,12 +80,28 @@ export function inUnit(value: number | null | undefined, scale = 1, digits = 3):
 
 /**
  * A stored value as a form field shows it for editing: engineering notation without the unit, which the field
- * shows ("150µ"), or plain digits for fields that take no prefix; empty when there is none.
+ * shows ("150µ"), or plain digits for fields that take no prefix; empty when there is none. 15 significant figures
+ * unless `digits` says fewer (a figure offered to another form, rounded as the screen shows it).
  */
-export function editable(value: number | null | undefined, kind: "plain" | "prefixed" = "prefixed"): string {
+export function editable(
+  value: number | null | undefined,
+  kind: "plain" | "prefixed" = "prefixed",
+  digits = 15,
+): string {
   if (value === null || value === undefined) return "";
-  if (kind === "plain") return String(Number(value.toPrecision(15)));
-  return formatQuantity(value, "", 15).replace(THIN_SPACE, "");
+  if (kind === "plain") return String(Number(value.toPrecision(digits)));
+  return formatQuantity(value, "", digits).replace(THIN_SPACE, "");
+}
+
+/** A count of things, with thousands grouped: 1000000 → "1,000,000". */
+export function count(n: number): string {
+  return n.toLocaleString("en-GB");
+}
+
+/** A temperature difference (a margin or a rise) in kelvin, three significant figures: 25 → "25 K". */
+export function kelvin(value: number | null | undefined): string {
+  if (missing(value)) return "—";
+  return `${Number(value.toPrecision(3))}${THIN_SPACE}K`;
 }
 
 /** "1 pulse", "3 pulses". */

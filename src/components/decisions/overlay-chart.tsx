@@ -8,8 +8,7 @@ import type { LegendRow } from "@/components/soa-chart/chart-legend";
 import { chartDomains, chartLayout, textWidth } from "@/components/soa-chart/chart-model";
 import { limitReadout, type Readout, Sym } from "@/components/soa-chart/chart-readout";
 import { plotAxes } from "@/components/soa-chart/frame-model";
-import { percent } from "@/lib/format";
-import { formatQuantity } from "@/lib/soa/units";
+import { percent, q } from "@/lib/format";
 import { verdictWords } from "@/lib/vocabulary";
 import type { OverlayLine, OverlayMarker } from "./overlay-model";
 
@@ -118,8 +117,8 @@ function OverlayPlot({
             readoutOf={(m) => ({
               title: m.name,
               rows: [
-                { label: Sym.vds, value: formatQuantity(m.v, "V") },
-                { label: Sym.id, value: formatQuantity(m.i, "A") },
+                { label: Sym.vds, value: q(m.v, "V") },
+                { label: Sym.id, value: q(m.i, "A") },
                 ...m.byCandidate.map((b) => ({
                   label: b.partNumber,
                   value: `${verdictWords[b.verdict]}${b.utilisation !== null ? ` ${percent(b.utilisation)}` : ""}`,

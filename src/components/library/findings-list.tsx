@@ -1,10 +1,10 @@
 import type { ChartDuration, ChartFinding } from "@/components/soa-chart";
+import { q } from "@/lib/format";
 import { findingKey } from "@/lib/library/finding-key";
-import { formatQuantity } from "@/lib/soa/units";
 
 /** A curve's width as the chart's legend names it; written here so the list does not load the chart's code. */
 function curveName(duration: ChartDuration): string {
-  return duration === "DC" ? "DC" : formatQuantity(duration, "s");
+  return duration === "DC" ? "DC" : q(duration, "s");
 }
 
 const kindWords: Record<string, string> = {

@@ -1,7 +1,6 @@
-import { factor } from "@/lib/format";
+import { factor, q } from "@/lib/format";
 import { FLAG_EXPLANATIONS } from "@/lib/soa/explain";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
-import { formatQuantity } from "@/lib/soa/units";
 import { Sym } from "./symbols";
 import type { Limits } from "./use-part-limits";
 
@@ -59,10 +58,10 @@ export function CaseTempControl({
       </div>
       <p className="mt-1 text-xs text-ink-muted" aria-live="polite">
         {data && data.derating === 0
-          ? `At ${formatQuantity(data.caseTemp, "°C")} case, at or above Tj,max, the curves allow no current at all.`
+          ? `At ${q(data.caseTemp, "°C")} case, at or above Tj,max, the curves allow no current at all.`
           : data && data.derating < 1
-            ? `Dashed: the curves derated ×${factor(data.derating)} for ${formatQuantity(data.caseTemp, "°C")} case.`
-            : `The curves hold at ${formatQuantity(refCaseTemp, "°C")} case; a higher case temperature draws them derated, dashed.`}
+            ? `Dashed: the curves derated ×${factor(data.derating)} for ${q(data.caseTemp, "°C")} case.`
+            : `The curves hold at ${q(refCaseTemp, "°C")} case; a higher case temperature draws them derated, dashed.`}
       </p>
     </div>
   );
@@ -130,7 +129,7 @@ export function WidthExplanation({ width, flags }: { width: number; flags: Flag[
       className="rounded-md border border-line bg-sunken px-3 py-2 text-sm"
       data-testid="width-explanation"
     >
-      <p className="font-medium">How the {formatQuantity(width, "s")} line was read</p>
+      <p className="font-medium">How the {q(width, "s")} line was read</p>
       <ul className="mt-1 list-disc space-y-1 pl-5 text-ink-muted">
         {flags.map((flag) =>
           flag === "interpolated" ? (

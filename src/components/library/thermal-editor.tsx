@@ -4,7 +4,7 @@ import { type ClipboardEvent, type ReactNode, useId } from "react";
 import { Button, FormMessage } from "@/components/form";
 import { ScrollRegion } from "@/components/scroll-region";
 import { ZthChart } from "@/components/soa-chart";
-import { formatQuantity } from "@/lib/soa/units";
+import { q } from "@/lib/format";
 import { parsePastedRows } from "./paste-rows";
 import { Sym } from "./symbols";
 import {
@@ -266,12 +266,12 @@ function ThermalSummary({
     <>
       <ZthChart terms={preview} points={source?.kind === "fitted" ? source.points : undefined} />
       <p className="text-xs text-ink-muted">
-        <Sym main="R" sub="th(j-c)" /> = Σ<Sym main="R" sub="i" /> = {formatQuantity(rth, "K/W")}.{" "}
+        <Sym main="R" sub="th(j-c)" /> = Σ<Sym main="R" sub="i" /> = {q(rth, "K/W")}.{" "}
         {source?.kind === "fitted" ? (
           <>
             Fitted to {source.fileName ?? "an uploaded Z_th curve"} (rings): RMS error{" "}
-            {formatQuantity((source.rmsRelativeError ?? 0) * 100, "%")}, largest{" "}
-            {formatQuantity((source.maxRelativeError ?? 0) * 100, "%")}.
+            {q((source.rmsRelativeError ?? 0) * 100, "%")}, largest{" "}
+            {q((source.maxRelativeError ?? 0) * 100, "%")}.
           </>
         ) : (
           "Typed or pasted terms."

@@ -3,8 +3,8 @@
 import { useRouter } from "next/navigation";
 import { type ClipboardEvent, useMemo, useState, useTransition } from "react";
 import { ApiError, messageOf } from "@/components/api-client";
+import { editable, q } from "@/lib/format";
 import { fosterSchema } from "@/lib/library/part-schema";
-import { formatQuantity } from "@/lib/soa/units";
 import { callJson } from "./api";
 import { parsePastedRows } from "./paste-rows";
 
@@ -42,8 +42,8 @@ export const newKey = () => nextKey++;
 
 const toRows = (terms: { r: number; tau: number }[] | null): TermRow[] =>
   (terms ?? []).map((t) => {
-    const rText = String(Number(t.r.toPrecision(SHOWN_DIGITS)));
-    const tauText = formatQuantity(t.tau, "s", SHOWN_DIGITS);
+    const rText = editable(t.r, "plain", SHOWN_DIGITS);
+    const tauText = q(t.tau, "s", SHOWN_DIGITS);
     return { key: newKey(), r: rText, tau: tauText, stored: { ...t, rText, tauText } };
   });
 

@@ -2,9 +2,10 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import type { ChartFinding, ChartInterpolated } from "@/components/soa-chart";
 import { useDebounced } from "@/components/use-debounced";
+import { q } from "@/lib/format";
 import type { Limits as ComputedLimits } from "@/lib/library/limits";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
-import { formatQuantity, parseQuantity } from "@/lib/soa/units";
+import { parseQuantity } from "@/lib/soa/units";
 import { callJson } from "./api";
 
 /**
@@ -59,8 +60,7 @@ export function usePartLimits(partId: string, curveSetId: string, refCaseTemp: n
           width: data.interpolated.width,
           points: data.interpolated.points,
           note:
-            widthNote(data.interpolated.flags) +
-            (data.derating < 1 ? `, at ${formatQuantity(data.caseTemp, "°C")}` : ""),
+            widthNote(data.interpolated.flags) + (data.derating < 1 ? `, at ${q(data.caseTemp, "°C")}` : ""),
         }
       : null;
 

@@ -3,6 +3,7 @@ import { useMemo, useState, useTransition } from "react";
 import { messageOf, requestJson } from "@/components/api-client";
 import type { TransferRow } from "@/db/schema";
 import { parseTransferCsv } from "@/lib/csv/transfer";
+import { editable } from "@/lib/format";
 import { reviewTransfer, type TransferFinding } from "@/lib/library/transfer-findings";
 import { RejectedFile } from "./api";
 
@@ -10,7 +11,7 @@ import { RejectedFile } from "./api";
 function toText(transfer: TransferRow | null): string {
   if (!transfer) return "";
   const rows = transfer.curves.flatMap((curve, c) =>
-    curve.map(([g, i]) => `${transfer.temps[c]},${Number(g.toPrecision(6))},${Number(i.toPrecision(6))}`),
+    curve.map(([g, i]) => `${transfer.temps[c]},${editable(g, "plain", 6)},${editable(i, "plain", 6)}`),
   );
   return ["T_j [°C],V_GS [V],I_D [A]", ...rows].join("\n");
 }

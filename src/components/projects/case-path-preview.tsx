@@ -3,8 +3,8 @@
 import dynamic from "next/dynamic";
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
+import { q } from "@/lib/format";
 import type { FosterTerm } from "@/lib/soa/foster";
-import { formatQuantity } from "@/lib/soa/units";
 
 // The chart stack loads only once a case path is typed, in the browser only (it measures its width there).
 const ZthChart = dynamic(() => import("@/components/soa-chart").then((m) => m.ZthChart), {
@@ -31,7 +31,7 @@ export function CasePathPreview({
           <ZthChart terms={terms} maxWidth={380} />
           <p>
             <Sym main="R" sub="th(c-a)" /> ={" "}
-            {formatQuantity(
+            {q(
               terms.reduce((s, t) => s + t.r, 0),
               "K/W",
             )}

@@ -1,7 +1,7 @@
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
-import { q, settingPercent } from "@/lib/format";
+import { kelvin, q, settingPercent } from "@/lib/format";
 import type { ProjectCheck, ProjectDetail } from "./api";
 
 function Figure({ children }: { children: string }) {
@@ -36,7 +36,7 @@ export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?
         },
         {
           label: "Junction guard",
-          value: <Figure>{`${Number(project.tjGuard.toPrecision(3))}\u2009K`}</Figure>,
+          value: <Figure>{kelvin(project.tjGuard)}</Figure>,
           note: (
             <>
               below <Sym main="T" sub="j,max" />, with a thermal model

@@ -1,7 +1,6 @@
 import { VerdictGlyph } from "@/components/verdict-shape";
-import { factor } from "@/lib/format";
+import { factor, q } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
-import { formatQuantity } from "@/lib/soa/units";
 import { verdictWords } from "@/lib/vocabulary";
 import type { ChartColours } from "./chart-colours";
 import { type ChartLine, DERATED_DASH, LEGEND_ROW } from "./chart-model";
@@ -19,7 +18,7 @@ export interface LegendRow {
 
 /** The legend in words, row by row: every line, the dashed and interpolated lines, findings and verdicts. */
 export function legendRows(props: SoaChartProps, lines: ChartLine[], colours: ChartColours): LegendRow[] {
-  const ref = formatQuantity(props.refCaseTemp ?? 25, "°C");
+  const ref = q(props.refCaseTemp ?? 25, "°C");
   const rows: LegendRow[] = [{ key: "h", text: `Single pulse, T_C = ${ref}`, swatch: { kind: "heading" } }];
   for (const line of lines.filter((l) => l.kind === "curve")) {
     rows.push({
@@ -31,7 +30,7 @@ export function legendRows(props: SoaChartProps, lines: ChartLine[], colours: Ch
   if (lines.some((l) => l.kind === "derated") && props.derated) {
     rows.push({
       key: "derated",
-      text: `Dashed: at T_C = ${formatQuantity(props.derated.caseTemp, "°C")} (×${factor(props.derated.factor)})`,
+      text: `Dashed: at T_C = ${q(props.derated.caseTemp, "°C")} (×${factor(props.derated.factor)})`,
       swatch: { kind: "line", stroke: colours.inkMuted, dash: DERATED_DASH, width: 1.5 },
     });
   }

@@ -1,5 +1,5 @@
 import { decadeDomain } from "@/lib/chart/log-axis";
-import { formatQuantity } from "@/lib/soa/units";
+import { q } from "@/lib/format";
 import { type ChartColours, curveHues } from "./chart-colours";
 import type { ChartCurve, ChartDuration, SoaChartProps } from "./types";
 
@@ -37,7 +37,7 @@ export const INSTABILITY_DASH = "1 4";
 
 /** "10 µs", "1 ms" or "DC". */
 export function durationName(duration: ChartDuration): string {
-  return duration === "DC" ? "DC" : formatQuantity(duration, "s");
+  return duration === "DC" ? "DC" : q(duration, "s");
 }
 
 function order(duration: ChartDuration): number {
@@ -76,7 +76,7 @@ export function buildLines(props: SoaChartProps, colours: ChartColours): ChartLi
         key: `derated-${k}`,
         kind: "derated",
         duration: c.duration,
-        name: `${durationName(c.duration)} at ${formatQuantity(props.derated!.caseTemp, "°C")}`,
+        name: `${durationName(c.duration)} at ${q(props.derated!.caseTemp, "°C")}`,
         label: durationName(c.duration),
         points: c.points,
         stroke: hue?.line ?? colours.accent,
@@ -175,7 +175,7 @@ export function placePulse(
   const v = clamp(pulse.v, domains.x);
   const i = clamp(pulse.i, domains.y);
   const off = { v: v !== pulse.v, i: i !== pulse.i };
-  const offScale = [off.v ? formatQuantity(pulse.v, "V") : null, off.i ? formatQuantity(pulse.i, "A") : null]
+  const offScale = [off.v ? q(pulse.v, "V") : null, off.i ? q(pulse.i, "A") : null]
     .filter(Boolean)
     .join(", ");
   return { v, i, off, offScale };

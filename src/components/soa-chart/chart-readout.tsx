@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { formatQuantity } from "@/lib/soa/units";
+import { q } from "@/lib/format";
 import { type Axis, snapToLine } from "./frame-model";
 
 export interface Readout {
@@ -72,9 +72,9 @@ export function limitReadout<L extends { name: string; points: [number, number][
     top: nearest ? y.scale(nearest.current) : py,
     title: nearest ? `${nearest.line.name} limit` : undefined,
     rows: [
-      { label: Sym.vds, value: formatQuantity(v, "V") },
-      { label: Sym.id, value: formatQuantity(i, "A") },
-      ...(power ? [{ label: Sym.p, value: formatQuantity(v * i, "W") }] : []),
+      { label: Sym.vds, value: q(v, "V") },
+      { label: Sym.id, value: q(i, "A") },
+      ...(power ? [{ label: Sym.p, value: q(v * i, "W") }] : []),
     ],
   };
 }

@@ -1,6 +1,6 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
-import { formatQuantity } from "@/lib/soa/units";
+import { inUnit, q } from "@/lib/format";
 import { verdictWords } from "@/lib/vocabulary";
 import { durationName, sortByDuration } from "./chart-model";
 import { ChartTable } from "./chart-table";
@@ -13,7 +13,7 @@ interface PointRow {
   i: number;
 }
 
-const figure = (value: number) => Number(value.toPrecision(4));
+const figure = (value: number) => inUnit(value, 1, 4);
 
 const pointColumns: ColumnDef<PointRow>[] = [
   { id: "line", header: "Line", cell: ({ row }) => row.original.line, meta: { rowHeader: true } },
@@ -48,7 +48,7 @@ export function PointsTable({ title, curves, derated, interpolated, pulses }: So
   if (derated && derated.factor < 1) {
     for (const c of sortByDuration(derated.curves)) {
       groups.push({
-        name: `${durationName(c.duration)} at ${formatQuantity(derated.caseTemp, "°C")}`,
+        name: `${durationName(c.duration)} at ${q(derated.caseTemp, "°C")}`,
         curve: c,
       });
     }

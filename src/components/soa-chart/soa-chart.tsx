@@ -1,8 +1,8 @@
 "use client";
 
 import { type PointerEvent, useMemo, useState } from "react";
+import { q } from "@/lib/format";
 import { interpolateCurve } from "@/lib/soa/interpolate-curve";
-import { formatQuantity } from "@/lib/soa/units";
 import { verdictWords } from "@/lib/vocabulary";
 import { useChartColours } from "./chart-colours";
 import { ChartFigure, ChartFrame, pointerAt, SoaPlotArea } from "./chart-frame";
@@ -111,9 +111,9 @@ function SoaPlot(props: SoaChartProps & { available: number }) {
               readoutOf={(pulse, off) => ({
                 title: `${pulse.label} (${verdictWords[pulse.verdict]})${off ? ", off scale" : ""}`,
                 rows: [
-                  { label: Sym.vds, value: formatQuantity(pulse.v, "V") },
-                  { label: Sym.id, value: formatQuantity(pulse.i, "A") },
-                  { label: Sym.p, value: formatQuantity(pulse.v * pulse.i, "W") },
+                  { label: Sym.vds, value: q(pulse.v, "V") },
+                  { label: Sym.id, value: q(pulse.i, "A") },
+                  { label: Sym.p, value: q(pulse.v * pulse.i, "W") },
                 ],
               })}
               onReadout={setReadout}
@@ -156,8 +156,8 @@ function FindingMarks({
                 top: y.scale(at[1]),
                 title: `Finding ${number}: ${finding.message}`,
                 rows: [
-                  { label: Sym.vds, value: formatQuantity(at[0], "V") },
-                  { label: Sym.id, value: formatQuantity(at[1], "A") },
+                  { label: Sym.vds, value: q(at[0], "V") },
+                  { label: Sym.id, value: q(at[1], "A") },
                 ],
               })
             }

@@ -2,6 +2,7 @@
 
 import { useMemo } from "react";
 import { decadeDomain } from "@/lib/chart/log-axis";
+import { q } from "@/lib/format";
 import { SubscriptLabel } from "./chart-axes";
 import { useChartColours } from "./chart-colours";
 import { ChartFrame, PlotArea } from "./chart-frame";
@@ -123,8 +124,7 @@ export function TransferChart({
         ))}
         {zeroTc ? (
           <span className="num">
-            Zero-temperature-coefficient point: {Number(zeroTc.gate.toPrecision(3))} V,{" "}
-            {Number(zeroTc.current.toPrecision(3))} A
+            Zero-temperature-coefficient point: {q(zeroTc.gate, "V")}, {q(zeroTc.current, "A")}
           </span>
         ) : null}
       </figcaption>

@@ -22,9 +22,11 @@
 // - a blank line is skipped; a missing or non-numeric mapped cell, a time not strictly increasing, or more than
 //   2 M samples is an error naming the row (1-based line of the file) and column;
 // - the file must be UTF-8 (or ASCII) text: NUL bytes or a UTF-16 byte-order mark are refused.
+
 import { columnLetter, csvIssue } from "@/lib/csv/issues";
 import { type Delimiter, splitLine } from "@/lib/csv/text";
 import { AppError } from "@/lib/errors";
+import { count } from "@/lib/format";
 import { type CaptureMapping, MAX_CAPTURE_SAMPLES, PREVIEW_BYTES, previewCaptureText } from "./parse";
 
 export interface CaptureSamples {
@@ -366,7 +368,7 @@ class StreamingCaptureParser implements CaptureParser {
     return rejected(
       lineIndex + 1,
       null,
-      `the capture has more than ${this.maxSamples.toLocaleString("en-US")} samples; record fewer points or ` +
+      `the capture has more than ${count(this.maxSamples)} samples; record fewer points or ` +
         "decimate it on the scope",
     );
   }

@@ -9,8 +9,8 @@
 // - two points of one curve at the same voltage are an error (METHODS.md §1), as are two curves with one width;
 // - points are sorted by voltage; the order as digitised is kept (`rawOrderIndex`), and a warning names the first
 //   point out of order, so that the findings can still say "points not increasing".
+import { q } from "@/lib/format";
 import type { Curve, CurveSet, Duration } from "@/lib/soa/types";
-import { formatQuantity } from "@/lib/soa/units";
 import { isLongHeader, readLongForm } from "./curve-set-long";
 import { isPairedHeader, readPairedForm } from "./curve-set-paired";
 import { type RawCurve, sameWidth } from "./curve-set-raw";
@@ -71,7 +71,7 @@ function finishCurve(curve: RawCurve, errors: IssueList, warnings: IssueList): P
     const [a, b] = [curve.points[order[k - 1]], curve.points[order[k]]];
     if (a.v === b.v) {
       const [first, second] = a.row < b.row ? [a, b] : [b, a];
-      const reason = `voltage ${formatQuantity(a.v, "V", 6)} appears twice on the ${curve.label} curve (rows ${first.row} and ${second.row})`;
+      const reason = `voltage ${q(a.v, "V", 6)} appears twice on the ${curve.label} curve (rows ${first.row} and ${second.row})`;
       errors.add(second.row, curve.columns.voltage, reason);
     }
   }

@@ -26,9 +26,10 @@
 // Long file: about 540 lines on purpose: the rules above are one reader, applied in turn to the header (the names table is a
 // third of the file), the layout and each row; the cell readers (./measurement-cells.ts) and the save route's row
 // schema (./measurement-row.ts) stand apart, and splitting the rest would put one rule's halves in two files.
+
 import { z } from "zod";
+import { count, q } from "@/lib/format";
 import type { Repeat } from "@/lib/soa/types";
-import { formatQuantity } from "@/lib/soa/units";
 import { type CellValue, readNumber } from "./cell";
 import { splitHeader } from "./header";
 import { type CsvIssue, columnLetter, createIssueList, csvIssue, type IssueList } from "./issues";
@@ -372,7 +373,7 @@ function readRow(
         csvIssue(
           row,
           frequency!.name,
-          `'${frequencyCell}' means a period of ${formatQuantity(1 / f, "s")}, which disagrees with ` +
+          `'${frequencyCell}' means a period of ${q(1 / f, "s")}, which disagrees with ` +
             `'${periodCell}' in ${period!.name}; keep one of them`,
         ),
       );
@@ -388,7 +389,7 @@ function readRow(
       csvIssue(
         row,
         source!.name,
-        `the period (${formatQuantity(repeatPeriod, "s")}) must be longer than the pulse (${formatQuantity(duration, "s")})`,
+        `the period (${q(repeatPeriod, "s")}) must be longer than the pulse (${q(duration, "s")})`,
       ),
     );
   }
@@ -495,7 +496,7 @@ export function parseMeasurementPaste(text: string, mapping: ColumnMapping = {})
       null,
       null,
       `${left} more pulse ${left === 1 ? "row" : "rows"} after row ${last} were left out: ` +
-        `at most ${MAX_MEASUREMENT_ROWS.toLocaleString("en-GB")} are read from one paste`,
+        `at most ${count(MAX_MEASUREMENT_ROWS)} are read from one paste`,
     );
   }
   return { rows, errors: errors.list(), hasHeader, columns: columnsOf(layout, ignored, unread, headers) };

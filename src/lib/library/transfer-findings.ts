@@ -3,7 +3,9 @@
 // two points per curve and two different temperatures. Advisory ("warning"): below the zero-temperature-coefficient
 // point the hotter curve carries more current, above it less, so two curves digitised from one figure cross once
 // with the hotter curve passing from above to below; anything else is worth a second look at the figure.
+
 import type { TransferCurveRead } from "@/lib/csv/transfer";
+import { inUnit } from "@/lib/format";
 import { prepareTransfer } from "@/lib/soa/stability";
 import type { TransferData } from "@/lib/soa/types";
 import { type TransferCrossing, transferCrossings } from "@/lib/soa/zero-tc";
@@ -33,7 +35,7 @@ export interface TransferReview {
   zeroTc: TransferCrossing | null;
 }
 
-const fmt = (x: number) => String(Number(x.toPrecision(4)));
+const fmt = (x: number) => inUnit(x, 1, 4);
 
 export function reviewTransfer(curves: TransferCurveRead[]): TransferReview {
   const findings: TransferFinding[] = [];

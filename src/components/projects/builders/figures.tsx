@@ -1,6 +1,7 @@
 import { Fragment, type ReactNode } from "react";
 import { Sym } from "@/components/library/symbols";
-import { formatQuantity, type Unit } from "@/lib/soa/units";
+import { q } from "@/lib/format";
+import type { Unit } from "@/lib/soa/units";
 
 // The builders' inputs and intermediate figures with their symbols and units, for the live panel beside each
 // builder and for a fault case's stored origin.
@@ -10,10 +11,10 @@ type Format = (value: number) => string;
 const unit =
   (u: Unit | "", digits = 4): Format =>
   (value) =>
-    formatQuantity(value, u, digits);
+    q(value, u, digits);
 
-const slew: Format = (value) => `${formatQuantity(value / 1e3, "", 4)}\u2009V/ms`;
-const fraction: Format = (value) => `${Number((value * 100).toPrecision(3))}\u2009%`;
+const slew: Format = (value) => `${q(value / 1e3, "", 4)}\u2009V/ms`;
+const fraction: Format = (value) => q(value * 100, "%", 3);
 const plain: Format = (value) => String(value);
 
 const known: Record<string, { label: ReactNode; format: Format }> = {

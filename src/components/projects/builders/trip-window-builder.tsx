@@ -5,8 +5,8 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
+import { editable, q } from "@/lib/format";
 import { tripWindow } from "@/lib/soa/builders";
-import { formatQuantity } from "@/lib/soa/units";
 import { BuilderFields, type FieldSpec } from "./builder-form";
 import { BuilderLayout } from "./builder-layout";
 import { tripWindowForm } from "./builder-schemas";
@@ -61,7 +61,7 @@ export function TripWindowBuilder({
   const values = useWatch({ control: form.control });
   const parsed = tripWindowForm.safeParse(values);
   const built = parsed.success ? build(parsed.data) : null;
-  const max = built?.ok ? formatQuantity(built.figures.max, "", 6).replace("\u2009", "") : null;
+  const max = built?.ok ? editable(built.figures.max, "prefixed", 6) : null;
 
   return (
     <BuilderLayout
@@ -134,10 +134,7 @@ export function TripWindowBuilder({
         max ? (
           <div className="space-y-2">
             <p className="text-sm">
-              Carry{" "}
-              <span className="num font-mono">
-                {built?.ok ? formatQuantity(built.figures.max, "A", 4) : null}
-              </span>{" "}
+              Carry <span className="num font-mono">{built?.ok ? q(built.figures.max, "A", 4) : null}</span>{" "}
               over as
             </p>
             <div className="flex flex-wrap gap-2">

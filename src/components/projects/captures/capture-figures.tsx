@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { Sym } from "@/components/library/symbols";
 import type { CaptureSummary } from "@/db/schema";
-import { q } from "@/lib/format";
+import { count, q } from "@/lib/format";
 import { explainFlag } from "@/lib/soa/explain";
 
 function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
@@ -21,7 +21,7 @@ export function CaptureFigures({ summary }: { summary: CaptureSummary }) {
     <dl className="grid grid-cols-[repeat(auto-fill,minmax(8rem,1fr))] gap-2">
       <Figure
         label="Samples"
-        value={summary.samples.toLocaleString("en-GB")}
+        value={count(summary.samples)}
         note={summary.uniform ? "uniform time step" : "uneven time step"}
       />
       <Figure label="Length" value={q(summary.tEnd - summary.tStart, "s")} />

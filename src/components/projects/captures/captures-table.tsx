@@ -3,7 +3,7 @@ import type { ReactNode } from "react";
 import { actionsColumn } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { VerdictBadge } from "@/components/verdict-shape";
-import { fileSize, q } from "@/lib/format";
+import { count, fileSize, q } from "@/lib/format";
 import type { PanelProps } from "../project-workspace";
 import type { CaptureListItem } from "./capture-api";
 
@@ -48,7 +48,7 @@ export function captureColumns({
     {
       id: "samples",
       header: "Samples",
-      cell: ({ row: { original: c } }) => (c.summary ? c.summary.samples.toLocaleString("en-GB") : "—"),
+      cell: ({ row: { original: c } }) => (c.summary ? count(c.summary.samples) : "—"),
       meta: num,
     },
     {

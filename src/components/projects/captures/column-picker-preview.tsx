@@ -1,7 +1,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
 import type { CapturePreview } from "@/lib/capture/parse";
-import { formatQuantity } from "@/lib/soa/units";
+import { q } from "@/lib/format";
 import { columnName, type PickerInput } from "./column-picker-form";
 
 // What the column picker shows of the file: how it was read, the lines skipped, the problems, the first rows with
@@ -93,9 +93,9 @@ export function FirstSample({ preview, chosen }: { preview: CapturePreview; chos
     <p className="text-xs text-ink-muted" data-testid="capture-as-read">
       First sample as it will be read:{" "}
       <span className="num font-mono text-ink">
-        t = {formatQuantity(first(chosen.time) * chosen.timeScale, "s")}, V<sub>DS</sub> ={" "}
-        {formatQuantity(first(chosen.voltage) * chosen.vScale + chosen.vOffset, "V")}, I<sub>D</sub> ={" "}
-        {formatQuantity(first(chosen.current) * chosen.iScale + chosen.iOffset, "A")}
+        t = {q(first(chosen.time) * chosen.timeScale, "s")}, V<sub>DS</sub> ={" "}
+        {q(first(chosen.voltage) * chosen.vScale + chosen.vOffset, "V")}, I<sub>D</sub> ={" "}
+        {q(first(chosen.current) * chosen.iScale + chosen.iOffset, "A")}
       </span>
     </p>
   );

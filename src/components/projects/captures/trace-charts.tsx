@@ -9,7 +9,7 @@ import { ChartTable } from "@/components/soa-chart/chart-table";
 import { type AxisSpec, makeAxis } from "@/components/soa-chart/frame-model";
 import type { Verdict } from "@/components/verdict-shape";
 import { q } from "@/lib/format";
-import { formatQuantity, type Unit } from "@/lib/soa/units";
+import type { Unit } from "@/lib/soa/units";
 import { Envelope, PanelTitle, TraceMarks } from "./trace-layers";
 import { type Pair, panelDomain, type TraceSeries, visibleRange } from "./trace-model";
 
@@ -99,7 +99,7 @@ function TraceFrame({
     kind: "linear",
     domain,
     count: Math.max(2, Math.floor(plotWidth / 110)),
-    format: (t) => formatQuantity(t, "s", 3),
+    format: (t) => q(t, "s", 3),
     unlabelled: !last,
   });
   const visible = marks.filter((m) => m.t >= domain[0] && m.t <= domain[1]);
@@ -130,7 +130,7 @@ function TraceFrame({
     <ChartFrame
       width={width}
       height={height}
-      label={`Capture traces against time, ${formatQuantity(domain[0], "s")} to ${formatQuantity(domain[1], "s")}`}
+      label={`Capture traces against time, ${q(domain[0], "s")} to ${q(domain[1], "s")}`}
       className="select-none"
     >
       {panels.map((panel, index) => {
@@ -147,7 +147,7 @@ function TraceFrame({
             kind: "linear",
             domain: panelDomain(panel.series, domain, panel.unit),
             count: 3,
-            format: (v) => formatQuantity(v, panel.unit, 3),
+            format: (v) => q(v, panel.unit, 3),
           },
           [plot.top + plot.height, plot.top],
         );

@@ -8,9 +8,9 @@ import { ArchiveProject } from "@/components/projects/archive-project";
 import { ProjectForm } from "@/components/projects/project-form";
 import type { Project } from "@/db/schema";
 import { type PageMember, requireAction } from "@/lib/auth/page";
+import { editable, plainSpaces, q } from "@/lib/format";
 import { ownerChoices } from "@/lib/projects/owner-choices";
 import { findProject } from "@/lib/projects/projects";
-import { formatQuantity } from "@/lib/soa/units";
 
 export const metadata: Metadata = { title: "Project settings" };
 
@@ -45,16 +45,14 @@ async function ProjectSettingsView({ member, project }: { member: PageMember; pr
         defaults={{
           name: project.name,
           description: project.description ?? "",
-          caseTemp: String(project.caseTemp),
-          utilisationLimit: String(Number((project.utilisationLimit * 100).toPrecision(6))),
-          tjGuard: String(project.tjGuard),
-          voltageLimit: String(Number((project.voltageLimit * 100).toPrecision(6))),
+          caseTemp: editable(project.caseTemp, "plain"),
+          utilisationLimit: editable(project.utilisationLimit * 100, "plain", 6),
+          tjGuard: editable(project.tjGuard, "plain"),
+          voltageLimit: editable(project.voltageLimit * 100, "plain", 6),
           betweenCurves: project.betweenCurves,
           ownerId: project.ownerId ?? "",
           caseNetwork: (project.caseNetwork ?? [])
-            .map(
-              (t) => `${Number(t.r.toPrecision(6))}, ${formatQuantity(t.tau, "s", 6).replace("\u2009", " ")}`,
-            )
+            .map((t) => `${editable(t.r, "plain", 6)}, ${plainSpaces(q(t.tau, "s", 6))}`)
             .join("\n"),
           applyCaseNetwork: project.applyCaseNetwork,
         }}
