@@ -8,6 +8,7 @@ import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
 import { loadWritableProject } from "@/lib/projects/projects";
+import { pulseColumns } from "@/lib/projects/pulse-columns";
 import { isUuid } from "@/lib/uuid";
 
 /** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
@@ -35,15 +36,7 @@ export const PATCH = route<{ id: string; measurementId: string }>(
     const row = await db.transaction(async (tx) => {
       const [updated] = await tx
         .update(measuredPulses)
-        .set({
-          label: values.label,
-          kind: values.kind,
-          v: values.v,
-          i: values.i,
-          duration: values.duration,
-          repeatPeriod: values.repeat?.period ?? null,
-          repeatCount: values.repeat?.count ?? null,
-        })
+        .set({ label: values.label, ...pulseColumns(values) })
         .where(eq(measuredPulses.id, existing.id))
         .returning();
       await recordAudit(
