@@ -1,5 +1,6 @@
-import { and, eq, inArray } from "drizzle-orm";
+import { inArray } from "drizzle-orm";
 import { db } from "@/db";
+import { findPartId } from "@/db/queries/parts";
 import { faultCases, measuredPulses, parts, pendingUploads, projectCandidates, projects } from "@/db/schema";
 import { registerCurveSet } from "@/lib/library/curve-upload";
 import type { Storage } from "@/lib/storage";
@@ -23,18 +24,13 @@ const sampleNote = "Sample data: invented, for trying Pulsefence out. Not a real
 export async function ensureDemoParts(store: Storage, who: Who, notes?: string): Promise<string[]> {
   const ids: string[] = [];
   for (const demo of DEMO_PARTS) {
-    const [existing] = await db
-      .select({ id: parts.id })
-      .from(parts)
-      .where(
-        and(
-          eq(parts.workspaceId, who.workspaceId),
-          eq(parts.maker, demo.maker),
-          eq(parts.partNumber, demo.partNumber),
-        ),
-      );
+    const existing = await findPartId({
+      workspaceId: who.workspaceId,
+      maker: demo.maker,
+      partNumber: demo.partNumber,
+    });
     if (existing) {
-      ids.push(existing.id);
+      ids.push(existing);
       continue;
     }
     const [part] = await db

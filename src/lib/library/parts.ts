@@ -1,8 +1,8 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { getPart } from "@/db/queries/parts";
+import { findPartId, getPart } from "@/db/queries/parts";
 import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
@@ -72,17 +72,8 @@ export async function createPart(caller: MemberCaller, values: PartValues): Prom
 
 function insertPart(caller: MemberCaller, values: PartValues): Promise<Part> {
   return db.transaction(async (tx) => {
-    const existing = await tx
-      .select({ id: parts.id })
-      .from(parts)
-      .where(
-        and(
-          eq(parts.workspaceId, caller.workspaceId),
-          eq(parts.maker, values.maker),
-          eq(parts.partNumber, values.partNumber),
-        ),
-      );
-    if (existing.length) throw duplicatePart(values);
+    const where = { workspaceId: caller.workspaceId, maker: values.maker, partNumber: values.partNumber };
+    if (await findPartId(where, tx)) throw duplicatePart(values);
     const [part] = await tx
       .insert(parts)
       .values({ ...normalised(values), workspaceId: caller.workspaceId, createdBy: caller.user.id })
