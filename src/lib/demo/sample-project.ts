@@ -78,6 +78,27 @@ export async function ensureDemoParts(store: Storage, who: Who, notes?: string):
   return ids;
 }
 
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/**
+ * What the demo project holds, in the transaction that adds it: the parts as candidates, the fault cases (by the
+ * engineer) and the measured pulses (by the technician). The seed and the one-click sample both add it.
+ */
+export async function insertDemoPulses(
+  tx: Tx,
+  projectId: string,
+  candidates: { id: string }[],
+  by: { engineer: string; technician: string },
+): Promise<void> {
+  await tx.insert(projectCandidates).values(candidates.map((p) => ({ projectId, partId: p.id })));
+  await tx
+    .insert(faultCases)
+    .values(demoFaultCases().map((c) => ({ ...c, projectId, createdBy: by.engineer })));
+  await tx
+    .insert(measuredPulses)
+    .values(demoMeasuredPulses().map((m) => ({ ...m, projectId, createdBy: by.technician })));
+}
+
 /**
  * The demo scenario as a sample project in any workspace, in one click: the invented parts (unverified drafts),
  * a project marked as a sample with its candidates, fault cases and measured pulses. A newcomer reaches a first
@@ -99,13 +120,7 @@ export async function addSampleProject(store: Storage, who: Who): Promise<{ id: 
       })
       .returning({ id: projects.id });
     const present = await tx.select({ id: parts.id }).from(parts).where(inArray(parts.id, partIds));
-    await tx.insert(projectCandidates).values(present.map((p) => ({ projectId: project.id, partId: p.id })));
-    await tx
-      .insert(faultCases)
-      .values(demoFaultCases().map((c) => ({ ...c, projectId: project.id, createdBy: who.userId })));
-    await tx
-      .insert(measuredPulses)
-      .values(demoMeasuredPulses().map((m) => ({ ...m, projectId: project.id, createdBy: who.userId })));
+    await insertDemoPulses(tx, project.id, present, { engineer: who.userId, technician: who.userId });
     return project;
   });
 }
