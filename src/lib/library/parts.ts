@@ -1,11 +1,12 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { findPartId, getPart } from "@/db/queries/parts";
-import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
+import { curveSets, type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/uuid";
 import { noticePartChange } from "./part-changed";
 import { draftFields, refreshFindings } from "./part-findings";
 import type { PartValues } from "./part-schema";
@@ -15,6 +16,22 @@ export async function loadPart(caller: MemberCaller, partId: string) {
   const part = await getPart({ workspaceId: caller.workspaceId, partId });
   if (!part) throw new AppError("not_found:part", "No such part in this workspace.");
   return part;
+}
+
+/** A curve set of the part, or 404; pass the transaction when the change runs in one. */
+export async function loadCurveSet(
+  part: Pick<Part, "id">,
+  setId: string,
+  executor: Pick<typeof db, "select"> = db,
+) {
+  const [set] = isUuid(setId)
+    ? await executor
+        .select({ id: curveSets.id, objectKey: curveSets.objectKey, fileName: curveSets.fileName })
+        .from(curveSets)
+        .where(and(eq(curveSets.id, setId), eq(curveSets.partId, part.id)))
+    : [];
+  if (!set) throw new AppError("not_found:curve-set", "No such curve set.");
+  return set;
 }
 
 // Ratings a check depends on: changing one returns a verified part to draft, like new curves or a new model.
