@@ -1,4 +1,4 @@
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { measuredPulses } from "@/db/schema";
@@ -7,19 +7,12 @@ import { can } from "@/lib/auth/permissions";
 import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadWritableProject } from "@/lib/projects/projects";
+import { loadProjectRow, loadWritableProject } from "@/lib/projects/projects";
 import { pulseColumns } from "@/lib/projects/pulse-columns";
-import { isUuid } from "@/lib/uuid";
 
 /** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
 async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measurementId: string) {
-  const [row] = isUuid(measurementId)
-    ? await db
-        .select()
-        .from(measuredPulses)
-        .where(and(eq(measuredPulses.projectId, projectId), eq(measuredPulses.id, measurementId)))
-    : [];
-  if (!row) throw new AppError("not_found:measurement", "No such measured pulse in this project.");
+  const row = await loadProjectRow(measuredPulses, projectId, measurementId);
   if (row.createdBy !== caller.user.id && !can(caller.role, "measurement.manage", caller.leadRights)) {
     throw new AppError("forbidden:not-yours", "Only its author or a lead can change a measured pulse.");
   }
