@@ -3,24 +3,14 @@
 // `--print-sign-in` prints the demo sign-in lines for the start command instead.
 import { and, eq } from "drizzle-orm";
 import { db } from "../src/db";
-import {
-  faultCases,
-  measuredPulses,
-  memberships,
-  parts,
-  pendingUploads,
-  projectCandidates,
-  projects,
-  users,
-  workspaces,
-} from "../src/db/schema";
+import { memberships, parts, pendingUploads, projects, users, workspaces } from "../src/db/schema";
 import { hashPassword } from "../src/lib/auth/password";
 import { processCaptureJob } from "../src/lib/capture/job";
 import { registerCapture } from "../src/lib/capture/store";
 import { demoCaptureCsv, demoCaptureFileName, demoCaptureName } from "../src/lib/demo/capture";
 import { DEMO_SCENARIO } from "../src/lib/demo/parts";
-import { demoFaultCases, demoMeasuredPulses, demoProjectName } from "../src/lib/demo/project";
-import { ensureDemoParts } from "../src/lib/demo/sample-project";
+import { demoProjectName } from "../src/lib/demo/project";
+import { ensureDemoParts, insertDemoPulses } from "../src/lib/demo/sample-project";
 import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
 import { storage } from "../src/lib/storage";
 
@@ -78,15 +68,7 @@ async function seedProject(workspaceId: string, ids: Record<string, string>): Pr
         ownerId: ids.engineer,
       })
       .returning({ id: projects.id });
-    await tx
-      .insert(projectCandidates)
-      .values(demoParts.map((p) => ({ projectId: project.id, partId: p.id })));
-    await tx
-      .insert(faultCases)
-      .values(demoFaultCases().map((c) => ({ ...c, projectId: project.id, createdBy: ids.engineer })));
-    await tx
-      .insert(measuredPulses)
-      .values(demoMeasuredPulses().map((m) => ({ ...m, projectId: project.id, createdBy: ids.technician })));
+    await insertDemoPulses(tx, project.id, demoParts, { engineer: ids.engineer, technician: ids.technician });
   });
   await seedCapture(workspaceId, ids.technician);
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, count, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { memberships, type Role, users, workspaces } from "@/db/schema";
+import { noticeColumns } from "@/lib/auth/notice-preferences";
 import { rolesAllowed } from "@/lib/auth/permissions";
 
 export async function getMembership({ workspaceId, userId }: { workspaceId: string; userId: string }) {
@@ -79,4 +80,24 @@ export async function countManagers(
 
 export function findUserByEmail(email: string) {
   return db.query.users.findFirst({ where: eq(users.email, email.trim().toLowerCase()) });
+}
+
+/**
+ * Of these people, the current members of the workspace whose choice (the Account page) allows this optional
+ * e-mail: a notice goes to no one else.
+ */
+export function noticeRecipients({
+  workspaceId,
+  userIds,
+  notice,
+}: {
+  workspaceId: string;
+  userIds: string[];
+  notice: keyof typeof noticeColumns;
+}) {
+  return db
+    .select({ id: users.id, email: users.email })
+    .from(users)
+    .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.workspaceId, workspaceId)))
+    .where(and(inArray(users.id, userIds), eq(noticeColumns[notice], true)));
 }

@@ -23,6 +23,18 @@ export interface PartListQuery {
   pageSize?: number;
 }
 
+/** The id of the workspace's part with this maker and part number (the library's unique key), or null. */
+export async function findPartId(
+  { workspaceId, maker, partNumber }: { workspaceId: string; maker: string; partNumber: string },
+  executor: Pick<typeof db, "select"> = db,
+): Promise<string | null> {
+  const [row] = await executor
+    .select({ id: parts.id })
+    .from(parts)
+    .where(and(eq(parts.workspaceId, workspaceId), eq(parts.maker, maker), eq(parts.partNumber, partNumber)));
+  return row?.id ?? null;
+}
+
 /** One page of the library, filtered and sorted in the database (thousands of parts stay fast). */
 export async function listParts(query: PartListQuery) {
   const where: SQL[] = [eq(parts.workspaceId, query.workspaceId)];

@@ -7,7 +7,8 @@ import type { noticePreferencesSchema } from "./schemas";
 
 export type NoticePreferences = z.output<typeof noticePreferencesSchema>;
 
-const columns = {
+/** The column of each optional e-mail's choice. */
+export const noticeColumns = {
   failingEvidence: users.noticeFailingEvidence,
   decisionDrift: users.noticeDecisionDrift,
   verificationLapsed: users.noticeVerificationLapsed,
@@ -15,7 +16,7 @@ const columns = {
 
 /** The person's choice of optional e-mails. */
 export async function getNoticePreferences(userId: string): Promise<NoticePreferences> {
-  const [row] = await db.select(columns).from(users).where(eq(users.id, userId));
+  const [row] = await db.select(noticeColumns).from(users).where(eq(users.id, userId));
   return row ?? { failingEvidence: true, decisionDrift: true, verificationLapsed: true };
 }
 
@@ -32,6 +33,6 @@ export async function setNoticePreferences(
       noticeVerificationLapsed: prefs.verificationLapsed,
     })
     .where(eq(users.id, userId))
-    .returning(columns);
+    .returning(noticeColumns);
   return row;
 }

@@ -195,13 +195,10 @@ export function caseTrace(
   p: ArrayLike<number>,
   caseNetwork: readonly FosterTerm[],
   caseTemp: number,
-  {
-    start: given = null,
-    buckets = TRACE_BUCKETS,
-    peakPower,
-  }: { start?: RecordStart | null; buckets?: number; peakPower?: number } = {},
+  options: { start?: RecordStart | null; buckets?: number; peakPower?: number } = {},
 ): JunctionTrace {
-  return riseTrace(t, p, caseNetwork, caseTemp, given, buckets, peakPower);
+  // The case path alone: the junction's trace of the same power on that network, with no further path below it.
+  return junctionTrace(t, p, caseNetwork, caseTemp, { ...options, caseNetwork: null });
 }
 
 function riseTrace(

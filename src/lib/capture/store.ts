@@ -1,6 +1,6 @@
 import "server-only";
 import { Readable } from "node:stream";
-import { and, desc, eq, inArray } from "drizzle-orm";
+import { desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { type Capture, captures, type Project, pendingUploads } from "@/db/schema";
@@ -8,9 +8,9 @@ import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { discardUpload } from "@/lib/library/curve-upload";
 import type { ProjectPulse } from "@/lib/projects/evaluate";
+import { loadProjectRow } from "@/lib/projects/projects";
 import type { RecordStart, WaveformPulse } from "@/lib/soa/types";
 import type { Storage } from "@/lib/storage";
-import { isUuid } from "@/lib/uuid";
 import { type CaptureMapping, MAX_CAPTURE_BYTES } from "./parse";
 import type { CaptureSamples } from "./parse-stream";
 import { decodeSamplesStream, encodeSamplesParts } from "./samples-binary";
@@ -178,14 +178,8 @@ export async function putSamples(
 
 /** The project's capture, or a 404. */
 export async function getCapture(input: { projectId: string; captureId: string }): Promise<Capture> {
-  const [row] = isUuid(input.captureId)
-    ? await db
-        .select()
-        .from(captures)
-        .where(and(eq(captures.projectId, input.projectId), eq(captures.id, input.captureId)))
-    : [];
-  if (!row) throw new AppError("not_found:capture", "No such capture in this project.");
-  return row;
+  const { projectId, captureId } = input;
+  return loadProjectRow(captures, projectId, captureId);
 }
 
 /** The project's captures, newest first, without their traces. */

@@ -1,4 +1,5 @@
 import type { PulseOrigin } from "@/db/schema";
+import { pulseColumns } from "@/lib/projects/pulse-columns";
 import { currentLimitFault, inrushPulses } from "@/lib/soa/builders";
 import type { Pulse } from "@/lib/soa/types";
 import { DEMO_SCENARIO } from "./parts";
@@ -27,14 +28,7 @@ function shaped(
   if (pulse.kind === "waveform" || pulse.kind === "avalanche") {
     throw new Error("demo fault cases are rectangles or triangles");
   }
-  return {
-    kind: pulse.kind,
-    v: pulse.v,
-    i: pulse.i,
-    duration: pulse.duration,
-    repeatPeriod: pulse.repeat?.period ?? null,
-    repeatCount: pulse.repeat?.count ?? null,
-  };
+  return pulseColumns(pulse);
 }
 
 function built<I extends object, F extends object>(

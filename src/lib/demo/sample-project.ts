@@ -1,5 +1,6 @@
-import { and, eq, inArray } from "drizzle-orm";
+import { inArray } from "drizzle-orm";
 import { db } from "@/db";
+import { findPartId } from "@/db/queries/parts";
 import { faultCases, measuredPulses, parts, pendingUploads, projectCandidates, projects } from "@/db/schema";
 import { registerCurveSet } from "@/lib/library/curve-upload";
 import type { Storage } from "@/lib/storage";
@@ -23,18 +24,13 @@ const sampleNote = "Sample data: invented, for trying Pulsefence out. Not a real
 export async function ensureDemoParts(store: Storage, who: Who, notes?: string): Promise<string[]> {
   const ids: string[] = [];
   for (const demo of DEMO_PARTS) {
-    const [existing] = await db
-      .select({ id: parts.id })
-      .from(parts)
-      .where(
-        and(
-          eq(parts.workspaceId, who.workspaceId),
-          eq(parts.maker, demo.maker),
-          eq(parts.partNumber, demo.partNumber),
-        ),
-      );
+    const existing = await findPartId({
+      workspaceId: who.workspaceId,
+      maker: demo.maker,
+      partNumber: demo.partNumber,
+    });
     if (existing) {
-      ids.push(existing.id);
+      ids.push(existing);
       continue;
     }
     const [part] = await db
@@ -82,6 +78,27 @@ export async function ensureDemoParts(store: Storage, who: Who, notes?: string):
   return ids;
 }
 
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/**
+ * What the demo project holds, in the transaction that adds it: the parts as candidates, the fault cases (by the
+ * engineer) and the measured pulses (by the technician). The seed and the one-click sample both add it.
+ */
+export async function insertDemoPulses(
+  tx: Tx,
+  projectId: string,
+  candidates: { id: string }[],
+  by: { engineer: string; technician: string },
+): Promise<void> {
+  await tx.insert(projectCandidates).values(candidates.map((p) => ({ projectId, partId: p.id })));
+  await tx
+    .insert(faultCases)
+    .values(demoFaultCases().map((c) => ({ ...c, projectId, createdBy: by.engineer })));
+  await tx
+    .insert(measuredPulses)
+    .values(demoMeasuredPulses().map((m) => ({ ...m, projectId, createdBy: by.technician })));
+}
+
 /**
  * The demo scenario as a sample project in any workspace, in one click: the invented parts (unverified drafts),
  * a project marked as a sample with its candidates, fault cases and measured pulses. A newcomer reaches a first
@@ -103,13 +120,7 @@ export async function addSampleProject(store: Storage, who: Who): Promise<{ id: 
       })
       .returning({ id: projects.id });
     const present = await tx.select({ id: parts.id }).from(parts).where(inArray(parts.id, partIds));
-    await tx.insert(projectCandidates).values(present.map((p) => ({ projectId: project.id, partId: p.id })));
-    await tx
-      .insert(faultCases)
-      .values(demoFaultCases().map((c) => ({ ...c, projectId: project.id, createdBy: who.userId })));
-    await tx
-      .insert(measuredPulses)
-      .values(demoMeasuredPulses().map((m) => ({ ...m, projectId: project.id, createdBy: who.userId })));
+    await insertDemoPulses(tx, project.id, present, { engineer: who.userId, technician: who.userId });
     return project;
   });
 }

@@ -1,7 +1,8 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
-import { db } from "@/db";
-import { curveSets, curves, memberships, type Part, users } from "@/db/schema";
+import { asc, eq, inArray } from "drizzle-orm";
+import type { db } from "@/db";
+import { noticeRecipients } from "@/db/queries/members";
+import { curveSets, curves, type Part } from "@/db/schema";
 import { env } from "@/lib/env";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { verificationLapsedMail } from "@/lib/mail/templates";
@@ -72,14 +73,11 @@ export async function noticeLapsedVerification(
 ): Promise<boolean> {
   if (part.status !== "verified" || !part.verifiedBy) return false;
   // Only a current member who has not turned these notices off is told.
-  const [verifier] = await db
-    .select({ email: users.email })
-    .from(users)
-    .innerJoin(
-      memberships,
-      and(eq(memberships.userId, users.id), eq(memberships.workspaceId, part.workspaceId)),
-    )
-    .where(and(eq(users.id, part.verifiedBy), eq(users.noticeVerificationLapsed, true)));
+  const [verifier] = await noticeRecipients({
+    workspaceId: part.workspaceId,
+    userIds: [part.verifiedBy],
+    notice: "verificationLapsed",
+  });
   if (!verifier) return false;
   await enqueueMail(
     verificationLapsedMail({

@@ -2,10 +2,11 @@ import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
-import { getPart } from "@/db/queries/parts";
-import { type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
+import { findPartId, getPart } from "@/db/queries/parts";
+import { curveSets, type FosterTermRow, type Part, parts, type ThermalSource } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/uuid";
 import { noticePartChange } from "./part-changed";
 import { draftFields, refreshFindings } from "./part-findings";
 import type { PartValues } from "./part-schema";
@@ -15,6 +16,22 @@ export async function loadPart(caller: MemberCaller, partId: string) {
   const part = await getPart({ workspaceId: caller.workspaceId, partId });
   if (!part) throw new AppError("not_found:part", "No such part in this workspace.");
   return part;
+}
+
+/** A curve set of the part, or 404; pass the transaction when the change runs in one. */
+export async function loadCurveSet(
+  part: Pick<Part, "id">,
+  setId: string,
+  executor: Pick<typeof db, "select"> = db,
+) {
+  const [set] = isUuid(setId)
+    ? await executor
+        .select({ id: curveSets.id, objectKey: curveSets.objectKey, fileName: curveSets.fileName })
+        .from(curveSets)
+        .where(and(eq(curveSets.id, setId), eq(curveSets.partId, part.id)))
+    : [];
+  if (!set) throw new AppError("not_found:curve-set", "No such curve set.");
+  return set;
 }
 
 // Ratings a check depends on: changing one returns a verified part to draft, like new curves or a new model.
@@ -72,17 +89,8 @@ export async function createPart(caller: MemberCaller, values: PartValues): Prom
 
 function insertPart(caller: MemberCaller, values: PartValues): Promise<Part> {
   return db.transaction(async (tx) => {
-    const existing = await tx
-      .select({ id: parts.id })
-      .from(parts)
-      .where(
-        and(
-          eq(parts.workspaceId, caller.workspaceId),
-          eq(parts.maker, values.maker),
-          eq(parts.partNumber, values.partNumber),
-        ),
-      );
-    if (existing.length) throw duplicatePart(values);
+    const where = { workspaceId: caller.workspaceId, maker: values.maker, partNumber: values.partNumber };
+    if (await findPartId(where, tx)) throw duplicatePart(values);
     const [part] = await tx
       .insert(parts)
       .values({ ...normalised(values), workspaceId: caller.workspaceId, createdBy: caller.user.id })

@@ -9,10 +9,9 @@ import { AppError } from "@/lib/errors";
 import { DEFAULT_POLICY } from "@/lib/soa/policy";
 import { METHODS_REVISION, revisionOf } from "@/lib/soa/revision";
 import type { PartLimits, PulseResult, Verdict } from "@/lib/soa/types";
-import { isUuid } from "@/lib/uuid";
 import { checkProject } from "./check";
 import { rankCandidates } from "./matrix";
-import { type Candidate, loadCandidates } from "./projects";
+import { type Candidate, loadCandidates, loadProjectRow } from "./projects";
 
 export type Checked = Awaited<ReturnType<typeof checkProject>>;
 
@@ -194,14 +193,7 @@ export function listDecisions(projectId: string) {
 }
 
 export async function loadDecision(projectId: string, decisionId: string): Promise<Decision> {
-  const [row] = isUuid(decisionId)
-    ? await db
-        .select()
-        .from(decisions)
-        .where(and(eq(decisions.projectId, projectId), eq(decisions.id, decisionId)))
-    : [];
-  if (!row) throw new AppError("not_found:decision", "No such decision in this project.");
-  return row;
+  return loadProjectRow(decisions, projectId, decisionId);
 }
 
 export interface DriftItem {

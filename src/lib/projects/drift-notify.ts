@@ -1,8 +1,9 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, inArray, isNull, sql } from "drizzle-orm";
+import { and, eq, isNull, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { type Decision, decisions, memberships, notices, type Part, projects, users } from "@/db/schema";
+import { noticeRecipients } from "@/db/queries/members";
+import { type Decision, decisions, notices, type Part, projects } from "@/db/schema";
 import { env } from "@/lib/env";
 import { logError } from "@/lib/log";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
@@ -81,14 +82,11 @@ async function noticeOne(
   if (items.length === 0) return 0;
   const recipientIds = [...new Set([project.ownerId, decision.signedBy].filter((id): id is string => !!id))];
   if (recipientIds.length === 0) return 0;
-  const recipients = await db
-    .select({ id: users.id, email: users.email })
-    .from(users)
-    .innerJoin(
-      memberships,
-      and(eq(memberships.userId, users.id), eq(memberships.workspaceId, decision.workspaceId)),
-    )
-    .where(and(inArray(users.id, recipientIds), eq(users.noticeDecisionDrift, true)));
+  const recipients = await noticeRecipients({
+    workspaceId: decision.workspaceId,
+    userIds: recipientIds,
+    notice: "decisionDrift",
+  });
   if (recipients.length === 0) return 0;
   const link = `${env().APP_URL}/projects/${project.id}/decisions/${decision.id}#drift`;
   const changes = items.map((i) => ({

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
-import { memberships, notices, type Project, users } from "@/db/schema";
+import { noticeRecipients } from "@/db/queries/members";
+import { notices, type Project } from "@/db/schema";
 import { env } from "@/lib/env";
 import { percent, q } from "@/lib/format";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
@@ -29,14 +29,11 @@ export async function notifyFailingEvidence(
   pulseIds: string[],
 ): Promise<number> {
   if (!project.ownerId) return 0;
-  const [owner] = await db
-    .select({ email: users.email })
-    .from(users)
-    .innerJoin(
-      memberships,
-      and(eq(memberships.userId, users.id), eq(memberships.workspaceId, project.workspaceId)),
-    )
-    .where(and(eq(users.id, project.ownerId), eq(users.noticeFailingEvidence, true)));
+  const [owner] = await noticeRecipients({
+    workspaceId: project.workspaceId,
+    userIds: [project.ownerId],
+    notice: "failingEvidence",
+  });
   if (!owner) return 0;
   const failing = checked.pulses.filter(
     (p) =>

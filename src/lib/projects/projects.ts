@@ -1,7 +1,19 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { curveSets, curves, type Part, parts, projectCandidates, projects, users } from "@/db/schema";
+import {
+  captures,
+  curveSets,
+  curves,
+  decisions,
+  faultCases,
+  measuredPulses,
+  type Part,
+  parts,
+  projectCandidates,
+  projects,
+  users,
+} from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import type { PartLimits } from "@/lib/soa/types";
@@ -17,6 +29,34 @@ export async function loadProject(caller: Pick<MemberCaller, "workspaceId">, pro
     : [];
   if (!project) throw new AppError("not_found:project", "No such project in this workspace.");
   return project;
+}
+
+/** The nested resources of a project, with the code and the name its 404 gives. */
+const projectChildren = new Map<ProjectChild, [`not_found:${string}`, string]>([
+  [faultCases, ["not_found:fault-case", "fault case"]],
+  [measuredPulses, ["not_found:measurement", "measured pulse"]],
+  [decisions, ["not_found:decision", "decision"]],
+  [captures, ["not_found:capture", "capture"]],
+]);
+type ProjectChild = typeof faultCases | typeof measuredPulses | typeof decisions | typeof captures;
+
+/** A fault case, measured pulse, decision or capture of the project, or a 404 (another project's row included). */
+export async function loadProjectRow<T extends ProjectChild>(
+  table: T,
+  projectId: string,
+  id: string,
+): Promise<T["$inferSelect"]> {
+  const child: ProjectChild = table;
+  const [row] = isUuid(id)
+    ? await db
+        .select()
+        .from(child)
+        .where(and(eq(child.projectId, projectId), eq(child.id, id)))
+    : [];
+  const [code, name] = projectChildren.get(child)!;
+  if (!row) throw new AppError(code, `No such ${name} in this project.`);
+  // The row is of `table`: drizzle types a select from a union of tables as the union of their rows.
+  return row as T["$inferSelect"];
 }
 
 /** The caller's workspace's project for a page, or null when there is none (the page then answers notFound()). */

@@ -2,13 +2,8 @@ import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { type FaultCase, faultCases, type MeasuredPulse, measuredPulses, type Project } from "@/db/schema";
-import type { Repeat } from "@/lib/soa/types";
+import { repeatOf } from "@/lib/format";
 import type { ProjectPulse } from "./evaluate";
-
-function repeatOf(row: { repeatPeriod: number | null; repeatCount: number | null }): Repeat | undefined {
-  if (row.repeatPeriod === null) return undefined;
-  return { period: row.repeatPeriod, ...(row.repeatCount !== null ? { count: row.repeatCount } : {}) };
-}
 
 /** Equal-energy width E/p_peak of a sequence's samples (trapezoid energy; METHODS.md §6), for its label. */
 function sequenceWidth(samples: { t: number[]; v: number[]; i: number[] }): number | null {

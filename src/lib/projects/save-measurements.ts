@@ -13,6 +13,7 @@ import {
 import { AppError } from "@/lib/errors";
 import { checkProject } from "./check";
 import { notifyFailingEvidence } from "./notify";
+import { pulseColumns } from "./pulse-columns";
 
 const optionalText = (max: number) =>
   z.preprocess((v) => (v === "" || v === null ? undefined : v), z.string().trim().max(max).optional());
@@ -79,12 +80,7 @@ export async function saveMeasurements(
         input.rows.map((r) => ({
           projectId: project.id,
           label: r.label,
-          kind: r.kind,
-          v: r.v,
-          i: r.i,
-          duration: r.duration,
-          repeatPeriod: r.repeat?.period ?? null,
-          repeatCount: r.repeat?.count ?? null,
+          ...pulseColumns(r),
           note: input.note ?? null,
           boardSerial: input.boardSerial ?? null,
           probe: input.probe ?? null,

@@ -8,6 +8,7 @@ import { projects } from "@/db/schema";
 import type { MemberCaller } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
+import { pulseColumns } from "./pulse-columns";
 import type { anyFaultCaseSchema, projectSchema } from "./schema";
 
 type ProjectValues = z.output<typeof projectSchema>;
@@ -107,14 +108,5 @@ export function faultCaseColumns(values: FaultCaseValues) {
   if (values.kind === "waveform") {
     return { ...common, ...none, kind: values.kind, ...peakSample(values.samples), samples: values.samples };
   }
-  return {
-    ...common,
-    ...none,
-    kind: values.kind,
-    v: values.v,
-    i: values.i,
-    duration: values.duration,
-    repeatPeriod: values.repeat?.period ?? null,
-    repeatCount: values.repeat?.count ?? null,
-  };
+  return { ...common, ...none, ...pulseColumns(values) };
 }

@@ -39,32 +39,25 @@ export function soaChart(doc: Doc, snapshot: DecisionSnapshot, partId: string): 
   doc.save();
   const vTicks = logTicks([vMin, vMax]);
   const iTicks = logTicks([iMin, iMax]);
-  for (const [ticks, major] of [
-    [vTicks.minor, false],
-    [vTicks.major, true],
-  ] as const) {
-    for (const v of ticks) {
-      doc
-        .moveTo(x(v), y0)
-        .lineTo(x(v), y0 + h)
-        .lineWidth(major ? 0.6 : 0.2)
-        .strokeColor(line)
-        .stroke();
+  // One grid rule for both axes: minor lines thin, decades heavier.
+  const grid = (ticks: typeof vTicks, ends: (t: number) => [number, number, number, number]) => {
+    for (const [list, major] of [
+      [ticks.minor, false],
+      [ticks.major, true],
+    ] as const) {
+      for (const t of list) {
+        const [ax, ay, bx, by] = ends(t);
+        doc
+          .moveTo(ax, ay)
+          .lineTo(bx, by)
+          .lineWidth(major ? 0.6 : 0.2)
+          .strokeColor(line)
+          .stroke();
+      }
     }
-  }
-  for (const [ticks, major] of [
-    [iTicks.minor, false],
-    [iTicks.major, true],
-  ] as const) {
-    for (const i of ticks) {
-      doc
-        .moveTo(x0, y(i))
-        .lineTo(x0 + w, y(i))
-        .lineWidth(major ? 0.6 : 0.2)
-        .strokeColor(line)
-        .stroke();
-    }
-  }
+  };
+  grid(vTicks, (v) => [x(v), y0, x(v), y0 + h]);
+  grid(iTicks, (i) => [x0, y(i), x0 + w, y(i)]);
   doc.font("mono").fontSize(7).fillColor(muted);
   for (const v of vTicks.major) {
     doc.text(engineeringTick(v, 1e-3), x(v) - 15, y0 + h + 4, { width: 30, align: "center" });

@@ -1,8 +1,5 @@
-import { eq } from "drizzle-orm";
 import { z } from "zod";
-import { db } from "@/db";
-import { recordAudit } from "@/db/queries/audit";
-import { projects } from "@/db/schema";
+import { setArchived } from "@/lib/archive";
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
 import { loadProject } from "@/lib/projects/projects";
@@ -11,21 +8,6 @@ import { loadProject } from "@/lib/projects/projects";
 export const POST = route<{ id: string }>({ action: "project.write" }, async (req, caller, { id }) => {
   const project = await loadProject(caller, id);
   const { archived } = await parseBody(req, z.object({ archived: z.boolean() }));
-  await db.transaction(async (tx) => {
-    await tx
-      .update(projects)
-      .set({ archivedAt: archived ? new Date() : null, updatedAt: new Date() })
-      .where(eq(projects.id, project.id));
-    await recordAudit(
-      {
-        workspaceId: caller.workspaceId,
-        actorId: caller.user.id,
-        action: archived ? "project.archived" : "project.restored",
-        subjectType: "project",
-        subjectId: project.id,
-      },
-      tx,
-    );
-  });
+  await setArchived(caller, "project", project.id, archived);
   return json({ status: "ok", archived });
 });

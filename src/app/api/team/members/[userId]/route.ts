@@ -28,6 +28,17 @@ async function assertStillManager(tx: Parameters<typeof lockWorkspace>[0], calle
 }
 
 /**
+ * The member's role, read under the workspace lock: the last-admin rule is checked under it, so two admins demoting
+ * or removing each other cannot both win.
+ */
+async function lockMember(tx: Parameters<typeof lockWorkspace>[0], caller: MemberCaller, userId: string) {
+  await lockWorkspace(tx, caller.workspaceId);
+  const current = await lockedRole(tx, caller.workspaceId, userId);
+  if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
+  return current;
+}
+
+/**
  * PATCH /api/team/members/:userId: changes a member's role and/or lead rights (an admin may grant lead rights
  * to any member, themself included); the last admin keeps theirs. Answers the previous values, for undo.
  */
@@ -39,10 +50,7 @@ export const PATCH = route<{ userId: string }>(
     const role = body.role ?? member.role;
     const leadRights = body.leadRights ?? member.leadRights;
     await db.transaction(async (tx) => {
-      // The last-admin rule is checked under the workspace lock, so two admins demoting each other cannot both win.
-      await lockWorkspace(tx, caller.workspaceId);
-      const current = await lockedRole(tx, caller.workspaceId, userId);
-      if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
+      const current = await lockMember(tx, caller, userId);
       // The last member who may manage members (an admin) keeps that role.
       if (manages(current) && !manages(role) && (await countManagers(caller, tx)) <= 1) {
         throw new AppError(
@@ -91,9 +99,7 @@ export const DELETE = route<{ userId: string }>(
   async (_req, caller, { userId }) => {
     await loadMember(caller, userId);
     await db.transaction(async (tx) => {
-      await lockWorkspace(tx, caller.workspaceId);
-      const current = await lockedRole(tx, caller.workspaceId, userId);
-      if (!current) throw new AppError("not_found:member", "No such member in this workspace.");
+      const current = await lockMember(tx, caller, userId);
       if (manages(current) && (await countManagers(caller, tx)) <= 1) {
         throw new AppError("conflict:last-admin", "The last admin cannot be removed.");
       }

@@ -1,32 +1,19 @@
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { faultCases } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadWritableProject } from "@/lib/projects/projects";
+import { loadProjectRow, loadWritableProject } from "@/lib/projects/projects";
 import { anyFaultCaseSchema } from "@/lib/projects/schema";
 import { faultCaseColumns } from "@/lib/projects/write";
-import { isUuid } from "@/lib/uuid";
-
-async function loadCase(projectId: string, caseId: string) {
-  const [row] = isUuid(caseId)
-    ? await db
-        .select()
-        .from(faultCases)
-        .where(and(eq(faultCases.projectId, projectId), eq(faultCases.id, caseId)))
-    : [];
-  if (!row) throw new AppError("not_found:fault-case", "No such fault case in this project.");
-  return row;
-}
 
 /** PATCH /api/projects/:id/fault-cases/:caseId: edits a fault case. */
 export const PATCH = route<{ id: string; caseId: string }>(
   { action: "project.write" },
   async (req, caller, { id, caseId }) => {
     const project = await loadWritableProject(caller, id);
-    const existing = await loadCase(project.id, caseId);
+    const existing = await loadProjectRow(faultCases, project.id, caseId);
     const values = await parseBody(req, anyFaultCaseSchema);
     const faultCase = await db.transaction(async (tx) => {
       const [row] = await tx
@@ -56,7 +43,7 @@ export const DELETE = route<{ id: string; caseId: string }>(
   { action: "project.write" },
   async (_req, caller, { id, caseId }) => {
     const project = await loadWritableProject(caller, id);
-    const existing = await loadCase(project.id, caseId);
+    const existing = await loadProjectRow(faultCases, project.id, caseId);
     await db.transaction(async (tx) => {
       await tx.delete(faultCases).where(eq(faultCases.id, existing.id));
       await recordAudit(

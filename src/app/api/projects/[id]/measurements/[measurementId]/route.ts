@@ -1,4 +1,4 @@
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { measuredPulses } from "@/db/schema";
@@ -7,18 +7,12 @@ import { can } from "@/lib/auth/permissions";
 import { measurementRowSchema } from "@/lib/csv/measurements";
 import { AppError } from "@/lib/errors";
 import { json, parseBody } from "@/lib/http";
-import { loadWritableProject } from "@/lib/projects/projects";
-import { isUuid } from "@/lib/uuid";
+import { loadProjectRow, loadWritableProject } from "@/lib/projects/projects";
+import { pulseColumns } from "@/lib/projects/pulse-columns";
 
 /** A measured pulse of the project that the caller may change: their own, or any for a lead or admin. */
 async function loadOwnMeasurement(caller: MemberCaller, projectId: string, measurementId: string) {
-  const [row] = isUuid(measurementId)
-    ? await db
-        .select()
-        .from(measuredPulses)
-        .where(and(eq(measuredPulses.projectId, projectId), eq(measuredPulses.id, measurementId)))
-    : [];
-  if (!row) throw new AppError("not_found:measurement", "No such measured pulse in this project.");
+  const row = await loadProjectRow(measuredPulses, projectId, measurementId);
   if (row.createdBy !== caller.user.id && !can(caller.role, "measurement.manage", caller.leadRights)) {
     throw new AppError("forbidden:not-yours", "Only its author or a lead can change a measured pulse.");
   }
@@ -35,15 +29,7 @@ export const PATCH = route<{ id: string; measurementId: string }>(
     const row = await db.transaction(async (tx) => {
       const [updated] = await tx
         .update(measuredPulses)
-        .set({
-          label: values.label,
-          kind: values.kind,
-          v: values.v,
-          i: values.i,
-          duration: values.duration,
-          repeatPeriod: values.repeat?.period ?? null,
-          repeatCount: values.repeat?.count ?? null,
-        })
+        .set({ label: values.label, ...pulseColumns(values) })
         .where(eq(measuredPulses.id, existing.id))
         .returning();
       await recordAudit(

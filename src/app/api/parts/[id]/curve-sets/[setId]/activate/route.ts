@@ -1,14 +1,12 @@
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { recordAudit } from "@/db/queries/audit";
 import { curveSets, parts } from "@/db/schema";
 import { route } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { json } from "@/lib/http";
 import { noticePartChange } from "@/lib/library/part-changed";
 import { draftFields } from "@/lib/library/part-findings";
-import { loadPart } from "@/lib/library/parts";
-import { isUuid } from "@/lib/uuid";
+import { loadCurveSet, loadPart } from "@/lib/library/parts";
 
 /** POST /api/parts/:id/curve-sets/:setId/activate: makes an earlier revision the active one; back to draft. */
 export const POST = route<{ id: string; setId: string }>(
@@ -16,13 +14,7 @@ export const POST = route<{ id: string; setId: string }>(
   async (_req, caller, { id, setId }) => {
     const part = await loadPart(caller, id);
     const fileName = await db.transaction(async (tx) => {
-      const [set] = isUuid(setId)
-        ? await tx
-            .select({ id: curveSets.id, fileName: curveSets.fileName })
-            .from(curveSets)
-            .where(and(eq(curveSets.id, setId), eq(curveSets.partId, part.id)))
-        : [];
-      if (!set) throw new AppError("not_found:curve-set", "No such curve set.");
+      const set = await loadCurveSet(part, setId, tx);
       await tx.update(curveSets).set({ active: false }).where(eq(curveSets.partId, part.id));
       await tx.update(curveSets).set({ active: true }).where(eq(curveSets.id, set.id));
       await tx
