@@ -1,12 +1,13 @@
 // Load figures for the started app: prints, never asserts. Run `npm start` (or the test profile's app) first, then
 // `npm run load`. It signs in as the demo engineer, makes an API token, and drives, with autocannon:
 // - `POST /api/v1/check` (1 part × 20 pulses, bearer token) at 1, 16 and 64 connections;
-// - a mixed workload of pages and APIs at a fixed total rate (200 req/s for 60 s unless told), probing
-//   /api/health once a second meanwhile.
+// - a mixed workload of pages and APIs at a fixed total rate (200 req/s for 60 s unless told), twice: as one
+//   autocannon, which sends each second's requests in one burst at its start, and spread over the second (one
+//   instance per place in the cycle, started 1/17 s apart); /api/health is probed once a second meanwhile.
 // Every run is bounded in time and sent only to a loopback address. Settings (environment):
 //   PF_LOAD_URL      the app, default http://127.0.0.1:<3000 + PF_PORT_OFFSET>
 //   PF_LOAD_SECONDS  seconds per check run (default 10); PF_MIXED_SECONDS, PF_MIXED_RATE (60, 200)
-//   PF_LOAD_ONLY     "check" or "mixed" to run one part
+//   PF_LOAD_ONLY     "check" or "mixed" to run one part, "spread" for only the spread mixed run
 import autocannon from "autocannon";
 import { checkBody } from "./load/check-body";
 import { type Figures, figuresLine, Recorder } from "./load/figures";
@@ -31,14 +32,40 @@ async function getJson<T>(path: string, cookie: string, init: RequestInit = {}):
 
 /** Runs autocannon and records every response time itself (autocannon's summary has no p95). */
 async function run(title: string, options: Omit<autocannon.Options, "url">): Promise<Figures> {
+  return runTogether(title, [{ options, delayMs: 0 }]);
+}
+
+/**
+ * Runs several autocannon instances at once, each started `delayMs` after the first, into one set of figures.
+ * autocannon paces a rate by letting each connection send its share at the start of every second, so one instance
+ * at 200 req/s sends its 200 requests as one burst each second; instances started at spread offsets send the same
+ * rate spread over the second.
+ */
+async function runTogether(
+  title: string,
+  parts: { options: Omit<autocannon.Options, "url">; delayMs: number }[],
+): Promise<Figures> {
   const recorder = new Recorder();
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ ...options, url: origin, timeout: TIMEOUT_S }, (error, done) =>
-      error ? reject(error) : resolve(done),
-    );
-    instance.on("response", (_client, status, _bytes, ms) => recorder.response(status, ms));
-  });
-  const figures = recorder.figures(title, result.duration, result.timeouts, result.errors - result.timeouts);
+  const results = await Promise.all(
+    parts.map(async ({ options, delayMs }) => {
+      await new Promise((r) => setTimeout(r, delayMs));
+      return new Promise<autocannon.Result>((resolve, reject) => {
+        const instance = autocannon({ ...options, url: origin, timeout: TIMEOUT_S }, (error, done) =>
+          error ? reject(error) : resolve(done),
+        );
+        instance.on("response", (_client, status, _bytes, ms) => recorder.response(status, ms));
+      });
+    }),
+  );
+  const sum = (f: (r: autocannon.Result) => number) => results.reduce((total, r) => total + f(r), 0);
+  const seconds =
+    Math.max(...results.map((r) => r.duration)) + Math.max(...parts.map((p) => p.delayMs)) / 1000;
+  const figures = recorder.figures(
+    title,
+    seconds,
+    sum((r) => r.timeouts),
+    sum((r) => r.errors - r.timeouts),
+  );
   console.log(figuresLine(figures));
   return figures;
 }
@@ -64,7 +91,7 @@ async function checkRuns(token: string): Promise<void> {
   }
 }
 
-async function mixedRun(cookie: string, token: string): Promise<void> {
+async function mixedRun(cookie: string, token: string, inStep: boolean): Promise<void> {
   const projects = await getJson<{ projects: { id: string }[] }>("/api/projects", cookie);
   const parts = await getJson<{ rows: { id: string }[] }>("/api/parts", cookie);
   const project = projects.projects[0]?.id;
@@ -119,12 +146,32 @@ async function mixedRun(cookie: string, token: string): Promise<void> {
       await new Promise((r) => setTimeout(r, 1000));
     }
   })();
-  await run(`mixed, ${mixedRate} req/s`, {
-    requests,
-    connections: Math.max(16, Math.round(mixedRate / 2)),
-    overallRate: mixedRate,
-    duration: mixedSeconds,
-  });
+  const connections = Math.max(16, Math.round(mixedRate / 2));
+  // The same mix spread over each second: one instance per place in the cycle, each starting there and a 1/17 s
+  // after the one before.
+  const k = requests.length;
+  const spread = (rate: number, duration: number) =>
+    requests.map((_, start) => ({
+      delayMs: (start * 1000) / k,
+      options: {
+        requests: [...requests.slice(start), ...requests.slice(0, start)],
+        connections: Math.max(1, Math.round(connections / k)),
+        overallRate: Math.floor(rate / k) + (start < rate % k ? 1 : 0),
+        duration,
+      },
+    }));
+  // A fresh process compiles and optimises its code over its first thousands of requests, as the check runs'
+  // warm-up allows for; a server's figures are those of its working life.
+  await runTogether("warm-up (not counted)", spread(Math.round(mixedRate / 2), 30));
+  // As the issue measured it: one autocannon at the whole rate, whose connections walk the cycle in step.
+  if (inStep)
+    await run(`mixed, ${mixedRate} req/s`, {
+      requests,
+      connections,
+      overallRate: mixedRate,
+      duration: mixedSeconds,
+    });
+  await runTogether("mixed, spread", spread(mixedRate, mixedSeconds));
   running = false;
   await probe;
   health.sort((a, b) => a - b);
@@ -140,5 +187,5 @@ const { token } = await getJson<{ token: { secret: string } }>("/api/account/tok
   body: JSON.stringify({ name: `load ${new Date().toISOString()}` }),
 });
 console.log(`load against ${origin} (figures print, nothing is asserted)`);
-if (only !== "mixed") await checkRuns(token.secret);
-if (only !== "check") await mixedRun(cookie, token.secret);
+if (only !== "mixed" && only !== "spread") await checkRuns(token.secret);
+if (only !== "check") await mixedRun(cookie, token.secret, only !== "spread");
