@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   count,
+  dateText,
   editable,
   factor,
   fileSize,
@@ -10,6 +11,7 @@ import {
   percent,
   plainSpaces,
   plural,
+  progress,
   q,
   repeatOf,
   repeatText,
@@ -132,6 +134,9 @@ describe("counts and repetitions", () => {
   it("groups the thousands of a count, and writes a temperature difference in kelvin", () => {
     expect(count(1_000_000)).toBe("1,000,000");
     expect(count(999)).toBe("999");
+    expect(progress(0.456)).toBe(`46${T}%`);
+    expect(dateText(new Date("2026-12-03T06:14:59Z"))).toBe("2026-12-03");
+    expect(dateText(new Date("2026-12-03T06:14:59Z"), true)).toBe("2026-12-03 06:14 UTC");
     expect(kelvin(25)).toBe(`25${T}K`);
     expect(kelvin(12.345)).toBe(`12.3${T}K`);
     expect(kelvin(null)).toBe("—");

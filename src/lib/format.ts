@@ -93,6 +93,17 @@ export function editable(
   return formatQuantity(value, "", digits).replace(THIN_SPACE, "");
 }
 
+/** A date as engineers read it, ISO order, UTC: "2026-12-03"; with `withTime`, "2026-12-03 06:14 UTC". */
+export function dateText(date: Date, withTime = false): string {
+  const iso = date.toISOString();
+  return withTime ? `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC` : iso.slice(0, 10);
+}
+
+/** How far long work has come, as a whole percentage of the bar: 0.456 → "46 %". Not a figure of the product. */
+export function progress(fraction: number): string {
+  return `${Math.round(fraction * 100)}${THIN_SPACE}%`;
+}
+
 /** A count of things, with thousands grouped: 1000000 → "1,000,000". */
 export function count(n: number): string {
   return n.toLocaleString("en-GB");

@@ -1,6 +1,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { DataTable } from "@/components/data-table";
 import type { CsvIssue } from "@/lib/csv/issues";
+import { progress } from "@/lib/format";
 
 /** Long work in words with a bar: "Uploading… 45 %", then "Checking the curves…". */
 export function UploadProgress({ label, fraction }: { label: string; fraction: number | null }) {
@@ -9,7 +10,7 @@ export function UploadProgress({ label, fraction }: { label: string; fraction: n
     <div className="space-y-1.5" data-testid="upload-progress">
       <p className="text-sm text-ink" aria-live="polite">
         {label}
-        {percent === null ? "" : ` ${percent}\u00a0%`}
+        {fraction === null ? "" : ` ${progress(fraction)}`}
       </p>
       <div
         role="progressbar"

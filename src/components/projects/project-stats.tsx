@@ -1,15 +1,11 @@
 import { Sym } from "@/components/library/symbols";
 import { LoadingBox } from "@/components/loading-box";
 import { StatBlocks } from "@/components/stat-blocks";
-import { kelvin, q, settingPercent } from "@/lib/format";
+import { count, kelvin, plural, q, settingPercent } from "@/lib/format";
 import type { ProjectCheck, ProjectDetail } from "./api";
 
 function Figure({ children }: { children: string }) {
   return <span className="num font-mono">{children}</span>;
-}
-
-function plural(n: number, one: string, many: string): string {
-  return `${n} ${n === 1 ? one : many}`;
 }
 
 /** The project's key figures: temperature, margin policy, and how many candidates and pulses it holds. */
@@ -45,13 +41,13 @@ export function ProjectStats({ detail, check }: { detail?: ProjectDetail; check?
         },
         {
           label: "Candidates",
-          value: <Figure>{String(candidates.length)}</Figure>,
+          value: <Figure>{count(candidates.length)}</Figure>,
           note: `${withModel} with a thermal model`,
         },
         {
           label: "Pulses",
-          value: <Figure>{String(pulses)}</Figure>,
-          note: `${plural(faultCases.length, "fault case", "fault cases")} · ${measuredPulses.length} measured · ${plural(captures, "capture", "captures")}`,
+          value: <Figure>{count(pulses)}</Figure>,
+          note: `${plural(faultCases.length, "fault case")} · ${measuredPulses.length} measured · ${plural(captures, "capture")}`,
         },
       ]}
     />

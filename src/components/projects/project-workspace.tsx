@@ -27,7 +27,8 @@ const CapturesPanel = dynamic(() => import("./captures/captures-panel").then((m)
 
 export interface Viewer {
   id: string;
-  role: "admin" | "lead" | "engineer" | "technician";
+  /** Whether the viewer may change measured pulses and captures anyone recorded (`measurement.manage`). */
+  managesMeasurements: boolean;
 }
 
 export interface Person {

@@ -1,4 +1,3 @@
-import { can } from "@/lib/auth/permissions";
 import type { Person, Viewer } from "./project-workspace";
 
 /**
@@ -7,10 +6,9 @@ import type { Person, Viewer } from "./project-workspace";
  */
 export function recordedBy(viewer: Viewer, people: Person[]) {
   const names = new Map(people.map((p) => [p.id, p.name]));
-  const mayDeleteAny = can(viewer.role, "measurement.manage");
   return {
     who: (createdBy: string | null) =>
       createdBy ? (createdBy === viewer.id ? "you" : (names.get(createdBy) ?? "a former member")) : "—",
-    mayDelete: (createdBy: string | null) => createdBy === viewer.id || mayDeleteAny,
+    mayDelete: (createdBy: string | null) => createdBy === viewer.id || viewer.managesMeasurements,
   };
 }

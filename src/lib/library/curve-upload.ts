@@ -7,6 +7,7 @@ import { curveSets, curves, type Part, parts, pendingUploads } from "@/db/schema
 import { type CsvIssue, digitisedCurveSet, parseCurveSetCsv } from "@/lib/csv/curve-set";
 import { MAX_CSV_BYTES, overLimit } from "@/lib/csv/limits";
 import { AppError } from "@/lib/errors";
+import { dateText } from "@/lib/format";
 import { logError } from "@/lib/log";
 import { findCurveSetIssues } from "@/lib/soa/findings";
 import type { Storage } from "@/lib/storage";
@@ -185,7 +186,7 @@ export async function registerCurveSet(
     if (same) {
       throw new AppError(
         "conflict:same-curve-set",
-        `This file matches the revision ${same.fileName} uploaded on ${same.createdAt.toISOString().slice(0, 10)}, ` +
+        `This file matches the revision ${same.fileName} uploaded on ${dateText(same.createdAt)}, ` +
           "byte for byte: nothing was added. Activate that revision under Curve-set revisions if it is not the active one.",
         { details: { curveSetId: same.id } },
       );

@@ -9,7 +9,7 @@ import { curveSets, parts } from "@/db/schema";
 import type { Finding } from "@/lib/soa/findings";
 import { browserUpload, registerUpload } from "@/test/curve-upload";
 import { addPart, call, sessionCookie, testDb, workspaceForFile } from "@/test/fixtures";
-import { requireEnv } from "@/test/services";
+import { waitForMails } from "@/test/services";
 
 // Curves under a 1 Ω R_DS(on) line, each bending to a constant-power line (I = P/V): no shape findings.
 const csv = [
@@ -39,12 +39,6 @@ async function upload(partId: string, text: string) {
 async function storedFindings(partId: string): Promise<Finding[]> {
   const [set] = await testDb.db.select().from(curveSets).where(eq(curveSets.partId, partId));
   return set.findings as Finding[];
-}
-
-async function mailsTo(address: string): Promise<{ subject: string; text: string }[]> {
-  const res = await fetch(`${requireEnv("MAIL_INBOX_URL")}/api/email`);
-  const all = (await res.json()) as { subject: string; text: string; to: { address: string }[] }[];
-  return all.filter((m) => m.to.some((r) => r.address === address));
 }
 
 beforeAll(async () => {
@@ -148,10 +142,9 @@ describe("verification over open findings", () => {
     });
     const [lapsed] = await testDb.db.select().from(parts).where(eq(parts.id, part.id));
     expect(lapsed).toMatchObject({ status: "draft", verifiedBy: null, acceptedFindings: [] });
-    const mails = await mailsTo(ws.members.lead.email);
-    expect(mails.map((m) => m.subject)).toContain(
-      `Findings Test Devices ${part.partNumber} is back in draft: its data changed`,
-    );
-    expect(mails.find((m) => m.subject.includes(part.partNumber))?.text).toContain("thermal model changed");
+    const back = new RegExp(`${part.partNumber.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")} is back in draft`);
+    const [mail] = await waitForMails(ws.members.lead.email, 1, { subject: back });
+    expect(mail.subject).toBe(`Findings Test Devices ${part.partNumber} is back in draft: its data changed`);
+    expect(mail.text).toContain("thermal model changed");
   });
 });

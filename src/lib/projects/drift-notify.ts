@@ -5,6 +5,7 @@ import { db } from "@/db";
 import { noticeRecipients } from "@/db/queries/members";
 import { type Decision, decisions, notices, type Part, projects } from "@/db/schema";
 import { env } from "@/lib/env";
+import { dateText } from "@/lib/format";
 import { logError } from "@/lib/log";
 import { enqueueMail, flushOutbox } from "@/lib/mail/outbox";
 import { decisionDriftMail } from "@/lib/mail/templates";
@@ -115,7 +116,7 @@ async function noticeOne(
           projectName: project.name,
           chosenLabel: decision.chosenLabel,
           signedByName: decision.signedByName,
-          signedAt: `${decision.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC`,
+          signedAt: dateText(decision.signedAt, true),
           change,
           actorName,
           changes,

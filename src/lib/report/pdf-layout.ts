@@ -1,4 +1,4 @@
-import { percent, plainSpaces, q as quantity, settingPercent } from "@/lib/format";
+import { dateText, percent, plainSpaces, q as quantity, settingPercent } from "@/lib/format";
 import type { Verdict } from "@/lib/soa/types";
 import type { Unit } from "@/lib/soa/units";
 
@@ -23,7 +23,7 @@ export type Doc = PDFKit.PDFDocument;
 export const pct = (u: number | null) => plainSpaces(percent(u));
 export const settingPct = (u: number | null) => plainSpaces(settingPercent(u));
 export const q = (v: number | null | undefined, unit: Unit) => plainSpaces(quantity(v, unit));
-export const stamp = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+export const stamp = (d: Date) => dateText(d, true);
 
 export function contentWidth(doc: Doc): number {
   return doc.page.width - doc.page.margins.left - doc.page.margins.right;

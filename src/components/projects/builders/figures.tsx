@@ -1,6 +1,6 @@
 import { Fragment, type ReactNode } from "react";
 import { Sym } from "@/components/library/symbols";
-import { q } from "@/lib/format";
+import { count, inUnit, q } from "@/lib/format";
 import type { Unit } from "@/lib/soa/units";
 
 // The builders' inputs and intermediate figures with their symbols and units, for the live panel beside each
@@ -13,9 +13,9 @@ const unit =
   (value) =>
     q(value, u, digits);
 
-const slew: Format = (value) => `${q(value / 1e3, "", 4)}\u2009V/ms`;
+const slew: Format = (value) => `${inUnit(value, 1e3, 4)}\u2009V/ms`;
 const fraction: Format = (value) => q(value * 100, "%", 3);
-const plain: Format = (value) => String(value);
+const plain: Format = (value) => count(value);
 
 const known: Record<string, { label: ReactNode; format: Format }> = {
   supply: { label: <Sym main="V" sub="in" />, format: unit("V") },

@@ -3,7 +3,7 @@
 import { useMemo } from "react";
 import type { z } from "zod";
 import { Sym } from "@/components/library/symbols";
-import { q } from "@/lib/format";
+import { editable, q } from "@/lib/format";
 import type { FosterTerm } from "@/lib/soa/foster";
 import { faultSequence } from "@/lib/soa/sequence";
 import { waveformRiseVI } from "@/lib/soa/thermal-waveform";
@@ -157,7 +157,7 @@ export function SequenceBuilder({ create, detail }: BuilderProps & { detail: Pro
       inductance: "",
       clamp: "clamp",
       clampVoltage: "",
-      breakdown: lowestBreakdown === null ? "" : String(lowestBreakdown),
+      breakdown: editable(lowestBreakdown, "plain"),
       restarts: "1",
       pause: "",
     },

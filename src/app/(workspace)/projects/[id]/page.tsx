@@ -68,7 +68,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
       >
         <ProjectData
           project={project}
-          viewer={{ id: member.user.id, role: member.role }}
+          viewer={{ id: member.user.id, managesMeasurements: member.can("measurement.manage") }}
           canWrite={canWrite}
           canMeasure={member.can("measurement.write")}
           people={members.map((m) => ({ id: m.userId, name: m.name }))}

@@ -67,7 +67,7 @@ async function EditPartView({
           avalancheEnergy: editable(part.avalancheEnergy),
           avalancheCurrent: editable(part.avalancheCurrent),
           avalancheBreakdown: editable(part.avalancheBreakdown),
-          unitCost: part.unitCost === null ? "" : String(part.unitCost),
+          unitCost: editable(part.unitCost, "plain"),
           currency: part.currency ?? "",
           datasheetRevision: part.datasheetRevision ?? "",
           notes: part.notes ?? "",
