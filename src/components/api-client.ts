@@ -70,15 +70,6 @@ export async function requestJson<T = unknown>(
   throw new ApiError(res.status, code, message, error?.details?.fieldErrors ?? {});
 }
 
-/** A change (POST, PATCH, DELETE) through `requestJson`. */
-export function sendJson<T = unknown>(
-  method: "POST" | "PATCH" | "DELETE",
-  url: string,
-  body?: unknown,
-): Promise<T> {
-  return requestJson<T>(method, url, body);
-}
-
 /** A message for any thrown value, for inline display. */
 export function messageOf(error: unknown): string {
   if (error instanceof ApiError) return error.message;

@@ -2,7 +2,7 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { type ReactNode, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
 
 /**
@@ -58,7 +58,7 @@ export function ConfirmDelete({
 export function useRowDelete(path: (id: string) => string, refresh: () => Promise<unknown>) {
   const [confirming, setConfirming] = useState<string | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", path(id)),
+    mutationFn: (id: string) => requestJson("DELETE", path(id)),
     onSuccess: async () => {
       setConfirming(null);
       await refresh();

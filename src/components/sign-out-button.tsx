@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, messageOf, sendJson } from "./api-client";
+import { ApiError, messageOf, requestJson } from "./api-client";
 import { Button, InlineAlert } from "./form";
 
 /** Ends this browser's session and goes to the sign-in page. */
@@ -23,7 +23,7 @@ export function SignOutButton({
     setPending(true);
     setError(null);
     try {
-      await sendJson("POST", "/api/auth/sign-out");
+      await requestJson("POST", "/api/auth/sign-out");
     } catch (e) {
       // A session that has already ended is as good as signed out.
       if (!(e instanceof ApiError && e.status === 401)) {

@@ -6,7 +6,7 @@ import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { z } from "zod";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { TextAreaField } from "@/components/library/fields";
@@ -64,7 +64,7 @@ export function DecisionForm({
 
   async function onSubmit(values: DecisionValues) {
     try {
-      const { decision } = await sendJson<{ decision: { id: string } }>(
+      const { decision } = await requestJson<{ decision: { id: string } }>(
         "POST",
         `/api/projects/${projectId}/decisions`,
         { ...values, idempotencyKey: idempotencyKey.current },

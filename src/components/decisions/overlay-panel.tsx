@@ -5,8 +5,8 @@ import type { ColumnDef } from "@tanstack/react-table";
 import dynamic from "next/dynamic";
 import { type ReactNode, useMemo, useState } from "react";
 import { AfterLoad } from "@/components/after-load";
-import { messageOf } from "@/components/api-client";
-import { callJson } from "@/components/library/api";
+import { messageOf, requestJson } from "@/components/api-client";
+
 import { LoadingBox } from "@/components/loading-box";
 import { useChartColours } from "@/components/soa-chart/chart-colours";
 import { ChartTable } from "@/components/soa-chart/chart-table";
@@ -57,7 +57,7 @@ export function OverlayPanel({ check, title }: { check: ProjectCheck; title: str
         policy,
       ),
       queryFn: () =>
-        callJson<LimitsAnswer>(
+        requestJson<LimitsAnswer>(
           "GET",
           `/api/parts/${candidate.partId}/limits?${new URLSearchParams({
             caseTemp: String(group.caseTemp),

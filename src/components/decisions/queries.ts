@@ -1,7 +1,8 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { callJson } from "@/components/library/api";
+import { requestJson } from "@/components/api-client";
+
 import { checkFreshFor } from "@/components/projects/api";
 import { type AuditEvent, type DecisionSummary, decisionKeys, type ProjectCheck } from "./types";
 
@@ -12,7 +13,7 @@ import { type AuditEvent, type DecisionSummary, decisionKeys, type ProjectCheck 
 export function useCheck(projectId: string) {
   return useQuery({
     queryKey: decisionKeys.check(projectId),
-    queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
+    queryFn: () => requestJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
     staleTime: checkFreshFor,
   });
 }
@@ -20,14 +21,15 @@ export function useCheck(projectId: string) {
 export function useDecisions(projectId: string) {
   return useQuery({
     queryKey: decisionKeys.decisions(projectId),
-    queryFn: () => callJson<{ decisions: DecisionSummary[] }>("GET", `/api/projects/${projectId}/decisions`),
+    queryFn: () =>
+      requestJson<{ decisions: DecisionSummary[] }>("GET", `/api/projects/${projectId}/decisions`),
   });
 }
 
 export function useAudit(projectId: string) {
   return useQuery({
     queryKey: decisionKeys.audit(projectId),
-    queryFn: () => callJson<{ events: AuditEvent[] }>("GET", `/api/projects/${projectId}/audit`),
+    queryFn: () => requestJson<{ events: AuditEvent[] }>("GET", `/api/projects/${projectId}/audit`),
     staleTime: 0,
   });
 }

@@ -5,11 +5,6 @@ import { ApiError, requestJson } from "@/components/api-client";
 
 export { RejectedFile } from "@/components/api-client";
 
-/** GET, PUT and POST with the shared typed failure (kept under this name for the library's callers). */
-export function callJson<T>(method: "GET" | "PUT" | "POST", url: string, body?: unknown): Promise<T> {
-  return requestJson<T>(method, url, body);
-}
-
 /** PUTs a file to a presigned storage URL, reporting progress from 0 to 1. */
 export function putFile(url: string, file: File, onProgress: (fraction: number) => void): Promise<void> {
   return new Promise((resolve, reject) => {
@@ -52,7 +47,7 @@ export async function uploadToStorage(
   purpose: "curve-set" | "zth",
   onProgress: (fraction: number) => void,
 ): Promise<string> {
-  const ticket = await callJson<UploadTicket>("POST", `/api/parts/${partId}/uploads`, {
+  const ticket = await requestJson<UploadTicket>("POST", `/api/parts/${partId}/uploads`, {
     fileName: file.name,
     size: file.size,
     purpose,

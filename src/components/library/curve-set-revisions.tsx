@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
 import { type ReactNode, useTransition } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
 import { Button } from "@/components/form";
@@ -101,7 +101,7 @@ export function CurveSetRevisions({
   const queryClient = useQueryClient();
   const [refreshing, startTransition] = useTransition();
   const activate = useMutation({
-    mutationFn: (setId: string) => sendJson("POST", `/api/parts/${partId}/curve-sets/${setId}/activate`),
+    mutationFn: (setId: string) => requestJson("POST", `/api/parts/${partId}/curve-sets/${setId}/activate`),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: ["part-limits", partId] });
       startTransition(() => router.refresh());

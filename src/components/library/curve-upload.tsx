@@ -3,11 +3,11 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { messageOf } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { FormMessage } from "@/components/form";
 import { curveCsvHelp } from "@/lib/csv/curve-set-help";
 import type { CsvIssue } from "@/lib/csv/issues";
-import { callJson, RejectedFile, uploadToStorage } from "./api";
+import { RejectedFile, uploadToStorage } from "./api";
 import { CsvDropzone } from "./csv-dropzone";
 import { IssueTable, UploadProgress } from "./upload-progress";
 
@@ -44,7 +44,7 @@ export function CurveUpload({ partId }: { partId: string }) {
         setPhase({ kind: "uploading", fileName, fraction }),
       );
       setPhase({ kind: "checking", fileName });
-      const result = await callJson<Registered>("POST", `/api/parts/${partId}/curve-sets`, { uploadId });
+      const result = await requestJson<Registered>("POST", `/api/parts/${partId}/curve-sets`, { uploadId });
       setPhase({
         kind: "accepted",
         fileName,

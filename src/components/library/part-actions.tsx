@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, linkButtonClass } from "@/components/form";
 import { type OpenFinding, VerifyPart } from "./verify-part";
 
@@ -36,7 +36,7 @@ export function PartActions({
   const [verifying, setVerifying] = useState(false);
   const refresh = () => startTransition(() => router.refresh());
   const archive = useMutation({
-    mutationFn: (value: boolean) => sendJson("POST", `/api/parts/${partId}/archive`, { archived: value }),
+    mutationFn: (value: boolean) => requestJson("POST", `/api/parts/${partId}/archive`, { archived: value }),
     onSuccess: () => {
       setConfirming(false);
       refresh();

@@ -1,6 +1,6 @@
 "use client";
 
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { lazyResolver } from "@/components/api-form";
 import { SaveFormShell, useSaveForm } from "@/components/save-form";
 import type { PartInput, partSchema } from "@/lib/library/part-schema";
@@ -76,8 +76,8 @@ export function PartForm({
     codes: { "conflict:part": "partNumber" },
     save: async (values) => {
       const { part } = partId
-        ? await sendJson<{ part: { id: string } }>("PATCH", `/api/parts/${partId}`, values)
-        : await sendJson<{ part: { id: string } }>("POST", "/api/parts", values);
+        ? await requestJson<{ part: { id: string } }>("PATCH", `/api/parts/${partId}`, values)
+        : await requestJson<{ part: { id: string } }>("POST", "/api/parts", values);
       return `/library/${part.id}`;
     },
   });

@@ -4,13 +4,14 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import type { ColumnDef, SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { requestJson } from "@/components/api-client";
 import { DataTable } from "@/components/data-table";
 import { Button } from "@/components/form";
 import { queryStatus } from "@/components/query-status";
 import { useUrlState } from "@/components/use-url-state";
 import { inUnit, money } from "@/lib/format";
 import { technologyLabels } from "@/lib/library/technologies";
-import { callJson } from "./api";
+
 import {
   apiQuery,
   hasFilters,
@@ -120,7 +121,7 @@ export function PartTable({ canWrite }: { canWrite: boolean }) {
   const state = readState(params);
   const query = useQuery({
     queryKey: ["parts", apiQuery(state)],
-    queryFn: () => callJson<PartPage>("GET", `/api/parts?${apiQuery(state)}`),
+    queryFn: () => requestJson<PartPage>("GET", `/api/parts?${apiQuery(state)}`),
     placeholderData: keepPreviousData,
   });
 

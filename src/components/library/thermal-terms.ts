@@ -2,10 +2,10 @@
 
 import { useRouter } from "next/navigation";
 import { type ClipboardEvent, useMemo, useState, useTransition } from "react";
-import { ApiError, messageOf } from "@/components/api-client";
+import { ApiError, messageOf, requestJson } from "@/components/api-client";
 import { editable, q } from "@/lib/format";
 import { fosterSchema } from "@/lib/library/part-schema";
-import { callJson } from "./api";
+
 import { parsePastedRows } from "./paste-rows";
 
 // The thermal editor's state: the Foster terms as typed, their errors, and saving them (PUT /api/parts/:id/thermal).
@@ -124,7 +124,7 @@ export function useThermalTerms(partId: string, model: ThermalModel) {
     setCellErrors({});
     setSaving(true);
     try {
-      const result = await callJson<ThermalModel>("PUT", `/api/parts/${partId}/thermal`, {
+      const result = await requestJson<ThermalModel>("PUT", `/api/parts/${partId}/thermal`, {
         terms: rows.map(termOf),
       });
       accept(

@@ -1,12 +1,12 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
+import { requestJson } from "@/components/api-client";
 import type { ChartFinding, ChartInterpolated } from "@/components/soa-chart";
 import { useDebounced } from "@/components/use-debounced";
 import { q } from "@/lib/format";
 import type { Limits as ComputedLimits } from "@/lib/library/limits";
 import type { BetweenCurves, Flag } from "@/lib/soa/types";
 import { parseQuantity } from "@/lib/soa/units";
-import { callJson } from "./api";
 
 /**
  * GET /api/parts/:id/limits: the engine's limits (the curves, derated for the case temperature, and the line for a
@@ -50,7 +50,7 @@ export function usePartLimits(partId: string, curveSetId: string, refCaseTemp: n
   if (width) search.set("width", width);
   const limits = useQuery({
     queryKey: ["part-limits", partId, curveSetId, search.toString()],
-    queryFn: () => callJson<Limits>("GET", `/api/parts/${partId}/limits?${search}`),
+    queryFn: () => requestJson<Limits>("GET", `/api/parts/${partId}/limits?${search}`),
     placeholderData: keepPreviousData,
   });
   const data = limits.data;

@@ -2,7 +2,7 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button } from "@/components/form";
 import { type FindingLike, findingKey } from "@/lib/library/finding-key";
 
@@ -33,7 +33,7 @@ export function VerifyPart({
   const [tried, setTried] = useState(false);
   const verify = useMutation({
     mutationFn: () =>
-      sendJson("POST", `/api/parts/${partId}/verify`, {
+      requestJson("POST", `/api/parts/${partId}/verify`, {
         acceptances: findings.map((f) => ({ key: findingKey(f), reason: reasons[findingKey(f)] ?? "" })),
       }),
     onSuccess: onVerified,

@@ -1,10 +1,10 @@
 "use client";
 
 import { useState } from "react";
-import { messageOf } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { FormMessage } from "@/components/form";
 import type { CsvIssue } from "@/lib/csv/issues";
-import { callJson, RejectedFile, uploadToStorage } from "./api";
+import { RejectedFile, uploadToStorage } from "./api";
 import { CsvDropzone } from "./csv-dropzone";
 import { Sym } from "./symbols";
 import type { ThermalModel } from "./thermal-terms";
@@ -41,7 +41,7 @@ export function ZthFit({
         setFit({ kind: "uploading", fraction }),
       );
       setFit({ kind: "fitting" });
-      const result = await callJson<ThermalModel>("POST", `/api/parts/${partId}/thermal/fit`, {
+      const result = await requestJson<ThermalModel>("POST", `/api/parts/${partId}/thermal/fit`, {
         uploadId,
         maxTerms,
       });

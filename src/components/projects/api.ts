@@ -1,5 +1,6 @@
 import { type QueryClient, useQuery } from "@tanstack/react-query";
-import { callJson } from "@/components/library/api";
+import { requestJson } from "@/components/api-client";
+
 import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
 import type { CsvIssue } from "@/lib/csv/issues";
 import type { MeasurementColumns } from "@/lib/csv/measurements";
@@ -166,7 +167,7 @@ export const checkFreshFor = 10_000;
 export function useProject(projectId: string) {
   return useQuery({
     queryKey: projectKeys.detail(projectId),
-    queryFn: () => callJson<ProjectDetail>("GET", `/api/projects/${projectId}`),
+    queryFn: () => requestJson<ProjectDetail>("GET", `/api/projects/${projectId}`),
   });
 }
 
@@ -179,7 +180,7 @@ export function useProject(projectId: string) {
 export function useProjectCheck(projectId: string) {
   return useQuery({
     queryKey: projectKeys.check(projectId),
-    queryFn: () => callJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
+    queryFn: () => requestJson<ProjectCheck>("GET", `/api/projects/${projectId}/check`),
     staleTime: checkFreshFor,
     // While a capture's job runs, ask again until its results are in.
     refetchInterval: (query) => (query.state.data?.pendingCaptures?.length ? 1500 : false),

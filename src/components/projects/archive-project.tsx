@@ -3,7 +3,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
 import { invalidateProject } from "./api";
 
@@ -15,7 +15,7 @@ export function ArchiveProject({ projectId, archived }: { projectId: string; arc
   const [confirming, setConfirming] = useState(false);
   const archive = useMutation({
     mutationFn: (value: boolean) =>
-      sendJson("POST", `/api/projects/${projectId}/archive`, { archived: value }),
+      requestJson("POST", `/api/projects/${projectId}/archive`, { archived: value }),
     onSuccess: async () => {
       setConfirming(false);
       await invalidateProject(queryClient, projectId);

@@ -2,7 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { lazyResolver } from "@/components/api-form";
 import { SaveFormShell, useSaveForm } from "@/components/save-form";
 import { invalidateProject } from "./api";
@@ -39,8 +39,8 @@ export function ProjectForm({
     fields: projectFields,
     save: async (values) => {
       const { project } = projectId
-        ? await sendJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
-        : await sendJson<{ project: { id: string } }>("POST", "/api/projects", values);
+        ? await requestJson<{ project: { id: string } }>("PATCH", `/api/projects/${projectId}`, values)
+        : await requestJson<{ project: { id: string } }>("POST", "/api/projects", values);
       await invalidateProject(queryClient, project.id);
       return `/projects/${project.id}`;
     },

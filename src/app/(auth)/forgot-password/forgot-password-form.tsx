@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, useApiForm } from "@/components/api-form";
 import { FormMessage } from "@/components/form";
 
@@ -11,7 +11,7 @@ export function ForgotPasswordForm() {
     schema: () => import("@/lib/auth/schemas").then((m) => m.forgotPasswordSchema),
     defaultValues: { email: "" },
     send: async (values) => {
-      await sendJson("POST", "/api/auth/forgot-password", values);
+      await requestJson("POST", "/api/auth/forgot-password", values);
       setSentTo(values.email);
     },
   });

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, useApiForm } from "@/components/api-form";
 import { TextField } from "@/components/form";
 import { linkClass } from "../_components/auth-heading";
@@ -15,7 +15,7 @@ export function SignInForm({ next }: { next: string | null }) {
     schema: () => import("@/lib/auth/schemas").then((m) => m.signInSchema),
     defaultValues: { email: "", password: "" },
     send: async (values) => {
-      await sendJson("POST", "/api/auth/sign-in", values);
+      await requestJson("POST", "/api/auth/sign-in", values);
       setLeaving(true);
       router.replace(next ?? "/app");
       router.refresh();

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { ApiFormShell, EmailField, NewPasswordField, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
 
@@ -11,7 +11,7 @@ export function SignUpForm() {
     schema: () => import("@/lib/auth/schemas").then((m) => m.signUpSchema),
     defaultValues: { name: "", email: "", password: "", workspaceName: "" },
     send: async (values) => {
-      await sendJson("POST", "/api/auth/sign-up", values);
+      await requestJson("POST", "/api/auth/sign-up", values);
       setSentTo(values.email);
     },
   });

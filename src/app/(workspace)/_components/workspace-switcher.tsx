@@ -3,7 +3,7 @@
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import type { Role } from "@/db/schema";
 import { roleLabels } from "@/lib/auth/permissions";
 
@@ -28,7 +28,7 @@ export function WorkspaceSwitcher({
   const [navigating, startTransition] = useTransition();
   const active = workspaces.find((w) => w.id === current);
   const switchTo = useMutation({
-    mutationFn: (workspaceId: string) => sendJson("POST", "/api/workspaces/switch", { workspaceId }),
+    mutationFn: (workspaceId: string) => requestJson("POST", "/api/workspaces/switch", { workspaceId }),
     onSuccess: () =>
       startTransition(() => {
         router.push("/app");

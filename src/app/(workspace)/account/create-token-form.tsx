@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { useApiForm } from "@/components/api-form";
 import { Button, FormMessage, TextField } from "@/components/form";
 import { TokenSecret } from "./token-secret";
@@ -22,7 +22,7 @@ export function CreateTokenForm({ workspaceName }: { workspaceName: string }) {
     schema: () => import("@/lib/auth/schemas").then((m) => m.createTokenSchema),
     defaultValues: { name: "" },
     send: async (values) => {
-      const { token } = await sendJson<{ token: CreatedToken }>("POST", "/api/account/tokens", values);
+      const { token } = await requestJson<{ token: CreatedToken }>("POST", "/api/account/tokens", values);
       setCreated(token);
       reset();
       startTransition(() => router.refresh());

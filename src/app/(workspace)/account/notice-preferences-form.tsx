@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 
@@ -43,7 +43,7 @@ export function NoticePreferencesForm({ preferences }: { preferences: Preference
   const onSubmit = handleSubmit(async (values) => {
     setSaved(false);
     try {
-      const data = await sendJson<{ preferences: Preferences }>("PATCH", "/api/account/notices", values);
+      const data = await requestJson<{ preferences: Preferences }>("PATCH", "/api/account/notices", values);
       reset(data.preferences);
       setSaved(true);
     } catch (error) {

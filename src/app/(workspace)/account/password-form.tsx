@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { AccountHint, ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
 
@@ -12,7 +12,7 @@ export function PasswordForm({ email }: { email: string }) {
     defaultValues: { currentPassword: "", newPassword: "" },
     send: async (values) => {
       setChanged(false);
-      await sendJson("POST", "/api/account/password", values);
+      await requestJson("POST", "/api/account/password", values);
       reset();
       setChanged(true);
     },

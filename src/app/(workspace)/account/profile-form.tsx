@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { ApiFormShell, useApiForm } from "@/components/api-form";
 import { FormMessage, TextField } from "@/components/form";
 
@@ -15,7 +15,7 @@ export function ProfileForm({ name, email }: { name: string; email: string }) {
     defaultValues: { name },
     send: async (values) => {
       setSaved(false);
-      await sendJson("PATCH", "/api/account/profile", values);
+      await requestJson("PATCH", "/api/account/profile", values);
       reset(values);
       setSaved(true);
       startTransition(() => router.refresh());

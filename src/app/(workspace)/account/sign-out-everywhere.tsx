@@ -3,7 +3,7 @@
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
 
 /** Ends every session of the account, this one too: for a lost laptop or a shared bench PC. */
@@ -11,7 +11,7 @@ export function SignOutEverywhere() {
   const router = useRouter();
   const [confirming, setConfirming] = useState(false);
   const signOut = useMutation({
-    mutationFn: () => sendJson("POST", "/api/auth/sign-out-everywhere"),
+    mutationFn: () => requestJson("POST", "/api/auth/sign-out-everywhere"),
     onSuccess: () => {
       router.replace("/sign-in");
       router.refresh();

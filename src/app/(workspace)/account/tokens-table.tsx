@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { ConfirmStep } from "@/components/confirm-step";
 import { actionsColumn, DataTable, dateColumn, textColumn } from "@/components/data-table";
 import { DateText } from "@/components/date-text";
@@ -67,7 +67,7 @@ export function TokensTable({ tokens }: { tokens: Token[] }) {
   const [refreshing, startTransition] = useTransition();
   const [confirming, setConfirming] = useState<string | null>(null);
   const revoke = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", `/api/account/tokens/${id}`),
+    mutationFn: (id: string) => requestJson("DELETE", `/api/account/tokens/${id}`),
     onSuccess: () => startTransition(() => router.refresh()),
     onSettled: () => setConfirming(null),
   });

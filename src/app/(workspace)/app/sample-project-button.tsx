@@ -3,7 +3,7 @@
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, InlineAlert } from "@/components/form";
 
 /** Adds the invented sample project in one click and opens it. */
@@ -11,7 +11,7 @@ export function SampleProjectButton({ variant = "primary" }: { variant?: "primar
   const router = useRouter();
   const [navigating, startTransition] = useTransition();
   const add = useMutation({
-    mutationFn: () => sendJson<{ project: { id: string } }>("POST", "/api/projects/sample"),
+    mutationFn: () => requestJson<{ project: { id: string } }>("POST", "/api/projects/sample"),
     onSuccess: ({ project }) => startTransition(() => router.push(`/projects/${project.id}`)),
   });
   return (

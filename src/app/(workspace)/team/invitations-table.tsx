@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { useRouter } from "next/navigation";
 import { useTransition } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { actionsColumn, DataTable, dateColumn, textColumn } from "@/components/data-table";
 import { Button } from "@/components/form";
 import { rowAlert } from "@/components/table";
@@ -39,11 +39,11 @@ export function InvitationsTable({ invitations }: { invitations: Invitation[] })
   const urlOf = (id: string) => `/api/team/invitations/${id}`;
   const refresh = () => startTransition(() => router.refresh());
   const resend = useMutation({
-    mutationFn: (id: string) => sendJson("POST", `${urlOf(id)}/resend`),
+    mutationFn: (id: string) => requestJson("POST", `${urlOf(id)}/resend`),
     onSuccess: refresh,
   });
   const revoke = useMutation({
-    mutationFn: (id: string) => sendJson("DELETE", urlOf(id)),
+    mutationFn: (id: string) => requestJson("DELETE", urlOf(id)),
     onSuccess: refresh,
   });
   // Only one of the two holds a row at a time: each action clears the other.

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { useForm } from "react-hook-form";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { Button, FormMessage, SelectField, TextField } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { roleSummaries } from "@/components/role-text";
@@ -30,7 +30,7 @@ export function InviteForm({ roles }: { roles: Role[] }) {
   const onSubmit = handleSubmit(async (values) => {
     setSentTo(null);
     try {
-      await sendJson("POST", "/api/team/invitations", values);
+      await requestJson("POST", "/api/team/invitations", values);
       setSentTo(values.email);
       reset({ email: "", role: values.role });
       startTransition(() => router.refresh());

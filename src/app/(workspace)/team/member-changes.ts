@@ -3,7 +3,7 @@
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import type { Role } from "@/db/schema";
 import type { CachedMember } from "@/lib/auth/auth-cache";
 import { can } from "@/lib/auth/permissions";
@@ -36,7 +36,7 @@ export function useMemberChanges(selfId: string) {
 
   const changeAccess = useMutation({
     mutationFn: ({ member, next }: AccessChange) =>
-      sendJson("PATCH", urlOf(member), { role: next.role, leadRights: next.leadRights }),
+      requestJson("PATCH", urlOf(member), { role: next.role, leadRights: next.leadRights }),
     onSuccess: (_data, { member, next, undo }) => {
       const current = accessOf(member);
       setProposed(null);
@@ -54,7 +54,7 @@ export function useMemberChanges(selfId: string) {
     },
   });
   const remove = useMutation({
-    mutationFn: (member: Member) => sendJson("DELETE", urlOf(member)),
+    mutationFn: (member: Member) => requestJson("DELETE", urlOf(member)),
     onSuccess: () => startTransition(() => router.refresh()),
     onSettled: () => setConfirming(null),
   });

@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Caution } from "@/components/caution";
 import { Button, FormMessage } from "@/components/form";
 import { IssueTable } from "@/components/library/upload-progress";
@@ -35,7 +35,7 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
 
   const preview = useMutation({
     mutationFn: (body: { text: string; mapping: ColumnMapping }) =>
-      sendJson<MeasurementPreview>("POST", `/api/projects/${projectId}/measurements/preview`, body),
+      requestJson<MeasurementPreview>("POST", `/api/projects/${projectId}/measurements/preview`, body),
     onSuccess: (data, body) => {
       setPreviewed({ ...body, preview: data });
       setSaved(null);
@@ -46,7 +46,7 @@ export function PasteMeasurements({ projectId }: { projectId: string }) {
   const withProblems = previewed ? previewed.preview.rows.length - valid.length : 0;
   const save = useMutation({
     mutationFn: (fields: SaveFields) =>
-      sendJson<{ saved: string[]; notified: number }>("POST", `/api/projects/${projectId}/measurements`, {
+      requestJson<{ saved: string[]; notified: number }>("POST", `/api/projects/${projectId}/measurements`, {
         rows: valid.map((r) => ({
           label: r.label,
           kind: r.kind,

@@ -2,7 +2,7 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { FormMessage } from "@/components/form";
 import { BUILDER_NAMES } from "@/lib/vocabulary";
 import { invalidateProject, type ProjectDetail } from "../api";
@@ -31,7 +31,7 @@ export function BuilderPanel({ projectId, detail }: { projectId: string; detail:
 
   async function create(built: BuiltCase) {
     setCreated(null);
-    await sendJson("POST", `/api/projects/${projectId}/fault-cases`, built);
+    await requestJson("POST", `/api/projects/${projectId}/fault-cases`, built);
     await invalidateProject(queryClient, projectId);
     setCreated(built.name);
   }

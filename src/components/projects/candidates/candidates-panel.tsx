@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { type ReactNode, useState } from "react";
-import { messageOf, sendJson } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { actionsColumn, DataTable } from "@/components/data-table";
 import { Button, FormMessage } from "@/components/form";
 import { Section } from "@/components/page-header";
@@ -79,7 +79,7 @@ export function CandidatesPanel({
   const [done, setDone] = useState<string | null>(null);
   const add = useMutation({
     mutationFn: (part: { id: string; partNumber: string }) =>
-      sendJson("POST", `/api/projects/${projectId}/candidates`, { partId: part.id }),
+      requestJson("POST", `/api/projects/${projectId}/candidates`, { partId: part.id }),
     onSuccess: async (_data, part) => {
       setDone(`${part.partNumber} added; the results below include it.`);
       await invalidateProject(queryClient, projectId);
@@ -87,7 +87,7 @@ export function CandidatesPanel({
   });
   const remove = useMutation({
     mutationFn: (part: { id: string; partNumber: string }) =>
-      sendJson("DELETE", `/api/projects/${projectId}/candidates/${part.id}`),
+      requestJson("DELETE", `/api/projects/${projectId}/candidates/${part.id}`),
     onSuccess: async (_data, part) => {
       setDone(`${part.partNumber} removed from the candidates.`);
       await invalidateProject(queryClient, projectId);

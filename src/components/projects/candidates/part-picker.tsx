@@ -2,8 +2,8 @@
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { type KeyboardEvent, useId, useState } from "react";
-import { messageOf } from "@/components/api-client";
-import { callJson } from "@/components/library/api";
+import { messageOf, requestJson } from "@/components/api-client";
+
 import { useDebounced } from "@/components/use-debounced";
 import { q } from "@/lib/format";
 
@@ -38,7 +38,7 @@ export function PartPicker({
   const search = useQuery({
     queryKey: ["part-picker", sent],
     queryFn: () =>
-      callJson<{ rows: PartOption[] }>(
+      requestJson<{ rows: PartOption[] }>(
         "GET",
         `/api/parts?${new URLSearchParams({ q: sent, pageSize: "12" })}`,
       ),

@@ -1,5 +1,6 @@
 import { useQuery } from "@tanstack/react-query";
-import { callJson } from "@/components/library/api";
+import { requestJson } from "@/components/api-client";
+
 import type { CaptureSummary } from "@/db/schema";
 import type { PulseResult } from "@/lib/soa/types";
 
@@ -71,7 +72,7 @@ export const captureKeys = {
 export function useCaptures(projectId: string) {
   return useQuery({
     queryKey: captureKeys.list(projectId),
-    queryFn: () => callJson<{ captures: CaptureListItem[] }>("GET", `/api/projects/${projectId}/captures`),
+    queryFn: () => requestJson<{ captures: CaptureListItem[] }>("GET", `/api/projects/${projectId}/captures`),
     refetchInterval: (query) =>
       query.state.data?.captures.some((c) => inProgress(c.status)) ? FOLLOW_MS : false,
   });
@@ -80,7 +81,7 @@ export function useCaptures(projectId: string) {
 export function useCapture(projectId: string, captureId: string | null) {
   return useQuery({
     queryKey: captureKeys.detail(projectId, captureId ?? ""),
-    queryFn: () => callJson<CaptureDetail>("GET", `/api/projects/${projectId}/captures/${captureId}`),
+    queryFn: () => requestJson<CaptureDetail>("GET", `/api/projects/${projectId}/captures/${captureId}`),
     enabled: captureId !== null,
     refetchInterval: (query) => {
       const data = query.state.data;

@@ -3,9 +3,9 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { type FileRejection, useDropzone } from "react-dropzone";
-import { messageOf } from "@/components/api-client";
+import { messageOf, requestJson } from "@/components/api-client";
 import { Button, FormMessage } from "@/components/form";
-import { callJson, putFile } from "@/components/library/api";
+import { putFile } from "@/components/library/api";
 import { UploadProgress } from "@/components/library/upload-progress";
 import {
   type CapturePreview,
@@ -68,7 +68,7 @@ export function CaptureUpload({
   async function upload(file: File, preview: CapturePreview, picked: PickedCapture) {
     setPhase({ kind: "uploading", file, fraction: 0 });
     try {
-      const ticket = await callJson<{ uploadId: string; url: string }>(
+      const ticket = await requestJson<{ uploadId: string; url: string }>(
         "POST",
         `/api/projects/${projectId}/uploads`,
         {
@@ -79,7 +79,7 @@ export function CaptureUpload({
       );
       await putFile(ticket.url, file, (fraction) => setPhase({ kind: "uploading", file, fraction }));
       setPhase({ kind: "checking", file });
-      const result = await callJson<RegisteredCapture>("POST", `/api/projects/${projectId}/captures`, {
+      const result = await requestJson<RegisteredCapture>("POST", `/api/projects/${projectId}/captures`, {
         uploadId: ticket.uploadId,
         ...picked,
       });

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage } from "@/components/form";
 import { applyServerErrors, fieldBinder } from "@/components/form-errors";
 import { TextAreaField } from "@/components/library/fields";
@@ -50,8 +50,8 @@ export function FaultCaseForm({
   const onSubmit = handleSubmit(async (values) => {
     try {
       const body = editing ? { ...values, origin: editing.origin } : values;
-      if (editing) await sendJson("PATCH", `/api/projects/${projectId}/fault-cases/${editing.id}`, body);
-      else await sendJson("POST", `/api/projects/${projectId}/fault-cases`, body);
+      if (editing) await requestJson("PATCH", `/api/projects/${projectId}/fault-cases/${editing.id}`, body);
+      else await requestJson("POST", `/api/projects/${projectId}/fault-cases`, body);
       await invalidateProject(queryClient, projectId);
       if (!editing) reset(blankFaultCase);
       onDone(values.name);

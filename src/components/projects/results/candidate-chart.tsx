@@ -3,8 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { AfterLoad } from "@/components/after-load";
-import { messageOf } from "@/components/api-client";
-import { callJson } from "@/components/library/api";
+import { messageOf, requestJson } from "@/components/api-client";
+
 import { LoadingBox } from "@/components/loading-box";
 import type { ChartPulse } from "@/components/soa-chart";
 import { InstabilityNote } from "@/components/soa-chart/instability-note";
@@ -84,7 +84,7 @@ export function CandidateChart({ candidate, check }: { candidate: CheckedCandida
       ...projectKeys.limits(candidate.partId, candidate.curveSetId, caseTemp, betweenCurves),
       focus?.width ?? null,
     ],
-    queryFn: () => callJson<CandidateLimits>("GET", `/api/parts/${candidate.partId}/limits?${search}`),
+    queryFn: () => requestJson<CandidateLimits>("GET", `/api/parts/${candidate.partId}/limits?${search}`),
     enabled: candidate.hasCurves,
   });
   const data = limits.data;

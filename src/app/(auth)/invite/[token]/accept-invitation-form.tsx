@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { sendJson } from "@/components/api-client";
+import { requestJson } from "@/components/api-client";
 import { AccountHint, ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { TextField } from "@/components/form";
 import { linkClass } from "../../_components/auth-heading";
@@ -31,7 +31,7 @@ export function AcceptInvitationForm({
       ),
     defaultValues: { name: "", password: "" },
     send: async (values) => {
-      await sendJson("POST", "/api/invitations/accept", {
+      await requestJson("POST", "/api/invitations/accept", {
         token,
         password: values.password,
         ...(existing ? {} : { name: values.name }),

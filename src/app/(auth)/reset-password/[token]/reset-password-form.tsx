@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, sendJson } from "@/components/api-client";
+import { ApiError, requestJson } from "@/components/api-client";
 import { ApiFormShell, NewPasswordField, useApiForm } from "@/components/api-form";
 import { linkClass } from "../../_components/auth-heading";
 
@@ -15,7 +15,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     schema: () => import("@/lib/auth/schemas").then((m) => m.resetPasswordFormSchema),
     defaultValues: { password: "" },
     send: async (values) => {
-      await sendJson("POST", "/api/auth/reset-password", { token, password: values.password });
+      await requestJson("POST", "/api/auth/reset-password", { token, password: values.password });
       setLeaving(true);
       router.replace("/sign-in?reset=done");
     },

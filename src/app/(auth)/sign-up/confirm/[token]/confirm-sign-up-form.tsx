@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { ApiError, sendJson } from "@/components/api-client";
+import { ApiError, requestJson } from "@/components/api-client";
 import { Button, FormActions, FormMessage } from "@/components/form";
 import { linkClass } from "../../../_components/auth-heading";
 
@@ -19,7 +19,7 @@ export function ConfirmSignUpForm({ token }: { token: string }) {
     setPending(true);
     setProblem(null);
     try {
-      await sendJson("POST", "/api/auth/sign-up/confirm", { token });
+      await requestJson("POST", "/api/auth/sign-up/confirm", { token });
       router.replace("/app");
       router.refresh();
     } catch (error) {
