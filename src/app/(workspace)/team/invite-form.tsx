@@ -1,46 +1,40 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { useForm } from "react-hook-form";
 import { requestJson } from "@/components/api-client";
+import { useApiForm } from "@/components/api-form";
 import { Button, FormMessage, SelectField, TextField } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { roleSummaries } from "@/components/role-text";
 import type { Role } from "@/db/schema";
 import { roleLabels } from "@/lib/auth/permissions";
-import { inviteSchema } from "@/lib/auth/schemas";
 
 export function InviteForm({ roles }: { roles: Role[] }) {
   const router = useRouter();
   const [refreshing, startTransition] = useTransition();
   const [sentTo, setSentTo] = useState<string | null>(null);
   const defaultRole: Role = roles.includes("engineer") ? "engineer" : roles[0];
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    watch,
-    formState: { errors, isSubmitting },
-  } = useForm({ resolver: zodResolver(inviteSchema), defaultValues: { email: "", role: defaultRole } });
-  const role = watch("role");
-
-  const onSubmit = handleSubmit(async (values) => {
-    setSentTo(null);
-    try {
+  const { onSubmit, register, reset, watch, formState } = useApiForm<{ email: string; role: Role }>({
+    schema: () => import("@/lib/auth/schemas").then((m) => m.inviteSchema),
+    defaultValues: { email: "", role: defaultRole },
+    send: async (values) => {
+      setSentTo(null);
       await requestJson("POST", "/api/team/invitations", values);
       setSentTo(values.email);
       reset({ email: "", role: values.role });
       startTransition(() => router.refresh());
-    } catch (error) {
+    },
+    onError: (error, setError) => {
       applyServerErrors(error, setError, ["email", "role"], {
         "conflict:member": "email",
         "forbidden:role": "role",
       });
-    }
+      return true;
+    },
   });
+  const { errors, isSubmitting } = formState;
+  const role = watch("role");
 
   return (
     <form onSubmit={onSubmit} noValidate className="rounded-md border border-line bg-panel p-4">
