@@ -7,7 +7,12 @@ import { memberships, parts, pendingUploads, projects, users, workspaces } from 
 import { hashPassword } from "../src/lib/auth/password";
 import { processCaptureJob } from "../src/lib/capture/job";
 import { registerCapture } from "../src/lib/capture/store";
-import { demoCaptureCsv, demoCaptureFileName, demoCaptureName } from "../src/lib/demo/capture";
+import {
+  demoCaptureCsv,
+  demoCaptureFileName,
+  demoCaptureMapping,
+  demoCaptureName,
+} from "../src/lib/demo/capture";
 import { DEMO_SCENARIO } from "../src/lib/demo/parts";
 import { demoProjectName } from "../src/lib/demo/project";
 import { ensureDemoParts, insertDemoPulses } from "../src/lib/demo/sample-project";
@@ -100,18 +105,7 @@ async function seedCapture(workspaceId: string, technicianId: string): Promise<v
     caller: { workspaceId, user: { id: technicianId, email: technician.email, name: technician.name } },
     upload,
     name: demoCaptureName,
-    mapping: {
-      skipRows: 2,
-      header: true,
-      time: 0,
-      voltage: 1,
-      current: 2,
-      timeScale: 1,
-      vScale: 1,
-      vOffset: 0,
-      iScale: 1,
-      iOffset: 0,
-    },
+    mapping: demoCaptureMapping,
     boardSerial: "TW-03",
     probe: "100:1 differential, 50 A current probe",
     note: "Invented demo capture.",

@@ -1,3 +1,4 @@
+import type { CaptureMapping } from "@/lib/capture/parse";
 import { inrushPulses } from "@/lib/soa/builders";
 
 // The demo project's scope capture (invented): the pre-charge ramp into the motor controller's capacitors with
@@ -6,6 +7,20 @@ import { inrushPulses } from "@/lib/soa/builders";
 
 export const demoCaptureName = "Pre-charge ramp with controller idle load, board TW-03";
 export const demoCaptureFileName = "TW-03-precharge.csv";
+
+/** How the demo capture's columns read: two preamble rows, a header, then time, V_DS and I_D in SI units. */
+export const demoCaptureMapping: CaptureMapping = {
+  skipRows: 2,
+  header: true,
+  time: 0,
+  voltage: 1,
+  current: 2,
+  timeScale: 1,
+  vScale: 1,
+  vOffset: 0,
+  iScale: 1,
+  iOffset: 0,
+};
 
 /** Deterministic noise in [−1, 1] (a linear congruential sequence), so the demo is the same every time. */
 function noise(seed: number): () => number {
