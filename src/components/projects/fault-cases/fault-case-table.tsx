@@ -5,6 +5,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import { Fragment, type ReactNode, useState } from "react";
 import { useRowDelete } from "@/components/confirm-delete";
 import { actionsColumn, DataTable } from "@/components/data-table";
+import { DisclosureChevron } from "@/components/disclosure-chevron";
 import { Button } from "@/components/form";
 import { Sym } from "@/components/library/symbols";
 import { q, repeatOf, repeatText } from "@/lib/format";
@@ -107,15 +108,7 @@ function faultCaseColumns({
             onClick={() => toggle(row.id)}
             className="inline-flex items-center gap-1.5 text-left font-medium hover:text-accent"
           >
-            <svg
-              width="10"
-              height="10"
-              viewBox="0 0 10 10"
-              aria-hidden="true"
-              className={`text-ink-faint transition-transform ${open === row.id ? "rotate-90" : ""}`}
-            >
-              <path d="M3 1.5 6.5 5 3 8.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
-            </svg>
+            <DisclosureChevron open={open === row.id} />
             {row.name}
           </button>
           {row.origin ? (

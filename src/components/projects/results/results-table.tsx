@@ -3,6 +3,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import { useEffect, useRef, useState } from "react";
 import { DataTable } from "@/components/data-table";
+import { DisclosureChevron } from "@/components/disclosure-chevron";
 import { Sym } from "@/components/library/symbols";
 import { VerdictBadge } from "@/components/verdict-shape";
 import { factor, q, repeatText } from "@/lib/format";
@@ -44,15 +45,7 @@ function PulseName({
       onClick={onToggle}
       className="inline-flex max-w-60 items-center gap-1.5 text-left hover:text-accent"
     >
-      <svg
-        width="10"
-        height="10"
-        viewBox="0 0 10 10"
-        aria-hidden="true"
-        className={`shrink-0 text-ink-faint transition-transform ${expanded ? "rotate-90" : ""}`}
-      >
-        <path d="M3 1.5 6.5 5 3 8.5" fill="none" stroke="currentColor" strokeWidth="1.4" />
-      </svg>
+      <DisclosureChevron open={expanded} />
       <span className="min-w-0">
         <span className="block truncate font-medium">{pulse.name}</span>
         <span className="block truncate text-[11px] leading-4 text-ink-faint">{shapeNote(pulse)}</span>
