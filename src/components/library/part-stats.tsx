@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { DateText } from "@/components/date-text";
+import { StatBlock } from "@/components/stat-blocks";
 import { q } from "@/lib/format";
 import { PartStatus } from "./part-status";
 import { Sym } from "./symbols";
@@ -17,14 +18,8 @@ export interface PartFigures {
   verifiedAt: Date | string | null;
 }
 
-function Stat({ label, value, note }: { label: ReactNode; value: ReactNode; note?: ReactNode }) {
-  return (
-    <div className="rounded-md border border-line bg-panel px-4 py-3">
-      <dt className="text-xs text-ink-muted">{label}</dt>
-      <dd className="num mt-1 font-mono text-lg leading-7 text-ink">{value}</dd>
-      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
-    </div>
-  );
+function Stat(props: { label: ReactNode; value: ReactNode; note?: ReactNode }) {
+  return <StatBlock {...props} numeric />;
 }
 
 /** The part's key figures, and who verified it when. */

@@ -1,17 +1,12 @@
 import type { ReactNode } from "react";
 import { Sym } from "@/components/library/symbols";
+import { StatBlock } from "@/components/stat-blocks";
 import type { CaptureSummary } from "@/db/schema";
 import { count, q } from "@/lib/format";
 import { explainFlag } from "@/lib/soa/explain";
 
-function Figure({ label, value, note }: { label: ReactNode; value: string; note?: string }) {
-  return (
-    <div className="rounded-md border border-line bg-panel px-3 py-2">
-      <dt className="text-xs text-ink-muted">{label}</dt>
-      <dd className="num mt-0.5 font-mono text-sm">{value}</dd>
-      {note ? <dd className="text-xs text-ink-faint">{note}</dd> : null}
-    </div>
-  );
+function Figure(props: { label: ReactNode; value: string; note?: string }) {
+  return <StatBlock {...props} numeric compact />;
 }
 
 /** A processed capture's key figures: samples, length, peaks, energy and its equal-energy rectangle. */
