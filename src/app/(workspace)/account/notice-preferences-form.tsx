@@ -1,10 +1,9 @@
 "use client";
 
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { requestJson } from "@/components/api-client";
-import { Button, FormActions, FormMessage } from "@/components/form";
-import { applyServerErrors } from "@/components/form-errors";
+import { ApiFormShell, useApiForm } from "@/components/api-form";
+import { FormMessage } from "@/components/form";
 
 interface Preferences {
   failingEvidence: boolean;
@@ -32,27 +31,25 @@ const choices: { key: keyof Preferences; label: string; hint: string }[] = [
 
 export function NoticePreferencesForm({ preferences }: { preferences: Preferences }) {
   const [saved, setSaved] = useState(false);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors, isSubmitting, isDirty },
-  } = useForm({ defaultValues: preferences });
-
-  const onSubmit = handleSubmit(async (values) => {
-    setSaved(false);
-    try {
+  const { register, reset, formState, shell } = useApiForm<Preferences>({
+    schema: () => import("@/lib/auth/schemas").then((m) => m.noticePreferencesSchema),
+    defaultValues: preferences,
+    send: async (values) => {
+      setSaved(false);
       const data = await requestJson<{ preferences: Preferences }>("PATCH", "/api/account/notices", values);
       reset(data.preferences);
       setSaved(true);
-    } catch (error) {
-      applyServerErrors(error, setError, []);
-    }
+    },
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="rounded-md border border-line bg-panel p-4">
+    <ApiFormShell
+      {...shell}
+      className="rounded-md border border-line bg-panel p-4"
+      label="Save notices"
+      disabled={!formState.isDirty}
+      status={saved ? <FormMessage tone="done">Notice choices saved.</FormMessage> : null}
+    >
       <fieldset>
         <legend className="text-sm font-medium text-ink">E-mail me about</legend>
         <div className="mt-2 space-y-3">
@@ -77,13 +74,6 @@ export function NoticePreferencesForm({ preferences }: { preferences: Preference
       <p className="mt-3 text-xs text-ink-muted">
         Invitations, password reset and sign-up e-mails are about your account and always sent.
       </p>
-      <FormMessage tone="error">{errors.root?.server?.message}</FormMessage>
-      {saved ? <FormMessage tone="done">Notice choices saved.</FormMessage> : null}
-      <FormActions>
-        <Button type="submit" variant="primary" pending={isSubmitting} disabled={!isDirty}>
-          Save notices
-        </Button>
-      </FormActions>
-    </form>
+    </ApiFormShell>
   );
 }
