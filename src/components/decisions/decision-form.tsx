@@ -1,29 +1,20 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
-import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
-import { useForm, useWatch } from "react-hook-form";
-import { z } from "zod";
+import { useWatch } from "react-hook-form";
 import { requestJson } from "@/components/api-client";
+import { lazyResolver } from "@/components/api-form";
 import { Button, FormActions, FormMessage, SelectField } from "@/components/form";
-import { applyServerErrors } from "@/components/form-errors";
 import { TextAreaField } from "@/components/library/fields";
+import { useSaveForm } from "@/components/save-form";
 import { percent } from "@/lib/format";
 import type { MatrixRow } from "@/lib/projects/matrix";
+import type { SignDecisionValues } from "@/lib/projects/schema";
 import { verdictWords } from "@/lib/vocabulary";
 import { CandidateLibraryStatus } from "./candidate-status";
 import { bestPassing } from "./matrix-model";
 import { type CheckedCandidate, decisionKeys } from "./types";
-
-/** The same rules as POST /api/projects/:id/decisions. */
-const decisionSchema = z.object({
-  partId: z.string().min(1, { message: "Choose a candidate" }),
-  rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
-});
-
-type DecisionValues = z.infer<typeof decisionSchema>;
 
 /**
  * A lead signs the choice: the candidate (the best one that passes every pulse, unless changed) and why. The
@@ -40,47 +31,45 @@ export function DecisionForm({
   ranking: MatrixRow[];
   onCancel: () => void;
 }) {
-  const router = useRouter();
   const client = useQueryClient();
-  const form = useForm<DecisionValues>({
-    resolver: zodResolver(decisionSchema),
-    defaultValues: { partId: bestPassing(ranking) ?? "", rationale: "" },
-  });
-  const { errors, isSubmitting, isSubmitSuccessful } = form.formState;
-  const partId = useWatch({ control: form.control, name: "partId" });
-  const chosen = ranking.find((r) => r.partId === partId);
-  const byId = new Map(candidates.map((c) => [c.partId, c]));
-  const frame = useRef<HTMLFormElement>(null);
   // One key per opened form: a double click or a resent request is answered 409, not signed twice.
   const idempotencyKey = useRef(crypto.randomUUID());
-  // Signing on an unverified draft is allowed, but only after the lead has read the warning and said so.
-  const [acknowledged, setAcknowledged] = useState(false);
-  const chosenDraft = chosen ? byId.get(chosen.partId)?.status !== "verified" : false;
-  // Opened from the title bar: bring the form into view and put the caret in the rationale.
-  useEffect(() => {
-    frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
-    form.setFocus("rationale");
-  }, [form]);
-
-  async function onSubmit(values: DecisionValues) {
-    try {
+  const form = useSaveForm<SignDecisionValues, SignDecisionValues>({
+    resolver: lazyResolver(() => import("@/lib/projects/schema").then((m) => m.signDecisionSchema)),
+    defaultValues: { partId: bestPassing(ranking) ?? "", rationale: "" },
+    fields: ["partId", "rationale"],
+    codes: { "invalid:candidate": "partId" },
+    save: async (values) => {
       const { decision } = await requestJson<{ decision: { id: string } }>(
         "POST",
         `/api/projects/${projectId}/decisions`,
         { ...values, idempotencyKey: idempotencyKey.current },
       );
       await client.invalidateQueries({ queryKey: decisionKeys.decisions(projectId) });
-      router.push(`/projects/${projectId}/decisions/${decision.id}`);
-    } catch (error) {
-      applyServerErrors(error, form.setError, ["partId", "rationale"], { "invalid:candidate": "partId" });
-    }
-  }
+      return `/projects/${projectId}/decisions/${decision.id}`;
+    },
+  });
+  const { errors, isSubmitting, isSubmitSuccessful } = form.formState;
+  const { pending } = form.shell;
+  const partId = useWatch({ control: form.control, name: "partId" });
+  const chosen = ranking.find((r) => r.partId === partId);
+  const byId = new Map(candidates.map((c) => [c.partId, c]));
+  const frame = useRef<HTMLFormElement>(null);
+  // Signing on an unverified draft is allowed, but only after the lead has read the warning and said so.
+  const [acknowledged, setAcknowledged] = useState(false);
+  const chosenDraft = chosen ? byId.get(chosen.partId)?.status !== "verified" : false;
+  // Opened from the title bar: bring the form into view and put the caret in the rationale.
+  const { setFocus } = form;
+  useEffect(() => {
+    frame.current?.scrollIntoView({ block: "nearest", behavior: "smooth" });
+    setFocus("rationale");
+  }, [setFocus]);
 
   return (
     <form
       ref={frame}
       id="record-decision"
-      onSubmit={form.handleSubmit(onSubmit)}
+      onSubmit={form.shell.onSubmit}
       noValidate
       aria-labelledby="record-decision-title"
       className="rounded-md border border-line border-l-2 border-l-accent bg-panel p-5"
@@ -135,7 +124,7 @@ export function DecisionForm({
         <Button
           type="submit"
           variant="primary"
-          pending={isSubmitting || isSubmitSuccessful}
+          pending={pending || isSubmitSuccessful}
           disabled={chosenDraft && !acknowledged}
         >
           Sign decision

@@ -155,3 +155,12 @@ export const anyFaultCaseSchema = z.discriminatedUnion("kind", [
 ]);
 
 export type FaultCaseInput = z.input<typeof faultCaseSchema>;
+
+/** A lead's signed choice (POST /api/projects/:id/decisions): the candidate and why. */
+export const signDecisionSchema = z.object({
+  partId: z.string().min(1, { message: "Choose a candidate" }),
+  rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
+  /** One per signing form: a double submission is answered 409. */
+  idempotencyKey: z.string().min(8).max(100).optional(),
+});
+export type SignDecisionValues = z.input<typeof signDecisionSchema>;

@@ -1,15 +1,8 @@
-import { z } from "zod";
 import { route } from "@/lib/auth/guard";
 import { json, parseBody } from "@/lib/http";
 import { listDecisions, signDecision } from "@/lib/projects/decisions";
 import { loadProject, loadWritableProject } from "@/lib/projects/projects";
-
-const signSchema = z.object({
-  partId: z.string().min(1, { message: "Choose a candidate" }),
-  rationale: z.string().trim().min(10, { message: "Say why, in a sentence or more" }).max(4000),
-  /** One per signing form: a double submission is answered 409. */
-  idempotencyKey: z.string().min(8).max(100).optional(),
-});
+import { signDecisionSchema } from "@/lib/projects/schema";
 
 /** GET /api/projects/:id/decisions: the project's decision history, newest first. */
 export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_req, caller, { id }) => {
@@ -20,7 +13,7 @@ export const GET = route<{ id: string }>({ action: "workspace.read" }, async (_r
 /** POST /api/projects/:id/decisions { partId, rationale }: a lead signs the choice; the evaluation is frozen with it. */
 export const POST = route<{ id: string }>({ action: "decision.sign" }, async (req, caller, { id }) => {
   const project = await loadWritableProject(caller, id);
-  const input = await parseBody(req, signSchema);
+  const input = await parseBody(req, signDecisionSchema);
   const decision = await signDecision(caller, project, input);
   return json(
     { decision: { id: decision.id, chosenLabel: decision.chosenLabel, signedAt: decision.signedAt } },
