@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { type ClipboardEvent, useMemo, useState, useTransition } from "react";
-import { ApiError, messageOf, requestJson } from "@/components/api-client";
+import { ApiError, requestJson } from "@/components/api-client";
+import { useSaveAction } from "@/components/use-save-action";
 import { editable, q } from "@/lib/format";
 import { fosterSchema } from "@/lib/library/part-schema";
 
@@ -29,7 +30,7 @@ export interface TermRow {
   stored?: { r: number; tau: number; rText: string; tauText: string };
 }
 
-export type Message = { tone: "error" | "done"; text: string };
+export type { Message } from "@/components/use-save-action";
 
 /** Most terms a model keeps. */
 export const MAX_TERMS = 8;
@@ -60,8 +61,7 @@ export function useThermalTerms(partId: string, model: ThermalModel) {
   const [rows, setRows] = useState<TermRow[]>(() => toRows(model.foster));
   const [saved, setSaved] = useState(model);
   const [cellErrors, setCellErrors] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<Message | null>(null);
-  const [saving, setSaving] = useState(false);
+  const { saving, message, setMessage, run } = useSaveAction();
 
   const parsed = useMemo(() => fosterSchema.safeParse({ terms: rows.map(termOf) }), [rows]);
   const preview = parsed.success && parsed.data.terms.length ? parsed.data.terms : (saved.foster ?? []);
@@ -122,25 +122,26 @@ export function useThermalTerms(partId: string, model: ThermalModel) {
       return;
     }
     setCellErrors({});
-    setSaving(true);
-    try {
-      const result = await requestJson<ThermalModel>("PUT", `/api/parts/${partId}/thermal`, {
-        terms: rows.map(termOf),
-      });
-      accept(
-        result,
-        result.foster
-          ? "Thermal model saved. The part is back in draft until a lead verifies it."
-          : "Thermal model removed.",
-      );
-    } catch (error) {
-      if (error instanceof ApiError && Object.keys(error.fieldErrors).length) {
-        setCellErrors(Object.fromEntries(Object.entries(error.fieldErrors).map(([k, v]) => [k, v[0]])));
-      }
-      setMessage({ tone: "error", text: messageOf(error) });
-    } finally {
-      setSaving(false);
-    }
+    await run(
+      async () => {
+        const result = await requestJson<ThermalModel>("PUT", `/api/parts/${partId}/thermal`, {
+          terms: rows.map(termOf),
+        });
+        accept(
+          result,
+          result.foster
+            ? "Thermal model saved. The part is back in draft until a lead verifies it."
+            : "Thermal model removed.",
+        );
+      },
+      {
+        onError: (error) => {
+          if (error instanceof ApiError && Object.keys(error.fieldErrors).length) {
+            setCellErrors(Object.fromEntries(Object.entries(error.fieldErrors).map(([k, v]) => [k, v[0]])));
+          }
+        },
+      },
+    );
   }
 
   return {

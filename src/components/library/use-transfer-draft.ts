@@ -1,6 +1,7 @@
 import { useRouter } from "next/navigation";
 import { useMemo, useState, useTransition } from "react";
 import { messageOf, requestJson } from "@/components/api-client";
+import { useSaveAction } from "@/components/use-save-action";
 import type { TransferRow } from "@/db/schema";
 import { parseTransferCsv } from "@/lib/csv/transfer";
 import { editable } from "@/lib/format";
@@ -44,8 +45,7 @@ export function useTransferDraft(partId: string, transfer: TransferRow | null) {
   const [saved, setSaved] = useState(transfer);
   const [text, setText] = useState(() => toText(transfer));
   const [fileName, setFileName] = useState<string | undefined>(transfer?.source.fileName);
-  const [message, setMessage] = useState<{ tone: "error" | "done"; text: string } | null>(null);
-  const [saving, setSaving] = useState(false);
+  const { saving, message, setMessage, run } = useSaveAction();
   const preview = useMemo(() => previewOf(text), [text]);
 
   function edit(next: string) {
@@ -65,46 +65,39 @@ export function useTransferDraft(partId: string, transfer: TransferRow | null) {
     });
   }
 
-  async function save() {
-    setSaving(true);
+  function save() {
     setMessage(null);
-    try {
-      const result = await requestJson<{ transfer: TransferRow; findings: TransferFinding[] }>(
-        "PUT",
-        `/api/parts/${partId}/transfer`,
-        { text, ...(fileName ? { fileName } : {}) },
-      );
-      setSaved(result.transfer);
-      setText(toText(result.transfer));
-      setMessage({
-        tone: "done",
-        text: "Transfer characteristics saved. The part is back in draft until a lead verifies it.",
-      });
-      startTransition(() => router.refresh());
-    } catch (error) {
-      setMessage({
-        tone: "error",
-        text: error instanceof RejectedFile ? `Not saved: ${error.issues[0]?.message}` : messageOf(error),
-      });
-    } finally {
-      setSaving(false);
-    }
+    return run(
+      async () => {
+        const result = await requestJson<{ transfer: TransferRow; findings: TransferFinding[] }>(
+          "PUT",
+          `/api/parts/${partId}/transfer`,
+          { text, ...(fileName ? { fileName } : {}) },
+        );
+        setSaved(result.transfer);
+        setText(toText(result.transfer));
+        setMessage({
+          tone: "done",
+          text: "Transfer characteristics saved. The part is back in draft until a lead verifies it.",
+        });
+        startTransition(() => router.refresh());
+      },
+      {
+        say: (error) =>
+          error instanceof RejectedFile ? `Not saved: ${error.issues[0]?.message}` : messageOf(error),
+      },
+    );
   }
 
-  async function remove() {
-    setSaving(true);
-    try {
+  function remove() {
+    return run(async () => {
       await requestJson("DELETE", `/api/parts/${partId}/transfer`);
       setSaved(null);
       setText("");
       setFileName(undefined);
       setMessage({ tone: "done", text: "Transfer characteristics removed." });
       startTransition(() => router.refresh());
-    } catch (error) {
-      setMessage({ tone: "error", text: messageOf(error) });
-    } finally {
-      setSaving(false);
-    }
+    });
   }
 
   return {

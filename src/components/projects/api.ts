@@ -1,10 +1,10 @@
 import { type QueryClient, useQuery } from "@tanstack/react-query";
 import { requestJson } from "@/components/api-client";
-
 import type { ChartCurve, ChartFinding } from "@/components/soa-chart";
 import type { CsvIssue } from "@/lib/csv/issues";
 import type { MeasurementColumns } from "@/lib/csv/measurements";
 import type { ProjectPulse } from "@/lib/projects/evaluate";
+import type { PulseColumns, StoredShape } from "@/lib/projects/pulse-columns";
 import type { BetweenCurves, Flag, PulseResult, Repeat, Verdict } from "@/lib/soa/types";
 
 // The project screens' view of our route handlers: the JSON they answer with (dates as ISO text), their query
@@ -66,15 +66,9 @@ export interface FaultCaseRecord {
   createdAt: string;
 }
 
-export interface MeasuredRecord {
+export interface MeasuredRecord extends PulseColumns {
   id: string;
   label: string;
-  kind: "rect" | "triangle";
-  v: number;
-  i: number;
-  duration: number;
-  repeatPeriod: number | null;
-  repeatCount: number | null;
   note: string | null;
   boardSerial: string | null;
   probe: string | null;
@@ -135,7 +129,7 @@ export interface CandidateLimits {
 export interface PreviewRow {
   row: number;
   label: string;
-  kind: "rect" | "triangle";
+  kind: StoredShape;
   v: number | null;
   i: number | null;
   duration: number | null;

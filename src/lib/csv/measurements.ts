@@ -29,6 +29,7 @@
 
 import { z } from "zod";
 import { count, q } from "@/lib/format";
+import type { StoredShape } from "@/lib/projects/pulse-columns";
 import type { Repeat } from "@/lib/soa/types";
 import { type CellValue, readNumber } from "./cell";
 import { splitHeader } from "./header";
@@ -104,7 +105,7 @@ export interface MeasurementRow {
   /** 1-based row of the pasted text. */
   row: number;
   label: string;
-  kind: "rect" | "triangle";
+  kind: StoredShape;
   v: number;
   i: number;
   duration: number;
@@ -206,7 +207,7 @@ const EXAMPLES: Readonly<Record<(typeof REQUIRED)[number], string>> = {
   width: "width, duration, t_p or pulse width",
 };
 
-const SHAPES: Readonly<Record<string, "rect" | "triangle">> = {
+const SHAPES: Readonly<Record<string, StoredShape>> = {
   rect: "rect",
   rectangle: "rect",
   rectangular: "rect",
@@ -341,7 +342,7 @@ function readRow(
     );
   }
 
-  let kind: "rect" | "triangle" = "rect";
+  let kind: StoredShape = "rect";
   const shapeCell = cellOf(layout.shape);
   if (shapeCell !== "") {
     const shape = SHAPES[shapeCell.toLowerCase()];

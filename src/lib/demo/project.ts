@@ -1,5 +1,5 @@
 import type { PulseOrigin } from "@/db/schema";
-import { pulseColumns } from "@/lib/projects/pulse-columns";
+import { type PulseColumns, pulseColumns } from "@/lib/projects/pulse-columns";
 import { currentLimitFault, inrushPulses } from "@/lib/soa/builders";
 import type { Pulse } from "@/lib/soa/types";
 import { DEMO_SCENARIO } from "./parts";
@@ -10,21 +10,13 @@ import { DEMO_SCENARIO } from "./parts";
 
 export const demoProjectName = "48 V battery disconnect, cargo bike";
 
-interface DemoFaultCase {
+interface DemoFaultCase extends PulseColumns {
   name: string;
-  kind: "rect" | "triangle";
-  v: number;
-  i: number;
-  duration: number;
-  repeatPeriod: number | null;
-  repeatCount: number | null;
   origin: PulseOrigin;
   notes: string;
 }
 
-function shaped(
-  pulse: Pulse,
-): Pick<DemoFaultCase, "kind" | "v" | "i" | "duration" | "repeatPeriod" | "repeatCount"> {
+function shaped(pulse: Pulse): PulseColumns {
   if (pulse.kind === "waveform" || pulse.kind === "avalanche") {
     throw new Error("demo fault cases are rectangles or triangles");
   }

@@ -1,5 +1,18 @@
 import type { Repeat } from "@/lib/soa/types";
 
+/** The shapes the fault-case and measured-pulse tables store as figures (others are recorded as samples). */
+export type StoredShape = "rect" | "triangle";
+
+/** A stored rectangle or triangle's columns, as `pulseColumns` writes them. */
+export interface PulseColumns {
+  kind: StoredShape;
+  v: number;
+  i: number;
+  duration: number;
+  repeatPeriod: number | null;
+  repeatCount: number | null;
+}
+
 /**
  * A rectangle or triangle as the fault-case and measured-pulse tables store it: its shape and figures, and its
  * repetition in two nullable columns (no period: a single pulse). `repeatOf` in `@/lib/format` reads it back.

@@ -3,13 +3,14 @@ import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
 import { Button, FormMessage } from "@/components/form";
 import { applyServerErrors } from "@/components/form-errors";
 import { q, repeatText } from "@/lib/format";
+import type { StoredShape } from "@/lib/projects/pulse-columns";
 import type { Repeat } from "@/lib/soa/types";
 import { shapeWords } from "@/lib/vocabulary";
 import { FigureList } from "./figures";
 
 /** The pulse a builder makes: a rectangle or triangle, an unclamped turn-off, or a fault sequence's samples. */
 export type BuiltPulse =
-  | { kind: "rect" | "triangle"; v: number; i: number; duration: number; repeat: Repeat | null }
+  | { kind: StoredShape; v: number; i: number; duration: number; repeat: Repeat | null }
   | { kind: "avalanche"; supply: number; current: number; inductance: number }
   | { kind: "waveform"; samples: { t: number[]; v: number[]; i: number[] } };
 

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { editable } from "@/lib/format";
+import type { StoredShape } from "@/lib/projects/pulse-columns";
 import { faultCaseSchema } from "@/lib/projects/schema";
 import type { FaultCaseRecord } from "../api";
 
@@ -7,7 +8,7 @@ import type { FaultCaseRecord } from "../api";
 
 export interface FaultCaseFormValues {
   name: string;
-  kind: "rect" | "triangle";
+  kind: StoredShape;
   v: string;
   i: string;
   duration: string;
