@@ -17,6 +17,9 @@ import {
 } from "./thermal-terms";
 import { ZthFit } from "./zth-fit";
 
+/** A fit's relative error in percent; unknown stays unknown ("—"), never a claimed 0 %. */
+const asPercent = (fraction: number | null | undefined) => (fraction == null ? null : fraction * 100);
+
 export type { ThermalModel } from "./thermal-terms";
 
 /**
@@ -270,8 +273,8 @@ function ThermalSummary({
         {source?.kind === "fitted" ? (
           <>
             Fitted to {source.fileName ?? "an uploaded Z_th curve"} (rings): RMS error{" "}
-            {q((source.rmsRelativeError ?? 0) * 100, "%")}, largest{" "}
-            {q((source.maxRelativeError ?? 0) * 100, "%")}.
+            {q(asPercent(source.rmsRelativeError), "%")}, largest {q(asPercent(source.maxRelativeError), "%")}
+            .
           </>
         ) : (
           "Typed or pasted terms."
