@@ -178,8 +178,7 @@ export async function putSamples(
 
 /** The project's capture, or a 404. */
 export async function getCapture(input: { projectId: string; captureId: string }): Promise<Capture> {
-  const { projectId, captureId } = input;
-  return loadProjectRow(captures, projectId, captureId);
+  return loadProjectRow(captures, input.projectId, input.captureId);
 }
 
 /** The project's captures, newest first, without their traces. */
