@@ -110,6 +110,8 @@ test("curve files upload without false findings; a thermal model added later upd
     await page.context().clearCookies();
     await signIn(page, lead);
     await page.goto(url);
+    // The findings come with the part's limits panel, which loads after the page: wait for them before counting.
+    await expect(findings.first()).toBeVisible();
     const open = await findings.count();
     await page.getByRole("button", { name: `Mark verified (${open} open)` }).click();
     const form = page.getByRole("form", { name: "Verify the part" });

@@ -7,7 +7,7 @@ import { benchCaptureCsv } from "./fixtures/capture-csv";
 import { linkIn, waitForMail } from "./pages/mail-inbox";
 
 // Scale-out, shown: two app instances of the same build against one database and one store, as behind a load
-// balancer. B is the suite's app (its capture workers on); A is another `next start` on the next free port of this
+// balancer. B is the suite's app (its capture workers on); A is another app process (src/server/app-main.ts) on the next free port of this
 // checkout's range, started here with JOB_WORKERS=0, so it only queues jobs. Both serve the same public origin
 // (APP_URL), which the load balancer would carry: requests to A say B's origin, as a browser would.
 
@@ -23,11 +23,16 @@ const contexts: APIRequestContext[] = [];
 test.beforeAll(async () => {
   test.setTimeout(120_000);
   const log = openSync(path.join(tmpdir(), `pulsefence-instance-a-${portA}.log`), "w");
-  instanceA = spawn(
-    path.join(process.cwd(), "node_modules/.bin/next"),
-    ["start", "--hostname", "127.0.0.1", "--port", String(portA)],
-    { env: { ...process.env, JOB_WORKERS: "0" }, stdio: ["ignore", log, log] },
-  );
+  instanceA = spawn(process.execPath, ["--import", "tsx", "src/server/app-main.ts"], {
+    env: {
+      ...process.env,
+      JOB_WORKERS: "0",
+      PORT: String(portA),
+      HOST: "127.0.0.1",
+      PF_COMPRESS_AT_PROXY: "1",
+    },
+    stdio: ["ignore", log, log],
+  });
   await expect
     .poll(async () => (await fetch(`${appA}/api/health`).catch(() => null))?.status ?? 0, {
       timeout: 90_000,
@@ -82,6 +87,24 @@ test("a session made on one instance works on the other", async () => {
   // What B wrote, A reads: one database.
   const listed: { projects: { name: string }[] } = await (await onA.get("/api/projects")).json();
   expect(listed.projects.map((p) => p.name)).toContain("Two instances");
+});
+
+test("a page kept in one instance's memory shows a change made on the other at its next load", async () => {
+  const { onA, onB } = await newPersonOnBothInstances();
+  const projectsPage = async () => {
+    const res = await onA.get("/projects");
+    expect(res.status()).toBe(200);
+    return { served: res.headers()["x-page-memory"], html: await res.text() };
+  };
+  // Asked again with nothing committed in between, A sends what it kept (background work, such as mail being
+  // sent, may commit in between: then it is asked once more).
+  await expect.poll(async () => (await projectsPage()).served, { intervals: [100] }).toBe("hit");
+  const created = await onB.post("/api/projects", { data: { name: "Made on B", caseTemp: 25 } });
+  expect(created.status(), await created.text()).toBe(201);
+  // The database's state moved with B's commit, so A renders the page again, with the new project.
+  const after = await projectsPage();
+  expect(after.served).toBe("miss");
+  expect(after.html).toContain("Made on B");
 });
 
 test("a capture job queued by instance A is finished by a worker of instance B", async () => {

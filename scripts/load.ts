@@ -8,6 +8,7 @@
 //   PF_LOAD_URL      the app, default http://127.0.0.1:<3000 + PF_PORT_OFFSET>
 //   PF_LOAD_SECONDS  seconds per check run (default 10); PF_MIXED_SECONDS, PF_MIXED_RATE (60, 200)
 //   PF_LOAD_ONLY     "check" or "mixed" to run one part, "spread" for only the spread mixed run
+//   PF_WARMUP_SECONDS  the mixed runs' warm-up at half rate (default 30; 0 measures a cold app)
 import autocannon from "autocannon";
 import { checkBody } from "./load/check-body";
 import { type Figures, figuresLine, Recorder } from "./load/figures";
@@ -18,6 +19,7 @@ const checkSeconds = Number(process.env.PF_LOAD_SECONDS ?? 10);
 const mixedSeconds = Number(process.env.PF_MIXED_SECONDS ?? 60);
 const mixedRate = Number(process.env.PF_MIXED_RATE ?? 200);
 const only = process.env.PF_LOAD_ONLY;
+const warmupSeconds = Number(process.env.PF_WARMUP_SECONDS ?? 30);
 /** A request still unanswered after this long counts as a timeout. */
 const TIMEOUT_S = 10;
 
@@ -162,7 +164,8 @@ async function mixedRun(cookie: string, token: string, inStep: boolean): Promise
     }));
   // A fresh process compiles and optimises its code over its first thousands of requests, as the check runs'
   // warm-up allows for; a server's figures are those of its working life.
-  await runTogether("warm-up (not counted)", spread(Math.round(mixedRate / 2), 30));
+  if (warmupSeconds > 0)
+    await runTogether("warm-up (not counted)", spread(Math.round(mixedRate / 2), warmupSeconds));
   // As the issue measured it: one autocannon at the whole rate, whose connections walk the cycle in step.
   if (inStep)
     await run(`mixed, ${mixedRate} req/s`, {

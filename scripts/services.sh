@@ -141,16 +141,16 @@ start_services() {
   start_mail
 }
 
-# Serves the built app as PF_APP_PROCESSES `next start` processes (default: one per core) on loopback ports behind
+# Serves the built app as PF_APP_PROCESSES app processes (default: one per core) on loopback ports behind
 # Debian's nginx on APP_PORT, which balances them (least connections, kept-alive upstream connections) and sheds
-# overload: more than PF_APP_INFLIGHT requests in flight per process (default 40) answer 503 with Retry-After at
+# overload: more than PF_APP_INFLIGHT requests in flight per process (default 64) answer 503 with Retry-After at
 # once instead of queueing into timeouts; /api/health is exempt, so it stays answerable under load. Bearer-token
 # POSTs to /api/v1/check, health and every API read (GET, HEAD) go to PF_API_PROCESSES lean API servers instead
 # (src/server/api-server.ts: the same handlers without the framework's request path; default one per core,
 # PF_API_INFLIGHT in flight each, default 64).
 # Logs go to $DATA_DIR/app-N.log, api-N.log and $DATA_DIR/nginx/. NEXT_DIST_DIR, if set, names the build served.
 start_app() {
-  local processes=${PF_APP_PROCESSES:-$(nproc)} inflight=${PF_APP_INFLIGHT:-40} k port servers=""
+  local processes=${PF_APP_PROCESSES:-$(nproc)} inflight=${PF_APP_INFLIGHT:-64} k port servers=""
   local api_processes=${PF_API_PROCESSES:-$(nproc)} api_inflight=${PF_API_INFLIGHT:-64} api_servers=""
   local conf_dir="$DATA_DIR/nginx"
   mkdir -p "$conf_dir/tmp"
@@ -167,8 +167,8 @@ start_app() {
   done
   for k in $(seq 1 "$processes"); do
     port=$((APP_BACKEND_PORT + k))
-    # Kept-alive connections outlive nginx's (60 s), so nginx never reuses one the app has just closed.
-    PF_COMPRESS_AT_PROXY=1 "$ROOT/node_modules/.bin/next" start --hostname 127.0.0.1 --port "$port" --keepAliveTimeout 75000 \
+    # The framework's handler behind the page memory (src/server/app-main.ts: `next start`'s work plus that).
+    (cd "$ROOT" && PORT=$port HOST=127.0.0.1 PF_COMPRESS_AT_PROXY=1 exec node --import tsx src/server/app-main.ts) \
       >"$DATA_DIR/app-$k.log" 2>&1 &
     PIDS+=($!)
     echo $! > "$DATA_DIR/app-$k.pid"

@@ -16,8 +16,8 @@ const { startOutboxWorker } = await import("@/lib/mail/outbox");
 startOutboxWorker();
 
 // The capture job workers (JOB_WORKERS per process; any number of processes or machines share the queue). On a stop
-// signal the queue stops taking jobs and lets running ones finish (up to 10 s) before the process exits; Next.js
-// exits at once on its own unless NEXT_MANUAL_SIG_HANDLE is set, and a job cut short is retried by another worker.
+// signal the queue stops taking jobs and lets running ones finish (up to 10 s) before the process exits (the app
+// process, src/server/app-main.ts, only stops taking connections); a job cut short is retried by another worker.
 const [{ env }, { startCaptureWorkers }, { stopJobQueue }, { storage }, { logError }] = await Promise.all([
   import("@/lib/env"),
   import("@/lib/capture/job"),

@@ -1,4 +1,5 @@
 import { type NextRequest, NextResponse } from "next/server";
+import { freshNonce } from "@/lib/nonce";
 
 /**
  * The content security policy of every page, with a fresh nonce per request: Next.js reads the policy from the
@@ -31,7 +32,7 @@ function storageOrigin(): string | null {
 
 /** Sets the page's security policy, and passes the requested path on so a sign-in redirect can come back to it. */
 export function proxy(req: NextRequest) {
-  const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
+  const nonce = freshNonce();
   const policy = contentSecurityPolicy(nonce, storageOrigin(), process.env.NODE_ENV === "development");
   const headers = new Headers(req.headers);
   headers.set("x-pathname", req.nextUrl.pathname + req.nextUrl.search);

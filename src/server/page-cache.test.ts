@@ -1,0 +1,277 @@
+// The page memory (page-cache.ts) over real HTTP, with a stand-in for the framework's handler that counts its
+// renders, and the database state it keys on (data-version.ts) against the real PostgreSQL.
+import { createServer, type IncomingMessage, type Server, type ServerResponse } from "node:http";
+import type { AddressInfo } from "node:net";
+import { gzipSync } from "node:zlib";
+import { afterAll, afterEach, beforeEach, describe, expect, it } from "vitest";
+import { createDb } from "@/db/client";
+import { freshNonce } from "@/lib/nonce";
+import { requireEnv } from "@/test/services";
+import { snapshotVersion } from "./data-version";
+import { type Handler, PAGE_CACHE_HEADER, requestKey, swapNonce, withPageCache } from "./page-cache";
+
+interface Stage {
+  renders: number;
+  version: string;
+  clock: number;
+  /** What the stand-in answers; by default a 200 HTML page carrying its nonce in the policy and body. */
+  answer: (req: IncomingMessage, res: ServerResponse, nonce: string) => Promise<void> | void;
+}
+
+const page = (nonce: string, text: string) =>
+  `<html><body><script nonce="${nonce}">1</script><p>${text}</p><script nonce="${nonce}">2</script></body></html>`;
+
+const htmlAnswer: Stage["answer"] = (req, res, nonce) => {
+  res.setHeader("content-security-policy", `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'`);
+  res.setHeader("content-type", "text/html; charset=utf-8");
+  res.setHeader("vary", "rsc");
+  // Written in pieces, as a streamed render is.
+  res.write(page(nonce, `render for ${req.url}`).slice(0, 20));
+  res.end(page(nonce, `render for ${req.url}`).slice(20));
+};
+
+let stage: Stage;
+let server: Server;
+let origin: string;
+
+beforeEach(async () => {
+  stage = { renders: 0, version: "1:1:", clock: 0, answer: htmlAnswer };
+  const handler: Handler = async (req, res) => {
+    stage.renders++;
+    await stage.answer(req, res, freshNonce());
+  };
+  server = createServer(
+    withPageCache(handler, {
+      version: async () => {
+        if (stage.version === "down") throw new Error("database unreachable");
+        return stage.version;
+      },
+      nonce: freshNonce,
+      ttlMs: 5_000,
+      maxBytes: 1024 * 1024,
+      maxPageBytes: 64 * 1024,
+      now: () => stage.clock,
+    }),
+  );
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+});
+afterEach(() => new Promise((resolve) => server.close(resolve)));
+
+async function get(path: string, headers: Record<string, string> = { cookie: "pf_session=a" }) {
+  const res = await fetch(`${origin}${path}`, { headers, redirect: "manual" });
+  const body = await res.text();
+  const nonce = /'nonce-([^']+)'/.exec(res.headers.get("content-security-policy") ?? "")?.[1] ?? "";
+  return { res, body, nonce, served: res.headers.get(PAGE_CACHE_HEADER) };
+}
+
+describe("page memory", () => {
+  it("sends a page asked again in the same database state without rendering it, with a fresh nonce", async () => {
+    const first = await get("/projects/1");
+    const second = await get("/projects/1");
+    expect([first.served, second.served, stage.renders]).toEqual(["miss", "hit", 1]);
+    expect(second.res.status).toBe(200);
+    expect(second.nonce).toMatch(/^[A-Za-z0-9+/]{48}$/);
+    expect(second.nonce).not.toBe(first.nonce);
+    // The same page, nonce for nonce; the old nonce is nowhere in it.
+    expect(second.body).toBe(first.body.split(first.nonce).join(second.nonce));
+    expect(second.body).not.toContain(first.nonce);
+    expect(second.body.split(second.nonce)).toHaveLength(3);
+    expect(second.res.headers.get("content-type")).toBe("text/html; charset=utf-8");
+    expect(second.res.headers.get("vary")).toBe("rsc");
+    expect(Number(second.res.headers.get("content-length"))).toBe(Buffer.byteLength(second.body));
+  });
+
+  it("renders again once anything was committed, and after the time a page is kept", async () => {
+    await get("/app");
+    stage.version = "1:2:";
+    expect((await get("/app")).served).toBe("miss");
+    expect((await get("/app")).served).toBe("hit");
+    stage.clock += 5_001;
+    expect((await get("/app")).served).toBe("miss");
+    expect(stage.renders).toBe(3);
+  });
+
+  it("keeps each request apart: path, query, cookie, user agent, scheme", async () => {
+    await get("/app");
+    await get("/app?tab=2");
+    await get("/app", { cookie: "pf_session=b" });
+    await get("/app", { cookie: "pf_session=a", "user-agent": "another browser" });
+    await get("/app", { cookie: "pf_session=a", "x-forwarded-proto": "https" });
+    expect(stage.renders).toBe(5);
+    expect((await get("/app?tab=2")).body).toContain("render for /app?tab=2");
+  });
+
+  it("always renders what is not a signed-in document request", async () => {
+    const always: [string, Record<string, string>][] = [
+      ["/app", {}], // no cookie: anonymous
+      ["/app", { cookie: "pf_session=a", rsc: "1" }], // the router's own request
+      ["/app", { cookie: "pf_session=a", "next-router-prefetch": "1" }],
+      ["/app?_rsc=abc", { cookie: "pf_session=a" }],
+      ["/api/projects", { cookie: "pf_session=a" }],
+    ];
+    for (const [path, headers] of always) {
+      await get(path, headers);
+      expect((await get(path, headers)).served).toBe("skip");
+    }
+    expect(stage.renders).toBe(always.length * 2);
+    const post = await fetch(`${origin}/app`, { method: "POST", headers: { cookie: "pf_session=a" } });
+    await post.text();
+    expect(post.headers.get(PAGE_CACHE_HEADER)).toBe("skip");
+  });
+
+  it("keeps no answer that is not a plain 200 HTML page with its nonce", async () => {
+    const answers: Stage["answer"][] = [
+      (_req, res) => {
+        res.statusCode = 307;
+        res.setHeader("location", "/sign-in");
+        res.end();
+      },
+      (req, res, nonce) => {
+        res.setHeader("set-cookie", "pf_session=renewed");
+        htmlAnswer(req, res, nonce);
+      },
+      (_req, res, nonce) => {
+        res.setHeader("content-security-policy", `script-src 'nonce-${nonce}'`);
+        res.setHeader("content-type", "text/html");
+        res.setHeader("content-encoding", "gzip");
+        res.end(gzipSync(page(nonce, "compressed")));
+      },
+      (_req, res) => {
+        res.setHeader("content-type", "text/html");
+        res.end("<p>no policy, no nonce</p>");
+      },
+      (_req, res) => {
+        res.writeHead(200, { "content-type": "application/json" });
+        res.end("{}");
+      },
+      (req, res, nonce) => {
+        res.statusCode = 404;
+        htmlAnswer(req, res, nonce);
+      },
+      // Larger than a page may be.
+      (_req, res, nonce) => {
+        res.setHeader("content-security-policy", `script-src 'nonce-${nonce}'`);
+        res.setHeader("content-type", "text/html");
+        res.end("x".repeat(65 * 1024));
+      },
+    ];
+    for (const answer of answers) {
+      stage.answer = answer;
+      stage.renders = 0;
+      stage.version = crypto.randomUUID();
+      await get("/app");
+      expect((await get("/app")).served).toBe("miss");
+      expect(stage.renders).toBe(2);
+    }
+  });
+
+  it("reads headers given to writeHead as well as those set before", async () => {
+    stage.answer = (_req, res, nonce) => {
+      res.setHeader("x-before", "1");
+      res.writeHead(200, {
+        "content-type": "text/html",
+        "content-security-policy": `script-src 'nonce-${nonce}'`,
+      });
+      res.end(page(nonce, "written at once"));
+    };
+    await get("/app");
+    const second = await get("/app");
+    expect(second.served).toBe("hit");
+    expect(second.res.headers.get("x-before")).toBe("1");
+    expect(second.body).toBe(page(second.nonce, "written at once"));
+  });
+
+  it("renders once for identical requests that arrive together; every one gets its own nonce", async () => {
+    stage.answer = async (req, res, nonce) => {
+      await new Promise((r) => setTimeout(r, 50));
+      htmlAnswer(req, res, nonce);
+    };
+    const answers = await Promise.all(Array.from({ length: 12 }, () => get("/projects/1/compare")));
+    expect(stage.renders).toBe(1);
+    expect(answers.filter((a) => a.served === "hit")).toHaveLength(11);
+    expect(new Set(answers.map((a) => a.nonce)).size).toBe(12);
+    for (const a of answers) expect(a.body).toBe(page(a.nonce, "render for /projects/1/compare"));
+  });
+
+  it("renders every request when the database cannot say its state", async () => {
+    stage.version = "down";
+    await get("/app");
+    expect((await get("/app")).served).toBe("skip");
+    expect(stage.renders).toBe(2);
+  });
+});
+
+describe("requestKey and swapNonce", () => {
+  it("keys a request by host, scheme, path, cookie and user agent", () => {
+    const req = {
+      method: "GET",
+      url: "/library/7?x=1",
+      headers: { cookie: "c=1", host: "h", "x-forwarded-proto": "https", "user-agent": "u" },
+    } as unknown as IncomingMessage;
+    expect(requestKey(req)).toBe("h\nhttps\n/library/7?x=1\nc=1\nu");
+  });
+
+  it("swaps every occurrence, at the edges too, and leaves a body without it as it is", () => {
+    const body = Buffer.from("NNa NN bNN");
+    expect(swapNonce(body, "NN", "MMM").toString()).toBe("MMMa MMM bMMM");
+    const none = Buffer.from("nothing here");
+    expect(swapNonce(none, "NN", "M")).toBe(none);
+  });
+});
+
+describe("database state (real PostgreSQL)", () => {
+  const url = requireEnv("DATABASE_URL");
+  const state = snapshotVersion(url);
+  const { sql } = createDb(url, { max: 3 });
+  afterAll(async () => {
+    await state.end();
+    await sql.end();
+  });
+
+  /** A connection of its own with a temporary table to write to: a write like any other, seen by no one else. */
+  async function writer() {
+    const connection = await sql.reserve();
+    await connection`create temporary table if not exists state_probe (n int)`;
+    return connection;
+  }
+
+  it("stays the same over reads and moves with every commit, seen from the first commit on", async () => {
+    const connection = await writer();
+    try {
+      const before = await state.version();
+      await sql`select count(*) from workspaces`;
+      expect(await state.version()).toBe(before);
+      // A transaction that writes: while it is open, pages rendered see the old data; once committed, the state
+      // is another, so nothing rendered before is sent again.
+      await connection`begin`;
+      await connection`insert into state_probe values (1)`;
+      const during = await state.version();
+      await connection`commit`;
+      const after = await state.version();
+      expect(after).not.toBe(during);
+      expect(after).not.toBe(before);
+      // A write rolled back moves it too (pages rendered again for nothing, never one missed).
+      await connection`begin`;
+      await connection`insert into state_probe values (2)`;
+      await connection`rollback`;
+      expect(await state.version()).not.toBe(after);
+    } finally {
+      connection.release();
+    }
+  });
+
+  it("moves when a transaction commits that was running when the state was read", async () => {
+    const connection = await writer();
+    try {
+      await connection`begin`;
+      await connection`insert into state_probe values (3)`;
+      const running = await state.version();
+      expect(await state.version()).toBe(running);
+      await connection`commit`;
+      expect(await state.version()).not.toBe(running);
+    } finally {
+      connection.release();
+    }
+  });
+});

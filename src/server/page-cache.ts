@@ -1,0 +1,203 @@
+import type { IncomingMessage, ServerResponse } from "node:http";
+import { LRUCache } from "lru-cache";
+
+// The page memory of one app process (issue: fast under load). A signed-in page is rendered again only when
+// something it could show has changed: each rendered page is kept under a key made of the database's state (see
+// data-version.ts: any committed change anywhere gives a new state), the whole request that asked for it (host,
+// path and query, every cookie, user agent) and nothing else, for at most a few seconds (the clock: "3 minutes ago",
+// a session's expiry). A second identical request in the same state gets the same page with a fresh nonce, the only
+// part of a page that must differ per response; the policy header and every nonce in the body are swapped.
+//
+// Only what is safe to replay is kept: full-document GETs with a cookie (never the router's own requests, RSC),
+// answered 200 in HTML, uncompressed, without Set-Cookie, with the content security policy's nonce. Requests for
+// a key being rendered wait for that render instead of rendering it again. When the database cannot say its
+// state, nothing is kept or served from memory.
+
+/** The response header that says how the page was served: "hit", "miss" or "skip". */
+export const PAGE_CACHE_HEADER = "x-page-memory";
+
+export type Handler = (req: IncomingMessage, res: ServerResponse) => Promise<void> | void;
+
+export interface PageCacheOptions {
+  /** The database's state: equal answers mean nothing was committed between them. */
+  version: () => Promise<string>;
+  /** Nonce for a replayed page (src/lib/nonce.ts). */
+  nonce: () => string;
+  /** How long a kept page may be served, ms. */
+  ttlMs: number;
+  /** Memory bound over all kept pages, bytes. */
+  maxBytes: number;
+  /** A page larger than this is not kept, bytes. */
+  maxPageBytes?: number;
+  now?: () => number;
+}
+
+interface Entry {
+  status: number;
+  headers: [string, string | string[]][];
+  body: Buffer;
+  nonce: string;
+  storedAt: number;
+}
+
+/** Headers the server sets per response; never replayed. */
+const PER_RESPONSE = new Set(["content-length", "transfer-encoding", "date", "connection", "keep-alive"]);
+/** Request headers of the router's own requests (RSC payloads, prefetches, server actions). */
+const ROUTER_HEADERS = [
+  "rsc",
+  "next-router-prefetch",
+  "next-router-state-tree",
+  "next-router-segment-prefetch",
+  "next-action",
+  "next-url",
+];
+const NONCE_IN_POLICY = /'nonce-([^']+)'/;
+
+/** What identifies a cacheable request, or null when the request must always be rendered. */
+export function requestKey(req: IncomingMessage): string | null {
+  if (req.method !== "GET") return null;
+  const url = req.url ?? "";
+  if (!url.startsWith("/") || url.startsWith("/api/") || url.startsWith("/_next/")) return null;
+  if (/[?&]_rsc=/.test(url)) return null;
+  const cookie = req.headers.cookie;
+  if (!cookie) return null;
+  if (ROUTER_HEADERS.some((name) => req.headers[name] !== undefined)) return null;
+  const h = req.headers;
+  return [h.host ?? "", h["x-forwarded-proto"] ?? "", url, cookie, h["user-agent"] ?? ""].join("\n");
+}
+
+/** Replaces every occurrence of `from` in `body` with `to`. */
+export function swapNonce(body: Buffer, from: string, to: string): Buffer {
+  const needle = Buffer.from(from);
+  const parts: Buffer[] = [];
+  let start = 0;
+  for (let at = body.indexOf(needle); at !== -1; at = body.indexOf(needle, start)) {
+    parts.push(body.subarray(start, at), Buffer.from(to));
+    start = at + needle.length;
+  }
+  if (start === 0) return body;
+  parts.push(body.subarray(start));
+  return Buffer.concat(parts);
+}
+
+function headerText(value: string | string[]): string {
+  return Array.isArray(value) ? value.join(", ") : value;
+}
+
+function toBuffer(chunk: unknown, encoding: unknown): Buffer | null {
+  if (typeof chunk === "string")
+    return Buffer.from(chunk, typeof encoding === "string" ? (encoding as BufferEncoding) : "utf8");
+  if (chunk instanceof Uint8Array) return Buffer.from(chunk);
+  return null;
+}
+
+/**
+ * Watches a response being written and resolves with what may be kept of it once it is finished, or null (not
+ * cacheable, too large, or cut short).
+ */
+function capture(res: ServerResponse, maxPageBytes: number, now: () => number): Promise<Entry | null> {
+  const chunks: Buffer[] = [];
+  let size = 0;
+  let usable = true;
+  let headArgument: Record<string, string | string[] | number> = {};
+  const collect = (chunk: unknown, encoding: unknown) => {
+    if (!usable || chunk === undefined || chunk === null || typeof chunk === "function") return;
+    const buffer = toBuffer(chunk, encoding);
+    size += buffer?.length ?? 0;
+    if (!buffer || size > maxPageBytes) usable = false;
+    else chunks.push(buffer);
+  };
+  const { write, end, writeHead } = res;
+  res.writeHead = function (this: ServerResponse, ...args: unknown[]) {
+    const headers = args.find((a, i) => i > 0 && a !== null && typeof a === "object");
+    if (Array.isArray(headers)) usable = false;
+    else if (headers) headArgument = headers as typeof headArgument;
+    return writeHead.apply(this, args as never);
+  } as typeof res.writeHead;
+  res.write = function (this: ServerResponse, chunk: unknown, ...rest: unknown[]) {
+    collect(chunk, rest[0]);
+    return write.apply(this, [chunk, ...rest] as never);
+  } as typeof res.write;
+  res.end = function (this: ServerResponse, chunk?: unknown, ...rest: unknown[]) {
+    collect(chunk, rest[0]);
+    return end.apply(this, [chunk, ...rest] as never);
+  } as typeof res.end;
+
+  return new Promise((resolve) => {
+    res.once("close", () => {
+      if (!res.writableFinished || !usable || res.statusCode !== 200) return resolve(null);
+      const headers = new Map<string, string | string[]>();
+      for (const [name, value] of Object.entries({ ...res.getHeaders(), ...headArgument })) {
+        if (value === undefined) continue;
+        headers.set(name.toLowerCase(), typeof value === "number" ? String(value) : value);
+      }
+      const type = headers.get("content-type");
+      const policy = headers.get("content-security-policy");
+      const nonce = policy ? NONCE_IN_POLICY.exec(headerText(policy))?.[1] : undefined;
+      if (
+        !type ||
+        !headerText(type).startsWith("text/html") ||
+        headers.has("set-cookie") ||
+        headers.has("content-encoding") ||
+        !nonce
+      )
+        return resolve(null);
+      resolve({
+        status: res.statusCode,
+        headers: [...headers].filter(([name]) => !PER_RESPONSE.has(name) && name !== PAGE_CACHE_HEADER),
+        body: Buffer.concat(chunks),
+        nonce,
+        storedAt: now(),
+      });
+    });
+  });
+}
+
+function replay(entry: Entry, res: ServerResponse, nonce: string): void {
+  const swap = (value: string) => value.split(entry.nonce).join(nonce);
+  const body = swapNonce(entry.body, entry.nonce, nonce);
+  res.statusCode = entry.status;
+  for (const [name, value] of entry.headers)
+    res.setHeader(name, Array.isArray(value) ? value.map(swap) : swap(value));
+  res.setHeader("content-length", body.length);
+  res.setHeader(PAGE_CACHE_HEADER, "hit");
+  res.end(body);
+}
+
+/** Wraps the app's request handler with the page memory. */
+export function withPageCache(handle: Handler, options: PageCacheOptions): Handler {
+  const now = options.now ?? Date.now;
+  const maxPageBytes = options.maxPageBytes ?? 2 * 1024 * 1024;
+  const entries = new LRUCache<string, Entry>({
+    maxSize: options.maxBytes,
+    sizeCalculation: (entry) => entry.body.length + 2048,
+  });
+  const rendering = new Map<string, Promise<Entry | null>>();
+  const fresh = (entry: Entry | null | undefined) =>
+    entry && now() - entry.storedAt <= options.ttlMs ? entry : null;
+
+  return async (req, res) => {
+    const request = requestKey(req);
+    let version: string | null = null;
+    if (request) version = await options.version().catch(() => null);
+    if (!request || version === null) {
+      res.setHeader(PAGE_CACHE_HEADER, "skip");
+      return handle(req, res);
+    }
+    const key = `${version}\n${request}`;
+    const kept = fresh(entries.get(key)) ?? fresh(await rendering.get(key));
+    if (kept) return replay(kept, res, options.nonce());
+
+    res.setHeader(PAGE_CACHE_HEADER, "miss");
+    const captured = capture(res, maxPageBytes, now);
+    const first = !rendering.has(key);
+    if (first) rendering.set(key, captured);
+    try {
+      await handle(req, res);
+      const entry = await captured;
+      if (entry) entries.set(key, entry);
+    } finally {
+      if (first) rendering.delete(key);
+    }
+  };
+}
