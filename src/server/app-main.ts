@@ -27,16 +27,22 @@ await app.prepare();
 
 const render = (req: Parameters<typeof handle>[0], res: Parameters<typeof handle>[1]) => handle(req, res);
 const state = memoryMb > 0 && databaseUrl ? snapshotVersion(databaseUrl) : null;
-const server = createServer(
-  state
-    ? withPageCache(render, {
-        version: state.version,
-        nonce: freshNonce,
-        ttlMs: keepSeconds * 1000,
-        maxBytes: memoryMb * 1024 * 1024,
-      })
-    : render,
-);
+const serve = state
+  ? withPageCache(render, {
+      version: state.version,
+      nonce: freshNonce,
+      ttlMs: keepSeconds * 1000,
+      maxBytes: memoryMb * 1024 * 1024,
+    })
+  : render;
+const server = createServer((req, res) => {
+  // The framework answers its own errors; this catches only what fails around it, so no request is left hanging.
+  Promise.resolve(serve(req, res)).catch((error: unknown) => {
+    console.error("A request failed outside the app's error handling:", error);
+    if (res.headersSent) res.destroy();
+    else res.writeHead(500).end();
+  });
+});
 // Kept-alive connections outlive nginx's (60 s), so nginx never reuses one the app has just closed.
 server.keepAliveTimeout = 75_000;
 server.listen(port, host, () => console.log(`Pulsefence listening on http://${host}:${port}`));

@@ -9,6 +9,7 @@ import { freshNonce } from "@/lib/nonce";
 import { requireEnv } from "@/test/services";
 import { snapshotVersion } from "./data-version";
 import { type Handler, PAGE_CACHE_HEADER, requestKey, swapNonce, withPageCache } from "./page-cache";
+import { noteRenderFailure, RENDER_ID_HEADER } from "./render-failures";
 
 interface Stage {
   renders: number;
@@ -149,6 +150,14 @@ describe("page memory", () => {
         res.statusCode = 404;
         htmlAnswer(req, res, nonce);
       },
+      // A part streamed after the status failed, as the framework reports through onRequestError.
+      (req, res, nonce) => {
+        res.setHeader("content-security-policy", `script-src 'nonce-${nonce}'`);
+        res.setHeader("content-type", "text/html");
+        res.write(page(nonce, "shell sent"));
+        noteRenderFailure(req.headers);
+        res.end("<p>a part failed</p>");
+      },
       // Larger than a page may be.
       (_req, res, nonce) => {
         res.setHeader("content-security-policy", `script-src 'nonce-${nonce}'`);
@@ -192,6 +201,21 @@ describe("page memory", () => {
     expect(answers.filter((a) => a.served === "hit")).toHaveLength(11);
     expect(new Set(answers.map((a) => a.nonce)).size).toBe(12);
     for (const a of answers) expect(a.body).toBe(page(a.nonce, "render for /projects/1/compare"));
+  });
+
+  it("marks the renders it watches itself: a client cannot mark another's render as failed", async () => {
+    const seen: (string | string[] | undefined)[] = [];
+    stage.answer = (req, res, nonce) => {
+      seen.push(req.headers[RENDER_ID_HEADER]);
+      htmlAnswer(req, res, nonce);
+    };
+    await get("/app", { cookie: "pf_session=a", [RENDER_ID_HEADER]: "chosen-by-client" });
+    await get("/app", { cookie: "pf_session=b", [RENDER_ID_HEADER]: "chosen-by-client" });
+    await get("/api/projects", { cookie: "pf_session=a", [RENDER_ID_HEADER]: "chosen-by-client" });
+    expect(seen[0]).toMatch(/^[0-9a-f-]{36}$/);
+    expect(seen[1]).toMatch(/^[0-9a-f-]{36}$/);
+    expect(seen[0]).not.toBe(seen[1]);
+    expect(seen[2]).toBeUndefined();
   });
 
   it("renders every request when the database cannot say its state", async () => {

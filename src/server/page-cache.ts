@@ -1,5 +1,6 @@
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { LRUCache } from "lru-cache";
+import { RENDER_ID_HEADER, renderFailed } from "./render-failures";
 
 // The page memory of one app process (issue: fast under load). A signed-in page is rendered again only when
 // something it could show has changed: each rendered page is kept under a key made of the database's state (see
@@ -9,7 +10,8 @@ import { LRUCache } from "lru-cache";
 // part of a page that must differ per response; the policy header and every nonce in the body are swapped.
 //
 // Only what is safe to replay is kept: full-document GETs with a cookie (never the router's own requests, RSC),
-// answered 200 in HTML, uncompressed, without Set-Cookie, with the content security policy's nonce. Requests for
+// answered 200 in HTML, uncompressed, without Set-Cookie, with the content security policy's nonce, by a render that
+// reported no error (render-failures.ts: a part streamed after the status can still fail). Requests for
 // a key being rendered wait for that render instead of rendering it again. When the database cannot say its
 // state, nothing is kept or served from memory.
 
@@ -95,7 +97,12 @@ function toBuffer(chunk: unknown, encoding: unknown): Buffer | null {
  * Watches a response being written and resolves with what may be kept of it once it is finished, or null (not
  * cacheable, too large, or cut short).
  */
-function capture(res: ServerResponse, maxPageBytes: number, now: () => number): Promise<Entry | null> {
+function capture(
+  res: ServerResponse,
+  renderId: string,
+  maxPageBytes: number,
+  now: () => number,
+): Promise<Entry | null> {
   const chunks: Buffer[] = [];
   let size = 0;
   let usable = true;
@@ -125,7 +132,8 @@ function capture(res: ServerResponse, maxPageBytes: number, now: () => number): 
 
   return new Promise((resolve) => {
     res.once("close", () => {
-      if (!res.writableFinished || !usable || res.statusCode !== 200) return resolve(null);
+      const failed = renderFailed(renderId);
+      if (!res.writableFinished || !usable || failed || res.statusCode !== 200) return resolve(null);
       const headers = new Map<string, string | string[]>();
       for (const [name, value] of Object.entries({ ...res.getHeaders(), ...headArgument })) {
         if (value === undefined) continue;
@@ -177,6 +185,7 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     entry && now() - entry.storedAt <= options.ttlMs ? entry : null;
 
   return async (req, res) => {
+    delete req.headers[RENDER_ID_HEADER];
     const request = requestKey(req);
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
@@ -189,7 +198,9 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     if (kept) return replay(kept, res, options.nonce());
 
     res.setHeader(PAGE_CACHE_HEADER, "miss");
-    const captured = capture(res, maxPageBytes, now);
+    const renderId = crypto.randomUUID();
+    req.headers[RENDER_ID_HEADER] = renderId;
+    const captured = capture(res, renderId, maxPageBytes, now);
     const first = !rendering.has(key);
     if (first) rendering.set(key, captured);
     try {
