@@ -283,6 +283,12 @@ NGINX
     wait_for "API server $k" 60 curl -s -o /dev/null -X POST "http://127.0.0.1:$((APP_BACKEND_PORT + 20 + k))/api/v1/check"
   done
   wait_for "the app" 30 curl -sf "$APP_URL/api/health"
+  # A fresh process is several times slower for its first minute under load: warm each before users come.
+  local targets=""
+  for k in $(seq 1 "$processes"); do targets+=" app:$((APP_BACKEND_PORT + k))"; done
+  for k in $(seq 1 "$api_processes"); do targets+=" api:$((APP_BACKEND_PORT + 20 + k))"; done
+  # shellcheck disable=SC2086
+  log "$("$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/warm-up.ts" "${PF_WARM_ROUNDS:-40}" $targets 2>&1 || true)"
 }
 
 # Stops a process left by an earlier run of this profile that was killed without cleaning up.
