@@ -7,8 +7,8 @@ import { benchCaptureCsv } from "./fixtures/capture-csv";
 import { linkIn, waitForMail } from "./pages/mail-inbox";
 
 // Scale-out, shown: two app instances of the same build against one database and one store, as behind a load
-// balancer. B is the suite's app (its capture workers on); A is another app process (src/server/app-main.ts) on the next free port of this
-// checkout's range, started here with JOB_WORKERS=0, so it only queues jobs. Both serve the same public origin
+// balancer. B is the suite's app (its capture workers on); A is another app process (src/server/app-main.ts) on
+// the next free port of this checkout's range, started here with JOB_WORKERS=0, so it only queues jobs. Both serve the same public origin
 // (APP_URL), which the load balancer would carry: requests to A say B's origin, as a browser would.
 
 const appB = process.env.APP_URL ?? "http://127.0.0.1:3100";
