@@ -48,8 +48,17 @@ function tooLarge(maxBytes: number): AppError {
 }
 
 async function readText(req: Request, maxBytes: number): Promise<string> {
-  const declared = Number(req.headers.get("content-length"));
+  const length = req.headers.get("content-length");
+  const declared = Number(length);
   if (Number.isFinite(declared) && declared > maxBytes) throw tooLarge(maxBytes);
+  // A body of declared length within the bound is read whole: Node's HTTP parser reads exactly that many bytes, so
+  // the bound holds, and the lean API server (src/server/api-server.ts) then reads it straight from the socket
+  // instead of through a web stream (so `req.body` is not touched first). The size is checked again after reading.
+  if (length !== null && Number.isInteger(declared) && declared >= 0) {
+    const bytes = await req.arrayBuffer();
+    if (bytes.byteLength > maxBytes) throw tooLarge(maxBytes);
+    return new TextDecoder("utf-8").decode(bytes);
+  }
   if (!req.body) return "";
   const reader = req.body.getReader();
   // Each chunk is decoded as it arrives (a character split between chunks is carried over), so the body is never
