@@ -229,6 +229,9 @@ $api_servers    keepalive 128;
     proxy_set_header X-Forwarded-Proto \$scheme;
     proxy_connect_timeout 3s;
     proxy_read_timeout 60s;
+    # How the page memory served a page is for the app's own port (tests, operators), not for browsers: it would tell
+    # a signed-in person whether anything was committed anywhere.
+    proxy_hide_header X-Page-Memory;
     error_page 503 @overloaded;
     location / {
       limit_conn inflight $((processes * inflight));

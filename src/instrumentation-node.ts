@@ -16,8 +16,8 @@ const { startOutboxWorker } = await import("@/lib/mail/outbox");
 startOutboxWorker();
 
 // The capture job workers (JOB_WORKERS per process; any number of processes or machines share the queue). On a stop
-// signal the queue stops taking jobs and lets running ones finish (up to 10 s) before the process exits (the app
-// process, src/server/app-main.ts, only stops taking connections); a job cut short is retried by another worker.
+// signal the queue stops taking jobs and lets running ones finish (up to 10 s), and the app server its requests in
+// flight, before the process exits; a job cut short is retried by another worker.
 const [{ env }, { startCaptureWorkers }, { stopJobQueue }, { storage }, { logError }] = await Promise.all([
   import("@/lib/env"),
   import("@/lib/capture/job"),
@@ -30,6 +30,9 @@ startCaptureWorkers(storage, env().JOB_WORKERS).catch((error) =>
 );
 for (const signal of ["SIGTERM", "SIGINT"] as const) {
   process.once(signal, () => {
-    void stopJobQueue(10_000).finally(() => process.exit(signal === "SIGTERM" ? 143 : 130));
+    void stopJobQueue(10_000)
+      // The app server's requests in flight (src/server/app-main.ts), when it is the one serving.
+      .then(() => (globalThis as { pulsefenceRequestsDone?: Promise<void> }).pulsefenceRequestsDone)
+      .finally(() => process.exit(signal === "SIGTERM" ? 143 : 130));
   });
 }

@@ -1,5 +1,6 @@
 import { createServer } from "node:http";
 import next from "next";
+import { SESSION_COOKIE } from "@/lib/auth/cookie-name";
 import { freshNonce } from "@/lib/nonce";
 import { snapshotVersion } from "./data-version";
 import { withPageCache } from "./page-cache";
@@ -27,9 +28,26 @@ await app.prepare();
 
 const render = (req: Parameters<typeof handle>[0], res: Parameters<typeof handle>[1]) => handle(req, res);
 const state = memoryMb > 0 && databaseUrl ? snapshotVersion(databaseUrl) : null;
+
+/**
+ * The state of this process's memory of who a request is (src/lib/auth/auth-memory.ts, kept on globalThis by the
+ * framework's bundle): each clearing (a sign-out, a membership changed, here or heard of) gives a new one, so a page
+ * rendered with what the memory held before is not sent after.
+ */
+function authMemoryState(): string {
+  const auth = (globalThis as { pulsefenceAuth?: { cache: { generation(): number; enabled: boolean } } })
+    .pulsefenceAuth;
+  return auth ? `${auth.cache.generation()}:${auth.cache.enabled}` : "none";
+}
+
 const serve = state
   ? withPageCache(render, {
-      version: state.version,
+      version: async () => {
+        const auth = authMemoryState();
+        const database = await state.version();
+        return database === null ? null : `${auth}|${database}`;
+      },
+      sessionCookie: SESSION_COOKIE,
       nonce: freshNonce,
       ttlMs: keepSeconds * 1000,
       maxBytes: memoryMb * 1024 * 1024,
@@ -47,12 +65,14 @@ const server = createServer((req, res) => {
 server.keepAliveTimeout = 75_000;
 server.listen(port, host, () => console.log(`Pulsefence listening on http://${host}:${port}`));
 
-// On a stop signal: take no new connections and close idle ones. The capture workers' own handler
-// (src/instrumentation-node.ts) exits the process once running jobs have finished (up to 10 s); should it not, this
-// process exits after 12 s.
+// On a stop signal: take no new connections and close idle ones; requests in flight finish. The capture workers'
+// handler (src/instrumentation-node.ts) waits for that (`pulsefenceRequestsDone`) and for running jobs (up to 10 s)
+// before it exits the process; should it not, this process exits after 12 s.
 for (const signal of ["SIGTERM", "SIGINT"] as const) {
   process.once(signal, () => {
-    server.close();
+    (globalThis as { pulsefenceRequestsDone?: Promise<void> }).pulsefenceRequestsDone = new Promise(
+      (resolve) => server.close(() => resolve()),
+    );
     server.closeIdleConnections();
     setTimeout(() => process.exit(signal === "SIGTERM" ? 143 : 130), 12_000).unref();
   });

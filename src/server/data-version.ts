@@ -1,21 +1,32 @@
 import postgres from "postgres";
 import { connectTimeoutSeconds } from "@/db/client";
 
+/** How long the state may take to read before a page is rendered without the page memory, ms. */
+const READ_LIMIT_MS = 250;
+
 /**
  * The database's state as one text, for the page memory (page-cache.ts): PostgreSQL's current snapshot
- * (`pg_current_snapshot()`: the oldest transaction still running, the next transaction id, the ones in progress).
- * Any transaction that writes and commits (or rolls back) anywhere in the database changes it: one in progress at
- * the first reading leaves the in-progress list, one started later moves the next id. Reads change nothing. So two
- * equal answers mean every page rendered between them saw the same committed data.
+ * (`pg_current_snapshot()`: xmin, xmax (one past the latest completed transaction id) and the ids in progress).
+ * Every transaction that wrote (so holds an id) changes it when it completes, committed or rolled back: one in
+ * progress at the first reading leaves the in-progress list, one that began later raises xmax. Reads change nothing,
+ * nor does a sequence's `nextval` alone (not data a page shows). So two equal answers mean every page rendered
+ * between them saw the same committed data. Answers null when the database does not answer within 250 ms.
  */
-export function snapshotVersion(url: string): { version: () => Promise<string>; end: () => Promise<void> } {
+export function snapshotVersion(url: string): {
+  version: () => Promise<string | null>;
+  end: () => Promise<void>;
+} {
   const sql = postgres(url, { max: 2, connect_timeout: connectTimeoutSeconds, onnotice: () => {} });
+  const read = async () => {
+    const [row] = await sql<{ v: string }[]>`select pg_current_snapshot()::text as v`;
+    return row?.v ?? null;
+  };
   return {
-    version: async () => {
-      const [row] = await sql<{ v: string }[]>`select pg_current_snapshot()::text as v`;
-      if (!row) throw new Error("pg_current_snapshot() answered no row");
-      return row.v;
-    },
+    version: () =>
+      Promise.race([
+        read().catch(() => null),
+        new Promise<null>((resolve) => setTimeout(resolve, READ_LIMIT_MS, null).unref()),
+      ]),
     end: () => sql.end({ timeout: 5 }),
   };
 }

@@ -1,13 +1,10 @@
 // The page memory (page-cache.ts) over real HTTP, with a stand-in for the framework's handler that counts its
-// renders, and the database state it keys on (data-version.ts) against the real PostgreSQL.
+// renders. The database state it keys on is tested in data-version.test.ts.
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from "node:http";
 import type { AddressInfo } from "node:net";
 import { gzipSync } from "node:zlib";
-import { afterAll, afterEach, beforeEach, describe, expect, it } from "vitest";
-import { createDb } from "@/db/client";
+import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { freshNonce } from "@/lib/nonce";
-import { requireEnv } from "@/test/services";
-import { snapshotVersion } from "./data-version";
 import { type Handler, PAGE_CACHE_HEADER, requestKey, swapNonce, withPageCache } from "./page-cache";
 import { noteRenderFailure, RENDER_ID_HEADER } from "./render-failures";
 
@@ -43,12 +40,11 @@ beforeEach(async () => {
   };
   server = createServer(
     withPageCache(handler, {
-      version: async () => {
-        if (stage.version === "down") throw new Error("database unreachable");
-        return stage.version;
-      },
+      version: async () => (stage.version === "down" ? null : stage.version),
+      sessionCookie: "pf_session",
       nonce: freshNonce,
       ttlMs: 5_000,
+      waitMs: 1_000,
       maxBytes: 1024 * 1024,
       maxPageBytes: 64 * 1024,
       now: () => stage.clock,
@@ -106,6 +102,7 @@ describe("page memory", () => {
   it("always renders what is not a signed-in document request", async () => {
     const always: [string, Record<string, string>][] = [
       ["/app", {}], // no cookie: anonymous
+      ["/app", { cookie: "theme=dark; pf_sessionx=1" }], // cookies, but no session
       ["/app", { cookie: "pf_session=a", rsc: "1" }], // the router's own request
       ["/app", { cookie: "pf_session=a", "next-router-prefetch": "1" }],
       ["/app?_rsc=abc", { cookie: "pf_session=a" }],
@@ -218,6 +215,19 @@ describe("page memory", () => {
     expect(seen[2]).toBeUndefined();
   });
 
+  it("waits for a render in progress a bounded time, then renders itself", async () => {
+    stage.answer = async (req, res, nonce) => {
+      await new Promise((r) => setTimeout(r, stage.renders === 1 ? 1_500 : 0));
+      htmlAnswer(req, res, nonce);
+    };
+    const slow = get("/slow");
+    await new Promise((r) => setTimeout(r, 100));
+    const waited = await get("/slow");
+    expect(waited.served).toBe("miss");
+    expect((await slow).served).toBe("miss");
+    expect(stage.renders).toBe(2);
+  });
+
   it("renders every request when the database cannot say its state", async () => {
     stage.version = "down";
     await get("/app");
@@ -233,7 +243,8 @@ describe("requestKey and swapNonce", () => {
       url: "/library/7?x=1",
       headers: { cookie: "c=1", host: "h", "x-forwarded-proto": "https", "user-agent": "u" },
     } as unknown as IncomingMessage;
-    expect(requestKey(req)).toBe("h\nhttps\n/library/7?x=1\nc=1\nu");
+    expect(requestKey(req, "c")).toBe("h\nhttps\n/library/7?x=1\nc=1\nu");
+    expect(requestKey(req, "session")).toBeNull();
   });
 
   it("swaps every occurrence, at the edges too, and leaves a body without it as it is", () => {
@@ -241,61 +252,5 @@ describe("requestKey and swapNonce", () => {
     expect(swapNonce(body, "NN", "MMM").toString()).toBe("MMMa MMM bMMM");
     const none = Buffer.from("nothing here");
     expect(swapNonce(none, "NN", "M")).toBe(none);
-  });
-});
-
-describe("database state (real PostgreSQL)", () => {
-  const url = requireEnv("DATABASE_URL");
-  const state = snapshotVersion(url);
-  const { sql } = createDb(url, { max: 3 });
-  afterAll(async () => {
-    await state.end();
-    await sql.end();
-  });
-
-  /** A connection of its own with a temporary table to write to: a write like any other, seen by no one else. */
-  async function writer() {
-    const connection = await sql.reserve();
-    await connection`create temporary table if not exists state_probe (n int)`;
-    return connection;
-  }
-
-  it("stays the same over reads and moves with every commit, seen from the first commit on", async () => {
-    const connection = await writer();
-    try {
-      const before = await state.version();
-      await sql`select count(*) from workspaces`;
-      expect(await state.version()).toBe(before);
-      // A transaction that writes: while it is open, pages rendered see the old data; once committed, the state
-      // is another, so nothing rendered before is sent again.
-      await connection`begin`;
-      await connection`insert into state_probe values (1)`;
-      const during = await state.version();
-      await connection`commit`;
-      const after = await state.version();
-      expect(after).not.toBe(during);
-      expect(after).not.toBe(before);
-      // A write rolled back moves it too (pages rendered again for nothing, never one missed).
-      await connection`begin`;
-      await connection`insert into state_probe values (2)`;
-      await connection`rollback`;
-      expect(await state.version()).not.toBe(after);
-    } finally {
-      connection.release();
-    }
-  });
-
-  it("moves when a transaction commits that was running when the state was read", async () => {
-    const connection = await writer();
-    try {
-      await connection`begin`;
-      await connection`insert into state_probe values (3)`;
-      const running = await state.version();
-      expect(await state.version()).toBe(running);
-      await connection`commit`;
-      expect(await state.version()).not.toBe(running);
-    } finally {
-      connection.release();
-    }
   });
 });

@@ -3,17 +3,19 @@ import { LRUCache } from "lru-cache";
 import { RENDER_ID_HEADER, renderFailed } from "./render-failures";
 
 // The page memory of one app process (issue: fast under load). A signed-in page is rendered again only when
-// something it could show has changed: each rendered page is kept under a key made of the database's state (see
-// data-version.ts: any committed change anywhere gives a new state), the whole request that asked for it (host,
-// path and query, every cookie, user agent) and nothing else, for at most a few seconds (the clock: "3 minutes ago",
-// a session's expiry). A second identical request in the same state gets the same page with a fresh nonce, the only
-// part of a page that must differ per response; the policy header and every nonce in the body are swapped.
+// something it could show has changed: each rendered page is kept under a key made of the state it was rendered in
+// (`version`: the database's, see data-version.ts, where any committed change anywhere gives a new state, and this
+// process's memory of who a request is, whose every clearing gives a new one), the whole request that asked for it
+// (host, scheme, path and query, every cookie, user agent) and nothing else, for at most a few seconds from the
+// start of its render (the clock: "3 minutes ago", a session's expiry). A second identical request in the same state
+// gets the same page with a fresh nonce, the only part of a page that must differ per response; the policy header
+// and every nonce in the body are swapped.
 //
-// Only what is safe to replay is kept: full-document GETs with a cookie (never the router's own requests, RSC),
-// answered 200 in HTML, uncompressed, without Set-Cookie, with the content security policy's nonce, by a render that
-// reported no error (render-failures.ts: a part streamed after the status can still fail). Requests for
-// a key being rendered wait for that render instead of rendering it again. When the database cannot say its
-// state, nothing is kept or served from memory.
+// Only what is safe to replay is kept: full-document GETs with the session cookie (never the router's own requests,
+// RSC), answered 200 in HTML, uncompressed, without Set-Cookie, with the content security policy's nonce, by a
+// render that reported no error (render-failures.ts: a part streamed after the status can still fail). Requests for
+// a key being rendered wait for that render (a few seconds at most) instead of rendering it again. When the state
+// cannot be said, nothing is kept or served from memory.
 
 /** The response header that says how the page was served: "hit", "miss" or "skip". */
 export const PAGE_CACHE_HEADER = "x-page-memory";
@@ -21,8 +23,13 @@ export const PAGE_CACHE_HEADER = "x-page-memory";
 export type Handler = (req: IncomingMessage, res: ServerResponse) => Promise<void> | void;
 
 export interface PageCacheOptions {
-  /** The database's state: equal answers mean nothing was committed between them. */
-  version: () => Promise<string>;
+  /**
+   * The state a page depends on beyond its request: the database's (equal answers mean nothing was committed between
+   * them) and this process's memory of who a request is. Read before the render; null when it cannot be said.
+   */
+  version: () => Promise<string | null>;
+  /** The session cookie's name: a request without it is never kept (anonymous pages, expired sessions). */
+  sessionCookie: string;
   /** Nonce for a replayed page (src/lib/nonce.ts). */
   nonce: () => string;
   /** How long a kept page may be served, ms. */
@@ -31,6 +38,8 @@ export interface PageCacheOptions {
   maxBytes: number;
   /** A page larger than this is not kept, bytes. */
   maxPageBytes?: number;
+  /** How long an identical request waits for a render in progress before rendering itself, ms. */
+  waitMs?: number;
   now?: () => number;
 }
 
@@ -56,13 +65,13 @@ const ROUTER_HEADERS = [
 const NONCE_IN_POLICY = /'nonce-([^']+)'/;
 
 /** What identifies a cacheable request, or null when the request must always be rendered. */
-export function requestKey(req: IncomingMessage): string | null {
+export function requestKey(req: IncomingMessage, sessionCookie: string): string | null {
   if (req.method !== "GET") return null;
   const url = req.url ?? "";
   if (!url.startsWith("/") || url.startsWith("/api/") || url.startsWith("/_next/")) return null;
   if (/[?&]_rsc=/.test(url)) return null;
   const cookie = req.headers.cookie;
-  if (!cookie) return null;
+  if (!cookie?.split(";").some((c) => c.trimStart().startsWith(`${sessionCookie}=`))) return null;
   if (ROUTER_HEADERS.some((name) => req.headers[name] !== undefined)) return null;
   const h = req.headers;
   return [h.host ?? "", h["x-forwarded-proto"] ?? "", url, cookie, h["user-agent"] ?? ""].join("\n");
@@ -101,7 +110,7 @@ function capture(
   res: ServerResponse,
   renderId: string,
   maxPageBytes: number,
-  now: () => number,
+  startedAt: number,
 ): Promise<Entry | null> {
   const chunks: Buffer[] = [];
   let size = 0;
@@ -131,7 +140,10 @@ function capture(
   } as typeof res.end;
 
   return new Promise((resolve) => {
-    res.once("close", () => {
+    // The framework reports a failed part through onRequestError a few promise turns after the failure, which may be
+    // after the last bytes: the page is judged one turn of the event loop after the response closed.
+    res.once("close", () => setImmediate(judge));
+    function judge() {
       const failed = renderFailed(renderId);
       if (!res.writableFinished || !usable || failed || res.statusCode !== 200) return resolve(null);
       const headers = new Map<string, string | string[]>();
@@ -155,9 +167,9 @@ function capture(
         headers: [...headers].filter(([name]) => !PER_RESPONSE.has(name) && name !== PAGE_CACHE_HEADER),
         body: Buffer.concat(chunks),
         nonce,
-        storedAt: now(),
+        storedAt: startedAt,
       });
-    });
+    }
   });
 }
 
@@ -178,15 +190,19 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
   const maxPageBytes = options.maxPageBytes ?? 2 * 1024 * 1024;
   const entries = new LRUCache<string, Entry>({
     maxSize: options.maxBytes,
-    sizeCalculation: (entry) => entry.body.length + 2048,
+    sizeCalculation: (entry, key) => entry.body.length + key.length + 2048,
   });
+  const waitMs = options.waitMs ?? 3_000;
+  const waitFor = (pending: Promise<Entry | null> | undefined) =>
+    pending &&
+    Promise.race([pending, new Promise<null>((resolve) => setTimeout(resolve, waitMs, null).unref())]);
   const rendering = new Map<string, Promise<Entry | null>>();
   const fresh = (entry: Entry | null | undefined) =>
     entry && now() - entry.storedAt <= options.ttlMs ? entry : null;
 
   return async (req, res) => {
     delete req.headers[RENDER_ID_HEADER];
-    const request = requestKey(req);
+    const request = requestKey(req, options.sessionCookie);
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
     if (!request || version === null) {
@@ -194,13 +210,14 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
       return handle(req, res);
     }
     const key = `${version}\n${request}`;
-    const kept = fresh(entries.get(key)) ?? fresh(await rendering.get(key));
+    const kept = fresh(entries.get(key)) ?? fresh(await waitFor(rendering.get(key)));
     if (kept) return replay(kept, res, options.nonce());
 
     res.setHeader(PAGE_CACHE_HEADER, "miss");
     const renderId = crypto.randomUUID();
     req.headers[RENDER_ID_HEADER] = renderId;
-    const captured = capture(res, renderId, maxPageBytes, now);
+    // A page is kept from the moment its render began: every check the render made is at most that old.
+    const captured = capture(res, renderId, maxPageBytes, now());
     const first = !rendering.has(key);
     if (first) rendering.set(key, captured);
     try {

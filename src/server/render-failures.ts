@@ -7,7 +7,7 @@
 /** The request header carrying the watched render's id; a client's own is dropped (page-cache.ts). */
 export const RENDER_ID_HEADER = "x-pulsefence-render";
 const FAILURES = Symbol.for("pulsefence.render-failures");
-/** A failure reported for a render no longer watched is forgotten once this many are held. */
+/** Failures held at most; beyond, the oldest (of a render no longer watched, in practice) is forgotten first. */
 const MAX_HELD = 1_000;
 
 function failures(): Set<string> {
@@ -21,8 +21,9 @@ export function noteRenderFailure(headers: NodeJS.Dict<string | string[]>): void
   const id = headers[RENDER_ID_HEADER];
   if (typeof id !== "string") return;
   const held = failures();
-  if (held.size >= MAX_HELD) held.clear();
   held.add(id);
+  // A set iterates in insertion order: the first is the oldest.
+  if (held.size > MAX_HELD) held.delete(held.values().next().value as string);
 }
 
 /** Whether the render with this id reported an error; forgets the id. */

@@ -4,6 +4,7 @@ import { Lucia, TimeSpan } from "lucia";
 import { db } from "@/db";
 import { sessions, users } from "@/db/schema";
 import { env } from "@/lib/env";
+import { SESSION_COOKIE } from "./cookie-name";
 
 // Lucia v3 is no longer maintained upstream: it is used only here and in session.ts, so it can be replaced.
 const adapter = new DrizzlePostgreSQLAdapter(db, sessions, users);
@@ -15,7 +16,7 @@ export const sessionMaxAgeMs = 30 * 24 * 60 * 60 * 1000;
 export const lucia = new Lucia(adapter, {
   sessionExpiresIn: new TimeSpan(sessionIdleDays, "d"),
   sessionCookie: {
-    name: "pulsefence_session",
+    name: SESSION_COOKIE,
     // The cookie ends with the session (not a 400-day browser maximum).
     expires: true,
     attributes: { secure: env().APP_URL.startsWith("https://"), sameSite: "lax" },
