@@ -64,12 +64,17 @@ test.describe("a capture's job", () => {
   const inrush = { name: "Pre-charge inrush", kind: "triangle" as const, v: 48, i: 1.5, duration: 0.048 };
 
   async function uploadCapture(page: Page, name: string, csv: string) {
-    await page.getByLabel("Capture upload: choose a file").setInputFiles({
-      name,
-      mimeType: "text/csv",
-      buffer: Buffer.from(csv),
-    });
-    await page.getByRole("button", { name: "Upload and check" }).click();
+    const upload = page.getByRole("button", { name: "Upload and check" });
+    // The file input is in the page before the upload zone has hydrated, and a file chosen before then goes unseen:
+    // choose it again until the column picker opens.
+    await expect(async () => {
+      if (await upload.isVisible()) return;
+      await page
+        .getByLabel("Capture upload: choose a file")
+        .setInputFiles({ name, mimeType: "text/csv", buffer: Buffer.from(csv) }, { timeout: 2_000 });
+      await expect(upload).toBeVisible({ timeout: 3_000 });
+    }).toPass({ timeout: 30_000 });
+    await upload.click();
   }
 
   test("an uploaded capture shows that it is queued, then its stored results", async ({ page, baseURL }) => {
