@@ -1,5 +1,6 @@
 import postgres from "postgres";
 import { connectTimeoutSeconds } from "@/db/client";
+import { settledWithin } from "@/lib/time-limit";
 
 /** How long the state may take to read before a page is rendered without the page memory, ms. */
 const READ_LIMIT_MS = 250;
@@ -23,10 +24,11 @@ export function snapshotVersion(url: string): {
   };
   return {
     version: () =>
-      Promise.race([
+      settledWithin(
         read().catch(() => null),
-        new Promise<null>((resolve) => setTimeout(resolve, READ_LIMIT_MS, null).unref()),
-      ]),
+        READ_LIMIT_MS,
+        null,
+      ),
     end: () => sql.end({ timeout: 5 }),
   };
 }

@@ -1,5 +1,6 @@
 import type { IncomingMessage, ServerResponse } from "node:http";
 import { LRUCache } from "lru-cache";
+import { settledWithin } from "@/lib/time-limit";
 import { RENDER_ID_HEADER, renderFailed } from "./render-failures";
 
 // The page memory of one app process (issue: fast under load). A signed-in page is rendered again only when
@@ -194,8 +195,7 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
   });
   const waitMs = options.waitMs ?? 3_000;
   const waitFor = (pending: Promise<Entry | null> | undefined) =>
-    pending &&
-    Promise.race([pending, new Promise<null>((resolve) => setTimeout(resolve, waitMs, null).unref())]);
+    pending && settledWithin(pending, waitMs, null);
   const rendering = new Map<string, Promise<Entry | null>>();
   const fresh = (entry: Entry | null | undefined) =>
     entry && now() - entry.storedAt <= options.ttlMs ? entry : null;

@@ -3,6 +3,7 @@ import { and, asc, desc, eq, lte } from "drizzle-orm";
 import { db } from "@/db";
 import { mailOutbox } from "@/db/schema";
 import { logError } from "@/lib/log";
+import { settledWithin } from "@/lib/time-limit";
 import { mailer } from "./index";
 import type { Mail, Mailer } from "./mailer";
 
@@ -122,14 +123,7 @@ export function kickOutbox(): void {
  */
 export async function flushOutbox(maxWaitMs = 2000): Promise<void> {
   kickOutbox();
-  let timer: NodeJS.Timeout | undefined;
-  await Promise.race([
-    outboxIdle(),
-    new Promise<void>((resolve) => {
-      timer = setTimeout(resolve, maxWaitMs);
-    }),
-  ]);
-  clearTimeout(timer);
+  await settledWithin(outboxIdle(), maxWaitMs, undefined);
 }
 
 /** Resolves when the background delivery pass (if any) has finished. */
