@@ -105,4 +105,73 @@ describe("AuthCache", () => {
     time.advance(1);
     expect(cache.lastUsedDue("t1")).toBe(true);
   });
+
+  it("shares one read among requests that miss at once, and starts afresh once it is done", async () => {
+    const cache = new AuthCache(clock());
+    const gate = deferred<string>();
+    let reads = 0;
+    const read = () => {
+      reads++;
+      return gate.promise;
+    };
+    const first = cache.sharedRead("token:h", read);
+    const second = cache.sharedRead("token:h", read);
+    const other = cache.sharedRead("token:other", async () => "other");
+    gate.resolve("row");
+    expect(await Promise.all([first, second, other])).toEqual(["row", "row", "other"]);
+    expect(reads).toBe(1);
+    await cache.sharedRead("token:h", async () => "again");
+    expect(await cache.sharedRead("token:h", async () => "once more")).toBe("once more");
+  });
+
+  it("never lets a request after a clear join a read from before it (a revocation is seen at once)", async () => {
+    const cache = new AuthCache(clock());
+    const before = deferred<string>();
+    const old = cache.sharedRead("token:h", () => before.promise);
+    cache.clear();
+    const after = cache.sharedRead("token:h", async () => "revoked");
+    before.resolve("live");
+    expect(await old).toBe("live");
+    expect(await after).toBe("revoked");
+    // The read from before the clear, ending last, does not remove the newer one from the reads in flight.
+    const late = deferred<string>();
+    const newer = cache.sharedRead("token:k", () => late.promise);
+    cache.clear();
+    const newest = deferred<string>();
+    const third = cache.sharedRead("token:k", () => newest.promise);
+    late.resolve("a");
+    await newer;
+    expect(cache.sharedRead("token:k", async () => "joined? no")).toBe(third);
+    newest.resolve("b");
+    expect(await third).toBe("b");
+  });
+
+  it("hands a failed read to every request that shared it, and the next request reads again", async () => {
+    const cache = new AuthCache(clock());
+    const gate = deferred<string>();
+    const a = cache.sharedRead("session:s", () => gate.promise);
+    const b = cache.sharedRead("session:s", () => gate.promise);
+    gate.reject(new Error("database down"));
+    await expect(a).rejects.toThrow("database down");
+    await expect(b).rejects.toThrow("database down");
+    expect(await cache.sharedRead("session:s", async () => "back")).toBe("back");
+  });
+
+  it("shares nothing while disabled (not listening for changes)", async () => {
+    const cache = new AuthCache(clock(), { enabled: false });
+    let reads = 0;
+    const read = async () => ++reads;
+    await Promise.all([cache.sharedRead("token:h", read), cache.sharedRead("token:h", read)]);
+    expect(reads).toBe(2);
+  });
 });
+
+function deferred<T>() {
+  let resolve!: (value: T) => void;
+  let reject!: (error: Error) => void;
+  const promise = new Promise<T>((ok, fail) => {
+    resolve = ok;
+    reject = fail;
+  });
+  return { promise, resolve, reject };
+}

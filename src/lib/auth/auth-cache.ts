@@ -12,6 +12,8 @@
 //   the process that made the change also clears its own at once (`forgetCachedAuth`);
 // - a database read that started before a clear is not remembered after it (a generation counter), so a
 //   revocation racing a lookup cannot leave the old answer behind;
+// - requests that miss the same entry at once share one database read (`sharedRead`), so an entry's expiry under
+//   load costs one query, not one per request in flight; a request after a clear never joins a read from before it;
 // - a remembered session is still refused once past its expiry or its maximum age (session.ts checks both).
 import { LRUCache } from "lru-cache";
 import type { Role } from "@/db/schema";
@@ -80,6 +82,8 @@ export class AuthCache {
   private readonly memberLists: LRUCache<string, readonly CachedMember[]>;
   /** Token id → when this process last wrote its last_used_at (clock ms). Survives clears: it is not access. */
   private readonly lastUsed: LRUCache<string, number>;
+  /** Database reads in flight, by key, shared by the requests that miss at once; emptied at a clear. */
+  private readonly reads = new Map<string, Promise<unknown>>();
   private generationCount = 0;
   private readonly clearedListeners = new Set<() => void>();
   /** False until the process listens for changes; nothing is remembered meanwhile. */
@@ -160,9 +164,27 @@ export class AuthCache {
     return true;
   }
 
+  /**
+   * `read()` (a database read that remembers what it found), shared: a request that misses `key` while a read of
+   * it is in flight since the last clear waits for that read instead of starting its own. A clear drops the reads
+   * in flight, so a request after it starts afresh. Its answer was read no earlier than the request that started
+   * it, and is as fresh as a remembered one. Not shared while nothing is remembered (not listening yet).
+   */
+  sharedRead<T>(key: string, read: () => Promise<T>): Promise<T> {
+    if (!this.enabled) return read();
+    const running = this.reads.get(key);
+    if (running) return running as Promise<T>;
+    const started = read().finally(() => {
+      if (this.reads.get(key) === started) this.reads.delete(key);
+    });
+    this.reads.set(key, started);
+    return started;
+  }
+
   /** Forgets everything remembered (a change was made or heard of). */
   clear(): void {
     this.generationCount++;
+    this.reads.clear();
     this.tokens.clear();
     this.memberships.clear();
     this.sessions.clear();

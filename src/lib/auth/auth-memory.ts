@@ -55,24 +55,28 @@ export async function whenListening(): Promise<void> {
 
 /**
  * What memory holds (`cached`), else what `read` gets from the database, remembered (`remember`, with the
- * generation taken before the read) unless it is null.
+ * generation taken before the read) unless it is null. Requests that miss `key` at once share one read.
  */
 async function throughMemory<T>(
+  key: string,
   cached: T | undefined,
   read: () => Promise<T | null>,
   remember: (value: T, generation: number) => void,
 ): Promise<T | null> {
   listenForAuthChanges();
   if (cached !== undefined) return cached;
-  const generation = authCache.generation();
-  const value = await read();
-  if (value !== null) remember(value, generation);
-  return value;
+  return authCache.sharedRead(key, async () => {
+    const generation = authCache.generation();
+    const value = await read();
+    if (value !== null) remember(value, generation);
+    return value;
+  });
 }
 
 /** A member's role in a workspace, remembered as briefly as the rest; null when not a member. */
 export function rememberedMembership(workspaceId: string, userId: string): Promise<CachedMembership | null> {
   return throughMemory(
+    `membership:${workspaceId}:${userId}`,
     authCache.membership(workspaceId, userId),
     async () => {
       const row = await getMembership({ workspaceId, userId });
@@ -85,6 +89,7 @@ export function rememberedMembership(workspaceId: string, userId: string): Promi
 /** The workspaces a user belongs to (the switcher's list), remembered as briefly as the rest. */
 export async function rememberedWorkspaces(userId: string): Promise<readonly CachedWorkspace[]> {
   const rows = await throughMemory(
+    `workspaces:${userId}`,
     authCache.workspaces(userId),
     () => listUserWorkspaces({ userId }),
     (value, generation) => authCache.rememberWorkspaces(userId, value, generation),
@@ -95,6 +100,7 @@ export async function rememberedWorkspaces(userId: string): Promise<readonly Cac
 /** A workspace's members (owners, pickers, the team page), remembered as briefly as the rest. */
 export async function rememberedMembers(workspaceId: string): Promise<readonly CachedMember[]> {
   const rows = await throughMemory(
+    `members:${workspaceId}`,
     authCache.members(workspaceId),
     () => listMembers({ workspaceId }),
     (value, generation) => authCache.rememberMembers(workspaceId, value, generation),

@@ -38,28 +38,32 @@ export async function validateSessionCookie(cookieHeader: string | null): Promis
   if (remembered && remembered.expiresAt > now && now - remembered.createdAt <= sessionMaxAgeMs) {
     return { sessionId: id, user: remembered.user, workspaceId: remembered.workspaceId, setCookie: null };
   }
-  const generation = authCache.generation();
-  const { session, user } = await lucia.validateSession(id);
-  if (!session || !user) return null;
-  const createdAt = session.createdAt ? new Date(session.createdAt).getTime() : 0;
-  if (Date.now() - createdAt > sessionMaxAgeMs) {
-    await lucia.invalidateSession(session.id);
-    return null;
-  }
-  const valid = {
-    user: { id: user.id, email: user.email, name: user.name },
-    workspaceId: session.workspaceId,
-  };
-  authCache.rememberSession(
-    id,
-    { ...valid, userId: user.id, expiresAt: session.expiresAt.getTime(), createdAt },
-    generation,
-  );
-  return {
-    sessionId: session.id,
-    ...valid,
-    setCookie: session.fresh ? lucia.createSessionCookie(token).serialize() : null,
-  };
+  // Requests that miss at once (the entry just expired, a page and its parts) share one read; each sends the
+  // renewed cookie if the read renewed the session.
+  return authCache.sharedRead(`session:${id}`, async () => {
+    const generation = authCache.generation();
+    const { session, user } = await lucia.validateSession(id);
+    if (!session || !user) return null;
+    const createdAt = session.createdAt ? new Date(session.createdAt).getTime() : 0;
+    if (Date.now() - createdAt > sessionMaxAgeMs) {
+      await lucia.invalidateSession(session.id);
+      return null;
+    }
+    const valid = {
+      user: { id: user.id, email: user.email, name: user.name },
+      workspaceId: session.workspaceId,
+    };
+    authCache.rememberSession(
+      id,
+      { ...valid, userId: user.id, expiresAt: session.expiresAt.getTime(), createdAt },
+      generation,
+    );
+    return {
+      sessionId: session.id,
+      ...valid,
+      setCookie: session.fresh ? lucia.createSessionCookie(token).serialize() : null,
+    };
+  });
 }
 
 /** Starts a session in a workspace; returns the Set-Cookie value (the token; the database keeps its hash). */

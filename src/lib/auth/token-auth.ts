@@ -21,14 +21,18 @@ export async function authenticateToken(secret: string): Promise<CachedToken | n
   if (cached) {
     token = cached.value;
   } else {
-    const generation = authCache.generation();
-    const row = await findActiveApiToken(hash);
-    token = row && { id: row.id, workspaceId: row.workspaceId, user: row.user };
-    authCache.rememberToken(hash, token, generation);
-    // A token read from the database and marked within the interval (by any process) needs no write.
-    if (row?.lastUsedAt && Date.now() - row.lastUsedAt.getTime() < LAST_USED_INTERVAL_MS) {
-      authCache.lastUsedDue(row.id);
-    }
+    // Requests that miss at once (the entry just expired under load) share one read.
+    token = await authCache.sharedRead(`token:${hash}`, async () => {
+      const generation = authCache.generation();
+      const row = await findActiveApiToken(hash);
+      const found = row && { id: row.id, workspaceId: row.workspaceId, user: row.user };
+      authCache.rememberToken(hash, found, generation);
+      // A token read from the database and marked within the interval (by any process) needs no write.
+      if (row?.lastUsedAt && Date.now() - row.lastUsedAt.getTime() < LAST_USED_INTERVAL_MS) {
+        authCache.lastUsedDue(row.id);
+      }
+      return found;
+    });
   }
   if (token && authCache.lastUsedDue(token.id)) markUsedLater(token.id);
   return token;

@@ -82,6 +82,21 @@ describe("remembered sessions", () => {
     expect(asked).toHaveBeenCalledTimes(1);
   });
 
+  it("are read once for the requests that miss at the same moment (an expiry under load), a renewal sent to each", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const cookie = await sessionCookie(user.id, ws.id);
+    // Due a renewal (sliding expiry): the one shared read renews it, and every request sends the renewed cookie.
+    await testDb.db
+      .update(sessions)
+      .set({ expiresAt: new Date(Date.now() + 60_000) })
+      .where(eq(sessions.id, sessionId(cookie)));
+    const asked = vi.spyOn(lucia, "validateSession");
+    const answers = await Promise.all(Array.from({ length: 12 }, () => validateSessionCookie(cookie)));
+    expect(asked).toHaveBeenCalledTimes(1);
+    expect(new Set(answers.map((answer) => answer?.user.id))).toEqual(new Set([user.id]));
+    expect(answers.every((answer) => answer?.setCookie?.startsWith(`${lucia.sessionCookieName}=`))).toBe(true);
+  });
+
   it("end once another process deletes the session (sign-out elsewhere), and a route answers 401", async () => {
     const user = await addMember(ws.id, "engineer");
     const cookie = await sessionCookie(user.id, ws.id);

@@ -3,7 +3,7 @@
 // reaches this one through the triggers' NOTIFY and ends the access within the stated TTL; last_used_at is
 // written off the response path at most once a minute; a wrong workspace is still a 404.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { apiTokens, memberships } from "@/db/schema";
 import { authCache, whenListening } from "@/lib/auth/auth-memory";
 import { settleTokenWrites } from "@/lib/auth/token-auth";
@@ -106,5 +106,27 @@ describe("remembered API tokens", () => {
       });
       expect(res.status).toBe(404);
     }
+  });
+
+  it("are read once, not once per request, when many requests miss at the same moment", async () => {
+    const user = await addMember(ws.id, "engineer");
+    const token = await newApiToken(user.id, ws.id, "cache");
+    authCache.clear(); // nothing remembered, as when the entries expire under load
+    const reads: string[] = [];
+    const shared = authCache.sharedRead.bind(authCache);
+    const spy = vi.spyOn(authCache, "sharedRead").mockImplementation((key, read) =>
+      shared(key, () => {
+        reads.push(key.split(":")[0]);
+        return read();
+      }),
+    );
+    try {
+      const answers = await Promise.all(Array.from({ length: 24 }, () => check(token.secret)));
+      expect(answers.map((res) => res.status)).toEqual(Array(24).fill(200));
+    } finally {
+      spy.mockRestore();
+    }
+    // One token lookup and one membership lookup for all 24 (an expired entry under load costs the same).
+    expect(reads.sort()).toEqual(["membership", "token"]);
   });
 });
