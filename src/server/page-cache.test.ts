@@ -1,9 +1,9 @@
 // The page memory (page-cache.ts) over real HTTP, with a stand-in for the framework's handler that counts its
 // renders. The database state it keys on is tested in data-version.test.ts.
-import { createServer, type IncomingMessage, type Server, type ServerResponse } from "node:http";
+import { createServer, type IncomingMessage, request, type Server, type ServerResponse } from "node:http";
 import type { AddressInfo } from "node:net";
 import { gzipSync } from "node:zlib";
-import { afterEach, beforeEach, describe, expect, it } from "vitest";
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { freshNonce } from "@/lib/nonce";
 import { type Handler, PAGE_CACHE_HEADER, requestKey, swapNonce, withPageCache } from "./page-cache";
 import { noteRenderFailure, RENDER_ID_HEADER } from "./render-failures";
@@ -12,6 +12,9 @@ interface Stage {
   renders: number;
   version: string;
   clock: number;
+  /** When set, the state read waits for it; `reads` counts the reads begun. */
+  gate?: Promise<void>;
+  reads: number;
   /** What the stand-in answers; by default a 200 HTML page carrying its nonce in the policy and body. */
   answer: (req: IncomingMessage, res: ServerResponse, nonce: string) => Promise<void> | void;
 }
@@ -33,14 +36,18 @@ let server: Server;
 let origin: string;
 
 beforeEach(async () => {
-  stage = { renders: 0, version: "1:1:", clock: 0, answer: htmlAnswer };
+  stage = { renders: 0, version: "1:1:", clock: 0, answer: htmlAnswer, reads: 0 };
   const handler: Handler = async (req, res) => {
     stage.renders++;
     await stage.answer(req, res, freshNonce());
   };
   server = createServer(
     withPageCache(handler, {
-      version: async () => (stage.version === "down" ? null : stage.version),
+      version: async () => {
+        stage.reads++;
+        await stage.gate;
+        return stage.version === "down" ? null : stage.version;
+      },
       sessionCookie: "pf_session",
       nonce: freshNonce,
       ttlMs: 5_000,
@@ -54,6 +61,11 @@ beforeEach(async () => {
   origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 });
 afterEach(() => new Promise((resolve) => server.close(resolve)));
+
+const openConnections = () =>
+  new Promise<number>((resolve, reject) =>
+    server.getConnections((error, count) => (error ? reject(error) : resolve(count))),
+  );
 
 async function get(path: string, headers: Record<string, string> = { cookie: "pf_session=a" }) {
   const res = await fetch(`${origin}${path}`, { headers, redirect: "manual" });
@@ -226,6 +238,22 @@ describe("page memory", () => {
     expect(waited.served).toBe("miss");
     expect((await slow).served).toBe("miss");
     expect(stage.renders).toBe(2);
+  });
+
+  it("renders nothing for a client that left while the state was read, and holds no one up after it", async () => {
+    let release = () => {};
+    stage.gate = new Promise((resolve) => (release = resolve));
+    const leaving = request(`${origin}/app`, { headers: { cookie: "pf_session=a" } });
+    leaving.on("error", () => {});
+    leaving.end();
+    await vi.waitFor(() => expect(stage.reads).toBe(1));
+    leaving.destroy();
+    await vi.waitFor(async () => expect(await openConnections()).toBe(0));
+    release();
+    stage.gate = undefined;
+    // Had it been rendered, watched after its connection closed, identical requests would wait on it in vain.
+    const [first, second] = [await get("/app"), await get("/app")];
+    expect([first.served, second.served, stage.renders]).toEqual(["miss", "hit", 1]);
   });
 
   it("renders every request when the database cannot say its state", async () => {

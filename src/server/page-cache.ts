@@ -141,6 +141,8 @@ function capture(
   } as typeof res.end;
 
   return new Promise((resolve) => {
+    // A connection that closed before the watch began never says so again; such a response is cut short.
+    if (res.destroyed) return resolve(null);
     // The framework reports a failed part through onRequestError a few promise turns after the failure, which may be
     // after the last bytes: the page is judged one turn of the event loop after the response closed.
     res.once("close", () => setImmediate(judge));
@@ -205,6 +207,9 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     const request = requestKey(req, options.sessionCookie);
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
+    // The client left while the state was read: there is no one to answer (and a response whose connection closed
+    // before it was watched would never report its end).
+    if (res.destroyed) return;
     if (!request || version === null) {
       res.setHeader(PAGE_CACHE_HEADER, "skip");
       return handle(req, res);
@@ -213,19 +218,18 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     const kept = fresh(entries.get(key)) ?? fresh(await waitFor(rendering.get(key)));
     if (kept) return replay(kept, res, options.nonce());
 
+    if (res.destroyed) return; // the client left while it waited for an identical render
     res.setHeader(PAGE_CACHE_HEADER, "miss");
     const renderId = crypto.randomUUID();
     req.headers[RENDER_ID_HEADER] = renderId;
     // A page is kept from the moment its render began: every check the render made is at most that old.
     const captured = capture(res, renderId, maxPageBytes, now());
-    const first = !rendering.has(key);
-    if (first) rendering.set(key, captured);
-    try {
-      await handle(req, res);
-      const entry = await captured;
+    if (!rendering.has(key)) rendering.set(key, captured);
+    // Kept, and identical requests released, once the response is judged, however the handler itself ends.
+    void captured.then((entry) => {
       if (entry) entries.set(key, entry);
-    } finally {
-      if (first) rendering.delete(key);
-    }
+      if (rendering.get(key) === captured) rendering.delete(key);
+    });
+    await handle(req, res);
   };
 }
