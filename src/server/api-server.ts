@@ -3,6 +3,7 @@ import { getRequestListener } from "@hono/node-server";
 import { AppError, errorResponse } from "@/lib/errors";
 import { securityHeaders } from "@/lib/security-headers";
 import { findLeanRoute } from "./lean-routes";
+import { type PageCacheOptions, withPageCache } from "./page-cache";
 
 // The lean API server: the check contract for bench scripts (POST /api/v1/check with an API token), health and
 // every read of the API (GET and HEAD, session or token), served by the very handlers the app's routes export,
@@ -32,9 +33,20 @@ export async function answer(req: Request): Promise<Response> {
   for (const { key, value } of securityHeaders) response.headers.set(key, value);
   return response;
 }
-/** An HTTP server answering with `answer`; kept-alive connections outlive nginx's (60 s), as the app's do. */
-export function createApiServer(): Server {
-  const server = createServer(getRequestListener(answer));
+/**
+ * An HTTP server answering with `answer`; kept-alive connections outlive nginx's (60 s), as the app's do. With
+ * `memory`, reads are kept as the app keeps its pages (page-cache.ts, `answers: "reads"`).
+ */
+export function createApiServer(memory?: Omit<PageCacheOptions, "answers">): Server {
+  const listener = getRequestListener(answer);
+  const serve = memory ? withPageCache(listener, { ...memory, answers: "reads" }) : listener;
+  const server = createServer((req, res) => {
+    Promise.resolve(serve(req, res)).catch((error: unknown) => {
+      console.error("A request failed outside the API's error handling:", error);
+      if (res.headersSent) res.destroy();
+      else res.writeHead(500).end();
+    });
+  });
   server.keepAliveTimeout = 75_000;
   return server;
 }

@@ -2,7 +2,7 @@ import { createServer } from "node:http";
 import next from "next";
 import { SESSION_COOKIE } from "@/lib/auth/cookie-name";
 import { freshNonce } from "@/lib/nonce";
-import { snapshotVersion } from "./data-version";
+import { answerVersion } from "./data-version";
 import { withPageCache } from "./page-cache";
 
 // Serves the built app (as `next start` would) on HOST:PORT, with the page memory in front of the framework's
@@ -27,32 +27,16 @@ const handle = app.getRequestHandler();
 await app.prepare();
 
 const render = (req: Parameters<typeof handle>[0], res: Parameters<typeof handle>[1]) => handle(req, res);
-const state = memoryMb > 0 && databaseUrl ? snapshotVersion(databaseUrl) : null;
-
-/**
- * The state of this process's memory of who a request is (src/lib/auth/auth-memory.ts, kept on globalThis by the
- * framework's bundle): each clearing (a sign-out, a membership changed, here or heard of) gives a new one, so a page
- * rendered with what the memory held before is not sent after.
- */
-function authMemoryState(): string {
-  const auth = (globalThis as { pulsefenceAuth?: { cache: { generation(): number; enabled: boolean } } })
-    .pulsefenceAuth;
-  return auth ? `${auth.cache.generation()}:${auth.cache.enabled}` : "none";
-}
-
-const serve = state
-  ? withPageCache(render, {
-      version: async () => {
-        const auth = authMemoryState();
-        const database = await state.version();
-        return database === null ? null : `${auth}|${database}`;
-      },
-      sessionCookie: SESSION_COOKIE,
-      nonce: freshNonce,
-      ttlMs: keepSeconds * 1000,
-      maxBytes: memoryMb * 1024 * 1024,
-    })
-  : render;
+const serve =
+  memoryMb > 0 && databaseUrl
+    ? withPageCache(render, {
+        version: answerVersion(databaseUrl).version,
+        sessionCookie: SESSION_COOKIE,
+        nonce: freshNonce,
+        ttlMs: keepSeconds * 1000,
+        maxBytes: memoryMb * 1024 * 1024,
+      })
+    : render;
 const server = createServer((req, res) => {
   // The framework answers its own errors; this catches only what fails around it, so no request is left hanging.
   Promise.resolve(serve(req, res)).catch((error: unknown) => {

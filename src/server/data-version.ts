@@ -32,3 +32,30 @@ export function snapshotVersion(url: string): {
     end: () => sql.end({ timeout: 5 }),
   };
 }
+
+/**
+ * The state of this process's memory of who a request is (src/lib/auth/auth-memory.ts, kept on globalThis, so the
+ * framework's bundle and this module see one): each clearing (a sign-out, a membership changed, here or heard of)
+ * gives a new one, so an answer given with what the memory held before is not sent after.
+ */
+export function authMemoryState(): string {
+  const auth = (globalThis as { pulsefenceAuth?: { cache: { generation(): number; enabled: boolean } } })
+    .pulsefenceAuth;
+  return auth ? `${auth.cache.generation()}:${auth.cache.enabled}` : "none";
+}
+
+/** The state an answer kept in memory depends on: this process's auth memory's and the database's; null if unsaid. */
+export function answerVersion(url: string): {
+  version: () => Promise<string | null>;
+  end: () => Promise<void>;
+} {
+  const database = snapshotVersion(url);
+  return {
+    version: async () => {
+      const auth = authMemoryState();
+      const data = await database.version();
+      return data === null ? null : `${auth}|${data}`;
+    },
+    end: database.end,
+  };
+}

@@ -265,13 +265,14 @@ describe("page memory", () => {
 });
 
 describe("requestKey and swapNonce", () => {
-  it("keys a request by host, scheme, path, cookie and user agent", () => {
+  it("keys a request by host, scheme, path, cookie, credentials, origin and user agent", () => {
     const req = {
       method: "GET",
       url: "/library/7?x=1",
       headers: { cookie: "c=1", host: "h", "x-forwarded-proto": "https", "user-agent": "u" },
     } as unknown as IncomingMessage;
-    expect(requestKey(req, "c")).toBe("h\nhttps\n/library/7?x=1\nc=1\nu");
+    // Empty places: no Authorization, Origin or Sec-Fetch-Site header.
+    expect(requestKey(req, "c")).toBe("h\nhttps\n/library/7?x=1\nc=1\n\n\n\nu");
     expect(requestKey(req, "session")).toBeNull();
   });
 

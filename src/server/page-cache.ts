@@ -17,6 +17,10 @@ import { RENDER_ID_HEADER, renderFailed } from "./render-failures";
 // render that reported no error (render-failures.ts: a part streamed after the status can still fail). Requests for
 // a key being rendered wait for that render (a few seconds at most) instead of rendering it again. When the state
 // cannot be said, nothing is kept or served from memory.
+//
+// The lean API server keeps its reads the same way (`answers: "reads"`): GETs of /api/ (health excepted) with the
+// session cookie or an Authorization header, keyed on that header too, answered 200 in JSON; they carry no nonce.
+// Identical reads at the same moment (a dashboard's poll, a bench script's loop) are then answered once.
 
 /** The response header that says how the page was served: "hit", "miss" or "skip". */
 export const PAGE_CACHE_HEADER = "x-page-memory";
@@ -33,6 +37,8 @@ export interface PageCacheOptions {
   sessionCookie: string;
   /** Nonce for a replayed page (src/lib/nonce.ts). */
   nonce: () => string;
+  /** What is kept: the app's pages (the default) or the lean API server's reads. */
+  answers?: "pages" | "reads";
   /** How long a kept page may be served, ms. */
   ttlMs: number;
   /** Memory bound over all kept pages, bytes. */
@@ -66,16 +72,33 @@ const ROUTER_HEADERS = [
 const NONCE_IN_POLICY = /'nonce-([^']+)'/;
 
 /** What identifies a cacheable request, or null when the request must always be rendered. */
-export function requestKey(req: IncomingMessage, sessionCookie: string): string | null {
+export function requestKey(
+  req: IncomingMessage,
+  sessionCookie: string,
+  answers: "pages" | "reads" = "pages",
+): string | null {
   if (req.method !== "GET") return null;
   const url = req.url ?? "";
-  if (!url.startsWith("/") || url.startsWith("/api/") || url.startsWith("/_next/")) return null;
-  if (/[?&]_rsc=/.test(url)) return null;
-  const cookie = req.headers.cookie;
-  if (!cookie?.split(";").some((c) => c.trimStart().startsWith(`${sessionCookie}=`))) return null;
-  if (ROUTER_HEADERS.some((name) => req.headers[name] !== undefined)) return null;
   const h = req.headers;
-  return [h.host ?? "", h["x-forwarded-proto"] ?? "", url, cookie, h["user-agent"] ?? ""].join("\n");
+  if (answers === "pages") {
+    if (!url.startsWith("/") || url.startsWith("/api/") || url.startsWith("/_next/")) return null;
+    if (/[?&]_rsc=/.test(url)) return null;
+    if (ROUTER_HEADERS.some((name) => h[name] !== undefined)) return null;
+  } else if (!url.startsWith("/api/") || /^\/api\/health(?:[/?]|$)/.test(url)) return null;
+  const session = h.cookie?.split(";").some((c) => c.trimStart().startsWith(`${sessionCookie}=`));
+  if (!session && (answers === "pages" || !h.authorization)) return null;
+  // Every header an answer may depend on: who asks, and whether a browser says it asks from another site.
+  const parts = [
+    h.host,
+    h["x-forwarded-proto"],
+    url,
+    h.cookie,
+    h.authorization,
+    h.origin,
+    h["sec-fetch-site"],
+  ];
+  parts.push(h["user-agent"]);
+  return parts.map((part) => part ?? "").join("\n");
 }
 
 /** Replaces every occurrence of `from` in `body` with `to`. */
@@ -112,6 +135,7 @@ function capture(
   renderId: string,
   maxPageBytes: number,
   startedAt: number,
+  answers: "pages" | "reads",
 ): Promise<Entry | null> {
   const chunks: Buffer[] = [];
   let size = 0;
@@ -156,29 +180,32 @@ function capture(
       }
       const type = headers.get("content-type");
       const policy = headers.get("content-security-policy");
+      // A page carries the policy's nonce, swapped at every replay; a read carries none.
       const nonce = policy ? NONCE_IN_POLICY.exec(headerText(policy))?.[1] : undefined;
+      const kind = answers === "pages" ? "text/html" : "application/json";
       if (
         !type ||
-        !headerText(type).startsWith("text/html") ||
+        !headerText(type).startsWith(kind) ||
         headers.has("set-cookie") ||
         headers.has("content-encoding") ||
-        !nonce
+        (answers === "pages" && !nonce)
       )
         return resolve(null);
       resolve({
         status: res.statusCode,
         headers: [...headers].filter(([name]) => !PER_RESPONSE.has(name) && name !== PAGE_CACHE_HEADER),
         body: Buffer.concat(chunks),
-        nonce,
+        nonce: answers === "pages" ? (nonce ?? "") : "",
         storedAt: startedAt,
       });
     }
   });
 }
 
-function replay(entry: Entry, res: ServerResponse, nonce: string): void {
-  const swap = (value: string) => value.split(entry.nonce).join(nonce);
-  const body = swapNonce(entry.body, entry.nonce, nonce);
+function replay(entry: Entry, res: ServerResponse, nonce: () => string): void {
+  const fresh = entry.nonce ? nonce() : "";
+  const swap = (value: string) => (entry.nonce ? value.split(entry.nonce).join(fresh) : value);
+  const body = entry.nonce ? swapNonce(entry.body, entry.nonce, fresh) : entry.body;
   res.statusCode = entry.status;
   for (const [name, value] of entry.headers)
     res.setHeader(name, Array.isArray(value) ? value.map(swap) : swap(value));
@@ -204,7 +231,8 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
 
   return async (req, res) => {
     delete req.headers[RENDER_ID_HEADER];
-    const request = requestKey(req, options.sessionCookie);
+    const answers = options.answers ?? "pages";
+    const request = requestKey(req, options.sessionCookie, answers);
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
     // The client left while the state was read: there is no one to answer (and a response whose connection closed
@@ -216,14 +244,14 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     }
     const key = `${version}\n${request}`;
     const kept = fresh(entries.get(key)) ?? fresh(await waitFor(rendering.get(key)));
-    if (kept) return replay(kept, res, options.nonce());
+    if (kept) return replay(kept, res, options.nonce);
 
     if (res.destroyed) return; // the client left while it waited for an identical render
     res.setHeader(PAGE_CACHE_HEADER, "miss");
     const renderId = crypto.randomUUID();
     req.headers[RENDER_ID_HEADER] = renderId;
     // A page is kept from the moment its render began: every check the render made is at most that old.
-    const captured = capture(res, renderId, maxPageBytes, now());
+    const captured = capture(res, renderId, maxPageBytes, now(), answers);
     if (!rendering.has(key)) rendering.set(key, captured);
     // Kept, and identical requests released, once the response is judged, however the handler itself ends.
     void captured.then((entry) => {
