@@ -19,25 +19,10 @@ if (!Number.isInteger(port) || port <= 0) {
 }
 const host = process.env.HOST ?? "127.0.0.1";
 
-// Reads are kept in memory as the app keeps its pages (PF_PAGE_MEMORY_MB, PF_PAGE_MEMORY_SECONDS: app-main.ts).
-const memoryMb = Number(process.env.PF_PAGE_MEMORY_MB ?? 64);
-const keepSeconds = Number(process.env.PF_PAGE_MEMORY_SECONDS ?? 5);
-const databaseUrl = process.env.DATABASE_URL;
+// Reads are kept in memory as the app keeps its pages (data-version.ts: PF_PAGE_MEMORY_MB, PF_PAGE_MEMORY_SECONDS).
 const { createApiServer } = await import("./api-server");
-const { answerVersion } = await import("./data-version");
-const { SESSION_COOKIE } = await import("@/lib/auth/cookie-name");
-const { freshNonce } = await import("@/lib/nonce");
-const server = createApiServer(
-  memoryMb > 0 && databaseUrl
-    ? {
-        version: answerVersion(databaseUrl).version,
-        sessionCookie: SESSION_COOKIE,
-        nonce: freshNonce,
-        ttlMs: keepSeconds * 1000,
-        maxBytes: memoryMb * 1024 * 1024,
-      }
-    : undefined,
-);
+const { memoryFromEnvironment } = await import("./data-version");
+const server = createApiServer(memoryFromEnvironment(process.env));
 server.listen(port, host, () => console.log(`API server listening on http://${host}:${port}`));
 
 // On a stop signal: take no new connections, let requests in flight finish (up to 5 s), then exit.

@@ -1,8 +1,6 @@
 import { createServer } from "node:http";
 import next from "next";
-import { SESSION_COOKIE } from "@/lib/auth/cookie-name";
-import { freshNonce } from "@/lib/nonce";
-import { answerVersion } from "./data-version";
+import { memoryFromEnvironment } from "./data-version";
 import { withPageCache } from "./page-cache";
 
 // Serves the built app (as `next start` would) on HOST:PORT, with the page memory in front of the framework's
@@ -17,9 +15,6 @@ if (!Number.isInteger(port) || port <= 0) {
   process.exit(1);
 }
 const host = process.env.HOST ?? "127.0.0.1";
-const memoryMb = Number(process.env.PF_PAGE_MEMORY_MB ?? 64);
-const keepSeconds = Number(process.env.PF_PAGE_MEMORY_SECONDS ?? 5);
-const databaseUrl = process.env.DATABASE_URL;
 
 process.title = "pulsefence-app";
 const app = next({ dev: false, dir: process.cwd(), hostname: host, port });
@@ -27,16 +22,8 @@ const handle = app.getRequestHandler();
 await app.prepare();
 
 const render = (req: Parameters<typeof handle>[0], res: Parameters<typeof handle>[1]) => handle(req, res);
-const serve =
-  memoryMb > 0 && databaseUrl
-    ? withPageCache(render, {
-        version: answerVersion(databaseUrl).version,
-        sessionCookie: SESSION_COOKIE,
-        nonce: freshNonce,
-        ttlMs: keepSeconds * 1000,
-        maxBytes: memoryMb * 1024 * 1024,
-      })
-    : render;
+const memory = memoryFromEnvironment(process.env);
+const serve = memory ? withPageCache(render, memory) : render;
 const server = createServer((req, res) => {
   // The framework answers its own errors; this catches only what fails around it, so no request is left hanging.
   Promise.resolve(serve(req, res)).catch((error: unknown) => {

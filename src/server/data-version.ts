@@ -1,6 +1,9 @@
 import postgres from "postgres";
 import { connectTimeoutSeconds } from "@/db/client";
+import { SESSION_COOKIE } from "@/lib/auth/cookie-name";
+import { freshNonce } from "@/lib/nonce";
 import { settledWithin } from "@/lib/time-limit";
+import type { PageCacheOptions } from "./page-cache";
 
 /** How long the state may take to read before a page is rendered without the page memory, ms. */
 const READ_LIMIT_MS = 250;
@@ -57,5 +60,23 @@ export function answerVersion(url: string): {
       return data === null ? null : `${auth}|${data}`;
     },
     end: database.end,
+  };
+}
+
+/**
+ * The memory's settings for an app process or a lean API server: PF_PAGE_MEMORY_MB bounds it (default 64; 0 turns
+ * it off), PF_PAGE_MEMORY_SECONDS says how long an answer is kept (default 5, as long as a session is remembered:
+ * auth-cache.ts). Undefined when it is off or there is no database to read the state from.
+ */
+export function memoryFromEnvironment(env: NodeJS.ProcessEnv): Omit<PageCacheOptions, "answers"> | undefined {
+  const memoryMb = Number(env.PF_PAGE_MEMORY_MB ?? 64);
+  const keepSeconds = Number(env.PF_PAGE_MEMORY_SECONDS ?? 5);
+  if (!(memoryMb > 0) || !env.DATABASE_URL) return undefined;
+  return {
+    version: answerVersion(env.DATABASE_URL).version,
+    sessionCookie: SESSION_COOKIE,
+    nonce: freshNonce,
+    ttlMs: keepSeconds * 1000,
+    maxBytes: memoryMb * 1024 * 1024,
   };
 }
