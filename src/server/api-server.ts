@@ -2,7 +2,7 @@ import { createServer, type Server } from "node:http";
 import { getRequestListener } from "@hono/node-server";
 import { AppError, errorResponse } from "@/lib/errors";
 import { securityHeaders } from "@/lib/security-headers";
-import { findLeanRoute } from "./lean-routes";
+import { answersFile, findLeanRoute } from "./lean-routes";
 import { type PageCacheOptions, withPageCache } from "./page-cache";
 
 // The lean API server: the check contract for bench scripts (POST /api/v1/check with an API token), health and
@@ -39,7 +39,9 @@ export async function answer(req: Request): Promise<Response> {
  */
 export function createApiServer(memory?: Omit<PageCacheOptions, "answers">): Server {
   const listener = getRequestListener(answer);
-  const serve = memory ? withPageCache(listener, { ...memory, answers: "reads" }) : listener;
+  const serve = memory
+    ? withPageCache(listener, { ...memory, answers: "reads", passes: answersFile })
+    : listener;
   const server = createServer((req, res) => {
     Promise.resolve(serve(req, res)).catch((error: unknown) => {
       console.error("A request failed outside the API's error handling:", error);

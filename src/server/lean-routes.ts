@@ -79,6 +79,20 @@ export const leanRoutes: readonly LeanRoute[] = [
   lean("GET", "/api/team/invitations", invitationsList),
 ];
 
+/** Reads that answer a file (PDF, CSV, a redirect to storage), never JSON: the memory of reads does not wait on them. */
+const fileRoutes = new Set([
+  "/api/parts/[id]/curve-sets/[setId]/file",
+  "/api/projects/[id]/decisions/[decisionId]/csv",
+  "/api/projects/[id]/decisions/[decisionId]/report",
+  "/api/projects/[id]/matrix",
+]);
+
+/** True when a GET of `path` (query included or not) answers a file. */
+export function answersFile(path: string): boolean {
+  const bare = path.split("?")[0];
+  return leanRoutes.some((r) => r.method === "GET" && fileRoutes.has(r.route) && r.pattern.test(bare));
+}
+
 /**
  * The handler for a method and path with its parameters (decoded as the app decodes them), or null. HEAD finds
  * the GET handler; Node's HTTP server then sends the answer's status and headers without its body.

@@ -39,6 +39,8 @@ export interface PageCacheOptions {
   nonce: () => string;
   /** What is kept: the app's pages (the default) or the lean API server's reads. */
   answers?: "pages" | "reads";
+  /** Paths never kept (nor waited on): answers known not to be kept, such as files. */
+  passes?: (url: string) => boolean;
   /** How long a kept page may be served, ms. */
   ttlMs: number;
   /** Memory bound over all kept pages, bytes. */
@@ -232,7 +234,8 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
   return async (req, res) => {
     delete req.headers[RENDER_ID_HEADER];
     const answers = options.answers ?? "pages";
-    const request = requestKey(req, options.sessionCookie, answers);
+    const passes = options.passes?.(req.url ?? "") ?? false;
+    const request = passes ? null : requestKey(req, options.sessionCookie, answers);
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
     // The client left while the state was read: there is no one to answer (and a response whose connection closed

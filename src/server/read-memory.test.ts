@@ -6,7 +6,7 @@ import type { AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { projects } from "@/db/schema";
-import { whenListening } from "@/lib/auth/auth-memory";
+import { authCache, whenListening } from "@/lib/auth/auth-memory";
 import { SESSION_COOKIE } from "@/lib/auth/cookie-name";
 import { freshNonce } from "@/lib/nonce";
 import {
@@ -20,6 +20,7 @@ import {
 } from "@/test/fixtures";
 import { createApiServer } from "./api-server";
 import { answerVersion } from "./data-version";
+import { answersFile } from "./lean-routes";
 import { type Handler, PAGE_CACHE_HEADER, requestKey, withPageCache } from "./page-cache";
 
 const listen = async (server: Server) => {
@@ -168,5 +169,24 @@ describe("kept reads on the lean API server and the real database", () => {
     await testDb.db.update(projects).set({ name: "Kept read, renamed" }).where(eq(projects.id, project.id));
     const after = await read(path, engineer);
     expect([after.served, after.body.project.name]).toEqual(["miss", "Kept read, renamed"]);
+  });
+
+  it("answers again once this process's auth memory is cleared (a sign-out or role change heard of)", async () => {
+    const engineer = await sessionCookie((await addMember(ws.id, "engineer")).id, ws.id);
+    const kept = [
+      (await read("/api/projects", engineer)).served,
+      (await read("/api/projects", engineer)).served,
+    ];
+    authCache.clear();
+    expect([...kept, (await read("/api/projects", engineer)).served]).toEqual(["miss", "hit", "miss"]);
+  });
+
+  it("neither keeps nor waits on reads that answer a file", () => {
+    expect(answersFile("/api/projects/p1/matrix")).toBe(true);
+    expect(answersFile("/api/projects/p1/decisions/d1/report?download=1")).toBe(true);
+    expect(answersFile("/api/projects/p1/decisions/d1/csv")).toBe(true);
+    expect(answersFile("/api/parts/x/curve-sets/y/file")).toBe(true);
+    expect(answersFile("/api/projects/p1")).toBe(false);
+    expect(answersFile("/api/projects/p1/decisions/d1")).toBe(false);
   });
 });

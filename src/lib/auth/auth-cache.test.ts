@@ -1,7 +1,7 @@
 // The in-process memory of API tokens, sessions and memberships (auth-cache.ts): how long it remembers, what clears it, and
 // that a database read racing a clear is not remembered. A hand-driven clock, no timers.
 import { describe, expect, it } from "vitest";
-import { AUTH_CACHE_TTL_MS, AuthCache, LAST_USED_INTERVAL_MS } from "./auth-cache";
+import { AUTH_CACHE_TTL_MS, AuthCache, LAST_USED_INTERVAL_MS, SHARED_READ_MS } from "./auth-cache";
 
 function clock() {
   let now = 1_000;
@@ -144,6 +144,19 @@ describe("AuthCache", () => {
     expect(cache.sharedRead("token:k", async () => "joined? no")).toBe(third);
     newest.resolve("b");
     expect(await third).toBe("b");
+  });
+
+  it("lets a read be joined only in its first second: one that hangs holds up no one after that", async () => {
+    const time = clock();
+    const cache = new AuthCache(time);
+    const hung = deferred<string>();
+    const first = cache.sharedRead("membership:w:u", () => hung.promise);
+    time.advance(SHARED_READ_MS - 1);
+    expect(cache.sharedRead("membership:w:u", async () => "own")).toBe(first);
+    time.advance(1);
+    expect(await cache.sharedRead("membership:w:u", async () => "own")).toBe("own");
+    hung.resolve("late");
+    expect(await first).toBe("late");
   });
 
   it("hands a failed read to every request that shared it, and the next request reads again", async () => {

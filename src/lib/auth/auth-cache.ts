@@ -22,6 +22,8 @@ import type { Role } from "@/db/schema";
 export const AUTH_CACHE_TTL_MS = 5_000;
 /** `last_used_at` is written at most once per this interval per token (and never on the response path). */
 export const LAST_USED_INTERVAL_MS = 60_000;
+/** How long after it began a database read of the auth memory may be joined by another request, in ms. */
+export const SHARED_READ_MS = 1_000;
 /** The PostgreSQL channel the triggers notify on any change to tokens, memberships or accounts. */
 export const AUTH_CHANNEL = "pulsefence_auth";
 
@@ -83,7 +85,7 @@ export class AuthCache {
   /** Token id → when this process last wrote its last_used_at (clock ms). Survives clears: it is not access. */
   private readonly lastUsed: LRUCache<string, number>;
   /** Database reads in flight, by key, shared by the requests that miss at once; emptied at a clear. */
-  private readonly reads = new Map<string, Promise<unknown>>();
+  private readonly reads = new Map<string, { read: Promise<unknown>; startedAt: number }>();
   private generationCount = 0;
   private readonly clearedListeners = new Set<() => void>();
   /** False until the process listens for changes; nothing is remembered meanwhile. */
@@ -168,16 +170,18 @@ export class AuthCache {
    * `read()` (a database read that remembers what it found), shared: a request that misses `key` while a read of
    * it is in flight since the last clear waits for that read instead of starting its own. A clear drops the reads
    * in flight, so a request after it starts afresh. Its answer was read no earlier than the request that started
-   * it, and is as fresh as a remembered one. Not shared while nothing is remembered (not listening yet).
+   * it, and is as fresh as a remembered one. A read is joined only in its first SHARED_READ_MS: one that hangs holds
+   * up only those. Not shared while nothing is remembered (not listening yet).
    */
   sharedRead<T>(key: string, read: () => Promise<T>): Promise<T> {
     if (!this.enabled) return read();
+    const now = this.clock.now();
     const running = this.reads.get(key);
-    if (running) return running as Promise<T>;
+    if (running && now - running.startedAt < SHARED_READ_MS) return running.read as Promise<T>;
     const started = read().finally(() => {
-      if (this.reads.get(key) === started) this.reads.delete(key);
+      if (this.reads.get(key)?.read === started) this.reads.delete(key);
     });
-    this.reads.set(key, started);
+    this.reads.set(key, { read: started, startedAt: now });
     return started;
   }
 
