@@ -291,7 +291,7 @@ NGINX
   for k in $(seq 1 "$processes"); do targets+=" app:$((APP_BACKEND_PORT + k))"; done
   for k in $(seq 1 "$api_processes"); do targets+=" api:$((APP_BACKEND_PORT + 20 + k))"; done
   # shellcheck disable=SC2086
-  log "$("$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/warm-up.ts" "${PF_WARM_ROUNDS:-40}" $targets 2>&1 || true)"
+  log "$("$ROOT/node_modules/.bin/tsx" --conditions=react-server "$ROOT/scripts/warm-up.ts" "${PF_WARM_ROUNDS:-40}" $targets 2>&1 || true)"
 }
 
 # Stops a process left by an earlier run of this profile that was killed without cleaning up.

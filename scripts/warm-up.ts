@@ -3,12 +3,18 @@
 // slower than the rest. Each process on the given loopback ports is asked, one request at a time, ROUNDS times:
 // - app processes: the public pages and the sign-in redirects of the main pages (no session);
 // - lean API servers: health and an unauthenticated check (401).
-// Where the demo workspace is seeded (`npm start`), the demo engineer then signs in once, and each process renders
-// the main signed-in pages (app processes) or answers their reads and the check contract (API servers) with that
-// session, half as many rounds; the session is ended at the end. Nothing else is written. Prints what it did; a failure is printed and the start goes on.
-// Run: `tsx scripts/warm-up.ts ROUNDS app:PORT… api:PORT…`
-import { SESSION_COOKIE } from "../src/lib/auth/cookie-name";
-import { demoUsers } from "../src/lib/demo/users";
+// Where the demo workspace is seeded (`npm start`), a session of the demo engineer's is then started in the database
+// (no password tried), and each process renders the main signed-in pages (app processes) or answers their reads
+// and the check contract (API servers) with it, half as many rounds; the session is ended at the end. What is
+// written: that session's row, and whatever those pages write when opened (queued rechecks of stale capture
+// results). Prints what it did; a failure is printed and the start goes on.
+// Run: `tsx --conditions=react-server scripts/warm-up.ts ROUNDS app:PORT… api:PORT…` with the app's environment.
+import { and, eq } from "drizzle-orm";
+import { db } from "../src/db";
+import { memberships, users, workspaces } from "../src/db/schema";
+import { endSession, startSession } from "../src/lib/auth/session";
+import { hashToken } from "../src/lib/auth/tokens";
+import { demoUsers, demoWorkspace } from "../src/lib/demo/users";
 import { checkBody } from "./load/check-body";
 
 const [rounds, ...targets] = process.argv.slice(2);
@@ -22,18 +28,22 @@ async function ask(port: string, path: string, init: RequestInit = {}): Promise<
   return res;
 }
 
-/** The demo engineer's session cookie ("name=value"), or null where the demo workspace is not seeded. */
-async function demoSession(port: string): Promise<string | null> {
+/**
+ * A session of the demo engineer's in the demo workspace, started in the database as a sign-in would (no password
+ * is tried, so no sign-in attempt is counted), or null where the demo workspace is not seeded.
+ */
+async function demoSession(): Promise<{ cookie: string; sessionId: string } | null> {
   const engineer = demoUsers.find((u) => u.role === "engineer");
   if (!engineer) return null;
-  const res = await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin: `http://127.0.0.1:${port}` },
-    body: JSON.stringify({ email: engineer.email, password: engineer.password }),
-  });
-  await res.arrayBuffer();
-  const cookie = res.ok && res.headers.getSetCookie().find((c) => c.startsWith(`${SESSION_COOKIE}=`));
-  return cookie ? cookie.split(";")[0] : null;
+  const [member] = await db
+    .select({ userId: users.id, workspaceId: workspaces.id })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
+    .where(and(eq(users.email, engineer.email), eq(workspaces.slug, demoWorkspace.slug)));
+  if (!member) return null;
+  const cookie = (await startSession(member.userId, member.workspaceId)).split(";")[0];
+  return { cookie, sessionId: hashToken(cookie.slice(cookie.indexOf("=") + 1)) };
 }
 
 /** The signed-in pages a member opens first (the lists, the first project and part), and the reads they make. */
@@ -70,8 +80,9 @@ try {
       }
     }),
   ]);
-  const cookie = apps[0] ? await demoSession(apps[0]) : null;
-  if (cookie) {
+  const demo = apps[0] ? await demoSession() : null;
+  if (demo) {
+    const { cookie } = demo;
     try {
       const { pages, reads } = await memberPaths(apps[0], cookie);
       const body = JSON.stringify(checkBody());
@@ -93,10 +104,7 @@ try {
       ]);
       signedIn = pages.length;
     } finally {
-      await ask(apps[0], "/api/auth/sign-out", {
-        method: "POST",
-        headers: { cookie, origin: `http://127.0.0.1:${apps[0]}` },
-      });
+      await endSession(demo.sessionId);
     }
   }
 } catch (error) {
@@ -109,3 +117,4 @@ console.log(
       : "") +
     `, in ${((performance.now() - started) / 1000).toFixed(1)} s`,
 );
+process.exit(0);
