@@ -234,8 +234,8 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
   return async (req, res) => {
     delete req.headers[RENDER_ID_HEADER];
     const answers = options.answers ?? "pages";
-    const passes = options.passes?.(req.url ?? "") ?? false;
-    const request = passes ? null : requestKey(req, options.sessionCookie, answers);
+    const keyed = requestKey(req, options.sessionCookie, answers);
+    const request = keyed && options.passes?.(req.url ?? "") ? null : keyed;
     let version: string | null = null;
     if (request) version = await options.version().catch(() => null);
     // The client left while the state was read: there is no one to answer (and a response whose connection closed
