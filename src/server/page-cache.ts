@@ -237,10 +237,12 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     const keyed = requestKey(req, options.sessionCookie, answers);
     const request = keyed && options.passes?.(req.url ?? "") ? null : keyed;
     let version: string | null = null;
-    if (request) version = await options.version().catch(() => null);
-    // The client left while the state was read: there is no one to answer (and a response whose connection closed
-    // before it was watched would never report its end).
-    if (res.destroyed) return;
+    if (request) {
+      version = await options.version().catch(() => null);
+      // The client left while the state was read: there is no one to answer (and a response whose connection
+      // closed before it was watched would never report its end). Only reads wait here; a change never does.
+      if (res.destroyed) return;
+    }
     if (!request || version === null) {
       res.setHeader(PAGE_CACHE_HEADER, "skip");
       return handle(req, res);
