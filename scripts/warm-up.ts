@@ -22,10 +22,9 @@ const pagePaths = ["/", "/sign-in", "/sign-up", "/forgot", "/app", "/projects", 
 const apps = targets.filter((t) => t.startsWith("app:")).map((t) => t.slice(4));
 const apis = targets.filter((t) => t.startsWith("api:")).map((t) => t.slice(4));
 
-async function ask(port: string, path: string, init: RequestInit = {}): Promise<Response> {
+async function ask(port: string, path: string, init: RequestInit = {}): Promise<void> {
   const res = await fetch(`http://127.0.0.1:${port}${path}`, { ...init, redirect: "manual" });
   await res.arrayBuffer();
-  return res;
 }
 
 /**
