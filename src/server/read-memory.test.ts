@@ -153,14 +153,24 @@ describe("kept reads on the lean API server and the real database", () => {
     const res = await fetch(`${base}${path}`, { headers: { cookie } });
     return { status: res.status, body: await res.json(), served: res.headers.get(PAGE_CACHE_HEADER) };
   };
+  /**
+   * `path` read twice, again until the second is sent from memory, at most 10 times: any write anywhere in the
+   * database between the two (the job queue's upkeep, another test's fixtures) is a new state, rightly a miss.
+   */
+  const readTwice = async (path: string, cookie: string) => {
+    for (let attempt = 1; ; attempt++) {
+      const first = await read(path, cookie);
+      const again = await read(path, cookie);
+      if (again.served === "hit" || attempt === 10) return [first, again];
+    }
+  };
 
   it("gives each member and workspace its own answer, and a changed project at the next read", async () => {
     const engineer = await sessionCookie((await addMember(ws.id, "engineer")).id, ws.id);
     const outsider = await sessionCookie((await addMember(other.id, "engineer")).id, other.id);
     const project = await addProject(ws.id, { name: "Kept read", caseTemp: 60 });
     const path = `/api/projects/${project.id}`;
-    const first = await read(path, engineer);
-    const again = await read(path, engineer);
+    const [first, again] = await readTwice(path, engineer);
     expect([first.status, again.status, again.served]).toEqual([200, 200, "hit"]);
     expect(again.body).toEqual(first.body);
     // Another workspace's member asks the very same path in the same state: the route's own 404, not a replay.
@@ -173,12 +183,9 @@ describe("kept reads on the lean API server and the real database", () => {
 
   it("answers again once this process's auth memory is cleared (a sign-out or role change heard of)", async () => {
     const engineer = await sessionCookie((await addMember(ws.id, "engineer")).id, ws.id);
-    const kept = [
-      (await read("/api/projects", engineer)).served,
-      (await read("/api/projects", engineer)).served,
-    ];
+    const [, kept] = await readTwice("/api/projects", engineer);
     authCache.clear();
-    expect([...kept, (await read("/api/projects", engineer)).served]).toEqual(["miss", "hit", "miss"]);
+    expect([kept.served, (await read("/api/projects", engineer)).served]).toEqual(["hit", "miss"]);
   });
 
   it("neither keeps nor waits on reads that answer a file", () => {
