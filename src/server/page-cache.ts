@@ -167,8 +167,6 @@ function capture(
   } as typeof res.end;
 
   return new Promise((resolve) => {
-    // A connection that closed before the watch began never says so again; such a response is cut short.
-    if (res.destroyed) return resolve(null);
     // The framework reports a failed part through onRequestError a few promise turns after the failure, which may be
     // after the last bytes: the page is judged one turn of the event loop after the response closed.
     res.once("close", () => setImmediate(judge));
@@ -251,7 +249,9 @@ export function withPageCache(handle: Handler, options: PageCacheOptions): Handl
     const kept = fresh(entries.get(key)) ?? fresh(await waitFor(rendering.get(key)));
     if (kept) return replay(kept, res, options.nonce);
 
-    if (res.destroyed) return; // the client left while it waited for an identical render
+    // The client left while it waited for an identical render. (A connection closed before the watch below began
+    // would never say so again, and identical requests would wait on it.)
+    if (res.destroyed) return;
     res.setHeader(PAGE_CACHE_HEADER, "miss");
     const renderId = crypto.randomUUID();
     req.headers[RENDER_ID_HEADER] = renderId;
